@@ -1,0 +1,12 @@
+package org.solmass.cli;
+
+import java.util.List;
+
+/** The registry of subcommands. Add a command object here to make it reachable from {@code solmass}. */
+final class Commands {
+    private Commands() {}
+
+    static List<Object> all() {
+        return List.of();
+    }
+}

@@ -1,0 +1,68 @@
+package org.solmass.cli;
+
+import org.solmass.InputException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/**
+ * Entry point of the {@code solmass} command. Each stage of the pipeline has a thin subcommand here;
+ * the subcommands only parse flags and wire the stages together.
+ * Exit codes: 0 done, 1 failed, 2 bad usage or input.
+ */
+@Command(name = "solmass", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
+        description = "Solar irradiation on 3D massing models: sky view, sun, shading and irradiation per patch.",
+        subcommands = {CommandLine.HelpCommand.class})
+public final class Main implements Runnable {
+    public static final int EXIT_OK = 0, EXIT_FAILED = 1, EXIT_INPUT = 2;
+
+    @CommandLine.Spec CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(System.out);
+    }
+
+    /** Builds the command line with every subcommand registered. */
+    public static CommandLine commandLine() {
+        CommandLine cl = new CommandLine(new Main());
+        for (Object sub : Commands.all()) cl.addSubcommand(sub);
+        cl.setExecutionExceptionHandler((ex, line, parse) -> {
+            if (ex instanceof InputException) {
+                line.getErr().println("solmass: " + ex.getMessage());
+                return EXIT_INPUT;
+            }
+            line.getErr().println("solmass: failed: " + ex);
+            if (System.getenv("SOLMASS_DEBUG") != null) ex.printStackTrace(line.getErr());
+            return EXIT_FAILED;
+        });
+        cl.setParameterExceptionHandler((ex, args) -> {
+            CommandLine c = ex.getCommandLine();
+            c.getErr().println("solmass: " + ex.getMessage());
+            c.getErr().println("Try 'solmass " + (c.getCommandName().equals("solmass") ? "" : c.getCommandName() + " ") + "--help'.");
+            return EXIT_INPUT;
+        });
+        return cl;
+    }
+
+    /** Runs a command line and returns the exit code (used by tests). */
+    public static int execute(String... args) {
+        return commandLine().execute(args);
+    }
+
+    public static void main(String[] args) {
+        System.exit(execute(args));
+    }
+
+    /** Version from the jar manifest, or the development version. */
+    public static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {"solmass " + version()};
+        }
+    }
+
+    public static String version() {
+        String v = Main.class.getPackage().getImplementationVersion();
+        return v == null ? "0.1.0-dev" : v;
+    }
+}

@@ -1,0 +1,67 @@
+package org.solmass.model;
+
+import java.nio.file.Path;
+import java.util.List;
+
+/**
+ * A massing model as Solmass uses it after import: named blocks of triangles in metres, x east,
+ * y north, z up (units, up axis and north angle already applied). Flat arrays so the scene stage can
+ * build its BVH without copying objects.
+ *
+ * @param source the OBJ file it was read from (for messages), may be null for synthetic models
+ * @param blockNames block names (from {@code o}/{@code g}), index = block id
+ * @param materialNames material names from {@code usemtl}, index = material id
+ * @param vertices x,y,z per vertex, metres
+ * @param triangles three vertex indices per triangle, counter-clockwise seen from the front side
+ *                  (the OBJ winding is kept: its normal is the face normal)
+ * @param triangleBlock block id per triangle
+ * @param triangleMaterial material id per triangle, -1 where none was set
+ * @param triangleLine OBJ line number of the face each triangle came from (1-based), 0 if synthetic
+ * @param degenerateDropped number of zero-area triangles dropped on import
+ */
+public record MassingModel(Path source, List<String> blockNames, List<String> materialNames,
+                           double[] vertices, int[] triangles, int[] triangleBlock,
+                           int[] triangleMaterial, int[] triangleLine, int degenerateDropped) {
+
+    public int triangleCount() { return triangles.length / 3; }
+
+    public int vertexCount() { return vertices.length / 3; }
+
+    /** Vertex {@code v} of triangle {@code t} (v in 0..2). */
+    public Vec3 vertex(int t, int v) {
+        int i = triangles[3 * t + v] * 3;
+        return new Vec3(vertices[i], vertices[i + 1], vertices[i + 2]);
+    }
+
+    /** Lowest z of any vertex, metres. */
+    public double minZ() {
+        double m = Double.POSITIVE_INFINITY;
+        for (int i = 2; i < vertices.length; i += 3) m = Math.min(m, vertices[i]);
+        return m;
+    }
+
+    /** Axis-aligned bounds: {minX, minY, minZ, maxX, maxY, maxZ}. */
+    public double[] bounds() {
+        double[] b = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY,
+                Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
+        for (int i = 0; i < vertices.length; i += 3) {
+            for (int k = 0; k < 3; k++) {
+                b[k] = Math.min(b[k], vertices[i + k]);
+                b[k + 3] = Math.max(b[k + 3], vertices[i + k]);
+            }
+        }
+        return b;
+    }
+
+    /** Flat x,y,z of the 3 corners of every triangle (9 floats per triangle), for the scene stage. */
+    public float[] triangleSoup() {
+        float[] out = new float[triangles.length * 3];
+        for (int i = 0; i < triangles.length; i++) {
+            int v = triangles[i] * 3;
+            out[3 * i] = (float) vertices[v];
+            out[3 * i + 1] = (float) vertices[v + 1];
+            out[3 * i + 2] = (float) vertices[v + 2];
+        }
+        return out;
+    }
+}
