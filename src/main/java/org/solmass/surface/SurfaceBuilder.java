@@ -31,7 +31,10 @@ import java.util.stream.IntStream;
  * T-junctions) is one surface; parts that only touch at a point are separate surfaces.
  *
  * <p>Tolerances scale with the model's bounding-box diagonal D: weld tolerance
- * {@code max(1e-6 D, 1e-9 m)}; plane distance tolerance {@code max(1e-5 D, 1 mm)}.
+ * {@code max(1e-6 D, 1e-9 m)} rounded down to a power of ten (so that decimal coordinates stay on the
+ * grid); plane distance tolerance {@code max(1e-5 D, 1 mm)}. The frame used for the union has its
+ * origin at the first vertex of the group's first triangle, projected onto the mean plane, so
+ * axis-aligned faces with decimal coordinates keep exact local coordinates and exact areas.
  */
 public final class SurfaceBuilder {
     /** Maximum angle between the normals of coplanar triangles, degrees. */
@@ -50,7 +53,10 @@ public final class SurfaceBuilder {
     private SurfaceBuilder() {}
 
     /** Weld tolerance for a model, metres. */
-    public static double weldTolerance(MassingModel m) { return Math.max(WELD_REL * diagonal(m), 1e-9); }
+    public static double weldTolerance(MassingModel m) {
+        double w = Math.max(WELD_REL * diagonal(m), 1e-9);
+        return Math.pow(10, Math.floor(Math.log10(w))); // a power of ten: decimal coordinates stay exact
+    }
 
     /** Plane distance tolerance for a model, metres. */
     public static double planeTolerance(MassingModel m) { return Math.max(PLANE_REL * diagonal(m), PLANE_MIN_M); }
@@ -174,7 +180,9 @@ public final class SurfaceBuilder {
         Vec3 normal = new Vec3(sx, sy, sz).normalized();
         Vec3 centre = new Vec3(cx / sa, cy / sa, cz / sa); // area centroid of the group, on its mean plane
         double offset = normal.dot(centre);
-        SurfaceFrame f0 = SurfaceFrame.of(normal, centre);
+        int first = tri[3 * group.get(0)] * 3;
+        Vec3 p0 = new Vec3(v[first], v[first + 1], v[first + 2]);
+        SurfaceFrame f0 = SurfaceFrame.of(normal, p0.minus(normal.times(normal.dot(p0) - offset)));
         GeometryFactory gf = new GeometryFactory(pm);
         List<Geometry> polys = new ArrayList<>(k);
         Coordinate[][] triCoords = new Coordinate[k][];
