@@ -4,7 +4,6 @@ import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
-import org.locationtech.jts.geom.LinearRing;
 import org.locationtech.jts.geom.Polygon;
 import org.locationtech.jts.geom.prep.PreparedGeometry;
 import org.locationtech.jts.geom.prep.PreparedGeometryFactory;
@@ -184,21 +183,37 @@ public final class Patcher {
             Geometry part = g.getGeometryN(k);
             if (part instanceof Polygon p && (largest == null || p.getArea() > largest.getArea())) largest = p;
         }
-        LinearRing ring = largest.getExteriorRing();
-        Coordinate[] cs = ring.getCoordinates();
-        boolean ccw = Orientation.isCCW(cs);
-        int m = cs.length - 1;
-        double[] outline = new double[3 * m];
-        for (int k = 0; k < m; k++) {
-            Coordinate p = cs[ccw ? k : m - k];
-            Vec3 w = f.toWorld(p.x, p.y);
-            outline[3 * k] = w.x(); outline[3 * k + 1] = w.y(); outline[3 * k + 2] = w.z();
-        }
+        double[] outline = outline(largest.getExteriorRing().getCoordinates(), f);
         String id = sf.label() + "-P" + pad4(n);
         Vec3 nrm = sf.normal();
         return new Patch(index, id, sf.block(), model.blockNames().get(sf.block()), sf.id(), sf.kind(),
                 f.toWorld(c.x, c.y), nrm, g.getArea(), SurfaceClassifier.tiltDeg(nrm),
                 SurfaceClassifier.azimuthDeg(nrm), outline);
+    }
+
+    /**
+     * The ring as x,y,z corners counter-clockwise seen from the front, not closed, without straight
+     * (collinear) corners left where merged cells met.
+     */
+    static double[] outline(Coordinate[] cs, SurfaceFrame f) {
+        int m = cs.length - 1;
+        boolean ccw = Orientation.isCCW(cs);
+        Coordinate[] ring = new Coordinate[m];
+        for (int k = 0; k < m; k++) ring[k] = cs[ccw ? k : m - k];
+        double size = 0;
+        for (Coordinate c : ring) size = Math.max(size, Math.max(Math.abs(c.x - ring[0].x), Math.abs(c.y - ring[0].y)));
+        double eps = 1e-12 * size * size;
+        double[] out = new double[3 * m];
+        int w = 0;
+        for (int k = 0; k < m; k++) {
+            Coordinate a = ring[(k + m - 1) % m], b = ring[k], c = ring[(k + 1) % m];
+            double cross = (b.x - a.x) * (c.y - a.y) - (b.y - a.y) * (c.x - a.x);
+            double dot = (b.x - a.x) * (c.x - b.x) + (b.y - a.y) * (c.y - b.y);
+            if (Math.abs(cross) <= eps && dot > 0 && m - (k - w / 3) > 3) continue;
+            Vec3 p = f.toWorld(b.x, b.y);
+            out[w++] = p.x(); out[w++] = p.y(); out[w++] = p.z();
+        }
+        return w == out.length ? out : java.util.Arrays.copyOf(out, w);
     }
 
     private static String pad4(int n) {

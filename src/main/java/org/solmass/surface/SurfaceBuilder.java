@@ -50,6 +50,8 @@ public final class SurfaceBuilder {
     /** Normal bucket size: 2 degrees of arc (twice the tolerance), so neighbours cover all matches. */
     private static final double BUCKET = 2 * Math.sin(Math.toRadians(COPLANAR_ANGLE_DEG));
 
+    private static final GeometryFactory FLOATING = new GeometryFactory();
+
     private SurfaceBuilder() {}
 
     /** Weld tolerance for a model, metres. */
@@ -228,8 +230,9 @@ public final class SurfaceBuilder {
             for (int i = 0; i < k; i++) if (partOf[i] == p) ts.add(group.get(i));
             var env = poly.getEnvelopeInternal();
             SurfaceFrame frame = f0.withOrigin(f0.toWorld(env.getMinX(), env.getMinY()));
-            Polygon local = (Polygon) AffineTransformation.translationInstance(-env.getMinX(), -env.getMinY())
-                    .transform(poly);
+            // Patching works in floating precision: copy the snapped polygon into a floating factory.
+            Polygon local = (Polygon) FLOATING.createGeometry(
+                    AffineTransformation.translationInstance(-env.getMinX(), -env.getMinY()).transform(poly));
             double maxZ = Double.NEGATIVE_INFINITY;
             for (Coordinate c : local.getExteriorRing().getCoordinates()) {
                 maxZ = Math.max(maxZ, frame.toWorld(c.x, c.y).z());
