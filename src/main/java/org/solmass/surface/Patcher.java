@@ -3,10 +3,7 @@ package org.solmass.surface;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
-import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.Polygon;
-import org.locationtech.jts.geom.prep.PreparedGeometry;
-import org.locationtech.jts.geom.prep.PreparedGeometryFactory;
 import org.locationtech.jts.algorithm.Orientation;
 import org.locationtech.jts.operation.overlayng.OverlayNG;
 import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
@@ -108,25 +105,9 @@ public final class Patcher {
 
     /** Clips the grid of cell size {@code s}, anchored at (0, 0), to the polygon. */
     static List<Piece> cut(Polygon poly, double s) {
-        GeometryFactory plain = new GeometryFactory();
-        Envelope env = poly.getEnvelopeInternal();
-        int nu = Math.max(1, (int) Math.ceil(env.getMaxX() / s)), nv = Math.max(1, (int) Math.ceil(env.getMaxY() / s));
-        PreparedGeometry prep = PreparedGeometryFactory.prepare(poly);
-        List<Piece> out = new ArrayList<>();
-        for (int j = 0; j < nv; j++) {
-            for (int i = 0; i < nu; i++) {
-                double x0 = i * s, y0 = j * s, x1 = (i + 1) * s, y1 = (j + 1) * s;
-                Polygon cell = plain.createPolygon(new Coordinate[]{new Coordinate(x0, y0), new Coordinate(x1, y0),
-                        new Coordinate(x1, y1), new Coordinate(x0, y1), new Coordinate(x0, y0)});
-                if (!prep.intersects(cell)) continue;
-                if (prep.covers(cell)) { out.add(new Piece(cell, i, j)); continue; }
-                Geometry clip = OverlayNGRobust.overlay(poly, cell, OverlayNG.INTERSECTION);
-                for (int k = 0; k < clip.getNumGeometries(); k++) {
-                    Geometry g = clip.getGeometryN(k);
-                    if (g instanceof Polygon && g.getArea() > 0) out.add(new Piece(g, i, j));
-                }
-            }
-        }
+        List<GridClipper.Cut> cuts = GridClipper.cut(poly, s);
+        List<Piece> out = new ArrayList<>(cuts.size());
+        for (GridClipper.Cut c : cuts) out.add(new Piece(c.polygon(), c.i(), c.j()));
         return out;
     }
 
