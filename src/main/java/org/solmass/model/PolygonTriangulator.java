@@ -1,0 +1,150 @@
+package org.solmass.model;
+
+/**
+ * Triangulates one planar (possibly concave) polygon face by ear clipping in the polygon's plane.
+ * Method: ear clipping (Meisters, G. H., 1975, "Polygons have ears", American Mathematical Monthly
+ * 82(6):648-651; every simple polygon with more than 3 vertices has two non-overlapping ears).
+ * Valid for simple polygons (no self-intersection); collinear and repeated vertices are allowed.
+ * The plane is taken from the Newell normal (Newell's method, see Sutherland, Sproull and
+ * Schumacker, 1974, "A characterization of ten hidden-surface algorithms", ACM Computing Surveys
+ * 6(1)), and the polygon is projected by dropping the normal's dominant axis.
+ * Output triangles keep the face's winding, so their normals agree with the face normal.
+ * Not thread-safe: one instance per reader.
+ */
+final class PolygonTriangulator {
+    /** Relative tolerance for the convexity test: |cross| below this times the squared size is collinear. */
+    static final double COLLINEAR_REL = 1e-12;
+
+    private double[] px = new double[16], py = new double[16];
+    private int[] idx = new int[16], prev = new int[16], next = new int[16];
+
+    /**
+     * @param face vertex indices (0-based) of the face, in OBJ order
+     * @param n number of used entries in {@code face}
+     * @param v flat vertex array x,y,z
+     * @param out receives three indices per triangle
+     * @return number of triangles written
+     */
+    int triangulate(int[] face, int n, double[] v, IntList out) {
+        ensure(n);
+        // Copy, dropping consecutive repeats (same index or same position) and a closing repeat.
+        int k = 0;
+        for (int i = 0; i < n; i++) {
+            int vi = face[i];
+            if (k > 0 && samePos(v, idx[k - 1], vi)) continue;
+            idx[k++] = vi;
+        }
+        while (k > 1 && samePos(v, idx[k - 1], idx[0])) k--;
+        if (k < 3) return 0;
+        if (k == 3) {
+            out.add(idx[0]); out.add(idx[1]); out.add(idx[2]);
+            return 1;
+        }
+        // Newell normal.
+        double nx = 0, ny = 0, nz = 0;
+        for (int i = 0; i < k; i++) {
+            int a = idx[i] * 3, b = idx[(i + 1) % k] * 3;
+            nx += (v[a + 1] - v[b + 1]) * (v[a + 2] + v[b + 2]);
+            ny += (v[a + 2] - v[b + 2]) * (v[a] + v[b]);
+            nz += (v[a] - v[b]) * (v[a + 1] + v[b + 1]);
+        }
+        double ax = Math.abs(nx), ay = Math.abs(ny), az = Math.abs(nz);
+        if (ax + ay + az == 0) return 0;
+        int drop = az >= ax && az >= ay ? 2 : (ay >= ax ? 1 : 0);
+        double sign = drop == 2 ? Math.signum(nz) : drop == 1 ? Math.signum(ny) : Math.signum(nx);
+        double minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY;
+        double minY = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < k; i++) {
+            int a = idx[i] * 3;
+            // Right-handed projection so that the polygon is counter-clockwise in 2D when sign > 0.
+            double x, y;
+            if (drop == 2) { x = v[a]; y = v[a + 1]; }
+            else if (drop == 1) { x = v[a + 2]; y = v[a]; }
+            else { x = v[a + 1]; y = v[a + 2]; }
+            if (sign < 0) y = -y;
+            px[i] = x; py[i] = y;
+            minX = Math.min(minX, x); maxX = Math.max(maxX, x);
+            minY = Math.min(minY, y); maxY = Math.max(maxY, y);
+        }
+        double size = Math.max(maxX - minX, maxY - minY);
+        double eps = COLLINEAR_REL * size * size;
+        for (int i = 0; i < k; i++) { prev[i] = (i + k - 1) % k; next[i] = (i + 1) % k; }
+        int remaining = k, written = 0, cur = 0, sinceEar = 0;
+        while (remaining > 3) {
+            int p = prev[cur], q = next[cur];
+            double c = cross(p, cur, q);
+            boolean ear = false;
+            if (c > eps) {
+                ear = true;
+                for (int j = next[q]; j != p; j = next[j]) {
+                    if (coincides(j, p) || coincides(j, cur) || coincides(j, q)) continue;
+                    if (insideOrOn(j, p, cur, q, eps)) { ear = false; break; }
+                }
+            } else if (Math.abs(c) <= eps && isSpike(p, cur, q)) {
+                // A zero-width spike (the boundary goes out and straight back): remove without a triangle.
+                unlink(cur); remaining--; cur = q; sinceEar = 0; continue;
+            }
+            if (ear) {
+                out.add(idx[p]); out.add(idx[cur]); out.add(idx[q]);
+                written++;
+                unlink(cur); remaining--; cur = q; sinceEar = 0;
+                continue;
+            }
+            cur = q;
+            if (++sinceEar > remaining) {
+                // No ear (numerically awkward input): drop a collinear vertex if there is one, else clip
+                // the most convex corner so that the loop always ends.
+                int best = -1; double bestC = Double.NEGATIVE_INFINITY;
+                int j = cur;
+                for (int s = 0; s < remaining; s++, j = next[j]) {
+                    double cj = cross(prev[j], j, next[j]);
+                    if (Math.abs(cj) <= eps) { best = j; bestC = 0; break; }
+                    if (cj > bestC) { bestC = cj; best = j; }
+                }
+                if (bestC > eps) {
+                    out.add(idx[prev[best]]); out.add(idx[best]); out.add(idx[next[best]]);
+                    written++;
+                } else if (bestC < -eps) {
+                    return written; // only reflex corners left: not a simple polygon
+                }
+                cur = next[best];
+                unlink(best); remaining--; sinceEar = 0;
+            }
+        }
+        int p = prev[cur], q = next[cur];
+        out.add(idx[p]); out.add(idx[cur]); out.add(idx[q]);
+        return written + 1;
+    }
+
+    private void unlink(int i) {
+        next[prev[i]] = next[i];
+        prev[next[i]] = prev[i];
+    }
+
+    private double cross(int a, int b, int c) {
+        return (px[b] - px[a]) * (py[c] - py[a]) - (py[b] - py[a]) * (px[c] - px[a]);
+    }
+
+    private boolean isSpike(int a, int b, int c) {
+        double dx1 = px[b] - px[a], dy1 = py[b] - py[a], dx2 = px[c] - px[b], dy2 = py[c] - py[b];
+        return dx1 * dx2 + dy1 * dy2 < 0;
+    }
+
+    private boolean coincides(int a, int b) { return px[a] == px[b] && py[a] == py[b]; }
+
+    private boolean insideOrOn(int pnt, int a, int b, int c, double eps) {
+        return cross(a, b, pnt) >= -eps && cross(b, c, pnt) >= -eps && cross(c, a, pnt) >= -eps;
+    }
+
+    private static boolean samePos(double[] v, int a, int b) {
+        if (a == b) return true;
+        int i = a * 3, j = b * 3;
+        return v[i] == v[j] && v[i + 1] == v[j + 1] && v[i + 2] == v[j + 2];
+    }
+
+    private void ensure(int n) {
+        if (idx.length >= n) return;
+        int m = Math.max(n, idx.length * 2);
+        px = new double[m]; py = new double[m]; idx = new int[m]; prev = new int[m]; next = new int[m];
+    }
+}

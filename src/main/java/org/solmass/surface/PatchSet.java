@@ -1,0 +1,33 @@
+package org.solmass.surface;
+
+import org.solmass.model.MassingModel;
+
+import java.util.List;
+
+/**
+ * The surfaces of a model and the patches of its analysed surfaces.
+ *
+ * @param model the model they were built from
+ * @param options the patching options used
+ * @param surfaces all planar surfaces of all blocks, index = surface id
+ * @param patches patches in dense index order (grouped by surface, surfaces in id order)
+ * @param analysedBlocks per block id, whether its surfaces were patched
+ * @param hasGroundFaces whether the model has surfaces classified GROUND (in any block)
+ * @param groundLevelZ the model's lowest level, metres (z of the infinite ground plane the scene
+ *                     stage adds when {@code hasGroundFaces} is false)
+ */
+public record PatchSet(MassingModel model, PatchOptions options, List<Surface> surfaces, List<Patch> patches,
+                       boolean[] analysedBlocks, boolean hasGroundFaces, double groundLevelZ) {
+
+    /** Whether block {@code block} was analysed (patched). */
+    public boolean isAnalysed(int block) { return analysedBlocks[block]; }
+
+    public int patchCount() { return patches.size(); }
+
+    /** Sum of the patch areas, square metres. */
+    public double totalPatchAreaM2() {
+        double s = 0;
+        for (Patch p : patches) s += p.areaM2();
+        return s;
+    }
+}

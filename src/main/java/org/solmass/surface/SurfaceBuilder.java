@@ -1,0 +1,245 @@
+package org.solmass.surface;
+
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.GeometryFactory;
+import org.locationtech.jts.geom.Point;
+import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.geom.PrecisionModel;
+import org.locationtech.jts.geom.util.AffineTransformation;
+import org.locationtech.jts.operation.overlayng.UnaryUnionNG;
+import org.solmass.model.IntList;
+import org.solmass.model.MassingModel;
+import org.solmass.model.Vec3;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.IntStream;
+
+/**
+ * Merges the coplanar, edge-connected triangles of each block into planar surfaces.
+ *
+ * <p>Two triangles are coplanar when their unit normals differ by at most {@link #COPLANAR_ANGLE_DEG}
+ * and every corner of the candidate lies within the plane distance tolerance of the plane of the
+ * group's first triangle (compared with the first triangle, not chained, so that a finely
+ * tessellated curved wall does not drift into one "plane"). The group is then projected into its
+ * frame and united with JTS (OverlayNG) on a fixed precision grid of the weld tolerance: vertices
+ * closer than that snap together, which welds the duplicate vertices CAD exports write and closes
+ * hairline gaps. Each connected part of the union (triangles sharing an edge, including
+ * T-junctions) is one surface; parts that only touch at a point are separate surfaces.
+ *
+ * <p>Tolerances scale with the model's bounding-box diagonal D: weld tolerance
+ * {@code max(1e-6 D, 1e-9 m)} rounded down to a power of ten (so that decimal coordinates stay on the
+ * grid); plane distance tolerance {@code max(1e-5 D, 1 mm)}. The frame used for the union has its
+ * origin at the first vertex of the group's first triangle, projected onto the mean plane, so
+ * axis-aligned faces with decimal coordinates keep exact local coordinates and exact areas.
+ */
+public final class SurfaceBuilder {
+    /** Maximum angle between the normals of coplanar triangles, degrees. */
+    public static final double COPLANAR_ANGLE_DEG = 1.0;
+    /** Weld tolerance relative to the model's bounding-box diagonal. */
+    public static final double WELD_REL = 1e-6;
+    /** Plane distance tolerance relative to the model's bounding-box diagonal. */
+    public static final double PLANE_REL = 1e-5;
+    /** Smallest plane distance tolerance, metres. */
+    public static final double PLANE_MIN_M = 1e-3;
+
+    private static final double COS_TOL = Math.cos(Math.toRadians(COPLANAR_ANGLE_DEG));
+    /** Normal bucket size: 2 degrees of arc (twice the tolerance), so neighbours cover all matches. */
+    private static final double BUCKET = 2 * Math.sin(Math.toRadians(COPLANAR_ANGLE_DEG));
+
+    private static final GeometryFactory FLOATING = new GeometryFactory();
+
+    private SurfaceBuilder() {}
+
+    /** Weld tolerance for a model, metres. */
+    public static double weldTolerance(MassingModel m) {
+        double w = Math.max(WELD_REL * diagonal(m), 1e-9);
+        return Math.pow(10, Math.floor(Math.log10(w))); // a power of ten: decimal coordinates stay exact
+    }
+
+    /** Plane distance tolerance for a model, metres. */
+    public static double planeTolerance(MassingModel m) { return Math.max(PLANE_REL * diagonal(m), PLANE_MIN_M); }
+
+    static double diagonal(MassingModel m) {
+        double[] b = m.bounds();
+        return Math.sqrt(sq(b[3] - b[0]) + sq(b[4] - b[1]) + sq(b[5] - b[2]));
+    }
+
+    private static double sq(double x) { return x * x; }
+
+    /** Builds the surfaces of all blocks, ordered by block, then by first triangle, then by part. */
+    public static List<Surface> build(MassingModel m) {
+        List<IntList> groups = groupCoplanar(m);
+        double weld = weldTolerance(m), ground = m.minZ();
+        PrecisionModel pm = new PrecisionModel(1.0 / weld);
+        List<List<Draft>> perGroup = IntStream.range(0, groups.size()).parallel()
+                .mapToObj(g -> unite(m, groups.get(g), pm, ground)).toList();
+        List<Surface> out = new ArrayList<>();
+        int[] perBlock = new int[m.blockNames().size()];
+        for (List<Draft> ds : perGroup) {
+            for (Draft d : ds) {
+                out.add(new Surface(out.size(), d.block, perBlock[d.block]++, d.kind, d.frame.normal(), d.area,
+                        d.offset, d.triangles, d.polygon, d.frame));
+            }
+        }
+        return out;
+    }
+
+    private record Draft(int block, SurfaceKind kind, double area, double offset, int[] triangles,
+                         Polygon polygon, SurfaceFrame frame) {}
+
+    /** Groups triangle ids by (block, plane), in order of each group's first triangle. */
+    static List<IntList> groupCoplanar(MassingModel m) {
+        int nt = m.triangleCount();
+        double tol = planeTolerance(m);
+        double[] v = m.vertices();
+        int[] tri = m.triangles(), tb = m.triangleBlock();
+        List<IntList> groups = new ArrayList<>();
+        List<double[]> planes = new ArrayList<>(); // nx, ny, nz, d of each group's first triangle
+        Map<Long, IntList> buckets = new HashMap<>();
+        double[] n = new double[3];
+        int last = -1;
+        for (int t = 0; t < nt; t++) {
+            unitNormal(v, tri, t, n);
+            int found = -1;
+            if (last >= 0 && tb[groups.get(last).get(0)] == tb[t] && matches(planes.get(last), n, v, tri, t, tol)) {
+                found = last;
+            } else {
+                int bx = (int) Math.floor(n[0] / BUCKET), by = (int) Math.floor(n[1] / BUCKET);
+                int bz = (int) Math.floor(n[2] / BUCKET);
+                for (int dx = -1; dx <= 1; dx++) for (int dy = -1; dy <= 1; dy++) for (int dz = -1; dz <= 1; dz++) {
+                    IntList cand = buckets.get(key(tb[t], bx + dx, by + dy, bz + dz));
+                    if (cand == null) continue;
+                    for (int c = 0; c < cand.size(); c++) {
+                        int g = cand.get(c);
+                        if (matches(planes.get(g), n, v, tri, t, tol) && (found < 0 || g < found)) found = g;
+                    }
+                }
+            }
+            if (found < 0) {
+                found = groups.size();
+                IntList g = new IntList(8);
+                groups.add(g);
+                int a = tri[3 * t] * 3;
+                planes.add(new double[]{n[0], n[1], n[2], n[0] * v[a] + n[1] * v[a + 1] + n[2] * v[a + 2]});
+                long k = key(tb[t], (int) Math.floor(n[0] / BUCKET), (int) Math.floor(n[1] / BUCKET),
+                        (int) Math.floor(n[2] / BUCKET));
+                buckets.computeIfAbsent(k, x -> new IntList(4)).add(found);
+            }
+            groups.get(found).add(t);
+            last = found;
+        }
+        return groups;
+    }
+
+    private static long key(int block, int bx, int by, int bz) {
+        return ((long) block << 24) ^ ((long) (bx + 128) << 16) ^ ((long) (by + 128) << 8) ^ (bz + 128);
+    }
+
+    private static boolean matches(double[] p, double[] n, double[] v, int[] tri, int t, double tol) {
+        if (p[0] * n[0] + p[1] * n[1] + p[2] * n[2] < COS_TOL) return false;
+        for (int k = 0; k < 3; k++) {
+            int a = tri[3 * t + k] * 3;
+            if (Math.abs(p[0] * v[a] + p[1] * v[a + 1] + p[2] * v[a + 2] - p[3]) > tol) return false;
+        }
+        return true;
+    }
+
+    static void unitNormal(double[] v, int[] tri, int t, double[] out) {
+        double[] c = crossOf(v, tri, t);
+        double l = Math.sqrt(c[0] * c[0] + c[1] * c[1] + c[2] * c[2]);
+        out[0] = c[0] / l; out[1] = c[1] / l; out[2] = c[2] / l;
+    }
+
+    /** Cross product (b - a) x (c - a) of triangle t: twice its area times its unit normal. */
+    static double[] crossOf(double[] v, int[] tri, int t) {
+        int a = tri[3 * t] * 3, b = tri[3 * t + 1] * 3, c = tri[3 * t + 2] * 3;
+        double ux = v[b] - v[a], uy = v[b + 1] - v[a + 1], uz = v[b + 2] - v[a + 2];
+        double wx = v[c] - v[a], wy = v[c + 1] - v[a + 1], wz = v[c + 2] - v[a + 2];
+        return new double[]{uy * wz - uz * wy, uz * wx - ux * wz, ux * wy - uy * wx};
+    }
+
+    /** Unites one coplanar group into one surface per connected part. */
+    private static List<Draft> unite(MassingModel m, IntList group, PrecisionModel pm, double groundZ) {
+        double[] v = m.vertices();
+        int[] tri = m.triangles();
+        int k = group.size();
+        double sx = 0, sy = 0, sz = 0, sa = 0, cx = 0, cy = 0, cz = 0;
+        for (int i = 0; i < k; i++) {
+            int t = group.get(i);
+            double[] c = crossOf(v, tri, t);
+            sx += c[0]; sy += c[1]; sz += c[2];
+            double a2 = Math.sqrt(c[0] * c[0] + c[1] * c[1] + c[2] * c[2]);
+            sa += a2;
+            for (int j = 0; j < 3; j++) {
+                int p = tri[3 * t + j] * 3;
+                cx += a2 * v[p] / 3; cy += a2 * v[p + 1] / 3; cz += a2 * v[p + 2] / 3;
+            }
+        }
+        Vec3 normal = new Vec3(sx, sy, sz).normalized();
+        Vec3 centre = new Vec3(cx / sa, cy / sa, cz / sa); // area centroid of the group, on its mean plane
+        double offset = normal.dot(centre);
+        int first = tri[3 * group.get(0)] * 3;
+        Vec3 p0 = new Vec3(v[first], v[first + 1], v[first + 2]);
+        SurfaceFrame f0 = SurfaceFrame.of(normal, p0.minus(normal.times(normal.dot(p0) - offset)));
+        GeometryFactory gf = new GeometryFactory(pm);
+        List<Geometry> polys = new ArrayList<>(k);
+        Coordinate[][] triCoords = new Coordinate[k][];
+        for (int i = 0; i < k; i++) {
+            int t = group.get(i);
+            Coordinate[] cs = new Coordinate[4];
+            for (int j = 0; j < 3; j++) {
+                int p = tri[3 * t + j] * 3;
+                cs[j] = new Coordinate(f0.localX(v[p], v[p + 1], v[p + 2]), f0.localY(v[p], v[p + 1], v[p + 2]));
+                pm.makePrecise(cs[j]);
+            }
+            cs[3] = cs[0].copy();
+            triCoords[i] = cs;
+            polys.add(gf.createPolygon(cs));
+        }
+        Geometry union = UnaryUnionNG.union(polys, gf, pm);
+        List<Polygon> parts = new ArrayList<>();
+        for (int i = 0; i < union.getNumGeometries(); i++) {
+            Geometry g = union.getGeometryN(i);
+            if (g instanceof Polygon p && p.getArea() > 0) parts.add(p);
+        }
+        List<Draft> out = new ArrayList<>(parts.size());
+        if (parts.isEmpty()) return out;
+        int[] partOf = new int[k];
+        if (parts.size() > 1) {
+            for (int i = 0; i < k; i++) {
+                Coordinate[] cs = triCoords[i];
+                Point c = gf.createPoint(new Coordinate((cs[0].x + cs[1].x + cs[2].x) / 3,
+                        (cs[0].y + cs[1].y + cs[2].y) / 3));
+                int best = 0; double bestD = Double.POSITIVE_INFINITY;
+                for (int p = 0; p < parts.size(); p++) {
+                    double d = parts.get(p).distance(c);
+                    if (d < bestD) { bestD = d; best = p; }
+                    if (d == 0) break;
+                }
+                partOf[i] = best;
+            }
+        }
+        int block = m.triangleBlock()[group.get(0)];
+        for (int p = 0; p < parts.size(); p++) {
+            Polygon poly = parts.get(p);
+            IntList ts = new IntList(k);
+            for (int i = 0; i < k; i++) if (partOf[i] == p) ts.add(group.get(i));
+            var env = poly.getEnvelopeInternal();
+            SurfaceFrame frame = f0.withOrigin(f0.toWorld(env.getMinX(), env.getMinY()));
+            // Patching works in floating precision: copy the snapped polygon into a floating factory.
+            Polygon local = (Polygon) FLOATING.createGeometry(
+                    AffineTransformation.translationInstance(-env.getMinX(), -env.getMinY()).transform(poly));
+            double maxZ = Double.NEGATIVE_INFINITY;
+            for (Coordinate c : local.getExteriorRing().getCoordinates()) {
+                maxZ = Math.max(maxZ, frame.toWorld(c.x, c.y).z());
+            }
+            SurfaceKind kind = SurfaceClassifier.classify(normal, maxZ, groundZ);
+            out.add(new Draft(block, kind, local.getArea(), offset, ts.toArray(), local, frame));
+        }
+        return out;
+    }
+}
