@@ -47,6 +47,26 @@ final class SceneFixtures {
         return this;
     }
 
+    /**
+     * Closed prism over a convex footprint (x,y pairs, counter-clockwise seen from above) between
+     * z0 and z1, outward faces, as a new block.
+     */
+    SceneFixtures prism(double[] xy, double z0, double z1) {
+        block();
+        int n = xy.length / 2;
+        for (int i = 1; i + 1 < n; i++) {
+            triangle(xy[0], xy[1], z1, xy[2 * i], xy[2 * i + 1], z1, xy[2 * i + 2], xy[2 * i + 3], z1);
+            triangle(xy[0], xy[1], z0, xy[2 * i + 2], xy[2 * i + 3], z0, xy[2 * i], xy[2 * i + 1], z0);
+        }
+        for (int i = 0; i < n; i++) {
+            int j = (i + 1) % n;
+            double[] a = {xy[2 * i], xy[2 * i + 1], z0}, b = {xy[2 * j], xy[2 * j + 1], z0};
+            double[] c = {xy[2 * j], xy[2 * j + 1], z1}, d = {xy[2 * i], xy[2 * i + 1], z1};
+            quad(a, b, c, d);
+        }
+        return this;
+    }
+
     int triangleCount() { return tris.size(); }
 
     MassingModel model() {
