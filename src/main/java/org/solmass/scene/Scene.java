@@ -1,0 +1,143 @@
+package org.solmass.scene;
+
+import org.solmass.model.MassingModel;
+import org.solmass.surface.Patch;
+
+/**
+ * The ray-casting scene: a bounding volume hierarchy (BVH) over every triangle of a massing model
+ * (analysed and context blocks alike) plus an optional analytic infinite ground plane.
+ *
+ * <p>Layout (see docs/scene.md): the BVH is built with a binned surface-area heuristic
+ * (Wald, 2007, "On fast construction of SAH-based bounding volume hierarchies", IEEE Symposium on
+ * Interactive Ray Tracing) and flattened depth-first into one linear array, the first child right
+ * after its parent and the parent storing the second child's offset (Pharr, Jakob and Humphreys,
+ * Physically Based Rendering, 3rd ed., 2016, section 4.3.4 "Compact BVH for traversal"). Triangles are
+ * reordered into leaf order and stored as vertex 0 plus the two edge vectors for the
+ * Moller-Trumbore test.
+ *
+ * <p>Precision: triangles and boxes are stored as {@code float}, relative to the centre of the model's
+ * bounding box, so that models in projected coordinates (x ~ 500 000 m) keep sub-millimetre
+ * resolution. Queries take world coordinates in {@code double}; the shift is applied per query.
+ *
+ * <p>Immutable and thread-safe; each thread queries through its own {@link Tracer}.
+ */
+public final class Scene {
+    /** Words per BVH node in {@link #nodes}: min x,y,z, max x,y,z, offset bits, count/axis bits. */
+    static final int NODE_WORDS = 8;
+    /** Floats per triangle in {@link #tris}: v0 x,y,z, e1 = v1-v0, e2 = v2-v0. */
+    static final int TRI_WORDS = 9;
+
+    final float[] nodes;
+    final float[] tris;
+    final int[] triOriginal;
+    final int maxDepth;
+    final int nodeCount;
+    /** World coordinates of the storage origin (subtracted from every query point), metres. */
+    final double shiftX, shiftY, shiftZ;
+    final boolean groundPlane;
+    /** Ground plane height in world coordinates, metres. */
+    final double groundZ;
+    private final double diagonal;
+    private final double epsilon;
+    private final int triangleCount;
+
+    private Scene(BvhBuilder.Result r, double[] bounds, double[] shift, boolean groundPlane, double groundZ,
+                  int triangleCount) {
+        this.nodes = r.nodes();
+        this.tris = r.tris();
+        this.triOriginal = r.triOriginal();
+        this.maxDepth = r.maxDepth();
+        this.nodeCount = r.nodeCount();
+        this.shiftX = shift[0];
+        this.shiftY = shift[1];
+        this.shiftZ = shift[2];
+        this.groundPlane = groundPlane;
+        this.groundZ = groundZ;
+        this.triangleCount = triangleCount;
+        double ex = bounds[3] - bounds[0], ey = bounds[4] - bounds[1], ez = bounds[5] - bounds[2];
+        double d = Math.sqrt(ex * ex + ey * ey + ez * ez);
+        this.diagonal = Double.isFinite(d) ? d : 0;
+        this.epsilon = Math.max(MIN_EPSILON_M, EPSILON_PER_DIAGONAL * diagonal);
+    }
+
+    /** Relative ray-origin offset: {@value} x the scene's bounding-box diagonal. */
+    public static final double EPSILON_PER_DIAGONAL = 1e-5;
+    /** Smallest ray-origin offset, metres (1 mm). */
+    public static final double MIN_EPSILON_M = 1e-3;
+
+    /**
+     * Builds the scene over all triangles of {@code model}.
+     *
+     * @param model the massing model (triangles in metres, z up)
+     * @param infiniteGroundPlane whether to add the analytic plane z = groundZ (it faces up; it blocks
+     *                            rays from both sides)
+     * @param groundZ height of the ground plane, metres (ignored without the plane)
+     */
+    public static Scene build(MassingModel model, boolean infiniteGroundPlane, double groundZ) {
+        return build(model.triangleSoup(), infiniteGroundPlane, groundZ);
+    }
+
+    /**
+     * Builds the scene from a triangle soup (9 floats per triangle: the three corners' x,y,z, metres,
+     * world coordinates). Triangle indices reported by queries are indices into this soup.
+     */
+    public static Scene build(float[] soup, boolean infiniteGroundPlane, double groundZ) {
+        if (soup.length % 9 != 0) throw new IllegalArgumentException("triangle soup length not a multiple of 9");
+        int n = soup.length / 9;
+        double[] b = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY,
+                Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
+        for (int i = 0; i < soup.length; i += 3) {
+            for (int k = 0; k < 3; k++) {
+                b[k] = Math.min(b[k], soup[i + k]);
+                b[k + 3] = Math.max(b[k + 3], soup[i + k]);
+            }
+        }
+        double[] shift = new double[3];
+        if (n > 0) for (int k = 0; k < 3; k++) shift[k] = Math.floor((b[k] + b[k + 3]) / 2);
+        else b = new double[6];
+        BvhBuilder.Result r = new BvhBuilder(soup, shift).build();
+        return new Scene(r, b, shift, infiniteGroundPlane, groundZ, n);
+    }
+
+    /** A new query object for the calling thread (owns its traversal stack; not thread-safe). */
+    public Tracer tracer() {
+        return new Tracer(this);
+    }
+
+    public int triangleCount() { return triangleCount; }
+
+    public int nodeCount() { return nodeCount; }
+
+    /** Depth of the deepest BVH leaf (root = 0). */
+    public int maxDepth() { return maxDepth; }
+
+    public boolean hasGroundPlane() { return groundPlane; }
+
+    /** Height of the infinite ground plane, metres (meaningful only with {@link #hasGroundPlane()}). */
+    public double groundZ() { return groundZ; }
+
+    /** Bounding-box diagonal of all triangles, metres. */
+    public double diagonal() { return diagonal; }
+
+    /**
+     * Ray-origin offset along a patch normal, metres: {@code max(1 mm, 1e-5 x scene diagonal)}.
+     * Float storage relative to the box centre has a resolution of about 6e-8 x |coordinate|, i.e.
+     * at most 3e-8 x diagonal, so the offset is over 100 float steps away from the patch's own face
+     * (no self-hit) yet far smaller than any patch (no leak through the faces that meet its edges).
+     */
+    public double epsilon() { return epsilon; }
+
+    /** Origin for rays leaving {@code patch}: its centroid moved {@link #epsilon()} along its normal. */
+    public double[] rayOrigin(Patch patch) {
+        double[] o = new double[3];
+        rayOrigin(patch, o);
+        return o;
+    }
+
+    /** Allocation-free form of {@link #rayOrigin(Patch)}: writes x,y,z into {@code out[0..2]}. */
+    public void rayOrigin(Patch patch, double[] out) {
+        out[0] = patch.centroid().x() + epsilon * patch.normal().x();
+        out[1] = patch.centroid().y() + epsilon * patch.normal().y();
+        out[2] = patch.centroid().z() + epsilon * patch.normal().z();
+    }
+}
