@@ -42,15 +42,36 @@ public final class SolarGeometry {
                 + 0.000719 * Math.cos(2 * b) + 0.000077 * Math.sin(2 * b));
     }
 
+    /** Year whose ephemeris gives the declination of a day of year (non-leap, near the present epoch). */
+    public static final int DECLINATION_YEAR = 2025;
+    private static final double[] DECLINATION = new double[367];
+
+    static {
+        for (int n = 1; n <= 366; n++) {
+            java.time.ZonedDateTime noon = java.time.LocalDate.ofYearDay(DECLINATION_YEAR, Math.min(n, 365))
+                    .atTime(12, 0).atZone(java.time.ZoneOffset.UTC).plusDays(n == 366 ? 1 : 0);
+            // geometric SPA position seen from (0 N, 0 E): sin(delta) = cos(z) sin(0) + cos(0) sin(z) cos(A)
+            var p = net.e175.klaus.solarpositioning.SPA.calculateSolarPosition(noon, 0, 0, 0, 69);
+            double z = Math.toRadians(p.zenithAngle()), a = Math.toRadians(p.azimuth());
+            DECLINATION[n] = Math.toDegrees(Math.asin(Math.sin(z) * Math.cos(a)));
+        }
+    }
+
     /**
-     * Solar declination, degrees, by Spencer (1971), Duffie &amp; Beckman (2013) eq. 1.6.1b; error
-     * below 0.035 deg. Valid any year (day of year 1..366).
+     * Solar declination at 12:00 UTC of a day of year, degrees, from the SPA ephemeris (Reda &amp;
+     * Andreas 2004) for {@link #DECLINATION_YEAR}. Day-of-year formulas (Cooper 1969, Spencer 1971)
+     * were fitted to other epochs and are 0.3-0.6 deg off near the equinoxes today (the equinoxes
+     * have moved by about a day), which moves H0 of the equinox months by over 1 % at 45 deg latitude;
+     * taking the declination from the same ephemeris as the per-step sun keeps the monthly models
+     * consistent with the steps. Day 366 is taken one day after day 365.
      */
     public static double declinationDeg(int dayOfYear) {
-        double b = dayAngleRad(dayOfYear);
-        double d = 0.006918 - 0.399912 * Math.cos(b) + 0.070257 * Math.sin(b) - 0.006758 * Math.cos(2 * b)
-                + 0.000907 * Math.sin(2 * b) - 0.002697 * Math.cos(3 * b) + 0.00148 * Math.sin(3 * b);
-        return Math.toDegrees(d);
+        return DECLINATION[dayOfYear];
+    }
+
+    /** Declination of Cooper (1969), Duffie &amp; Beckman (2013) eq. 1.6.1a: 23.45 sin(360 (284 + n)/365), degrees. */
+    public static double cooperDeclinationDeg(int dayOfYear) {
+        return 23.45 * Math.sin(Math.toRadians(360.0 * (284 + dayOfYear) / 365));
     }
 
     /**
@@ -80,7 +101,12 @@ public final class SolarGeometry {
      * (with 24 h instead of 24x3600 s to give Wh). Geometric sunrise/sunset (no refraction).
      */
     public static double dailyExtraterrestrialWhM2(double latitudeDeg, int dayOfYear) {
-        double delta = declinationDeg(dayOfYear);
+        return dailyExtraterrestrialWhM2(latitudeDeg, dayOfYear, declinationDeg(dayOfYear));
+    }
+
+    /** As {@link #dailyExtraterrestrialWhM2(double, int)} with a given declination (degrees). */
+    public static double dailyExtraterrestrialWhM2(double latitudeDeg, int dayOfYear, double declinationDeg) {
+        double delta = declinationDeg;
         double ws = sunsetHourAngleDeg(latitudeDeg, delta);
         double phi = Math.toRadians(latitudeDeg), d = Math.toRadians(delta), w = Math.toRadians(ws);
         return 24.0 / Math.PI * extraterrestrialNormalWm2(dayOfYear)
