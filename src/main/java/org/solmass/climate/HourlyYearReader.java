@@ -44,7 +44,10 @@ final class HourlyYearReader {
         ZoneOffset off = calc.site().standardOffset(year);
         int n0 = csv.rows.size();
         Instant[] t = new Instant[n0];
-        for (int i = 0; i < n0; i++) t[i] = parseTime(csv, csv.rows.get(i), ct, off);
+        for (int i = 0; i < n0; i++) {
+            t[i] = parseTime(csv, csv.rows.get(i), ct, off);
+            if (i > 0 && !t[i].isAfter(t[i - 1])) throw new InputException(csv.at(csv.rows.get(i)), "timestamp not after the previous row's");
+        }
         long step = Duration.between(t[0], t[1]).getSeconds();
         if (step <= 0) throw new InputException(csv.at(csv.rows.get(1)), "timestamps must increase");
         if (step < 60 || (step <= 3600 ? 3600 % step != 0 : step != 3600)) {
@@ -59,7 +62,6 @@ final class HourlyYearReader {
         for (int i = 0; i < n0; i++) {
             CsvLines.Line l = csv.rows.get(i);
             long d = Duration.between(t[0], t[i]).getSeconds();
-            if (i > 0 && !t[i].isAfter(t[i - 1])) throw new InputException(csv.at(l), "timestamp not after the previous row's");
             if (d % step != 0) throw new InputException(csv.at(l), "timestamp is not on the " + step / 60 + "-minute grid of the first rows");
             int k = (int) (d / step);
             present[k] = true;
@@ -76,6 +78,7 @@ final class HourlyYearReader {
         int[] cols = {cg, cd, cn, cT};
         String[] names = {"GHI", "DHI", "DNI", "temperature"};
         for (int c = 0; c < 4; c++) if (cols[c] >= 0) fill(v[c], names[c], present, where, spec.fillGapsMaxSteps(), rep);
+        for (int k = 0; k < n; k++) if (!present[k]) rep.repair("missing steps filled by linear interpolation", where[k]);
         double hours = n * step / 3600.0;
         if (Math.abs(hours - 8760) > 1e-6 && Math.abs(hours - 8784) > 1e-6) {
             rep.warn(String.format("the file covers %.1f h, not a whole year (8760 or 8784 h): sums are over the file's period", hours));
@@ -119,7 +122,7 @@ final class HourlyYearReader {
                         + (maxRun > 0 ? "; only gaps of up to " + maxRun + " steps inside the file are filled" : "; use --fill-gaps N to interpolate short gaps"));
             }
             for (int k = i; k < j; k++) a[k] = a[i - 1] + (a[j] - a[i - 1]) * (k - i + 1) / (run + 1);
-            rep.repair((missingRows ? "missing steps" : "missing " + name + " values") + " filled by linear interpolation", where[i]);
+            if (!missingRows) rep.repair("missing " + name + " values filled by linear interpolation", where[i]);
             i = j;
         }
     }
