@@ -1,0 +1,101 @@
+package org.solmass.climate;
+
+import org.solmass.InputException;
+
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * What weather a study uses and how to read it.
+ *
+ * @param kind             clear sky or a file
+ * @param file             the file (FILE only)
+ * @param format           file format, AUTO to recognise it from the header (docs/climate-formats.md)
+ * @param timeBase         for clear sky: AVERAGE_DAYS (default) or HOURLY_YEAR; for files it follows the format
+ * @param year             calendar year of a clear-sky HOURLY_YEAR
+ * @param stepMinutes      step of generated days/years (clear sky, monthly means), divides 60
+ * @param intervalLabel    whether a timestamp of an hourly file labels its interval's start or end
+ * @param columns          role (time, ghi, dhi, dni, temp) to header name or 1-based column number
+ * @param fillGapsMaxSteps longest run of missing steps/values filled by linear interpolation (0 = never)
+ */
+public record ClimateSpec(Kind kind, Path file, Format format, TimeBase timeBase, int year, int stepMinutes,
+                          IntervalLabel intervalLabel, Map<String, String> columns, int fillGapsMaxSteps) {
+
+    public enum Kind { CLEAR_SKY, FILE }
+
+    public enum Format {
+        AUTO, MONTH_HOUR, MONTHLY_MEANS, HOURLY;
+
+        public static Format parse(String s, String where) {
+            switch (s.toLowerCase(Locale.ROOT)) {
+                case "auto": return AUTO;
+                case "month-hour": return MONTH_HOUR;
+                case "monthly-means": return MONTHLY_MEANS;
+                case "hourly": return HOURLY;
+                default: throw new InputException(where, "unknown climate format '" + s + "' (expected auto, month-hour, monthly-means or hourly)");
+            }
+        }
+    }
+
+    /** A timestamp names the start (default) or the end of its interval. */
+    public enum IntervalLabel {
+        START, END;
+
+        public static IntervalLabel parse(String s, String where) {
+            switch (s.toLowerCase(Locale.ROOT)) {
+                case "start": return START;
+                case "end": return END;
+                default: throw new InputException(where, "expected start or end, got '" + s + "'");
+            }
+        }
+    }
+
+    public ClimateSpec {
+        columns = Map.copyOf(columns);
+        if (fillGapsMaxSteps < 0) throw new InputException("fill-gaps", "must be >= 0, got " + fillGapsMaxSteps);
+    }
+
+    public static ClimateSpec clearSky() {
+        return new ClimateSpec(Kind.CLEAR_SKY, null, Format.AUTO, TimeBase.AVERAGE_DAYS, StepGrid.AVERAGE_DAY_YEAR, 60,
+                IntervalLabel.START, Map.of(), 0);
+    }
+
+    public static ClimateSpec clearSkyYear(int year) {
+        return clearSky().withTimeBase(TimeBase.HOURLY_YEAR).withYear(year);
+    }
+
+    public static ClimateSpec file(Path file) {
+        return new ClimateSpec(Kind.FILE, file, Format.AUTO, TimeBase.HOURLY_YEAR, StepGrid.AVERAGE_DAY_YEAR, 60,
+                IntervalLabel.START, Map.of(), 0);
+    }
+
+    /** "clear-sky" or a file path. */
+    public static ClimateSpec parse(String text) {
+        if (text == null || text.isBlank() || text.equalsIgnoreCase("clear-sky")) return clearSky();
+        return file(Path.of(text));
+    }
+
+    public ClimateSpec withFormat(Format f) { return new ClimateSpec(kind, file, f, timeBase, year, stepMinutes, intervalLabel, columns, fillGapsMaxSteps); }
+    public ClimateSpec withTimeBase(TimeBase t) { return new ClimateSpec(kind, file, format, t, year, stepMinutes, intervalLabel, columns, fillGapsMaxSteps); }
+    public ClimateSpec withYear(int y) { return new ClimateSpec(kind, file, format, timeBase, y, stepMinutes, intervalLabel, columns, fillGapsMaxSteps); }
+    public ClimateSpec withStepMinutes(int m) { return new ClimateSpec(kind, file, format, timeBase, year, m, intervalLabel, columns, fillGapsMaxSteps); }
+    public ClimateSpec withIntervalLabel(IntervalLabel l) { return new ClimateSpec(kind, file, format, timeBase, year, stepMinutes, l, columns, fillGapsMaxSteps); }
+    public ClimateSpec withColumns(Map<String, String> c) { return new ClimateSpec(kind, file, format, timeBase, year, stepMinutes, intervalLabel, c, fillGapsMaxSteps); }
+    public ClimateSpec withFillGaps(int maxSteps) { return new ClimateSpec(kind, file, format, timeBase, year, stepMinutes, intervalLabel, columns, maxSteps); }
+
+    /** Parses "ghi=GlobHor,time=1" (role=name or role=1-based column number). */
+    public static Map<String, String> parseColumns(String text, String where) {
+        Map<String, String> m = new LinkedHashMap<>();
+        if (text == null || text.isBlank()) return m;
+        for (String part : text.split(",")) {
+            int eq = part.indexOf('=');
+            if (eq <= 0) throw new InputException(where, "expected role=column pairs like ghi=3,dhi=4, got '" + part + "'");
+            String role = part.substring(0, eq).trim().toLowerCase(Locale.ROOT);
+            if (!HourlyYearReader.ROLES.contains(role)) throw new InputException(where, "unknown column role '" + role + "' (expected one of " + HourlyYearReader.ROLES + ")");
+            m.put(role, part.substring(eq + 1).trim());
+        }
+        return m;
+    }
+}

@@ -1,0 +1,169 @@
+package org.solmass.climate;
+
+import org.solmass.InputException;
+import org.solmass.sun.SolarCalculator;
+
+import java.time.Duration;
+import java.time.Instant;
+import java.time.LocalDateTime;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeParseException;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Reads an hourly (or finer) CSV: one row per interval, a timestamp column (ISO local standard time
+ * of the site, or ISO with an offset) and GHI+DHI, GHI+DNI, DNI+DHI or GHI alone (Erbs et al. 1982
+ * decomposition), optional dry-bulb temperature. See docs/climate-formats.md.
+ */
+final class HourlyYearReader {
+    private HourlyYearReader() {}
+
+    static final Set<String> ROLES = Set.of("time", "ghi", "dhi", "dni", "temp");
+    static final List<String> TIME_NAMES = List.of("time", "timestamp", "datetime");
+    private static final Map<String, List<String>> NAMES = Map.of(
+            "time", TIME_NAMES,
+            "ghi", List.of("ghi_wm2", "ghi"),
+            "dhi", List.of("dhi_wm2", "dhi"),
+            "dni", List.of("dni_wm2", "dni"),
+            "temp", List.of("temp_c", "dry_bulb_c", "temperature_c"));
+
+    static WeatherSeries read(SolarCalculator calc, CsvLines csv, ClimateSpec spec) {
+        int ct = column(csv, spec, "time"), cg = column(csv, spec, "ghi"), cd = column(csv, spec, "dhi"),
+                cn = column(csv, spec, "dni"), cT = column(csv, spec, "temp");
+        String head = InputException.at(csv.name, csv.header.number());
+        if (ct < 0) throw new InputException(head, "no time column (header time, timestamp or datetime, or --columns time=N)");
+        if (cg < 0 && (cd < 0 || cn < 0)) throw new InputException(head, "need a ghi column (ghi_wm2), or both dni_wm2 and dhi_wm2");
+        if (csv.rows.size() < 2) throw new InputException(csv.name, "an hourly file needs at least 2 rows");
+        int year = LocalDateTime.ofInstant(parseTime(csv, csv.rows.get(0), ct, ZoneOffset.UTC), ZoneOffset.UTC).getYear();
+        ZoneOffset off = calc.site().standardOffset(year);
+        int n0 = csv.rows.size();
+        Instant[] t = new Instant[n0];
+        for (int i = 0; i < n0; i++) {
+            t[i] = parseTime(csv, csv.rows.get(i), ct, off);
+            if (i > 0 && !t[i].isAfter(t[i - 1])) throw new InputException(csv.at(csv.rows.get(i)), "timestamp not after the previous row's");
+        }
+        long step = Duration.between(t[0], t[1]).getSeconds();
+        if (step <= 0) throw new InputException(csv.at(csv.rows.get(1)), "timestamps must increase");
+        if (step < 60 || (step <= 3600 ? 3600 % step != 0 : step != 3600)) {
+            throw new InputException(csv.at(csv.rows.get(1)), "the step (" + step + " s from the first two rows) must divide one hour");
+        }
+        long span = Duration.between(t[0], t[n0 - 1]).getSeconds();
+        int n = (int) (span / step) + 1;
+        double[][] v = new double[4][n];
+        for (double[] a : v) Arrays.fill(a, Double.NaN);
+        String[] where = new String[n];
+        boolean[] present = new boolean[n];
+        for (int i = 0; i < n0; i++) {
+            CsvLines.Line l = csv.rows.get(i);
+            long d = Duration.between(t[0], t[i]).getSeconds();
+            if (d % step != 0) throw new InputException(csv.at(l), "timestamp is not on the " + step / 60 + "-minute grid of the first rows");
+            int k = (int) (d / step);
+            present[k] = true;
+            where[k] = csv.at(l);
+            int[] cols = {cg, cd, cn, cT};
+            String[] names = {"ghi", "dhi", "dni", "temp"};
+            for (int c = 0; c < 4; c++) if (cols[c] >= 0) v[c][k] = csv.number(l, cols[c], names[c], true);
+        }
+        ClimateReport.Builder rep = new ClimateReport.Builder();
+        for (int k = 0; k < n; k++) {
+            if (where[k] == null) where[k] = csv.name + ": missing step at " + LocalDateTime.ofInstant(t[0].plusSeconds(k * step), off)
+                    + " (after " + lastBefore(where, k) + ")";
+        }
+        int[] cols = {cg, cd, cn, cT};
+        String[] names = {"GHI", "DHI", "DNI", "temperature"};
+        for (int c = 0; c < 4; c++) if (cols[c] >= 0) fill(v[c], names[c], present, where, spec.fillGapsMaxSteps(), rep);
+        for (int k = 0; k < n; k++) if (!present[k]) rep.repair("missing steps filled by linear interpolation", where[k]);
+        double hours = n * step / 3600.0;
+        if (Math.abs(hours - 8760) > 1e-6 && Math.abs(hours - 8784) > 1e-6) {
+            rep.warn(String.format("the file covers %.1f h, not a whole year (8760 or 8784 h): sums are over the file's period", hours));
+        }
+        List<Step> steps = new ArrayList<>(n);
+        Instant first = start(t[0], step, spec.intervalLabel());
+        for (int k = 0; k < n; k++) {
+            Slot s = Slot.of(calc, off, first.plusSeconds(k * step), step, 1);
+            double[] c = Components.check(s, v[0][k], v[2][k], v[1][k], rep, where[k]);
+            double g = c[0], dn = c[1], dh = c[2];
+            double[] r;
+            if (Double.isNaN(g)) {
+                double beamH = dn * Math.max(0, s.sun().cosZenith());
+                r = Components.lowSun(s) ? new double[] {beamH + dh, 0, beamH + dh} : new double[] {beamH + dh, dn, dh};
+            } else if (!Double.isNaN(dh)) r = Components.fromGhiDhi(s, g, dh, rep, where[k]);
+            else if (!Double.isNaN(dn)) r = Components.fromGhiDni(s, g, dn, rep, where[k]);
+            else r = Components.fromGhi(s, g, rep, where[k]);
+            steps.add(s.toStep(r[0], r[1], r[2], v[3][k]));
+        }
+        String layout = cg < 0 ? "DNI+DHI" : cd >= 0 ? "GHI+DHI" : cn >= 0 ? "GHI+DNI" : "GHI (Erbs decomposition)";
+        return new WeatherSeries(steps, TimeBase.HOURLY_YEAR, "hourly file " + csv.name + " (" + layout + ", "
+                + step / 60 + "-minute steps, labels at interval " + spec.intervalLabel().name().toLowerCase(Locale.ROOT) + ")", rep.build());
+    }
+
+    private static String lastBefore(String[] where, int k) {
+        for (int j = k - 1; j >= 0; j--) if (where[j] != null && !where[j].contains("missing step")) return where[j];
+        return "the start";
+    }
+
+    /** Linear interpolation over runs of NaN no longer than maxRun with values on both sides; else an error. */
+    private static void fill(double[] a, String name, boolean[] present, String[] where, int maxRun, ClimateReport.Builder rep) {
+        int n = a.length;
+        for (int i = 0; i < n; ) {
+            if (!Double.isNaN(a[i])) { i++; continue; }
+            int j = i;
+            while (j < n && Double.isNaN(a[j])) j++;
+            int run = j - i;
+            boolean missingRows = !present[i];
+            if (run > maxRun || i == 0 || j == n) {
+                throw new InputException(where[i], (missingRows ? "missing step" : "missing " + name + " value") + (run > 1 ? "s (" + run + " in a row)" : "")
+                        + (maxRun > 0 ? "; only gaps of up to " + maxRun + " steps inside the file are filled" : "; use --fill-gaps N to interpolate short gaps"));
+            }
+            for (int k = i; k < j; k++) a[k] = a[i - 1] + (a[j] - a[i - 1]) * (k - i + 1) / (run + 1);
+            if (!missingRows) rep.repair("missing " + name + " values filled by linear interpolation", where[i]);
+            i = j;
+        }
+    }
+
+    private static int column(CsvLines csv, ClimateSpec spec, String role) {
+        String m = spec.columns().get(role);
+        if (m != null) {
+            if (m.matches("\\d+")) {
+                int c = Integer.parseInt(m) - 1;
+                if (c < 0 || c >= csv.header.cells().length) throw new InputException("columns", role + "=" + m + ": the header has columns 1.." + csv.header.cells().length);
+                return c;
+            }
+            int c = csv.column(m);
+            if (c < 0) throw new InputException("columns", role + "=" + m + ": no such header in " + csv.name + " " + Arrays.toString(csv.header.cells()));
+            return c;
+        }
+        for (String name : NAMES.get(role)) {
+            int c = csv.column(name);
+            if (c >= 0) return c;
+        }
+        return -1;
+    }
+
+    /** ISO timestamp ("2025-01-01T00:00", space allowed instead of T, optional offset), interval start. */
+    private static Instant parseTime(CsvLines csv, CsvLines.Line l, int col, ZoneOffset standard) {
+        if (col >= l.cells().length || l.cells()[col].isEmpty()) throw new InputException(csv.at(l), "missing timestamp");
+        String s = l.cells()[col];
+        String iso = s.length() > 10 && s.charAt(10) == ' ' ? s.substring(0, 10) + "T" + s.substring(11) : s;
+        try {
+            return OffsetDateTime.parse(iso).toInstant();
+        } catch (DateTimeParseException e) {
+            try {
+                return LocalDateTime.parse(iso).toInstant(standard);
+            } catch (DateTimeParseException e2) {
+                throw new InputException(csv.at(l), "expected an ISO timestamp like 2025-01-01T13:00 (local standard time) or 2025-01-01T13:00+01:00, got '" + s + "'");
+            }
+        }
+    }
+
+    /** Interval start from a label. */
+    static Instant start(Instant label, long stepSec, ClimateSpec.IntervalLabel mode) {
+        return mode == ClimateSpec.IntervalLabel.END ? label.minusSeconds(stepSec) : label;
+    }
+}

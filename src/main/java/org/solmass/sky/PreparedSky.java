@@ -1,0 +1,135 @@
+package org.solmass.sky;
+
+import org.solmass.climate.Step;
+import org.solmass.climate.TimeBase;
+import org.solmass.climate.WeatherSeries;
+import org.solmass.sun.SunPosition;
+
+/**
+ * A weather series and a sky model flattened into per-step arrays for the hot path: the sun
+ * direction, DNI, DHI, GHI, the sky model's F1 and F2 and the hours each step stands for. Planes are
+ * then given by their outward unit normal (nx east, ny north, nz up); no method allocates per step.
+ *
+ * <p>Per step on an unobstructed plane (W/m2): beam = DNI max(0, n.s) (Duffie &amp; Beckman 2013
+ * eq. 2.15.1 first term, written with DNI); sky diffuse per {@link SkyModel} clamped at 0;
+ * ground-reflected = albedo GHI (1 - cos b)/2 (Liu &amp; Jordan 1963; D&amp;B eq. 2.15.1 third term).
+ */
+public final class PreparedSky {
+    private final int n;
+    private final double[] sx, sy, sz, dni, dhi, ghi, f1, f2, hours;
+    private final int[] month;
+    private final TimeBase timeBase;
+    private final SkyModel model;
+
+    private PreparedSky(WeatherSeries series, SkyModel model) {
+        this.model = model;
+        this.timeBase = series.timeBase();
+        n = series.size();
+        sx = new double[n]; sy = new double[n]; sz = new double[n];
+        dni = new double[n]; dhi = new double[n]; ghi = new double[n];
+        f1 = new double[n]; f2 = new double[n]; hours = new double[n];
+        month = new int[n];
+        for (int i = 0; i < n; i++) {
+            Step s = series.step(i);
+            SunPosition p = s.sun();
+            double z = Math.toRadians(p.zenithDeg()), a = Math.toRadians(p.azimuthDeg());
+            sx[i] = Math.sin(z) * Math.sin(a);
+            sy[i] = Math.sin(z) * Math.cos(a);
+            sz[i] = p.cosZenith();
+            dni[i] = s.dniWm2(); dhi[i] = s.dhiWm2(); ghi[i] = s.ghiWm2();
+            if (s.dhiWm2() > 0) {
+                f1[i] = model.circumsolarCoefficient(s);
+                f2[i] = model.horizonCoefficient(s);
+            }
+            hours[i] = s.weightedHours();
+            month[i] = s.month() - 1;
+        }
+    }
+
+    public static PreparedSky of(WeatherSeries series, SkyModel model) { return new PreparedSky(series, model); }
+
+    public int size() { return n; }
+    public SkyModel model() { return model; }
+    public TimeBase timeBase() { return timeBase; }
+
+    /** Sun direction of step i (unit vector; x east, y north, z up). */
+    public double sunX(int i) { return sx[i]; }
+    public double sunY(int i) { return sy[i]; }
+    public double sunZ(int i) { return sz[i]; }
+    public double dni(int i) { return dni[i]; }
+    public double dhi(int i) { return dhi[i]; }
+    public double ghi(int i) { return ghi[i]; }
+    /** Hours step i contributes to sums (duration x weight). */
+    public double weightedHours(int i) { return hours[i]; }
+    /** Month 0..11 of step i. */
+    public int month(int i) { return month[i]; }
+
+    /** Beam on a plane of normal n at step i, W/m2 (0 with the sun behind the plane). */
+    public double beam(int i, double nx, double ny, double nz) {
+        double c = nx * sx[i] + ny * sy[i] + nz * sz[i];
+        return c > 0 ? dni[i] * c : 0;
+    }
+
+    /**
+     * Diffuse parts at step i on a plane of normal n into out[0..2] = background per unit sky view
+     * factor, circumsolar, horizon (W/m2), see {@link DiffuseParts}.
+     */
+    public void diffuseParts(int i, double nx, double ny, double nz, double[] out) {
+        double d = dhi[i];
+        if (d <= 0) { out[0] = 0; out[1] = 0; out[2] = 0; return; }
+        double c = nx * sx[i] + ny * sy[i] + nz * sz[i];
+        double sinTilt = Math.sqrt(Math.max(0, 1 - nz * nz));
+        out[0] = d * (1 - f1[i]);
+        out[1] = d * f1[i] * SkyModel.circumsolarRatio(c, sz[i]);
+        out[2] = d * f2[i] * sinTilt;
+    }
+
+    /** Unobstructed beam, sky diffuse, ground-reflected at step i into out[0..2], W/m2, each >= 0. */
+    public void unobstructed(int i, double nx, double ny, double nz, double albedo, double[] out) {
+        double c = nx * sx[i] + ny * sy[i] + nz * sz[i];
+        out[0] = c > 0 ? dni[i] * c : 0;
+        double d = dhi[i];
+        if (d > 0) {
+            double sinTilt = Math.sqrt(Math.max(0, 1 - nz * nz));
+            out[1] = Math.max(0, d * ((1 - f1[i]) * (1 + nz) / 2 + f1[i] * SkyModel.circumsolarRatio(c, sz[i]) + f2[i] * sinTilt));
+        } else {
+            out[1] = 0;
+        }
+        out[2] = albedo * ghi[i] * (1 - nz) / 2;
+    }
+
+    /**
+     * Adds the monthly irradiation of an unobstructed plane into wh36 (Wh/m2):
+     * [month] beam, [12 + month] sky diffuse, [24 + month] ground-reflected. No allocation.
+     */
+    public void sumInto(double nx, double ny, double nz, double albedo, double[] wh36) {
+        double sinTilt = Math.sqrt(Math.max(0, 1 - nz * nz)), svf = (1 + nz) / 2, gvf = (1 - nz) / 2;
+        for (int i = 0; i < n; i++) {
+            double g = ghi[i];
+            if (g <= 0 && dni[i] <= 0) continue;
+            double h = hours[i];
+            int m = month[i];
+            double c = nx * sx[i] + ny * sy[i] + nz * sz[i];
+            if (c > 0) wh36[m] += dni[i] * c * h;
+            double d = dhi[i];
+            if (d > 0) {
+                double v = d * ((1 - f1[i]) * svf + f1[i] * SkyModel.circumsolarRatio(c, sz[i]) + f2[i] * sinTilt);
+                if (v > 0) wh36[12 + m] += v * h;
+            }
+            wh36[24 + m] += albedo * g * gvf * h;
+        }
+    }
+
+    /** Irradiation of an unobstructed plane given by its outward unit normal. */
+    public PlaneIrradiation sum(double nx, double ny, double nz, double albedo) {
+        double[] wh = new double[36];
+        sumInto(nx, ny, nz, albedo, wh);
+        return PlaneIrradiation.fromMonthlyWh(wh);
+    }
+
+    /** Irradiation of an unobstructed plane of tilt (from horizontal) and surface azimuth (from north, clockwise), degrees. */
+    public PlaneIrradiation sum(double tiltDeg, double surfaceAzimuthDeg, double albedo) {
+        var nrm = SunPosition.planeNormal(tiltDeg, surfaceAzimuthDeg);
+        return sum(nrm.x(), nrm.y(), nrm.z(), albedo);
+    }
+}
