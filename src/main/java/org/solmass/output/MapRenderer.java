@@ -1,0 +1,223 @@
+package org.solmass.output;
+
+import org.solmass.model.MassingModel;
+import org.solmass.model.Vec3;
+import org.solmass.surface.Patch;
+
+import javax.imageio.ImageIO;
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.FontMetrics;
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.awt.geom.Path2D;
+import java.awt.image.BufferedImage;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * Headless PNG map of a per-patch quantity: an axonometric view (by default from the south-west,
+ * 30 deg above the horizon) and a plan (top view, north up), side by side; analysed patches filled
+ * with {@link ColourRamp#sequential} with faint outlines, context blocks in neutral grey shaded by
+ * their normal, surface edges drawn as thin dark lines, a light ground plane; a legend with 1-2-5
+ * ticks and the unit, a north arrow in each panel and a title line. Hidden surfaces are removed with
+ * a depth buffer (software rasteriser, 2 x 2 supersampled), so it needs no display
+ * ({@code -Djava.awt.headless=true} works). Layout and range rule: docs/outputs.md.
+ */
+public final class MapRenderer {
+    /** Background, ground plane, analysed-but-unpatched faces and edge colours (sRGB). */
+    static final int BACKGROUND = 0xFFFFFF, GROUND = 0xECEAE4, UNPATCHED = 0xD9D6CF, EDGE = 0x2E2E2E;
+    private static final int TITLE_H = 70, LEGEND_H = 110, MARGIN = 16;
+
+    private MapRenderer() {}
+
+    /**
+     * @param widthPx image width, pixels
+     * @param heightPx image height, pixels
+     * @param title first part of the title line (the study name)
+     * @param rangeLo low end of the colour range; NaN for automatic (2nd percentile)
+     * @param rangeHi high end of the colour range; NaN for automatic (98th percentile)
+     * @param viewAzimuthDeg azimuth the axonometric view looks from, degrees from north clockwise
+     * @param viewElevationDeg elevation of the axonometric view above the horizon, degrees
+     */
+    public record Options(int widthPx, int heightPx, String title, double rangeLo, double rangeHi,
+                          double viewAzimuthDeg, double viewElevationDeg) {
+        public static Options of(int widthPx, int heightPx, String title) {
+            return new Options(widthPx, heightPx, title, Double.NaN, Double.NaN, 225, 30);
+        }
+
+        public Options withRange(double lo, double hi) {
+            return new Options(widthPx, heightPx, title, lo, hi, viewAzimuthDeg, viewElevationDeg);
+        }
+    }
+
+    /** Renders and writes the PNG atomically. */
+    public static void write(Path file, MassingModel model, boolean[] analysedBlock, List<Patch> patches,
+                             double[] values, String label, String unit, Options o) {
+        BufferedImage img = render(model, analysedBlock, patches, values, label, unit, o);
+        AtomicFiles.write(file, out -> {
+            if (!ImageIO.write(img, "png", out)) throw new java.io.IOException("no PNG writer available");
+        });
+    }
+
+    /**
+     * The colour range used when none is given: the 2nd and 98th percentiles of the finite values
+     * (nearest rank), widened to min and max when they coincide; {0, 1} when there is no finite value.
+     */
+    public static double[] autoRange(double[] values) {
+        double[] v = Arrays.stream(values).filter(Double::isFinite).sorted().toArray();
+        if (v.length == 0) return new double[] {0, 1};
+        double lo = v[rank(0.02, v.length)], hi = v[rank(0.98, v.length)];
+        if (!(hi > lo)) {
+            lo = v[0];
+            hi = v[v.length - 1];
+        }
+        return new double[] {lo, hi};
+    }
+
+    private static int rank(double p, int n) {
+        return Math.max(0, Math.min(n - 1, (int) Math.ceil(p * n) - 1));
+    }
+
+    /** Renders the map into an image of the requested size. */
+    public static BufferedImage render(MassingModel model, boolean[] analysedBlock, List<Patch> patches,
+                                       double[] values, String label, String unit, Options o) {
+        if (values.length != patches.size()) throw new IllegalArgumentException(values.length + " values for " + patches.size() + " patches");
+        if (analysedBlock.length < model.blockNames().size()) throw new IllegalArgumentException("analysedBlock has fewer entries than the model has blocks");
+        double[] range = autoRange(values);
+        boolean auto = Double.isNaN(o.rangeLo()) || Double.isNaN(o.rangeHi());
+        double lo = auto ? range[0] : o.rangeLo(), hi = auto ? range[1] : o.rangeHi();
+
+        int w = o.widthPx(), h = o.heightPx();
+        BufferedImage img = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = img.createGraphics();
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        g.setColor(new Color(BACKGROUND));
+        g.fillRect(0, 0, w, h);
+
+        int panelTop = TITLE_H, panelH = Math.max(40, h - TITLE_H - LEGEND_H);
+        int axoW = (int) Math.round((w - 3 * MARGIN) * 0.56), planW = w - 3 * MARGIN - axoW;
+        Vec3 eye = Vec3.fromAzimuthElevation(o.viewAzimuthDeg(), o.viewElevationDeg());
+        MapView axo = MapView.looking(eye);
+        MapView plan = MapView.looking(Vec3.UP);
+        MapScene scene = new MapScene(model, analysedBlock, patches, values, lo, hi);
+        panel(g, scene, axo, MARGIN, panelTop, axoW, panelH,
+                String.format(java.util.Locale.ROOT, "View from the %s, %.0f\u00b0 above the horizon",
+                        compass(o.viewAzimuthDeg()), o.viewElevationDeg()));
+        panel(g, scene, plan, 2 * MARGIN + axoW, panelTop, planW, panelH, "Plan, north up");
+
+        title(g, w, o.title(), label, unit);
+        legend(g, w, h - LEGEND_H, lo, hi, label, unit, auto, scene.hasMissing());
+        g.dispose();
+        return img;
+    }
+
+    private static void panel(Graphics2D g, MapScene scene, MapView view, int x, int y, int pw, int ph, String caption) {
+        int captionH = 24;
+        int[] pixels = scene.draw(view, pw * 2, (ph - captionH) * 2);
+        BufferedImage tile = new BufferedImage(pw, ph - captionH, BufferedImage.TYPE_INT_RGB);
+        tile.setRGB(0, 0, pw, ph - captionH, pixels, 0, pw);
+        g.drawImage(tile, x, y + captionH, null);
+        g.setColor(new Color(0xD0D0D0));
+        g.setStroke(new BasicStroke(1f));
+        g.drawRect(x, y + captionH, pw - 1, ph - captionH - 1);
+        g.setColor(new Color(0x333333));
+        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 15));
+        g.drawString(caption, x + 2, y + 17);
+        northArrow(g, view, x + pw - 50, y + captionH + 50);
+    }
+
+    /** An arrow pointing to true north as seen in the view, with an N above its tip. */
+    private static void northArrow(Graphics2D g, MapView view, int cx, int cy) {
+        double dx = view.right().y(), dy = -view.up().y();      // screen direction of +y (north)
+        double len = Math.hypot(dx, dy);
+        if (len < 1e-9) return;
+        dx /= len;
+        dy /= len;
+        double px = -dy, py = dx;
+        int rad = 38;
+        g.setColor(new Color(255, 255, 255, 225));
+        g.fillOval(cx - rad, cy - rad, 2 * rad, 2 * rad);
+        g.setColor(new Color(0x777777));
+        g.setStroke(new BasicStroke(1.2f));
+        g.drawOval(cx - rad, cy - rad, 2 * rad, 2 * rad);
+        g.setColor(new Color(0x222222));
+        g.setStroke(new BasicStroke(2.4f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
+        g.drawLine((int) Math.round(cx - dx * 22), (int) Math.round(cy - dy * 22), (int) Math.round(cx + dx * 4), (int) Math.round(cy + dy * 4));
+        Path2D.Double head = new Path2D.Double();
+        head.moveTo(cx + dx * 20, cy + dy * 20);
+        head.lineTo(cx + dx * 2 + px * 8, cy + dy * 2 + py * 8);
+        head.lineTo(cx + dx * 2 - px * 8, cy + dy * 2 - py * 8);
+        head.closePath();
+        g.fill(head);
+        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 14));
+        FontMetrics fm = g.getFontMetrics();
+        double lx = cx + dx * 29, ly = cy + dy * 29;
+        g.drawString("N", (float) (lx - fm.stringWidth("N") / 2.0), (float) (ly + fm.getAscent() / 2.0 - 2));
+    }
+
+    private static void title(Graphics2D g, int w, String study, String label, String unit) {
+        g.setColor(new Color(0x1E1E1E));
+        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 24));
+        String t = (study == null || study.isBlank() ? "" : study + " \u2014 ") + label + (unit.isEmpty() ? "" : " (" + display(unit) + ")");
+        g.drawString(t, MARGIN, 36);
+        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 14));
+        g.setColor(new Color(0x555555));
+        g.drawString("Analysed surfaces coloured by value; context blocks in grey", MARGIN, 58);
+    }
+
+    private static void legend(Graphics2D g, int w, int top, double lo, double hi, String label, String unit,
+                               boolean auto, boolean missing) {
+        int barW = Math.min(900, (int) (w * 0.5)), barH = 20, bx = MARGIN + 4, by = top + 34;
+        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 15));
+        g.setColor(new Color(0x222222));
+        g.drawString(label + (unit.isEmpty() ? "" : ", " + display(unit)), bx, top + 24);
+        for (int i = 0; i < barW; i++) {
+            g.setColor(new Color(ColourRamp.sequential(i / (barW - 1.0))));
+            g.fillRect(bx + i, by, 1, barH);
+        }
+        g.setColor(new Color(0x666666));
+        g.setStroke(new BasicStroke(1f));
+        g.drawRect(bx, by, barW, barH);
+        double step = LegendTicks.step(lo, hi, 8);
+        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
+        FontMetrics fm = g.getFontMetrics();
+        for (double t : LegendTicks.ticks(lo, hi, 8)) {
+            int tx = bx + (int) Math.round(ColourRamp.normalise(t, lo, hi) * barW);
+            g.setColor(new Color(0x333333));
+            g.drawLine(tx, by + barH, tx, by + barH + 6);
+            String s = LegendTicks.label(t, step);
+            g.drawString(s, tx - fm.stringWidth(s) / 2, by + barH + 20);
+        }
+        int nx = bx + barW + 40;
+        g.setColor(new Color(0x444444));
+        g.drawString(auto ? "Range: 2nd to 98th percentile of the patch values" : "Range: set by the user", nx, by + 6);
+        g.drawString("Values beyond the range take the end colours", nx, by + 24);
+        int sy = by + 38;
+        g.setColor(new Color(MapScene.contextGrey(0.6)));
+        g.fillRect(nx, sy, 16, 12);
+        g.setColor(new Color(0x444444));
+        g.drawString("Context block (not analysed)", nx + 22, sy + 11);
+        if (missing) {
+            int mx = nx + 22 + fm.stringWidth("Context block (not analysed)") + 24;
+            g.setColor(new Color(ColourRamp.sequential(Double.NaN)));
+            g.fillRect(mx, sy, 16, 12);
+            g.setColor(new Color(0x444444));
+            g.drawString("No value", mx + 22, sy + 11);
+        }
+    }
+
+    /** "m2" as "m\u00b2" for display. */
+    static String display(String unit) {
+        return unit.replace("m2", "m\u00b2");
+    }
+
+    private static String compass(double az) {
+        String[] names = {"north", "north-east", "east", "south-east", "south", "south-west", "west", "north-west"};
+        int i = (int) Math.round(((az % 360) + 360) % 360 / 45.0) % 8;
+        return names[i];
+    }
+}

@@ -1,0 +1,235 @@
+package org.solmass.output;
+
+import org.solmass.model.MassingModel;
+import org.solmass.model.Vec3;
+import org.solmass.surface.Patch;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * What the map draws, prepared once for both panels: the model's triangles with their grey shade,
+ * the surface edges (creases over 25 deg and open boundaries), the patches with their ramp colours
+ * and a ground plane around the model.
+ */
+final class MapScene {
+    /** Direction light comes from for the grey shading of blocks: azimuth 200 deg, elevation 60 deg. */
+    private static final Vec3 LIGHT = Vec3.fromAzimuthElevation(200, 60);
+    private static final double CREASE_COS = Math.cos(Math.toRadians(25));
+
+    private final MassingModel model;
+    private final List<Patch> patches;
+    private final int[] patchColour;
+    private final int[] triColour;
+    private final double[] triNormal;
+    private final float[] edges;   // x0,y0,z0,x1,y1,z1 per edge
+    private final double[] ground; // 4 corners x,y,z
+    private final double meanPatchEdgeM;
+    private final boolean missing;
+
+    MapScene(MassingModel model, boolean[] analysedBlock, List<Patch> patches, double[] values, double lo, double hi) {
+        this.model = model;
+        this.patches = patches;
+        int nt = model.triangleCount();
+        triColour = new int[nt];
+        triNormal = new double[3 * nt];
+        for (int t = 0; t < nt; t++) {
+            Vec3 a = model.vertex(t, 0), b = model.vertex(t, 1), c = model.vertex(t, 2);
+            Vec3 n = b.minus(a).cross(c.minus(a)).normalized();
+            triNormal[3 * t] = n.x();
+            triNormal[3 * t + 1] = n.y();
+            triNormal[3 * t + 2] = n.z();
+            double lambert = Math.max(0, n.dot(LIGHT));
+            triColour[t] = analysedBlock[model.triangleBlock()[t]] ? shade(MapRenderer.UNPATCHED, 0.82 + 0.18 * lambert) : contextGrey(lambert);
+        }
+        patchColour = new int[patches.size()];
+        boolean miss = false;
+        double edgeSum = 0;
+        for (int p = 0; p < patchColour.length; p++) {
+            miss |= !Double.isFinite(values[p]);
+            patchColour[p] = ColourRamp.sequential(Double.isFinite(values[p]) ? ColourRamp.normalise(values[p], lo, hi) : Double.NaN);
+            edgeSum += Math.sqrt(Math.max(0, patches.get(p).areaM2()));
+        }
+        missing = miss;
+        meanPatchEdgeM = patchColour.length == 0 ? 0 : edgeSum / patchColour.length;
+        edges = creases(model, triNormal);
+        double[] b = model.bounds();
+        if (!(b[0] <= b[3])) b = new double[] {0, 0, 0, 1, 1, 1};
+        double pad = Math.max(5, 0.12 * Math.max(b[3] - b[0], b[4] - b[1]));
+        ground = new double[] {b[0] - pad, b[1] - pad, b[2], b[3] + pad, b[1] - pad, b[2],
+                b[3] + pad, b[4] + pad, b[2], b[0] - pad, b[4] + pad, b[2]};
+    }
+
+    boolean hasMissing() { return missing; }
+
+    /** Neutral grey of a context face lit with the given Lambert factor (0..1). */
+    static int contextGrey(double lambert) {
+        int v = (int) Math.round(255 * (0.50 + 0.38 * lambert));
+        return (v << 16) | (v << 8) | v;
+    }
+
+    private static int shade(int rgb, double f) {
+        int r = (int) Math.min(255, ((rgb >> 16) & 255) * f), g = (int) Math.min(255, ((rgb >> 8) & 255) * f),
+                b = (int) Math.min(255, (rgb & 255) * f);
+        return (r << 16) | (g << 8) | b;
+    }
+
+    /** Renders the scene in a view at w x h (supersampled) and returns the w/2 x h/2 image. */
+    int[] draw(MapView view, int w, int h) {
+        Vec3 r = view.right(), u = view.up(), v = view.toViewer();
+        double[] vx = model.vertices();
+        double minR = Double.POSITIVE_INFINITY, maxR = Double.NEGATIVE_INFINITY, minU = minR, maxU = maxR, minD = minR, maxD = maxR;
+        for (int pass = 0; pass < 2; pass++) {
+            double[] pts = pass == 0 ? vx : ground;
+            if (pass == 1 && vx.length > 0) {   // fit to the model; the ground plane is a backdrop
+                double fr = minR, fu = minU, gr = maxR, gu = maxU;
+                for (int i = 0; i + 2 < pts.length; i += 3) {
+                    double pd = pts[i] * v.x() + pts[i + 1] * v.y() + pts[i + 2] * v.z();
+                    minD = Math.min(minD, pd); maxD = Math.max(maxD, pd);
+                }
+                minR = fr; minU = fu; maxR = gr; maxU = gu;
+                break;
+            }
+            for (int i = 0; i + 2 < pts.length; i += 3) {
+                double pr = pts[i] * r.x() + pts[i + 1] * r.y() + pts[i + 2] * r.z();
+                double pu = pts[i] * u.x() + pts[i + 1] * u.y() + pts[i + 2] * u.z();
+                double pd = pts[i] * v.x() + pts[i + 1] * v.y() + pts[i + 2] * v.z();
+                minR = Math.min(minR, pr); maxR = Math.max(maxR, pr);
+                minU = Math.min(minU, pu); maxU = Math.max(maxU, pu);
+                minD = Math.min(minD, pd); maxD = Math.max(maxD, pd);
+            }
+        }
+        double scale = Math.min(w * 0.92 / Math.max(1e-9, maxR - minR), h * 0.88 / Math.max(1e-9, maxU - minU));
+        double ox = (w - (maxR - minR) * scale) / 2 - minR * scale, oy = (h - (maxU - minU) * scale) / 2 + maxU * scale;
+        Projector P = new Projector(r, u, v, scale, ox, oy);
+        float bias = (float) (2e-4 * Math.max(1e-6, maxD - minD));
+        Raster ras = new Raster(w, h, MapRenderer.BACKGROUND);
+
+        double[] xs = new double[16], ys = new double[16], zs = new double[16];
+        for (int k = 0; k < 4; k++) {
+            P.project(ground[3 * k], ground[3 * k + 1], ground[3 * k + 2]);
+            xs[k] = P.sx; ys[k] = P.sy; zs[k] = P.depth - 4 * bias;
+        }
+        ras.polygon(xs, ys, zs, 4, MapRenderer.GROUND, 0);
+
+        int[] tri = model.triangles();
+        for (int t = 0; t < triColour.length; t++) {
+            if (triNormal[3 * t] * v.x() + triNormal[3 * t + 1] * v.y() + triNormal[3 * t + 2] * v.z() <= 1e-6) continue;
+            for (int k = 0; k < 3; k++) {
+                int i = 3 * tri[3 * t + k];
+                P.project(vx[i], vx[i + 1], vx[i + 2]);
+                xs[k] = P.sx; ys[k] = P.sy; zs[k] = P.depth;
+            }
+            ras.triangle(xs[0], ys[0], zs[0], xs[1], ys[1], zs[1], xs[2], ys[2], zs[2], triColour[t], 0);
+        }
+
+        double finalEdgePx = meanPatchEdgeM * scale / 2;
+        double outlineAlpha = finalEdgePx >= 6 ? 0.30 : finalEdgePx >= 3 ? 0.15 : 0;
+        for (int p = 0; p < patchColour.length; p++) {
+            Patch q = patches.get(p);
+            if (q.normal().dot(v) <= 1e-6) continue;
+            double[] o = q.outline();
+            int n = o.length / 3;
+            if (n > xs.length) {
+                xs = new double[n]; ys = new double[n]; zs = new double[n];
+            }
+            for (int k = 0; k < n; k++) {
+                P.project(o[3 * k], o[3 * k + 1], o[3 * k + 2]);
+                xs[k] = P.sx; ys[k] = P.sy; zs[k] = P.depth;
+            }
+            ras.polygon(xs, ys, zs, n, patchColour[p], bias);
+            if (outlineAlpha > 0) {
+                for (int k = 0; k < n; k++) {
+                    int k1 = (k + 1) % n;
+                    ras.line(xs[k], ys[k], zs[k], xs[k1], ys[k1], zs[k1], 0x000000, outlineAlpha, 2 * bias);
+                }
+            }
+        }
+
+        for (int e = 0; e < edges.length; e += 6) {
+            P.project(edges[e], edges[e + 1], edges[e + 2]);
+            double x0 = P.sx, y0 = P.sy, z0 = P.depth;
+            P.project(edges[e + 3], edges[e + 4], edges[e + 5]);
+            boolean steep = Math.abs(P.sy - y0) > Math.abs(P.sx - x0);
+            double dx = steep ? 1 : 0, dy = steep ? 0 : 1;
+            ras.line(x0, y0, z0, P.sx, P.sy, P.depth, MapRenderer.EDGE, 0.75, 3 * bias);
+            ras.line(x0 + dx, y0 + dy, z0, P.sx + dx, P.sy + dy, P.depth, MapRenderer.EDGE, 0.75, 3 * bias);
+        }
+        return ras.downsample2();
+    }
+
+    /** Projects model points to supersampled screen coordinates; fields hold the last result. */
+    private static final class Projector {
+        final double rx, ry, rz, ux, uy, uz, vx, vy, vz, s, ox, oy;
+        double sx, sy, depth;
+
+        Projector(Vec3 r, Vec3 u, Vec3 v, double s, double ox, double oy) {
+            rx = r.x(); ry = r.y(); rz = r.z(); ux = u.x(); uy = u.y(); uz = u.z(); vx = v.x(); vy = v.y(); vz = v.z();
+            this.s = s;
+            this.ox = ox;
+            this.oy = oy;
+        }
+
+        void project(double x, double y, double z) {
+            sx = (x * rx + y * ry + z * rz) * s + ox;
+            sy = oy - (x * ux + y * uy + z * uz) * s;
+            depth = x * vx + y * vy + z * vz;
+        }
+    }
+
+    /**
+     * Edges to outline: shared by two triangles whose normals differ by more than 25 deg, or used by
+     * one triangle only. Endpoints are matched by position (to 1 mm), so unshared vertices still pair.
+     */
+    private static float[] creases(MassingModel m, double[] normal) {
+        record Key(long ax, long ay, long az, long bx, long by, long bz) {}
+        Map<Key, int[]> seen = new HashMap<>();
+        List<Key> order = new ArrayList<>();
+        int[] tri = m.triangles();
+        double[] vx = m.vertices();
+        for (int t = 0; t < m.triangleCount(); t++) {
+            for (int k = 0; k < 3; k++) {
+                int a = 3 * tri[3 * t + k], b = 3 * tri[3 * t + (k + 1) % 3];
+                long[] pa = quant(vx, a), pb = quant(vx, b);
+                boolean swap = compare(pa, pb) > 0;
+                long[] p = swap ? pb : pa, q = swap ? pa : pb;
+                Key key = new Key(p[0], p[1], p[2], q[0], q[1], q[2]);
+                int[] rec = seen.get(key);
+                if (rec == null) {
+                    seen.put(key, new int[] {t, -1, 0});
+                    order.add(key);
+                } else if (rec[1] < 0) {
+                    rec[1] = t;
+                } else {
+                    rec[2] = 1;  // more than two triangles share it: a real edge of the massing
+                }
+            }
+        }
+        float[] out = new float[order.size() * 6];
+        int n = 0;
+        for (Key key : order) {
+            int[] rec = seen.get(key);
+            boolean draw = rec[1] < 0 || rec[2] == 1;
+            if (!draw) {
+                int t0 = rec[0], t1 = rec[1];
+                double dot = normal[3 * t0] * normal[3 * t1] + normal[3 * t0 + 1] * normal[3 * t1 + 1] + normal[3 * t0 + 2] * normal[3 * t1 + 2];
+                draw = dot < CREASE_COS;
+            }
+            if (!draw) continue;
+            out[n++] = key.ax() / 1000f; out[n++] = key.ay() / 1000f; out[n++] = key.az() / 1000f;
+            out[n++] = key.bx() / 1000f; out[n++] = key.by() / 1000f; out[n++] = key.bz() / 1000f;
+        }
+        return java.util.Arrays.copyOf(out, n);
+    }
+
+    private static long[] quant(double[] v, int i) {
+        return new long[] {Math.round(v[i] * 1000), Math.round(v[i + 1] * 1000), Math.round(v[i + 2] * 1000)};
+    }
+
+    private static int compare(long[] a, long[] b) {
+        for (int i = 0; i < 3; i++) if (a[i] != b[i]) return Long.compare(a[i], b[i]);
+        return 0;
+    }
+}

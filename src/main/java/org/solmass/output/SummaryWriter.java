@@ -1,0 +1,198 @@
+package org.solmass.output;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.solmass.study.StudyWriter;
+import org.solmass.surface.Patch;
+import org.solmass.surface.SurfaceKind;
+
+import java.math.BigDecimal;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * Writes summary.json: for all patches, per kind (roof, facade, ground, underside) and per block
+ * (and per kind within each block): patch count, area, and for each named column its area-weighted
+ * mean, min and max (and for kWh/m2 columns the total kWh, the sum of value x area); for the
+ * threshold column the area (and share of area) at or above each threshold. Then cautions and the
+ * run record (study, version, counts, timings). Keys in a fixed order; layout in docs/outputs.md.
+ * Non-finite values (NaN) are left out of the statistics and counted as {@code missing}.
+ */
+public final class SummaryWriter {
+    /** Default thresholds of annual irradiation, kWh/m2 per year (docs/outputs.md). */
+    public static final List<Double> DEFAULT_THRESHOLDS = List.of(300.0, 600.0, 900.0, 1200.0);
+
+    private SummaryWriter() {}
+
+    /**
+     * What to summarise.
+     *
+     * @param columns result columns to give statistics for (absent ones are skipped)
+     * @param thresholdColumn the column the thresholds apply to (e.g. annual_kwh_m2); null for none
+     * @param thresholds ascending thresholds in that column's unit
+     */
+    public record Spec(List<String> columns, String thresholdColumn, List<Double> thresholds) {
+        public Spec {
+            columns = List.copyOf(columns);
+            thresholds = List.copyOf(thresholds);
+        }
+
+        /** annual_kwh_m2 and its components, shading loss and sky view factor; the given thresholds on annual_kwh_m2. */
+        public static Spec standard(List<Double> thresholds) {
+            return new Spec(List.of("annual_kwh_m2", "beam_kwh_m2", "diffuse_kwh_m2", "reflected_kwh_m2",
+                    "unshaded_kwh_m2", "shading_loss_pct", "sky_view_factor"), "annual_kwh_m2", thresholds);
+        }
+    }
+
+    /** Writes summary.json atomically. */
+    public static void write(Path file, ResultTable table, Spec spec, RunRecord run, List<String> cautions) {
+        AtomicFiles.writeString(file, StudyWriter.pretty(toTree(table, spec, run, cautions)));
+    }
+
+    /** The summary as a JSON tree; {@code run} may be null (then no "run" section). */
+    public static ObjectNode toTree(ResultTable table, Spec spec, RunRecord run, List<String> cautions) {
+        List<String> cols = spec.columns().stream().filter(table::has).toList();
+        String thrCol = spec.thresholdColumn() != null && table.has(spec.thresholdColumn()) ? spec.thresholdColumn() : null;
+        double[][] values = new double[cols.size()][];
+        for (int c = 0; c < cols.size(); c++) values[c] = table.column(cols.get(c));
+        double[] thr = spec.thresholds().stream().mapToDouble(Double::doubleValue).toArray();
+        double[] thrValues = thrCol == null ? null : table.column(thrCol);
+
+        int kinds = SurfaceKind.values().length;
+        Group all = new Group(cols.size(), thr.length);
+        Group[] byKind = new Group[kinds];
+        Map<Integer, Group> byBlock = new TreeMap<>();
+        Map<Integer, Group[]> byBlockKind = new TreeMap<>();
+        Map<Integer, String> blockNames = new TreeMap<>();
+        List<Patch> patches = table.patches();
+        double[] row = new double[cols.size()];
+        for (int p = 0; p < patches.size(); p++) {
+            Patch q = patches.get(p);
+            for (int c = 0; c < row.length; c++) row[c] = values[c][p];
+            double tv = thrValues == null ? Double.NaN : thrValues[p];
+            int k = q.kind().ordinal();
+            all.add(q.areaM2(), row, tv, thr);
+            if (byKind[k] == null) byKind[k] = new Group(cols.size(), thr.length);
+            byKind[k].add(q.areaM2(), row, tv, thr);
+            blockNames.putIfAbsent(q.block(), q.blockName());
+            byBlock.computeIfAbsent(q.block(), b -> new Group(cols.size(), thr.length)).add(q.areaM2(), row, tv, thr);
+            Group[] bk = byBlockKind.computeIfAbsent(q.block(), b -> new Group[kinds]);
+            if (bk[k] == null) bk[k] = new Group(cols.size(), thr.length);
+            bk[k].add(q.areaM2(), row, tv, thr);
+        }
+
+        JsonNodeFactory f = JsonNodeFactory.instance;
+        ObjectNode root = f.objectNode();
+        if (run != null) {
+            root.put("study", run.study().name());
+            root.put("solmass_version", run.solmassVersion());
+        }
+        ObjectNode colInfo = root.putObject("columns");
+        for (String c : cols) colInfo.putObject(c).put("unit", table.unit(c));
+        if (thrCol != null) {
+            ObjectNode t = root.putObject("thresholds");
+            t.put("column", thrCol);
+            t.put("unit", table.unit(thrCol));
+            ArrayNode a = t.putArray("values");
+            for (double v : thr) a.add(v);
+        }
+        Emit emit = new Emit(cols, table, thr, thrCol != null);
+        root.set("all", emit.group(all));
+        ObjectNode kn = root.putObject("by_kind");
+        for (SurfaceKind k : SurfaceKind.values()) if (byKind[k.ordinal()] != null) kn.set(k.label(), emit.group(byKind[k.ordinal()]));
+        ObjectNode bn = root.putObject("by_block");
+        for (Map.Entry<Integer, Group> e : byBlock.entrySet()) {
+            ObjectNode g = emit.group(e.getValue());
+            ObjectNode gk = g.putObject("by_kind");
+            Group[] bk = byBlockKind.get(e.getKey());
+            for (SurfaceKind k : SurfaceKind.values()) if (bk[k.ordinal()] != null) gk.set(k.label(), emit.group(bk[k.ordinal()]));
+            bn.set(blockNames.get(e.getKey()), g);
+        }
+        ArrayNode ca = root.putArray("cautions");
+        for (String c : cautions) ca.add(c);
+        if (run != null) root.set("run", run.toTree());
+        return root;
+    }
+
+    /** Running sums of one group of patches. */
+    static final class Group {
+        int patches;
+        double area;
+        final double[] valueArea, sumVA, min, max, aboveArea;
+        final int[] missing;
+
+        Group(int cols, int thresholds) {
+            valueArea = new double[cols];
+            sumVA = new double[cols];
+            min = new double[cols];
+            max = new double[cols];
+            missing = new int[cols];
+            aboveArea = new double[thresholds];
+            java.util.Arrays.fill(min, Double.POSITIVE_INFINITY);
+            java.util.Arrays.fill(max, Double.NEGATIVE_INFINITY);
+        }
+
+        void add(double a, double[] v, double thresholdValue, double[] thr) {
+            patches++;
+            area += a;
+            for (int c = 0; c < v.length; c++) {
+                if (!Double.isFinite(v[c])) {
+                    missing[c]++;
+                    continue;
+                }
+                valueArea[c] += a;
+                sumVA[c] += v[c] * a;
+                min[c] = Math.min(min[c], v[c]);
+                max[c] = Math.max(max[c], v[c]);
+            }
+            for (int t = 0; t < thr.length; t++) if (thresholdValue >= thr[t]) aboveArea[t] += a;
+        }
+    }
+
+    /** Turns groups into JSON with the documented rounding. */
+    private record Emit(List<String> cols, ResultTable table, double[] thr, boolean thresholds) {
+        ObjectNode group(Group g) {
+            ObjectNode o = JsonNodeFactory.instance.objectNode();
+            o.put("patches", g.patches);
+            o.put("area_m2", round(g.area, 2));
+            for (int c = 0; c < cols.size(); c++) {
+                String unit = table.unit(cols.get(c));
+                int d = CsvNumbers.decimalsForUnit(unit);
+                ObjectNode s = o.putObject(cols.get(c));
+                if (g.valueArea[c] > 0) {
+                    s.put("mean", round(g.sumVA[c] / g.valueArea[c], d));
+                    s.put("min", round(g.min[c], d));
+                    s.put("max", round(g.max[c], d));
+                    if ("kWh/m2".equals(unit)) s.put("total_kwh", round(g.sumVA[c], 1));
+                } else {
+                    s.putNull("mean");
+                    s.putNull("min");
+                    s.putNull("max");
+                }
+                if (g.missing[c] > 0) s.put("missing", g.missing[c]);
+            }
+            if (thresholds) {
+                ObjectNode at = o.putObject("area_at_or_above_m2");
+                ObjectNode share = o.putObject("share_at_or_above_pct");
+                for (int t = 0; t < thr.length; t++) {
+                    String key = label(thr[t]);
+                    at.put(key, round(g.aboveArea[t], 2));
+                    share.put(key, g.area > 0 ? round(100 * g.aboveArea[t] / g.area, 2) : BigDecimal.ZERO);
+                }
+            }
+            return o;
+        }
+    }
+
+    static BigDecimal round(double v, int decimals) {
+        return new BigDecimal(CsvNumbers.format(v, decimals));
+    }
+
+    /** A threshold as a key: "300", "450.5". */
+    static String label(double v) {
+        return v == Math.rint(v) ? Long.toString((long) v) : BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+    }
+}

@@ -1,0 +1,193 @@
+package org.solmass.study;
+
+import java.nio.file.Path;
+import java.time.ZoneId;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * A resolved study: every option of an analysis with its default applied and every path made
+ * absolute. Read from a study file by {@link StudyReader}, with command-line flags laid on top by
+ * {@link StudyOverrides}; written back by {@link StudyWriter}. Keys and defaults: docs/study-file.md.
+ *
+ * @param name study name for titles and reports (default: the study file's or the model's base name)
+ * @param description free text kept with the results (e.g. "invented scenario"), may be empty
+ * @param source the study file it was read from, absolute; null when built from flags only
+ * @param model the massing model and how to read it
+ * @param site where the model stands
+ * @param climate where the weather comes from
+ * @param albedo reflectances of the ground and the blocks
+ * @param groundIrradiance whether the ground's irradiance (for ground reflection) is taken unshaded or
+ *                         from shaded ground samples
+ * @param patchM patch edge length, metres (> 0)
+ * @param rays hemisphere rays per patch for the view factors (> 0)
+ * @param sky sky diffuse model
+ * @param timeBase monthly-average days or an hourly year ({@code AUTO}: from the climate source)
+ * @param sunBins number of sky cells the year's sun positions are binned into (hourly year)
+ * @param stepMinutes time step of the average days, minutes (divides 60)
+ * @param outputs what to write and where
+ * @param threads worker threads, 0 = all cores
+ */
+public record Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
+                    GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
+                    TimeBase timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads) {
+
+    public static final double DEFAULT_PATCH_M = 1.0;
+    public static final int DEFAULT_RAYS = 1024;
+    public static final int DEFAULT_SUN_BINS = 4096;
+    public static final int DEFAULT_STEP_MINUTES = 60;
+
+    public Study {
+        description = description == null ? "" : description;
+        albedo = albedo == null ? Albedo.DEFAULTS : albedo;
+        outputs = outputs == null ? Outputs.DEFAULTS : outputs;
+        climate = climate == null ? Climate.CLEAR_SKY : climate;
+    }
+
+    /**
+     * The massing model.
+     *
+     * @param file the OBJ file, absolute
+     * @param up which model axis points up
+     * @param unit the model's length unit
+     * @param northDeg angle from the model's +north axis to true north, degrees clockwise
+     * @param analyse names of the blocks to analyse; empty = every block not listed in {@code context}
+     * @param context names of blocks that only obstruct (never analysed)
+     */
+    public record Model(Path file, UpAxis up, LengthUnit unit, double northDeg, List<String> analyse,
+                        List<String> context) {
+        public Model {
+            analyse = List.copyOf(analyse);
+            context = List.copyOf(context);
+        }
+
+        /** Whether a block of this name is analysed (listed in analyse, or analyse empty), and not context. */
+        public boolean isAnalysed(String blockName) {
+            if (context.contains(blockName)) return false;
+            return analyse.isEmpty() || analyse.contains(blockName);
+        }
+    }
+
+    /**
+     * The site.
+     *
+     * @param latitudeDeg degrees north (-90..90)
+     * @param longitudeDeg degrees east (-180..180)
+     * @param elevationM height above sea level, metres
+     * @param zone time zone as given: an IANA id ("Europe/Berlin") or a fixed offset ("+02:00")
+     */
+    public record Site(double latitudeDeg, double longitudeDeg, double elevationM, String zone) {
+        /** The zone as a java.time id (validated when the study is read). */
+        public ZoneId zoneId() { return ZoneId.of(zone); }
+    }
+
+    /**
+     * The climate source.
+     *
+     * @param file the weather file, absolute; null for the embedded clear-sky model
+     * @param format kind of the file; {@code AUTO} recognises it from its header
+     * @param intervalLabel whether a row's timestamp labels the end or the start of its interval
+     * @param fillGaps fill short gaps of an hourly file by interpolation instead of failing
+     * @param year calendar year of the clear-sky hourly year
+     */
+    public record Climate(Path file, ClimateFormat format, IntervalLabel intervalLabel, boolean fillGaps,
+                          int year) {
+        public static final int DEFAULT_YEAR = 2025;
+        public static final Climate CLEAR_SKY = new Climate(null, ClimateFormat.AUTO, IntervalLabel.END, false, DEFAULT_YEAR);
+
+        public boolean isClearSky() { return file == null; }
+    }
+
+    /**
+     * Albedo (solar reflectance, 0..1).
+     *
+     * @param ground the ground around the model (the infinite ground plane and ground faces)
+     * @param blocksDefault blocks with no entry of their own
+     * @param blocks per block name
+     * @param materials per OBJ {@code usemtl} name; wins over the block's value
+     */
+    public record Albedo(double ground, double blocksDefault, Map<String, Double> blocks,
+                         Map<String, Double> materials) {
+        public static final double DEFAULT_GROUND = 0.2, DEFAULT_BLOCKS = 0.3;
+        public static final Albedo DEFAULTS = new Albedo(DEFAULT_GROUND, DEFAULT_BLOCKS, Map.of(), Map.of());
+
+        public Albedo {
+            blocks = Map.copyOf(blocks);
+            materials = Map.copyOf(materials);
+        }
+
+        /**
+         * Albedo of a face: its material's entry, else its block's entry, else {@code blocksDefault}.
+         *
+         * @param blockName the face's block
+         * @param materialName the face's {@code usemtl} name, or null
+         */
+        public double of(String blockName, String materialName) {
+            if (materialName != null) {
+                Double m = materials.get(materialName);
+                if (m != null) return m;
+            }
+            Double b = blocks.get(blockName);
+            return b != null ? b : blocksDefault;
+        }
+    }
+
+    /**
+     * What to write.
+     *
+     * @param folder output folder, absolute
+     * @param monthHourCsv write month-hour.csv (large: 12 rows of 24 values per patch)
+     * @param map write map.png
+     * @param mapWidthPx width of map.png, pixels
+     * @param mapHeightPx height of map.png, pixels
+     * @param thresholdsKwhM2 annual irradiation thresholds for the "area at or above" figures of
+     *                        summary.json, kWh/m2 per year, ascending
+     */
+    public record Outputs(Path folder, boolean monthHourCsv, boolean map, int mapWidthPx, int mapHeightPx,
+                          List<Double> thresholdsKwhM2) {
+        public static final List<Double> DEFAULT_THRESHOLDS = List.of(300.0, 600.0, 900.0, 1200.0);
+        public static final int DEFAULT_MAP_WIDTH = 2000, DEFAULT_MAP_HEIGHT = 1100;
+        public static final Outputs DEFAULTS = new Outputs(Path.of("results").toAbsolutePath(), false, true,
+                DEFAULT_MAP_WIDTH, DEFAULT_MAP_HEIGHT, DEFAULT_THRESHOLDS);
+
+        public Outputs {
+            thresholdsKwhM2 = List.copyOf(thresholdsKwhM2);
+        }
+    }
+
+    /** Names as written in the study file: lower case, '-' between words. */
+    public interface Named {
+        String name();
+
+        default String label() { return name().toLowerCase(Locale.ROOT).replace('_', '-'); }
+    }
+
+    /** Model axis that points up. */
+    public enum UpAxis implements Named { Z, Y }
+
+    /** Length unit of the model file, with its size in metres. */
+    public enum LengthUnit implements Named {
+        M(1.0), CM(0.01), MM(0.001), FT(0.3048);
+
+        /** Metres per model unit (the international foot is exactly 0.3048 m). */
+        public final double metres;
+
+        LengthUnit(double metres) { this.metres = metres; }
+    }
+
+    /** Sky diffuse model: Perez et al. (1990) anisotropic, or isotropic (Liu and Jordan). */
+    public enum SkyModel implements Named { PEREZ, ISOTROPIC }
+
+    /** Time base of the run. */
+    public enum TimeBase implements Named { AUTO, AVERAGE_DAYS, HOURLY_YEAR }
+
+    /** Irradiance of the ground that reflects onto the patches. */
+    public enum GroundIrradiance implements Named { UNSHADED, SHADED }
+
+    /** Kind of climate file. */
+    public enum ClimateFormat implements Named { AUTO, MONTH_HOUR, MONTHLY, HOURLY }
+
+    /** Which end of its interval a weather row's timestamp labels. */
+    public enum IntervalLabel implements Named { END, START }
+}

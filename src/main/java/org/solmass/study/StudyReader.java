@@ -1,0 +1,234 @@
+package org.solmass.study;
+
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.solmass.InputException;
+import org.solmass.study.Study.Albedo;
+import org.solmass.study.Study.Climate;
+import org.solmass.study.Study.ClimateFormat;
+import org.solmass.study.Study.GroundIrradiance;
+import org.solmass.study.Study.IntervalLabel;
+import org.solmass.study.Study.LengthUnit;
+import org.solmass.study.Study.Outputs;
+import org.solmass.study.Study.SkyModel;
+import org.solmass.study.Study.TimeBase;
+import org.solmass.study.Study.UpAxis;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.time.DateTimeException;
+import java.time.ZoneId;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Function;
+
+/**
+ * Reads a study file (JSON, our own format; every key in docs/study-file.md) into a resolved
+ * {@link Study}: defaults applied, ranges checked, relative paths resolved against the study file's
+ * folder. Unknown keys, wrong types and out-of-range values are {@link InputException}s naming the
+ * file and the full key path, e.g. {@code study.json: site.latitude: expected a number from -90 to 90,
+ * got "north"}.
+ */
+public final class StudyReader {
+    /** The value of {@code climate.source} that selects the embedded clear-sky model. */
+    public static final String CLEAR_SKY = "clear-sky";
+
+    private static final ObjectMapper MAPPER = new ObjectMapper()
+            .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS);
+
+    private StudyReader() {}
+
+    /** Reads a study file with no flags on top. */
+    public static Study read(Path file) {
+        return read(file, new StudyOverrides());
+    }
+
+    /**
+     * Reads a study file and lays command-line flags over it.
+     *
+     * @param file the study file, or null to build the study from the flags alone (then the flags must
+     *             give at least --model, --lat, --lon and --zone; relative paths resolve against the
+     *             working directory)
+     * @param overrides flags, may be empty
+     */
+    public static Study read(Path file, StudyOverrides overrides) {
+        ObjectNode root = file == null ? JsonNodeFactory.instance.objectNode() : parse(file);
+        merge(root, overrides.tree());
+        Path base = file == null ? Path.of("").toAbsolutePath() : file.toAbsolutePath().getParent();
+        Map<String, String> flags = overrides.flags();
+        Function<String, String> where = key -> {
+            String bare = key.replaceAll("\\[\\d+]$", "");
+            String flag = flags.get(bare);
+            if (flag != null) return flag;
+            if (file == null) return StudyOverrides.REQUIRED_FLAGS.getOrDefault(bare, key);
+            return file + ": " + key;
+        };
+        return fromTree(root, file == null ? null : file.toAbsolutePath().normalize(), base, where);
+    }
+
+    /**
+     * Reads a study already parsed into a JSON tree (e.g. the "study" object of run.json).
+     *
+     * @param tree the study object
+     * @param source the study file to record as its source, or null
+     * @param baseDir folder relative paths resolve against
+     * @param label what to name in messages before the key path (a file name)
+     */
+    public static Study fromTree(JsonNode tree, Path source, Path baseDir, String label) {
+        if (!tree.isObject()) throw new InputException(label, "expected a study object { ... }");
+        return fromTree((ObjectNode) tree, source, baseDir, key -> label + ": " + key);
+    }
+
+    private static Study fromTree(ObjectNode root, Path source, Path base, Function<String, String> where) {
+        JsonCursor c = new JsonCursor(root, "", where);
+        String name = c.text("name", null);
+        String description = c.text("description", "");
+
+        JsonCursor m = c.object("model");
+        Path modelFile = path(m, "file", null, base);
+        Study.Model model = new Study.Model(modelFile,
+                m.choice("up", UpAxis.class, UpAxis.Z),
+                m.choice("unit", LengthUnit.class, LengthUnit.M),
+                m.number("north_deg", 0.0, -360, 360),
+                m.strings("analyse"),
+                m.strings("context"));
+        for (int i = 0; i < model.context().size(); i++) {
+            if (model.analyse().contains(model.context().get(i))) {
+                throw m.error("context[" + i + "]", "block \"" + model.context().get(i)
+                        + "\" is also listed in model.analyse; a block is either analysed or context");
+            }
+        }
+        m.finish();
+
+        JsonCursor s = c.object("site");
+        double lat = s.number("latitude", null, -90, 90);
+        double lon = s.number("longitude", null, -180, 180);
+        double elev = s.number("elevation_m", 0.0, -500, 9000);
+        String zone = s.string("zone", null);
+        try {
+            ZoneId.of(zone);
+        } catch (DateTimeException e) {
+            throw s.error("zone", "expected an IANA time zone such as \"Europe/Berlin\" or a UTC offset such as \"+02:00\", got \"" + zone + "\"");
+        }
+        s.finish();
+        Study.Site site = new Study.Site(lat, lon, elev, zone);
+
+        Climate climate = climate(c, base);
+
+        JsonCursor a = c.object("albedo");
+        Albedo albedo = new Albedo(a.number("ground", Albedo.DEFAULT_GROUND, 0, 1),
+                a.number("blocks_default", Albedo.DEFAULT_BLOCKS, 0, 1),
+                a.numberMap("blocks", 0, 1), a.numberMap("materials", 0, 1));
+        a.finish();
+
+        GroundIrradiance ground = c.choice("ground_irradiance", GroundIrradiance.class, GroundIrradiance.UNSHADED);
+        double patchM = c.positive("patch_m", Study.DEFAULT_PATCH_M, 0, 100);
+        int rays = c.integer("rays", Study.DEFAULT_RAYS, 1, 1 << 20);
+        SkyModel sky = c.choice("sky", SkyModel.class, SkyModel.PEREZ);
+        TimeBase timeBase = c.choice("time_base", TimeBase.class, TimeBase.AUTO);
+        int sunBins = c.integer("sun_bins", Study.DEFAULT_SUN_BINS, 16, 1 << 20);
+        int step = c.integer("step_minutes", Study.DEFAULT_STEP_MINUTES, 1, 60);
+        if (60 % step != 0) throw c.error("step_minutes", "expected a whole number of minutes that divides 60 (1, 2, 3, 4, 5, 6, 10, 12, 15, 20, 30, 60), got " + step);
+
+        JsonCursor o = c.object("outputs");
+        Outputs outputs = new Outputs(path(o, "folder", "results", base),
+                o.bool("month_hour_csv", false), o.bool("map", true),
+                o.integer("map_width_px", Outputs.DEFAULT_MAP_WIDTH, 400, 8000),
+                o.integer("map_height_px", Outputs.DEFAULT_MAP_HEIGHT, 300, 8000),
+                o.ascendingNumbers("thresholds_kwh_m2", Outputs.DEFAULT_THRESHOLDS, 0, 100_000, 32));
+        o.finish();
+        int threads = c.integer("threads", 0, 0, 4096);
+        c.finish();
+
+        if (name == null || name.isBlank()) name = baseName(source != null ? source : modelFile);
+        return new Study(name, description, source, model, site, climate, albedo, ground, patchM, rays, sky,
+                timeBase, sunBins, step, outputs, threads);
+    }
+
+    private static Climate climate(JsonCursor c, Path base) {
+        JsonNode raw = c.raw("climate");
+        if (raw != null && raw.isTextual()) {               // shorthand: "climate": "clear-sky" | "file.csv"
+            ObjectNode o = JsonNodeFactory.instance.objectNode();
+            o.set("source", raw);
+            raw = o;
+        }
+        if (raw != null && !raw.isObject()) throw c.error("climate", "expected an object { \"source\": ... } or a text value, got " + JsonCursor.shown(raw));
+        JsonCursor k = c.child("climate", raw == null ? JsonNodeFactory.instance.objectNode() : raw);
+        String source = k.string("source", CLEAR_SKY);
+        Path file = source.equalsIgnoreCase(CLEAR_SKY) ? null : base.resolve(source).normalize();
+        Climate climate = new Climate(file,
+                k.choice("format", ClimateFormat.class, ClimateFormat.AUTO),
+                k.choice("interval_label", IntervalLabel.class, IntervalLabel.END),
+                k.bool("fill_gaps", false),
+                k.integer("year", Climate.DEFAULT_YEAR, 1900, 2100));
+        if (file == null && climate.format() != ClimateFormat.AUTO) {
+            throw k.error("format", "only applies to a climate file; climate.source is \"clear-sky\"");
+        }
+        k.finish();
+        return climate;
+    }
+
+    private static Path path(JsonCursor o, String key, String dflt, Path base) {
+        String s = o.string(key, dflt);
+        try {
+            return base.resolve(s).normalize();
+        } catch (java.nio.file.InvalidPathException e) {
+            throw o.error(key, "expected a file path, got \"" + s + "\" (" + e.getReason() + ")");
+        }
+    }
+
+    private static String baseName(Path p) {
+        String n = p.getFileName().toString();
+        int dot = n.lastIndexOf('.');
+        return dot > 0 ? n.substring(0, dot) : n;
+    }
+
+    private static ObjectNode parse(Path file) {
+        String text;
+        try {
+            text = Files.readString(file);
+        } catch (NoSuchFileException e) {
+            throw new InputException(file.toString(), "study file not found");
+        } catch (IOException e) {
+            throw new InputException(file.toString(), "cannot read the study file: " + e.getMessage(), e);
+        }
+        JsonNode n;
+        try {
+            n = MAPPER.readTree(text);
+        } catch (JsonProcessingException e) {
+            JsonLocation loc = e.getLocation();
+            String where = loc == null ? file.toString() : InputException.at(file, loc.getLineNr());
+            throw new InputException(where, "not valid JSON: " + e.getOriginalMessage(), e);
+        }
+        if (n == null || !n.isObject()) throw new InputException(file.toString(), "expected a JSON object { ... } at the top");
+        return (ObjectNode) n;
+    }
+
+    /** Deep merge: objects merge key by key, anything else in {@code over} replaces. */
+    static void merge(ObjectNode into, ObjectNode over) {
+        Iterator<Map.Entry<String, JsonNode>> it = over.fields();
+        while (it.hasNext()) {
+            Map.Entry<String, JsonNode> e = it.next();
+            JsonNode have = into.get(e.getKey());
+            if (have instanceof ObjectNode h && e.getValue() instanceof ObjectNode v) merge(h, v);
+            else into.set(e.getKey(), e.getValue().deepCopy());
+        }
+    }
+
+    /** Lists kept for callers that want the supported labels (CLI help). */
+    public static List<String> labels(Class<? extends Enum<?>> type) {
+        java.util.ArrayList<String> out = new java.util.ArrayList<>();
+        for (Enum<?> e : type.getEnumConstants()) out.add(((Study.Named) e).label());
+        return out;
+    }
+}

@@ -1,0 +1,111 @@
+package org.solmass.study;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.util.DefaultIndenter;
+import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.ObjectWriter;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+import java.nio.file.Path;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * Writes a resolved {@link Study} as a study file: the same keys {@link StudyReader} reads, every
+ * default written out, paths absolute, keys in the documented order, map entries sorted by name.
+ * Reading the output back gives an equal study (a test checks this).
+ */
+public final class StudyWriter {
+    private static final ObjectWriter PRETTY;
+
+    static {
+        DefaultIndenter lf = new DefaultIndenter("  ", "\n");
+        DefaultPrettyPrinter pp = new DefaultPrettyPrinter().withObjectIndenter(lf).withArrayIndenter(lf);
+        PRETTY = new ObjectMapper().writer(pp);
+    }
+
+    private StudyWriter() {}
+
+    /** The study as a JSON object, keys in the order of docs/study-file.md. */
+    public static ObjectNode toTree(Study s) {
+        JsonNodeFactory f = JsonNodeFactory.instance;
+        ObjectNode root = f.objectNode();
+        root.put("name", s.name());
+        if (!s.description().isEmpty()) root.put("description", s.description());
+
+        ObjectNode m = root.putObject("model");
+        m.put("file", path(s.model().file()));
+        m.put("up", s.model().up().label());
+        m.put("unit", s.model().unit().label());
+        m.put("north_deg", s.model().northDeg());
+        strings(m.putArray("analyse"), s.model().analyse());
+        strings(m.putArray("context"), s.model().context());
+
+        ObjectNode site = root.putObject("site");
+        site.put("latitude", s.site().latitudeDeg());
+        site.put("longitude", s.site().longitudeDeg());
+        site.put("elevation_m", s.site().elevationM());
+        site.put("zone", s.site().zone());
+
+        ObjectNode c = root.putObject("climate");
+        Study.Climate cl = s.climate();
+        c.put("source", cl.isClearSky() ? StudyReader.CLEAR_SKY : path(cl.file()));
+        if (!cl.isClearSky()) c.put("format", cl.format().label());
+        c.put("interval_label", cl.intervalLabel().label());
+        c.put("fill_gaps", cl.fillGaps());
+        c.put("year", cl.year());
+
+        ObjectNode a = root.putObject("albedo");
+        a.put("ground", s.albedo().ground());
+        a.put("blocks_default", s.albedo().blocksDefault());
+        numbers(a.putObject("blocks"), s.albedo().blocks());
+        numbers(a.putObject("materials"), s.albedo().materials());
+
+        root.put("ground_irradiance", s.groundIrradiance().label());
+        root.put("patch_m", s.patchM());
+        root.put("rays", s.rays());
+        root.put("sky", s.sky().label());
+        root.put("time_base", s.timeBase().label());
+        root.put("sun_bins", s.sunBins());
+        root.put("step_minutes", s.stepMinutes());
+
+        ObjectNode o = root.putObject("outputs");
+        o.put("folder", path(s.outputs().folder()));
+        o.put("month_hour_csv", s.outputs().monthHourCsv());
+        o.put("map", s.outputs().map());
+        o.put("map_width_px", s.outputs().mapWidthPx());
+        o.put("map_height_px", s.outputs().mapHeightPx());
+        ArrayNode t = o.putArray("thresholds_kwh_m2");
+        for (double v : s.outputs().thresholdsKwhM2()) t.add(v);
+        root.put("threads", s.threads());
+        return root;
+    }
+
+    /** The study as pretty JSON text with LF line ends and a final newline. */
+    public static String toJson(Study s) {
+        return pretty(toTree(s));
+    }
+
+    /** Any JSON tree as Solmass writes JSON: two-space indent, LF line ends, final newline. */
+    public static String pretty(JsonNode n) {
+        try {
+            return PRETTY.writeValueAsString(n) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    private static String path(Path p) { return p.toAbsolutePath().normalize().toString(); }
+
+    private static void strings(ArrayNode a, Iterable<String> values) {
+        for (String v : values) a.add(v);
+    }
+
+    private static void numbers(ObjectNode o, Map<String, Double> values) {
+        for (Map.Entry<String, Double> e : new TreeMap<>(values).entrySet()) o.put(e.getKey(), e.getValue());
+    }
+}
