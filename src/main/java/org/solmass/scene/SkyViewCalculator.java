@@ -80,7 +80,7 @@ public final class SkyViewCalculator {
     }
 
     /** View factors and SVF standard error from ray classes in stratum order (k x k, row-major). */
-    static ViewFactors fromClasses(int[] cls, int k) {
+    public static ViewFactors fromClasses(int[] cls, int k) {
         int n = k * k, sky = 0, ground = 0, block = 0;
         for (int s = 0; s < n; s++) {
             switch (cls[s]) {

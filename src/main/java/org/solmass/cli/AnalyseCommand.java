@@ -1,0 +1,101 @@
+package org.solmass.cli;
+
+import org.solmass.InputException;
+import org.solmass.study.Study;
+import org.solmass.study.StudyOverrides;
+import org.solmass.study.StudyReader;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+
+/** {@code solmass analyse}: the main job, shading-aware irradiation of every patch of a model. */
+@Command(name = "analyse", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Shading-aware irradiation of every patch of a massing model: beam, sky diffuse and",
+                "reflected light with the obstruction of the neighbouring blocks, summed to months and the year.",
+                "Give a study file, or the model and site as flags; flags override the study file.",
+                "Writes patches.csv, summary.json, run.json and map.png to the output folder."})
+public final class AnalyseCommand implements Callable<Integer> {
+    @Parameters(arity = "0..1", paramLabel = "STUDY.json", description = "study file (docs/study-file.md)")
+    Path studyFile;
+
+    @Option(names = "--model", paramLabel = "MODEL.obj", description = "massing model (OBJ)") Path model;
+    @Option(names = "--lat", paramLabel = "DEG", description = "site latitude, degrees north") Double lat;
+    @Option(names = "--lon", paramLabel = "DEG", description = "site longitude, degrees east") Double lon;
+    @Option(names = "--elevation", paramLabel = "M", description = "site elevation, metres") Double elevation;
+    @Option(names = "--zone", paramLabel = "ZONE", description = "time zone: IANA name (Europe/Berlin) or UTC offset (+01:00)") String zone;
+    @Option(names = "--up", paramLabel = "y|z", description = "model up axis (default z)") String up;
+    @Option(names = "--unit", paramLabel = "UNIT", description = "model unit: m, cm, mm, ft (default m)") String unit;
+    @Option(names = "--north", paramLabel = "DEG", description = "angle from the model's +y axis to true north, clockwise (default 0)") Double north;
+    @Option(names = "--analyse", paramLabel = "BLOCK", split = ",", description = "blocks to analyse (default all not in --context)") List<String> analyse;
+    @Option(names = "--context", paramLabel = "BLOCK", split = ",", description = "blocks that only obstruct") List<String> context;
+    @Option(names = "--climate", paramLabel = "clear-sky|FILE", description = "weather: clear-sky (default) or a climate file") String climate;
+    @Option(names = "--climate-format", paramLabel = "FORMAT", description = "auto, month-hour, monthly, hourly") String climateFormat;
+    @Option(names = "--time-base", paramLabel = "BASE", description = "auto, average-days, hourly-year") String timeBase;
+    @Option(names = "--patch", paramLabel = "M", description = "patch size, metres (default 1)") Double patch;
+    @Option(names = "--rays", paramLabel = "N", description = "hemisphere rays per patch (default 1024)") Integer rays;
+    @Option(names = "--sky", paramLabel = "MODEL", description = "perez (default) or isotropic") String sky;
+    @Option(names = "--albedo", paramLabel = "A", description = "ground albedo (default 0.2)") Double albedo;
+    @Option(names = "--month-hour", description = "also write month-hour.csv (large)") Boolean monthHour;
+    @Option(names = "--threads", paramLabel = "N", description = "worker threads (default: all cores)") Integer threads;
+    @Option(names = "--out", paramLabel = "DIR", description = "output folder") Path out;
+    @Option(names = {"-q", "--quiet"}, description = "no progress on stderr") boolean quiet;
+
+    @Override
+    public Integer call() {
+        Study study = resolve();
+        long t0 = System.nanoTime();
+        AnalysisRun.Outcome o;
+        try (ConsoleProgress progress = new ConsoleProgress(System.err, quiet)) {
+            o = AnalysisRun.run(study, progress);
+            progress.begin("write", 0);
+            for (String w : o.warnings()) System.err.println("solmass: warning: " + w);
+            double ts = AnalysisRun.seconds(t0);
+            List<Path> files = ResultFiles.write(o, ts);
+            printSummary(o, files, AnalysisRun.seconds(t0));
+        }
+        return Main.EXIT_OK;
+    }
+
+    Study resolve() {
+        StudyOverrides ov = new StudyOverrides()
+                .model(model).latitude(lat).longitude(lon).elevationM(elevation).zone(zone).up(up).unit(unit)
+                .northDeg(north).analyse(analyse).context(context).climate(climate).climateFormat(climateFormat)
+                .timeBase(timeBase).patchM(patch).rays(rays).sky(sky).albedo(albedo).monthHourCsv(monthHour)
+                .threads(threads).out(out);
+        if (studyFile == null && model == null) {
+            throw new InputException("analyse", "give a study file, or --model with --lat, --lon and --zone");
+        }
+        return StudyReader.read(studyFile, ov);
+    }
+
+    private static void printSummary(AnalysisRun.Outcome o, List<Path> files, double seconds) {
+        Map<String, Long> c = o.counts();
+        System.out.printf("solmass analyse: %s%n", o.study().name());
+        System.out.printf("  %d patches on %d blocks (%d triangles), %s, %s sky%n", c.get("patches"),
+                c.get("blocks"), c.get("triangles"), o.weather().timeBase().label(), o.study().sky().label());
+        double[] a = o.result().annual();
+        double area = 0, sum = 0, min = Double.POSITIVE_INFINITY, max = Double.NEGATIVE_INFINITY;
+        for (int p = 0; p < a.length; p++) {
+            double ar = o.patches().patches().get(p).areaM2();
+            area += ar;
+            sum += a[p] * ar;
+            min = Math.min(min, a[p]);
+            max = Math.max(max, a[p]);
+        }
+        System.out.printf("  annual irradiation: area-weighted mean %.0f kWh/m2, min %.0f, max %.0f, total %.0f MWh on %.0f m2%n",
+                sum / area, min, max, sum / 1000, area);
+        System.out.printf("  time %.1f s (%s)%n", seconds, timings(o.timingsS()));
+        for (Path f : files) System.out.println("  wrote " + f);
+    }
+
+    private static String timings(Map<String, Double> t) {
+        StringBuilder b = new StringBuilder();
+        t.forEach((k, v) -> b.append(b.length() == 0 ? "" : ", ").append(k).append(String.format(" %.1f s", v)));
+        return b.toString();
+    }
+}

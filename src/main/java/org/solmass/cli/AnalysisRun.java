@@ -1,0 +1,245 @@
+package org.solmass.cli;
+
+import org.solmass.InputException;
+import org.solmass.climate.ClimateSource;
+import org.solmass.climate.ClimateSpec;
+import org.solmass.climate.TimeBase;
+import org.solmass.climate.WeatherSeries;
+import org.solmass.irradiation.IrradiationResult;
+import org.solmass.irradiation.IrradiationSetup;
+import org.solmass.irradiation.PhaseProgress;
+import org.solmass.irradiation.ShadedIrradiation;
+import org.solmass.model.LengthUnit;
+import org.solmass.model.MassingModel;
+import org.solmass.model.ModelOptions;
+import org.solmass.model.ObjReader;
+import org.solmass.model.UpAxis;
+import org.solmass.output.ResultTable;
+import org.solmass.scene.Scene;
+import org.solmass.sky.Isotropic;
+import org.solmass.sky.Perez;
+import org.solmass.sky.SkyModel;
+import org.solmass.study.Study;
+import org.solmass.sun.Site;
+import org.solmass.surface.PatchOptions;
+import org.solmass.surface.PatchSet;
+import org.solmass.surface.Patcher;
+import org.solmass.surface.Surface;
+import org.solmass.surface.SurfaceKind;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ForkJoinPool;
+
+/**
+ * One analysis of a study, stage by stage: model, patches, scene, weather, shading-aware irradiation,
+ * result table. Writes nothing (see {@link ResultFiles}); the CLI and the viewer both call it.
+ */
+public final class AnalysisRun {
+    /** Context reflector patches are this many times the analysed patch size. */
+    static final double CONTEXT_PATCH_FACTOR = 4;
+    /** Seed of every ray stream of an analysis; fixed so that runs repeat exactly. */
+    static final long RUN_SEED = 0x5A15_3A55L;
+
+    private AnalysisRun() {}
+
+    /** Everything an analysis produced. */
+    public record Outcome(Study study, MassingModel model, PatchSet patches, WeatherSeries weather,
+                          IrradiationResult result, ResultTable table, List<String> warnings,
+                          Map<String, Long> counts, Map<String, Double> timingsS) {}
+
+    /** The model read with the study's options, with the reader's warnings. */
+    public static ObjReader.Result loadModel(Study study) {
+        Study.Model m = study.model();
+        ModelOptions mo = new ModelOptions(m.up() == Study.UpAxis.Y ? UpAxis.Y : UpAxis.Z,
+                LengthUnit.valueOf(m.unit().name()), m.northDeg());
+        return ObjReader.load(m.file(), mo);
+    }
+
+    /** Names of the analysed blocks; checks that every named block exists. */
+    public static Set<String> analysedBlocks(Study study, MassingModel model) {
+        List<String> names = model.blockNames();
+        for (String n : study.model().analyse()) requireBlock(names, n, "model.analyse");
+        for (String n : study.model().context()) requireBlock(names, n, "model.context");
+        Set<String> out = new LinkedHashSet<>();
+        for (String n : names) if (study.model().isAnalysed(n)) out.add(n);
+        if (out.isEmpty()) {
+            throw new InputException("model.analyse", "no block is left to analyse: every block of "
+                    + model.source() + " is listed as context " + names);
+        }
+        return out;
+    }
+
+    private static void requireBlock(List<String> names, String n, String key) {
+        if (!names.contains(n)) {
+            throw new InputException(key, "no block named '" + n + "' in the model; its blocks are " + names);
+        }
+    }
+
+    /** The weather series of the study, with the time base resolved. */
+    public static WeatherSeries loadWeather(Study study) {
+        Study.Site s = study.site();
+        Site site = new Site(s.latitudeDeg(), s.longitudeDeg(), s.elevationM(), Site.parseZone(s.zone(), "site.zone"));
+        return ClimateSource.load(site, climateSpec(study));
+    }
+
+    static ClimateSpec climateSpec(Study study) {
+        Study.Climate c = study.climate();
+        Study.TimeBase tb = study.timeBase();
+        ClimateSpec spec;
+        if (c.isClearSky()) {
+            spec = tb == Study.TimeBase.HOURLY_YEAR ? ClimateSpec.clearSkyYear(c.year()) : ClimateSpec.clearSky();
+        } else {
+            spec = ClimateSpec.file(c.file())
+                    .withIntervalLabel(c.intervalLabel() == Study.IntervalLabel.START
+                            ? ClimateSpec.IntervalLabel.START : ClimateSpec.IntervalLabel.END)
+                    .withFormat(switch (c.format()) {
+                        case AUTO -> ClimateSpec.Format.AUTO;
+                        case MONTH_HOUR -> ClimateSpec.Format.MONTH_HOUR;
+                        case MONTHLY -> ClimateSpec.Format.MONTHLY_MEANS;
+                        case HOURLY -> ClimateSpec.Format.HOURLY;
+                    });
+            if (c.fillGaps()) spec = spec.withFillGaps(FILL_GAPS_MAX_STEPS);
+        }
+        return spec.withStepMinutes(study.stepMinutes());
+    }
+
+    /** Longest run of missing hourly steps filled when a study asks for gap filling. */
+    static final int FILL_GAPS_MAX_STEPS = 3;
+
+    static SkyModel skyModel(Study study) {
+        return study.sky() == Study.SkyModel.ISOTROPIC ? Isotropic.INSTANCE : Perez.INSTANCE;
+    }
+
+    /** Runs the whole analysis on {@code threads} worker threads (0 = all cores). */
+    public static Outcome run(Study study, PhaseProgress progress) {
+        int threads = study.threads() > 0 ? study.threads() : Runtime.getRuntime().availableProcessors();
+        ForkJoinPool pool = new ForkJoinPool(threads);
+        try {
+            return pool.submit(() -> compute(study, progress)).get();
+        } catch (ExecutionException e) {
+            Throwable c = e.getCause();
+            if (c instanceof RuntimeException re) throw re;
+            if (c instanceof Error err) throw err;
+            throw new IllegalStateException(c);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("analysis interrupted", e);
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    private static Outcome compute(Study study, PhaseProgress progress) {
+        Map<String, Double> t = new LinkedHashMap<>();
+        Map<String, Long> counts = new LinkedHashMap<>();
+        List<String> warnings = new ArrayList<>();
+        long t0 = System.nanoTime();
+
+        progress.begin("load", 0);
+        ObjReader.Result read = loadModel(study);
+        MassingModel model = read.model();
+        warnings.addAll(read.warnings());
+        WeatherSeries weather = loadWeather(study);
+        for (String x : weather.report().repairs()) warnings.add("climate repaired: " + x);
+        for (String x : weather.report().warnings()) warnings.add("climate: " + x);
+        if (study.timeBase() == Study.TimeBase.AVERAGE_DAYS && weather.timeBase() != TimeBase.AVERAGE_DAYS) {
+            throw new InputException("time_base", "the climate source " + weather.source()
+                    + " is an hourly year; monthly-average days need a month-hour table, monthly means or clear-sky");
+        }
+        t.put("load", seconds(t0));
+
+        long t1 = System.nanoTime();
+        progress.begin("patches", 0);
+        Set<String> analysed = analysedBlocks(study, model);
+        PatchSet patches = Patcher.build(model, new PatchOptions(study.patchM(), analysed, false));
+        Set<String> context = new LinkedHashSet<>(model.blockNames());
+        context.removeAll(analysed);
+        List<org.solmass.surface.Patch> contextPatches = context.isEmpty() ? List.of()
+                : Patcher.build(model, patches.surfaces(),
+                        new PatchOptions(study.patchM() * CONTEXT_PATCH_FACTOR, context, false)).patches();
+        if (patches.patches().isEmpty()) {
+            throw new InputException("model.analyse", "the analysed blocks " + analysed + " have no surface to analyse");
+        }
+        t.put("patches", seconds(t1));
+
+        long t2 = System.nanoTime();
+        Scene scene = Scene.build(model, !patches.hasGroundFaces(), patches.groundLevelZ());
+        float[] albedo = triangleAlbedo(study, model, patches.surfaces());
+        IrradiationSetup.Options o = new IrradiationSetup.Options(study.patchM(), study.rays(),
+                study.albedo().ground(), study.groundIrradiance() == Study.GroundIrradiance.SHADED,
+                weather.timeBase() == TimeBase.AVERAGE_DAYS ? IrradiationSetup.SunSampling.EXACT
+                        : IrradiationSetup.SunSampling.BINNED,
+                study.sunBins(), RUN_SEED, true);
+        ShadedIrradiation.Inputs in = IrradiationSetup.build(scene, model, patches.surfaces(), patches.patches(),
+                contextPatches, albedo, weather, skyModel(study), o);
+        t.put("scene", seconds(t2));
+
+        long t3 = System.nanoTime();
+        IrradiationResult r = ShadedIrradiation.run(scene, in, progress);
+        t.put("irradiation", seconds(t3));
+
+        counts.put("blocks", (long) model.blockNames().size());
+        counts.put("triangles", (long) model.triangleCount());
+        counts.put("surfaces", (long) patches.surfaces().size());
+        counts.put("patches", (long) patches.patchCount());
+        counts.put("context_patches", (long) contextPatches.size());
+        counts.put("steps", (long) weather.size());
+        counts.put("sun_directions", (long) r.sunDirections());
+        counts.put("rays_per_patch", (long) org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()));
+        return new Outcome(study, model, patches, weather, r, table(patches, r), warnings, counts, t);
+    }
+
+    /** Per-patch result columns in the order of docs/outputs.md. */
+    static ResultTable table(PatchSet patches, IrradiationResult r) {
+        ResultTable tb = new ResultTable(patches.patches());
+        int n = r.size();
+        tb.put("sky_view_factor", "", r.skyViewFactor());
+        tb.put("ground_view_factor", "", r.groundViewFactor());
+        tb.put("svf_std_error", "", r.skyViewStdError());
+        tb.put("annual_kwh_m2", "kWh/m2", r.annual());
+        tb.put("beam_kwh_m2", "kWh/m2", r.beam());
+        tb.put("diffuse_kwh_m2", "kWh/m2", r.diffuse());
+        tb.put("reflected_kwh_m2", "kWh/m2", r.reflected());
+        tb.put("unshaded_kwh_m2", "kWh/m2", r.unshaded());
+        double[] loss = new double[n], kwh = new double[n];
+        for (int p = 0; p < n; p++) {
+            loss[p] = r.shadingLossPct(p);
+            kwh[p] = r.annual()[p] * patches.patches().get(p).areaM2();
+        }
+        tb.put("shading_loss_pct", "%", loss);
+        tb.put("annual_kwh", "kWh", kwh);
+        for (int m = 0; m < 12; m++) tb.put(String.format("m%02d_kwh_m2", m + 1), "kWh/m2", r.monthly()[m]);
+        return tb;
+    }
+
+    /**
+     * Albedo of every triangle: its material's (albedo.materials), else its block's (albedo.blocks),
+     * else the ground albedo for ground faces and the blocks' default for the rest.
+     */
+    static float[] triangleAlbedo(Study study, MassingModel model, List<Surface> surfaces) {
+        Study.Albedo a = study.albedo();
+        boolean[] ground = new boolean[model.triangleCount()];
+        for (Surface s : surfaces) if (s.kind() == SurfaceKind.GROUND) for (int tr : s.triangles()) ground[tr] = true;
+        float[] out = new float[model.triangleCount()];
+        for (int tr = 0; tr < out.length; tr++) {
+            String block = model.blockNames().get(model.triangleBlock()[tr]);
+            int mi = model.triangleMaterial()[tr];
+            String mat = mi >= 0 ? model.materialNames().get(mi) : null;
+            Double v = mat != null ? a.materials().get(mat) : null;
+            if (v == null) v = a.blocks().get(block);
+            if (v == null) v = ground[tr] ? a.ground() : a.blocksDefault();
+            out[tr] = v.floatValue();
+        }
+        return out;
+    }
+
+    static double seconds(long since) {
+        return (System.nanoTime() - since) / 1e9;
+    }
+}

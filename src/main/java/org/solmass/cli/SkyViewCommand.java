@@ -1,0 +1,119 @@
+package org.solmass.cli;
+
+import org.solmass.InputException;
+import org.solmass.model.LengthUnit;
+import org.solmass.model.MassingModel;
+import org.solmass.model.ModelOptions;
+import org.solmass.model.ObjReader;
+import org.solmass.model.UpAxis;
+import org.solmass.output.PatchCsvWriter;
+import org.solmass.output.ResultTable;
+import org.solmass.scene.HemisphereSampler;
+import org.solmass.scene.Scene;
+import org.solmass.scene.SkyViewCalculator;
+import org.solmass.scene.ViewFactors;
+import org.solmass.surface.Patch;
+import org.solmass.surface.PatchOptions;
+import org.solmass.surface.PatchSet;
+import org.solmass.surface.Patcher;
+import org.solmass.surface.Surface;
+import org.solmass.surface.SurfaceKind;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.concurrent.Callable;
+import java.util.concurrent.ForkJoinPool;
+
+/** {@code solmass sky-view}: sky and ground view factors of every patch of a model. */
+@Command(name = "sky-view", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Sky, ground and obstruction view factors of every patch of a massing model,",
+                "by cosine-weighted stratified hemisphere ray casting. Writes DIR/patches.csv."})
+public final class SkyViewCommand implements Callable<Integer> {
+    @Parameters(paramLabel = "MODEL.obj", description = "massing model (OBJ)") Path model;
+    @Option(names = "--up", paramLabel = "y|z", defaultValue = "z", description = "model up axis (default ${DEFAULT-VALUE})") String up;
+    @Option(names = "--unit", paramLabel = "UNIT", defaultValue = "m", description = "model unit: m, cm, mm, ft (default ${DEFAULT-VALUE})") String unit;
+    @Option(names = "--north", paramLabel = "DEG", defaultValue = "0", description = "angle from the model's +y axis to true north, clockwise (default ${DEFAULT-VALUE})") double north;
+    @Option(names = "--patch", paramLabel = "METRES", defaultValue = "1", description = "patch size (default ${DEFAULT-VALUE} m)") double patch;
+    @Option(names = "--rays", paramLabel = "N", defaultValue = "1024", description = "hemisphere rays per patch, rounded to a square grid (default ${DEFAULT-VALUE})") int rays;
+    @Option(names = "--analyse", paramLabel = "BLOCK", split = ",", description = "blocks to analyse (default all)") List<String> analyse;
+    @Option(names = "--threads", paramLabel = "N", defaultValue = "0", description = "worker threads (default: all cores)") int threads;
+    @Option(names = "--out", paramLabel = "DIR", required = true, description = "output folder") Path out;
+    @Option(names = {"-q", "--quiet"}, description = "no progress on stderr") boolean quiet;
+
+    @Override
+    public Integer call() {
+        if (!(patch > 0) || !Double.isFinite(patch)) throw new InputException("--patch", "expected a positive size in metres, got " + patch);
+        if (rays < 1) throw new InputException("--rays", "expected a positive number of rays, got " + rays);
+        if (threads < 0) throw new InputException("--threads", "expected 0 (all cores) or a positive count, got " + threads);
+        long t0 = System.nanoTime();
+        ModelOptions mo = new ModelOptions(UpAxis.parse(up, "--up"), LengthUnit.parse(unit, "--unit"), north);
+        ObjReader.Result read = ObjReader.load(model, mo);
+        for (String w : read.warnings()) System.err.println("solmass: warning: " + w);
+        MassingModel m = read.model();
+        PatchSet ps = Patcher.build(m, new PatchOptions(patch, analyse == null ? java.util.Set.of() : new LinkedHashSet<>(analyse), false));
+        Scene scene = Scene.build(m, !ps.hasGroundFaces(), ps.groundLevelZ());
+        boolean[] ground = groundTriangles(m, ps.surfaces());
+        double tSetup = AnalysisRun.seconds(t0);
+        long t1 = System.nanoTime();
+        ViewFactors[] vf;
+        int n = ps.patchCount();
+        ForkJoinPool pool = new ForkJoinPool(threads > 0 ? threads : Runtime.getRuntime().availableProcessors());
+        try (ConsoleProgress progress = new ConsoleProgress(System.err, quiet)) {
+            progress.begin("sky view", n);
+            vf = pool.submit(() -> SkyViewCalculator.compute(scene, ps.patches(), rays, AnalysisRun.RUN_SEED, ground,
+                    d -> progress.advance(d))).get();
+        } catch (Exception e) {
+            if (e.getCause() instanceof RuntimeException re) throw re;
+            throw new IllegalStateException(e);
+        } finally {
+            pool.shutdownNow();
+        }
+        double tRays = AnalysisRun.seconds(t1);
+        ResultTable table = new ResultTable(ps.patches());
+        double[] sky = new double[n], gr = new double[n], ob = new double[n], se = new double[n];
+        for (int i = 0; i < n; i++) {
+            sky[i] = vf[i].sky();
+            gr[i] = vf[i].ground();
+            ob[i] = vf[i].obstruction();
+            se[i] = vf[i].skyStdError();
+        }
+        table.put("sky_view_factor", "", sky).put("ground_view_factor", "", gr)
+                .put("obstruction_view_factor", "", ob).put("svf_std_error", "", se);
+        try {
+            Files.createDirectories(out);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot create " + out + ": " + e.getMessage(), e);
+        }
+        Path csv = out.resolve("patches.csv");
+        PatchCsvWriter.write(csv, table, List.of("Solmass " + Main.version() + " sky view factors of " + model.getFileName(),
+                "x,y,z centroid in metres (x east, y north, z up); azimuth from north clockwise"));
+        long totalRays = (long) n * HemisphereSampler.roundedRayCount(rays);
+        double mean = 0, area = 0;
+        for (int i = 0; i < n; i++) {
+            Patch p = ps.patches().get(i);
+            mean += sky[i] * p.areaM2();
+            area += p.areaM2();
+        }
+        System.out.printf("solmass sky-view: %s%n", model.getFileName());
+        System.out.printf("  %d patches (%.0f m2) on %d blocks, %d triangles, %d rays per patch%n", n, area,
+                m.blockNames().size(), m.triangleCount(), HemisphereSampler.roundedRayCount(rays));
+        System.out.printf("  area-weighted mean sky view factor %.3f%n", area > 0 ? mean / area : 0);
+        System.out.printf("  time %.2f s (setup %.2f s, rays %.2f s), %.1f million rays per second%n",
+                AnalysisRun.seconds(t0), tSetup, tRays, totalRays / tRays / 1e6);
+        System.out.println("  wrote " + csv);
+        return Main.EXIT_OK;
+    }
+
+    static boolean[] groundTriangles(MassingModel m, List<Surface> surfaces) {
+        boolean[] g = new boolean[m.triangleCount()];
+        for (Surface s : surfaces) if (s.kind() == SurfaceKind.GROUND) for (int t : s.triangles()) g[t] = true;
+        return g;
+    }
+}

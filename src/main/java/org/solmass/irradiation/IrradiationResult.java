@@ -1,0 +1,33 @@
+package org.solmass.irradiation;
+
+/**
+ * Per-patch results of the shading-aware pipeline, arrays indexed by patch index. Irradiation in
+ * kWh/m2 over the period of the weather series (a year), irradiance in W/m2.
+ *
+ * @param skyViewFactor obstructed sky view factor
+ * @param groundViewFactor ground view factor
+ * @param obstructionViewFactor view factor of the blocks
+ * @param skyViewStdError standard error of the sky view factor estimate
+ * @param horizonVisibility visible share of the horizon band (Perez), [0, 1]
+ * @param annual total irradiation (beam + diffuse + reflected)
+ * @param beam beam part
+ * @param diffuse sky diffuse part
+ * @param reflected ground- and block-reflected part
+ * @param unshaded total irradiation of the same plane with no obstruction
+ * @param monthly total irradiation per month: [month 0..11][patch]
+ * @param monthHourWm2 mean total irradiance per patch, month and hour of the day
+ *                     (patch * 288 + month * 24 + hour); null unless asked for
+ * @param sunDirections number of sun directions rays were cast to per patch
+ */
+public record IrradiationResult(double[] skyViewFactor, double[] groundViewFactor, double[] obstructionViewFactor,
+                                double[] skyViewStdError, double[] horizonVisibility,
+                                double[] annual, double[] beam, double[] diffuse, double[] reflected,
+                                double[] unshaded, double[][] monthly, float[] monthHourWm2, int sunDirections) {
+
+    public int size() { return annual.length; }
+
+    /** Shading loss in percent: 100 (1 - annual / unshaded); 0 where the unshaded value is 0. */
+    public double shadingLossPct(int p) {
+        return unshaded[p] > 0 ? 100 * (1 - annual[p] / unshaded[p]) : 0;
+    }
+}

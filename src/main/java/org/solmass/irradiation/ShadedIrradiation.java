@@ -1,0 +1,314 @@
+package org.solmass.irradiation;
+
+import org.solmass.scene.HemisphereSampler;
+import org.solmass.scene.SkyViewCalculator;
+import org.solmass.scene.Tracer;
+import org.solmass.scene.ViewFactors;
+import org.solmass.sky.SkyModel;
+
+import java.util.Arrays;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.stream.IntStream;
+
+/**
+ * The shading-aware irradiance of every receiver, step by step, summed into month-hour slots.
+ *
+ * <p>Per receiver and step (see docs/method.md for the full derivation):
+ * <ul>
+ * <li>beam: {@code DNI max(0, cos theta) V_sun}, {@code V_sun} the visibility of the sun direction
+ * (one occlusion ray per direction of {@link SunDirections});</li>
+ * <li>sky diffuse: {@code DHI [(1 - F1) SVF + F1 (a/b) V_sun + F2 sin(beta) V_hor]} with the
+ * step's {@link org.solmass.sky.SkyModel} coefficients (Perez et al. 1990, Solar Energy 44(5), eq. 9,
+ * each part obstructed on its own; isotropic, Liu and Jordan 1963: F1 = F2 = 0), a/b the capped
+ * circumsolar ratio of {@link org.solmass.sky.SkyModel#circumsolarRatio}, SVF the obstructed
+ * sky view factor, {@code V_hor} the visible share of the Perez horizon band (0 to 6.5 degrees
+ * elevation), weighted by {@code cos theta};</li>
+ * <li>reflected, one bounce of Lambertian reflection: {@code sum over hemisphere rays (1/N) rho_hit
+ * E_hit}, the cosine-weighted Monte Carlo form of {@code sum_j F_pj rho_j E_j} (Howell, Menguc and
+ * Siegel, Thermal Radiation Heat Transfer, 6th ed., 2016, ch. 7), where {@code E_hit} is GHI for
+ * unshaded ground and otherwise the hit receiver's first-pass irradiance (beam + sky diffuse +
+ * ground-reflected GHI).</li>
+ * </ul>
+ * Because every term is linear in the step weights, it is enough to keep per receiver the sums per
+ * month-hour slot (288 values), and reflection becomes a sparse weighted sum of other receivers' slot
+ * sums, computed after all first passes are known.
+ *
+ * <p>The sky diffuse of a slot is kept at or above zero (the Perez horizon term may be negative);
+ * the clamp acts on slot sums.
+ *
+ * <p>Determinism: receivers are computed in parallel, each from its own ray seed into its own
+ * array slots, so results do not depend on the thread count.
+ */
+public final class ShadedIrradiation {
+    static final int SLOTS = StepTable.SLOTS;
+    /** Perez horizon band: 0 to 6.5 degrees elevation (Perez et al. 1987, Solar Energy 39(3)). */
+    static final double HORIZON_BAND_DEG = 6.5;
+    static final int HORIZON_ELEVATIONS = 3, HORIZON_AZIMUTHS = 72;
+
+    private ShadedIrradiation() {}
+
+    /** Everything the pipeline needs besides the scene. */
+    public record Inputs(Receivers receivers, ReflectorIndex reflectors, boolean[] triangleIsGround,
+                         float[] triangleAlbedo, double groundAlbedo, boolean shadedGround,
+                         StepTable steps, SunDirections sun, int raysPerPatch, int reflectorRays,
+                         boolean keepMonthHour) {}
+
+    public static IrradiationResult run(org.solmass.scene.Scene scene, Inputs in, PhaseProgress progress) {
+        Receivers rc = in.receivers();
+        int n = rc.analysed, total = rc.count;
+        float[] firstPass = new float[total * SLOTS];
+        double[] gvfAll = new double[total];
+        double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
+        double[][] beamM = new double[12][n], diffM = new double[12][n];
+        double[] unshaded = new double[n];
+        int[][] refIdx = new int[n][];
+        float[][] refW = new float[n][];
+        float[] ghiAlbedo = new float[n];
+
+        progress.begin("visibility", total);
+        AtomicLong done = new AtomicLong();
+        long every = Math.max(1, total / 200);
+        ThreadLocal<Worker> workers = ThreadLocal.withInitial(() -> new Worker(scene, in));
+        IntStream.range(0, total).parallel().forEach(r -> {
+            Worker w = workers.get();
+            w.firstPass(r, r < n);
+            System.arraycopy(w.slotTotal, 0, firstPass, r * SLOTS, SLOTS);
+            gvfAll[r] = w.vf.ground();
+            if (r < n) {
+                svf[r] = w.vf.sky();
+                gvf[r] = w.vf.ground();
+                obs[r] = w.vf.obstruction();
+                se[r] = w.vf.skyStdError();
+                hv[r] = w.horizonVis;
+                for (int m = 0; m < 12; m++) {
+                    beamM[m][r] = w.beamMonth[m];
+                    diffM[m][r] = w.diffMonth[m];
+                }
+                unshaded[r] = w.unshadedTotal;
+                refIdx[r] = Arrays.copyOf(w.refIdx, w.refCount);
+                refW[r] = Arrays.copyOf(w.refW, w.refCount);
+                ghiAlbedo[r] = (float) w.ghiAlbedo;
+            }
+            long d = done.incrementAndGet();
+            if (d % every == 0 || d == total) progress.advance(d);
+        });
+
+        progress.begin("irradiation", n);
+        done.set(0);
+        StepTable st = in.steps();
+        double ga = in.groundAlbedo();
+        double[] annual = new double[n], beam = new double[n], diffuse = new double[n], reflected = new double[n];
+        double[][] monthly = new double[12][n];
+        float[] monthHour = in.keepMonthHour() ? new float[n * SLOTS] : null;
+        long everyB = Math.max(1, n / 200);
+        IntStream.range(0, n).parallel().forEach(p -> {
+            double[] refl = new double[SLOTS];
+            double g = ghiAlbedo[p];
+            for (int k = 0; k < SLOTS; k++) refl[k] = g * st.ghiWh[k];
+            int[] idx = refIdx[p];
+            float[] wt = refW[p];
+            for (int i = 0; i < idx.length; i++) {
+                int r = idx[i], base = r * SLOTS;
+                double wr = wt[i], groundTerm = ga * gvfAll[r];
+                for (int k = 0; k < SLOTS; k++) refl[k] += wr * (firstPass[base + k] + groundTerm * st.ghiWh[k]);
+            }
+            double tot = 0, ref = 0;
+            int base = p * SLOTS;
+            for (int k = 0; k < SLOTS; k++) {
+                double t = firstPass[base + k] + refl[k]; // first pass of p: its beam + sky diffuse
+                monthly[k / 24][p] += t / 1000;
+                tot += t;
+                ref += refl[k];
+                if (monthHour != null) monthHour[base + k] = st.hours[k] > 0 ? (float) (t / st.hours[k]) : 0f;
+            }
+            double b = 0, dfs = 0;
+            for (int m = 0; m < 12; m++) {
+                b += beamM[m][p];
+                dfs += diffM[m][p];
+            }
+            annual[p] = tot / 1000;
+            beam[p] = b / 1000;
+            diffuse[p] = dfs / 1000;
+            reflected[p] = ref / 1000;
+            long d = done.incrementAndGet();
+            if (d % everyB == 0 || d == n) progress.advance(d);
+        });
+        for (int p = 0; p < n; p++) unshaded[p] /= 1000;
+        return new IrradiationResult(svf, gvf, obs, se, hv, annual, beam, diffuse, reflected, unshaded,
+                monthly, monthHour, in.sun().count());
+    }
+
+    /** Per-thread state: samplers, scratch arrays; no allocation per ray or per step. */
+    private static final class Worker {
+        final org.solmass.scene.Scene scene;
+        final Inputs in;
+        final HemisphereSampler sampler, reflectorSampler;
+        final Tracer tracer;
+        final double[] dir;
+        final int[] cls, tri;
+        final double[] dist;
+        final byte[] vis;
+        final double[] beamSlot = new double[SLOTS], circSlot = new double[SLOTS];
+        final double[] beamUSlot = new double[SLOTS], circUSlot = new double[SLOTS];
+        final float[] slotTotal = new float[SLOTS];
+        final double[] beamMonth = new double[12], diffMonth = new double[12];
+        final int[] refIdx;
+        final float[] refW;
+        final long[] refKey;
+        final double[] horizonDir = new double[3 * HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
+        final double[] horizonCosElev = new double[HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
+        ViewFactors vf;
+        double horizonVis, unshadedTotal, ghiAlbedo;
+        int refCount;
+
+        Worker(org.solmass.scene.Scene scene, Inputs in) {
+            this.scene = scene;
+            this.in = in;
+            sampler = new HemisphereSampler(scene, in.raysPerPatch());
+            reflectorSampler = new HemisphereSampler(scene, in.reflectorRays());
+            tracer = scene.tracer();
+            int maxRays = Math.max(sampler.rayCount(), reflectorSampler.rayCount());
+            dir = new double[3 * maxRays];
+            cls = new int[maxRays];
+            tri = new int[maxRays];
+            dist = new double[maxRays];
+            vis = new byte[in.sun().count()];
+            refIdx = new int[maxRays];
+            refW = new float[maxRays];
+            refKey = new long[maxRays];
+            int h = 0;
+            for (int e = 0; e < HORIZON_ELEVATIONS; e++) {
+                double el = Math.toRadians((e + 0.5) * HORIZON_BAND_DEG / HORIZON_ELEVATIONS);
+                for (int a = 0; a < HORIZON_AZIMUTHS; a++, h++) {
+                    double az = 2 * Math.PI * (a + 0.5) / HORIZON_AZIMUTHS;
+                    horizonDir[3 * h] = Math.sin(az) * Math.cos(el);
+                    horizonDir[3 * h + 1] = Math.cos(az) * Math.cos(el);
+                    horizonDir[3 * h + 2] = Math.sin(el);
+                    horizonCosElev[h] = Math.cos(el);
+                }
+            }
+        }
+
+        /** First pass of receiver r: view factors, visibilities, beam + diffuse slot sums. */
+        void firstPass(int r, boolean analysed) {
+            Receivers rc = in.receivers();
+            double ox = rc.origin[3 * r], oy = rc.origin[3 * r + 1], oz = rc.origin[3 * r + 2];
+            double nx = rc.normal[3 * r], ny = rc.normal[3 * r + 1], nz = rc.normal[3 * r + 2];
+            HemisphereSampler hs = analysed ? sampler : reflectorSampler;
+            hs.sample(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), dir, cls, tri, dist);
+            vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
+            if (analysed) collectReflectors(hs.rayCount(), ox, oy, oz);
+            horizonVis = horizonVisibility(ox, oy, oz, nx, ny, nz);
+            sunVisibility(ox, oy, oz, nx, ny, nz);
+            accumulate(nx, ny, nz, rc.cosTilt(r), rc.sinTilt(r), analysed);
+        }
+
+        private void collectReflectors(int rays, double ox, double oy, double oz) {
+            ReflectorIndex idx = in.reflectors();
+            float[] albedo = in.triangleAlbedo();
+            boolean shaded = in.shadedGround();
+            double ga = in.groundAlbedo();
+            int c = 0;
+            double ghi = 0;
+            for (int s = 0; s < rays; s++) {
+                int k = cls[s];
+                if (k == HemisphereSampler.SKY) continue;
+                int t = tri[s];
+                double hx = ox + dir[3 * s] * dist[s], hy = oy + dir[3 * s + 1] * dist[s], hz = oz + dir[3 * s + 2] * dist[s];
+                if (t >= 0) {
+                    if (k == HemisphereSampler.GROUND && !shaded) {
+                        ghi += albedo[t];
+                        continue;
+                    }
+                    int rec = idx.onTriangle(t, hx, hy, hz);
+                    if (rec >= 0) refKey[c++] = ((long) rec << 32) | Float.floatToRawIntBits(albedo[t]);
+                } else if (t == Tracer.GROUND && shaded) {
+                    int probe = idx.probeAt(hx, hy);
+                    if (probe >= 0) refKey[c++] = ((long) probe << 32) | Float.floatToRawIntBits((float) ga);
+                    else ghi += ga;
+                } else {
+                    ghi += ga; // ground plane (unshaded mode) or a downward ray leaving a model without one
+                }
+            }
+            Arrays.sort(refKey, 0, c);
+            double inv = 1.0 / rays;
+            int m = 0;
+            for (int i = 0; i < c; ) {
+                long key = refKey[i];
+                int rec = (int) (key >>> 32);
+                double w = 0;
+                while (i < c && (int) (refKey[i] >>> 32) == rec) {
+                    w += Float.intBitsToFloat((int) refKey[i]) * inv;
+                    i++;
+                }
+                refIdx[m] = rec;
+                refW[m] = (float) w;
+                m++;
+            }
+            refCount = m;
+            ghiAlbedo = ghi * inv;
+        }
+
+        private double horizonVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {
+            double seen = 0, all = 0;
+            for (int h = 0; h < horizonCosElev.length; h++) {
+                double dx = horizonDir[3 * h], dy = horizonDir[3 * h + 1], dz = horizonDir[3 * h + 2];
+                double c = nx * dx + ny * dy + nz * dz;
+                if (c <= 0) continue;
+                double w = c * horizonCosElev[h];
+                all += w;
+                if (!tracer.occluded(ox, oy, oz, dx, dy, dz, Double.POSITIVE_INFINITY)) seen += w;
+            }
+            return all > 0 ? seen / all : 0;
+        }
+
+        private void sunVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {
+            float[] d = in.sun().directions;
+            for (int i = 0; i < vis.length; i++) {
+                double dx = d[3 * i], dy = d[3 * i + 1], dz = d[3 * i + 2];
+                if (nx * dx + ny * dy + nz * dz <= 0) {
+                    vis[i] = 0;
+                    continue;
+                }
+                vis[i] = tracer.occluded(ox, oy, oz, dx, dy, dz, Double.POSITIVE_INFINITY) ? (byte) 0 : (byte) 1;
+            }
+        }
+
+        private void accumulate(double nx, double ny, double nz, double cosTilt, double sinTilt, boolean analysed) {
+            StepTable st = in.steps();
+            Arrays.fill(beamSlot, 0);
+            Arrays.fill(circSlot, 0);
+            Arrays.fill(beamUSlot, 0);
+            Arrays.fill(circUSlot, 0);
+            float fnx = (float) nx, fny = (float) ny, fnz = (float) nz;
+            for (int s = 0; s < st.count; s++) {
+                double c = fnx * st.sx[s] + fny * st.sy[s] + fnz * st.sz[s];
+                if (c <= 0) continue;
+                int k = st.slot[s];
+                double b = st.beamWh[s] * c, cs = st.circumsolarWh[s] * SkyModel.circumsolarRatio(c, st.cosZenith[s]);
+                beamUSlot[k] += b;
+                circUSlot[k] += cs;
+                if (vis[st.direction[s]] != 0) {
+                    beamSlot[k] += b;
+                    circSlot[k] += cs;
+                }
+            }
+            double svf = vf.sky(), hz = sinTilt * horizonVis;
+            double svfU = (1 + cosTilt) / 2, gvfU = (1 - cosTilt) / 2;
+            Arrays.fill(beamMonth, 0);
+            Arrays.fill(diffMonth, 0);
+            double unshadedSum = 0, ga = in.groundAlbedo();
+            for (int k = 0; k < SLOTS; k++) {
+                double diff = Math.max(0, circSlot[k] + svf * st.backgroundWh[k] + hz * st.horizonWh[k]);
+                slotTotal[k] = (float) (beamSlot[k] + diff);
+                if (analysed) {
+                    beamMonth[k / 24] += beamSlot[k];
+                    diffMonth[k / 24] += diff;
+                    double diffU = Math.max(0, circUSlot[k] + svfU * st.backgroundWh[k] + sinTilt * st.horizonWh[k]);
+                    unshadedSum += beamUSlot[k] + diffU + ga * gvfU * st.ghiWh[k];
+                }
+            }
+            unshadedTotal = unshadedSum;
+        }
+    }
+}

@@ -1,0 +1,86 @@
+package org.solmass.irradiation;
+
+import org.solmass.climate.Step;
+import org.solmass.climate.WeatherSeries;
+import org.solmass.sky.SkyModel;
+
+/**
+ * The weather series flattened for the per-patch kernel: one entry per sun-up step with the sun
+ * vector, its direction index, its month-hour slot and its beam and circumsolar weights; and, summed
+ * per month-hour slot, the plane-independent parts (sky background, horizon band, GHI, hours).
+ *
+ * <p>Every weight is irradiance x step duration x the days the step stands for, so that summing
+ * {@code weight x geometry factor} over steps gives irradiation in Wh/m2 (see {@link Step}).
+ * A month-hour slot is {@code (month - 1) * 24 + floor(local standard hour)}: 288 slots.
+ */
+final class StepTable {
+    static final int SLOTS = 288;
+
+    final int count;
+    final float[] sx, sy, sz;
+    final int[] direction;
+    final int[] slot;
+    /** DNI x weighted hours, Wh/m2 per unit cos(incidence). */
+    final double[] beamWh;
+    /** DHI x F1 x weighted hours, Wh/m2 per unit circumsolar ratio ({@link SkyModel#circumsolarRatio}). */
+    final double[] circumsolarWh;
+    /** cos(zenith) of the step's sun. */
+    final float[] cosZenith;
+    /** Per slot: sky background diffuse x weighted hours, Wh/m2 per unit sky view factor. */
+    final double[] backgroundWh = new double[SLOTS];
+    /** Per slot: horizon-band diffuse x weighted hours, Wh/m2 per unit sin(tilt). */
+    final double[] horizonWh = new double[SLOTS];
+    /** Per slot: GHI x weighted hours, Wh/m2. */
+    final double[] ghiWh = new double[SLOTS];
+    /** Per slot: DHI x weighted hours, Wh/m2. */
+    final double[] dhiWh = new double[SLOTS];
+    /** Per slot: weighted hours (days x hours the slot stands for). */
+    final double[] hours = new double[SLOTS];
+
+    StepTable(WeatherSeries series, SunDirections dirs, SkyModel sky) {
+        int n = 0;
+        for (int s = 0; s < series.size(); s++) if (dirs.ofStep(s) >= 0) n++;
+        count = n;
+        sx = new float[n];
+        sy = new float[n];
+        sz = new float[n];
+        direction = new int[n];
+        slot = new int[n];
+        beamWh = new double[n];
+        circumsolarWh = new double[n];
+        cosZenith = new float[n];
+        int k = 0;
+        for (int s = 0; s < series.size(); s++) {
+            Step st = series.step(s);
+            int sl = slotOf(st);
+            double wh = st.weightedHours();
+            hours[sl] += wh;
+            ghiWh[sl] += st.ghiWm2() * wh;
+            dhiWh[sl] += st.dhiWm2() * wh;
+            double dhi = st.dhiWm2(), f1 = 0, f2 = 0;
+            if (dhi > 0) {
+                f1 = sky.circumsolarCoefficient(st);
+                f2 = sky.horizonCoefficient(st);
+                backgroundWh[sl] += dhi * (1 - f1) * wh;
+                horizonWh[sl] += dhi * f2 * wh;
+            }
+            int d = dirs.ofStep(s);
+            if (d < 0) continue;
+            var v = st.sun().direction();
+            sx[k] = (float) v.x();
+            sy[k] = (float) v.y();
+            sz[k] = (float) v.z();
+            direction[k] = d;
+            slot[k] = sl;
+            beamWh[k] = Math.max(0, st.dniWm2()) * wh;
+            circumsolarWh[k] = dhi > 0 ? dhi * f1 * wh : 0;
+            cosZenith[k] = (float) v.z();
+            k++;
+        }
+    }
+
+    static int slotOf(Step st) {
+        int h = Math.min(23, Math.max(0, (int) Math.floor(st.localStandardHour())));
+        return (st.month() - 1) * 24 + h;
+    }
+}
