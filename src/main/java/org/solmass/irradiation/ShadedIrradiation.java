@@ -112,24 +112,28 @@ public final class ShadedIrradiation {
                 double wr = wt[i], groundTerm = ga * gvfAll[r];
                 for (int k = 0; k < SLOTS; k++) refl[k] += wr * (firstPass[base + k] + groundTerm * st.ghiWh[k]);
             }
-            double tot = 0, ref = 0;
+            double[] reflMonth = new double[12];
             int base = p * SLOTS;
             for (int k = 0; k < SLOTS; k++) {
-                double t = firstPass[base + k] + refl[k]; // first pass of p: its beam + sky diffuse
-                monthly[k / 24][p] += t / 1000;
-                tot += t;
-                ref += refl[k];
-                if (monthHour != null) monthHour[base + k] = st.hours[k] > 0 ? (float) (t / st.hours[k]) : 0f;
+                reflMonth[k / 24] += refl[k];
+                if (monthHour != null) {
+                    double t = firstPass[base + k] + refl[k]; // first pass of p: its beam + sky diffuse
+                    monthHour[base + k] = st.hours[k] > 0 ? (float) (t / st.hours[k]) : 0f;
+                }
             }
-            double b = 0, dfs = 0;
+            double b = 0, dfs = 0, ref = 0;
             for (int m = 0; m < 12; m++) {
+                monthly[m][p] = (beamM[m][p] + diffM[m][p] + reflMonth[m]) / 1000;
                 b += beamM[m][p];
                 dfs += diffM[m][p];
+                ref += reflMonth[m];
             }
-            annual[p] = tot / 1000;
             beam[p] = b / 1000;
             diffuse[p] = dfs / 1000;
             reflected[p] = ref / 1000;
+            double tot = 0;
+            for (int m = 0; m < 12; m++) tot += monthly[m][p];
+            annual[p] = tot;
             long d = done.incrementAndGet();
             if (d % everyB == 0 || d == n) progress.advance(d);
         });
