@@ -7,6 +7,6 @@ final class Commands {
     private Commands() {}
 
     static List<Object> all() {
-        return List.of(new AnalyseCommand(), new SkyViewCommand(), new SunCommand(), new PlaneCommand());
+        return List.of(new AnalyseCommand(), new SkyViewCommand(), new SunCommand(), new PlaneCommand(), new MakeWeatherCommand());
     }
 }
