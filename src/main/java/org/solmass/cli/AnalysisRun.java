@@ -215,6 +215,10 @@ public final class AnalysisRun {
         tb.put("shading_loss_pct", "%", loss);
         tb.put("annual_kwh", "kWh", kwh);
         for (int m = 0; m < 12; m++) tb.put(String.format("m%02d_kwh_m2", m + 1), "kWh/m2", r.monthly()[m]);
+        double[] share = new double[n];
+        for (int p = 0; p < n; p++) share[p] = r.siteSunshineHours() > 0 ? 100 * r.sunshineHours()[p] / r.siteSunshineHours() : 0;
+        tb.put("sunshine_h", "h", r.sunshineHours());
+        tb.put("sunshine_share_pct", "%", share);
         return tb;
     }
 

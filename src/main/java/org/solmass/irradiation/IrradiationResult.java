@@ -17,12 +17,15 @@ package org.solmass.irradiation;
  * @param monthly total irradiation per month: [month 0..11][patch]
  * @param monthHourWm2 mean total irradiance per patch, month and hour of the day
  *                     (patch * 288 + month * 24 + hour); null unless asked for
+ * @param sunshineHours hours per year with DNI at or above 120 W/m2 (WMO) while the patch sees the sun
+ * @param siteSunshineHours the site's sunshine hours over the same period (unobstructed)
  * @param sunDirections number of sun directions rays were cast to per patch
  */
 public record IrradiationResult(double[] skyViewFactor, double[] groundViewFactor, double[] obstructionViewFactor,
                                 double[] skyViewStdError, double[] horizonVisibility,
                                 double[] annual, double[] beam, double[] diffuse, double[] reflected,
-                                double[] unshaded, double[][] monthly, float[] monthHourWm2, int sunDirections) {
+                                double[] unshaded, double[][] monthly, float[] monthHourWm2, double[] sunshineHours,
+                                double siteSunshineHours, int sunDirections) {
 
     public int size() { return annual.length; }
 

@@ -60,7 +60,7 @@ public final class ShadedIrradiation {
         double[] gvfAll = new double[total];
         double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
         double[][] beamM = new double[12][n], diffM = new double[12][n];
-        double[] unshaded = new double[n];
+        double[] unshaded = new double[n], sunshine = new double[n];
         int[][] refIdx = new int[n][];
         float[][] refW = new float[n][];
         float[] ghiAlbedo = new float[n];
@@ -85,6 +85,7 @@ public final class ShadedIrradiation {
                     diffM[m][r] = w.diffMonth[m];
                 }
                 unshaded[r] = w.unshadedTotal;
+                sunshine[r] = w.sunshineHours;
                 refIdx[r] = Arrays.copyOf(w.refIdx, w.refCount);
                 refW[r] = Arrays.copyOf(w.refW, w.refCount);
                 ghiAlbedo[r] = (float) w.ghiAlbedo;
@@ -139,7 +140,7 @@ public final class ShadedIrradiation {
         });
         for (int p = 0; p < n; p++) unshaded[p] /= 1000;
         return new IrradiationResult(svf, gvf, obs, se, hv, annual, beam, diffuse, reflected, unshaded,
-                monthly, monthHour, in.sun().count());
+                monthly, monthHour, sunshine, st.siteSunshineHours, in.sun().count());
     }
 
     /** Per-thread state: samplers, scratch arrays; no allocation per ray or per step. */
@@ -162,7 +163,7 @@ public final class ShadedIrradiation {
         final double[] horizonDir = new double[3 * HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
         final double[] horizonCosElev = new double[HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
         ViewFactors vf;
-        double horizonVis, unshadedTotal, ghiAlbedo;
+        double horizonVis, unshadedTotal, ghiAlbedo, sunshineHours;
         int refCount;
 
         Worker(org.solmass.scene.Scene scene, Inputs in) {
@@ -285,6 +286,7 @@ public final class ShadedIrradiation {
             Arrays.fill(beamUSlot, 0);
             Arrays.fill(circUSlot, 0);
             float fnx = (float) nx, fny = (float) ny, fnz = (float) nz;
+            double sun = 0;
             for (int s = 0; s < st.count; s++) {
                 double c = fnx * st.sx[s] + fny * st.sy[s] + fnz * st.sz[s];
                 if (c <= 0) continue;
@@ -295,8 +297,10 @@ public final class ShadedIrradiation {
                 if (vis[st.direction[s]] != 0) {
                     beamSlot[k] += b;
                     circSlot[k] += cs;
+                    sun += st.sunshineHours[s];
                 }
             }
+            sunshineHours = sun;
             double svf = vf.sky(), hz = sinTilt * horizonVis;
             double svfU = (1 + cosTilt) / 2, gvfU = (1 - cosTilt) / 2;
             Arrays.fill(beamMonth, 0);

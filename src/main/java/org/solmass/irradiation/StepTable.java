@@ -24,6 +24,16 @@ final class StepTable {
     final double[] beamWh;
     /** DHI x F1 x weighted hours, Wh/m2 per unit circumsolar ratio ({@link SkyModel#circumsolarRatio}). */
     final double[] circumsolarWh;
+    /**
+     * Hours of sunshine the step stands for: its weighted hours when DNI is at least
+     * {@link #SUNSHINE_DNI_WM2}, else 0 (WMO, Guide to Instruments and Methods of Observation,
+     * WMO-No. 8, ch. 8: sunshine duration is the time with direct normal irradiance of at least 120 W/m2).
+     */
+    final double[] sunshineHours;
+    /** Sunshine hours of the site over the whole series (same definition, unobstructed). */
+    final double siteSunshineHours;
+    /** The WMO threshold of sunshine duration, W/m2 of direct normal irradiance. */
+    static final double SUNSHINE_DNI_WM2 = 120;
     /** cos(zenith) of the step's sun. */
     final float[] cosZenith;
     /** Per slot: sky background diffuse x weighted hours, Wh/m2 per unit sky view factor. */
@@ -49,6 +59,8 @@ final class StepTable {
         beamWh = new double[n];
         circumsolarWh = new double[n];
         cosZenith = new float[n];
+        sunshineHours = new double[n];
+        double site = 0;
         int k = 0;
         for (int s = 0; s < series.size(); s++) {
             Step st = series.step(s);
@@ -75,8 +87,18 @@ final class StepTable {
             beamWh[k] = Math.max(0, st.dniWm2()) * wh;
             circumsolarWh[k] = dhi > 0 ? dhi * f1 * wh : 0;
             cosZenith[k] = (float) v.z();
+            if (isSunshine(st.dniWm2())) {
+                sunshineHours[k] = wh;
+                site += wh;
+            }
             k++;
         }
+        siteSunshineHours = site;
+    }
+
+    /** Whether a step's DNI counts as sunshine (at or above the WMO threshold). */
+    static boolean isSunshine(double dniWm2) {
+        return dniWm2 >= SUNSHINE_DNI_WM2;
     }
 
     static int slotOf(Step st) {
