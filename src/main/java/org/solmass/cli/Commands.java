@@ -7,6 +7,6 @@ final class Commands {
     private Commands() {}
 
     static List<Object> all() {
-        return List.of();
+        return List.of(new BenchCommand());
     }
 }
