@@ -116,18 +116,10 @@ public final class Tracer {
                 float b0 = n[b + 6 + loX] * ix - oix, b1 = n[b + 6 + hiX] * ix - oix;
                 float by0 = n[b + 6 + loY] * iy - oiy, by1 = n[b + 6 + hiY] * iy - oiy;
                 float bz0 = n[b + 6 + loZ] * iz - oiz, bz1 = n[b + 6 + hiZ] * iz - oiz;
-                if (ay0 > a0) a0 = ay0;
-                if (az0 > a0) a0 = az0;
-                if (a0 < 0f) a0 = 0f;
-                if (ay1 < a1) a1 = ay1;
-                if (az1 < a1) a1 = az1;
-                if (a1 > tMax) a1 = tMax;
-                if (by0 > b0) b0 = by0;
-                if (bz0 > b0) b0 = bz0;
-                if (b0 < 0f) b0 = 0f;
-                if (by1 < b1) b1 = by1;
-                if (bz1 < b1) b1 = bz1;
-                if (b1 > tMax) b1 = tMax;
+                a0 = Math.max(Math.max(a0, ay0), Math.max(az0, 0f)); // branch-free (intrinsic)
+                a1 = Math.min(Math.min(a1, ay1), Math.min(az1, tMax));
+                b0 = Math.max(Math.max(b0, by0), Math.max(bz0, 0f));
+                b1 = Math.min(Math.min(b1, by1), Math.min(bz1, tMax));
                 boolean hitA = a0 <= a1, hitB = b0 <= b1;
                 if (hitA) {
                     int ra = Float.floatToRawIntBits(n[b + 12]);
@@ -173,18 +165,10 @@ public final class Tracer {
                 float b0 = n[b + 6 + loX] * ix - oix, b1 = n[b + 6 + hiX] * ix - oix;
                 float by0 = n[b + 6 + loY] * iy - oiy, by1 = n[b + 6 + hiY] * iy - oiy;
                 float bz0 = n[b + 6 + loZ] * iz - oiz, bz1 = n[b + 6 + hiZ] * iz - oiz;
-                if (ay0 > a0) a0 = ay0;
-                if (az0 > a0) a0 = az0;
-                if (a0 < 0f) a0 = 0f;
-                if (ay1 < a1) a1 = ay1;
-                if (az1 < a1) a1 = az1;
-                if (a1 > bestT) a1 = bestT;
-                if (by0 > b0) b0 = by0;
-                if (bz0 > b0) b0 = bz0;
-                if (b0 < 0f) b0 = 0f;
-                if (by1 < b1) b1 = by1;
-                if (bz1 < b1) b1 = bz1;
-                if (b1 > bestT) b1 = bestT;
+                a0 = Math.max(Math.max(a0, ay0), Math.max(az0, 0f)); // branch-free (intrinsic)
+                a1 = Math.min(Math.min(a1, ay1), Math.min(az1, bestT));
+                b0 = Math.max(Math.max(b0, by0), Math.max(bz0, 0f));
+                b1 = Math.min(Math.min(b1, by1), Math.min(bz1, bestT));
                 boolean hitA = a0 <= a1, hitB = b0 <= b1;
                 if (hitA) {
                     int ra = Float.floatToRawIntBits(n[b + 12]);
