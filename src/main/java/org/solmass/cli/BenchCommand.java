@@ -91,7 +91,7 @@ public final class BenchCommand implements Runnable {
             SkyViewCalculator.compute(scene, ps, raysPerPatch, seed, null, null);
             double s = (System.nanoTime() - t0) / 1e9;
             int k = HemisphereSampler.roundedRayCount(raysPerPatch);
-            t.row("sky view factors", String.format(Locale.ROOT, "%,d patches x %,d rays: %.2f s wall clock (%s, %d-thread common pool)",
+            t.row("sky view factors", String.format(Locale.ROOT, "%,d patches x %,d rays: %.2f s wall clock (%s, parallel stream: %d pool threads + caller)",
                     patches, k, s, mrays((double) patches * k / s), java.util.concurrent.ForkJoinPool.getCommonPoolParallelism()));
         }
         t.print();
