@@ -7,6 +7,7 @@ final class Commands {
     private Commands() {}
 
     static List<Object> all() {
-        return List.of(new AnalyseCommand(), new SkyViewCommand(), new SunCommand(), new PlaneCommand(), new MakeWeatherCommand());
+        return List.of(new AnalyseCommand(), new SkyViewCommand(), new SunCommand(), new PlaneCommand(),
+                new MakeWeatherCommand(), new BenchCommand());
     }
 }

@@ -10,15 +10,18 @@ package org.solmass.scene;
  * taken; a node becomes a leaf when that cost is not below the leaf cost {@code N} and it holds at
  * most {@value #MAX_LEAF} triangles, or when its centroids coincide.
  *
- * <p>Node words (8 floats, see {@link Scene#NODE_WORDS}): 0-2 min corner, 3-5 max corner (padded by
- * a tiny margin so float rounding in the slab test never culls a hit), 6 = int bits of the second
- * child index (interior) or first triangle (leaf), 7 = int bits of {@code count << 2 | axis}
- * (count 0 = interior node split along axis). Both ints are small and non-negative, so their bit
- * patterns are never NaN and survive storage in a float array unchanged.
+ * <p>The build tree (8 floats per node: bounds, second child or first triangle, count) is then
+ * converted to the traversal layout described in {@link Scene}: each interior node holds both
+ * children's boxes (padded by a tiny margin so float rounding in the slab test never culls a hit) and
+ * references. Leaves hold at most {@value #MAX_LEAF_HARD} triangles.
  */
 final class BvhBuilder {
     static final int BINS = 16;
+    /** Words per node of the binary build tree: bounds(6), second child / first triangle, count/axis. */
+    private static final int BIN_WORDS = 8;
     static final int MAX_LEAF = 4;
+    /** Leaves never hold more than this (coincident centroids are split by index). */
+    static final int MAX_LEAF_HARD = 8;
     /** Traversal cost relative to one triangle test. */
     static final float C_TRAV = 1.0f;
 
@@ -66,9 +69,10 @@ final class BvhBuilder {
     }
 
     Result build() {
-        nodes = new float[Math.max(1, 2 * n - 1) * Scene.NODE_WORDS];
+        if (n >= 1 << 26) throw new IllegalArgumentException("too many triangles for one scene: " + n);
+        nodes = new float[Math.max(1, 2 * n - 1) * BIN_WORDS];
         if (n > 0) buildNode(0, n, 0);
-        float[] out = java.util.Arrays.copyOf(nodes, nodeCount * Scene.NODE_WORDS);
+        float[] out = toWide();
         float[] tris = new float[n * Scene.TRI_WORDS];
         int[] orig = new int[n];
         for (int i = 0; i < n; i++) {
@@ -82,13 +86,60 @@ final class BvhBuilder {
                 tris[d + 6 + k] = (float) ((soup[s + 6 + k] - shift[k]) - v0);
             }
         }
-        return new Result(out, tris, orig, nodeCount, maxDepth);
+        return new Result(out, tris, orig, wideCount, maxDepth);
+    }
+
+    // ---- conversion of the binary build tree to the traversal layout ----
+
+    private float[] wide;
+    private int wideCount;
+    private static final float EMPTY = 1e30f;
+
+    private boolean isLeaf(int node) {
+        return (Float.floatToRawIntBits(nodes[node * BIN_WORDS + 7]) >>> 2) > 0;
+    }
+
+    /** Traversal layout: one 16-word node per interior node of the build tree (see Scene). */
+    private float[] toWide() {
+        if (n == 0) return new float[0];
+        wide = new float[Math.max(1, nodeCount / 2) * Scene.NODE_WORDS];
+        if (isLeaf(0)) { // single leaf: a root whose second child is an empty (inverted) box
+            wideCount = 1;
+            writeChild(0, 0, 0);
+            for (int k = 0; k < 3; k++) { wide[6 + k] = EMPTY; wide[9 + k] = -EMPTY; }
+            wide[13] = wide[12];
+        } else {
+            emit(0);
+        }
+        return java.util.Arrays.copyOf(wide, wideCount * Scene.NODE_WORDS);
+    }
+
+    private int emit(int node) {
+        int w = wideCount++;
+        int second = Float.floatToRawIntBits(nodes[node * BIN_WORDS + 6]);
+        writeChild(w * Scene.NODE_WORDS, 0, node + 1);
+        writeChild(w * Scene.NODE_WORDS, 1, second);
+        return w;
+    }
+
+    /** Child {@code slot} (0 or 1) of the wide node at word {@code wb}: bounds and reference. */
+    private void writeChild(int wb, int slot, int child) {
+        System.arraycopy(nodes, child * BIN_WORDS, wide, wb + 6 * slot, 6);
+        int ref;
+        if (isLeaf(child)) {
+            int start = Float.floatToRawIntBits(nodes[child * BIN_WORDS + 6]);
+            int count = Float.floatToRawIntBits(nodes[child * BIN_WORDS + 7]) >>> 2;
+            ref = ((start << 3 | (count - 1)) << 1) | 1;
+        } else {
+            ref = emit(child) << 1;
+        }
+        wide[wb + 12 + slot] = Float.intBitsToFloat(ref);
     }
 
     private int buildNode(int start, int end, int depth) {
         int node = nodeCount++;
         maxDepth = Math.max(maxDepth, depth);
-        int b = node * Scene.NODE_WORDS;
+        int b = node * BIN_WORDS;
         float bx0 = Float.POSITIVE_INFINITY, by0 = bx0, bz0 = bx0, bx1 = Float.NEGATIVE_INFINITY, by1 = bx1, bz1 = bx1;
         float cx0 = Float.POSITIVE_INFINITY, cy0 = cx0, cz0 = cx0, cx1 = Float.NEGATIVE_INFINITY, cy1 = cx1, cz1 = cx1;
         for (int i = start; i < end; i++) {
@@ -102,6 +153,7 @@ final class BvhBuilder {
         nodes[b + 3] = bx1 + pad; nodes[b + 4] = by1 + pad; nodes[b + 5] = bz1 + pad;
         int count = end - start;
         if (count == 1) return leaf(b, start, count, node);
+        if (count > MAX_LEAF_HARD && allSameCentroid(start, end)) return split(b, node, start, (start + end) >>> 1, end, depth);
         float[] cmin = {cx0, cy0, cz0}, cext = {cx1 - cx0, cy1 - cy0, cz1 - cz0};
         float parentArea = Math.max(area(bx1 - bx0, by1 - by0, bz1 - bz0), Float.MIN_NORMAL);
         float bestCost = Float.POSITIVE_INFINITY;
@@ -151,7 +203,7 @@ final class BvhBuilder {
                 }
             }
         }
-        if (bestAxis < 0) return leaf(b, start, count, node); // all centroids coincide
+        if (bestAxis < 0) return leaf(b, start, count, node); // all centroids coincide (count <= 8 here)
         if (count <= MAX_LEAF && !(bestCost < count)) return leaf(b, start, count, node);
         // partition idx[start,end) by bin <= bestSplit
         float scale = BINS / cext[bestAxis];
@@ -162,11 +214,24 @@ final class BvhBuilder {
         }
         int mid = i;
         if (mid == start || mid == end) mid = (start + end) >>> 1; // cannot happen with a valid split
+        return split(b, node, start, mid, end, depth);
+    }
+
+    private int split(int b, int node, int start, int mid, int end, int depth) {
         buildNode(start, mid, depth + 1);
         int second = buildNode(mid, end, depth + 1);
         nodes[b + 6] = Float.intBitsToFloat(second);
-        nodes[b + 7] = Float.intBitsToFloat(bestAxis);
+        nodes[b + 7] = Float.intBitsToFloat(0);
         return node;
+    }
+
+    private boolean allSameCentroid(int start, int end) {
+        int t0 = idx[start];
+        for (int i = start + 1; i < end; i++) {
+            int t = idx[i];
+            if (cen[3 * t] != cen[3 * t0] || cen[3 * t + 1] != cen[3 * t0 + 1] || cen[3 * t + 2] != cen[3 * t0 + 2]) return false;
+        }
+        return true;
     }
 
     private int leaf(int b, int start, int count, int node) {

@@ -162,8 +162,9 @@ public final class HemisphereSampler {
 
     /**
      * Classes only (no distances), for view factors. Without ground-flagged triangles this needs
-     * only any-hit queries: an upward ray is BLOCK if occluded, a downward one BLOCK if occluded
-     * before the ground plane; otherwise it is SKY or GROUND as in the class doc.
+     * only any-hit queries: a ray is BLOCK if a triangle lies before the ground plane (or anywhere,
+     * when it never meets the plane), GROUND if it then meets the plane, otherwise SKY or GROUND by
+     * the sign of dz as in the class doc. Gives the same classes as {@link #sample}.
      */
     public void classify(Patch patch, long runSeed, boolean[] triangleIsGround, double[] dir, int[] cls) {
         scene.rayOrigin(patch, origin);
@@ -173,16 +174,16 @@ public final class HemisphereSampler {
             double dx = dir[3 * s], dy = dir[3 * s + 1], dz = dir[3 * s + 2];
             if (triangleIsGround != null) {
                 cls[s] = classOf(tracer.closestHit(ox, oy, oz, dx, dy, dz, Double.POSITIVE_INFINITY), dz, triangleIsGround);
-            } else if (dz >= 0) {
-                cls[s] = tracer.occluded(ox, oy, oz, dx, dy, dz, Double.POSITIVE_INFINITY) ? BLOCK : SKY;
-            } else {
-                double tg = Double.POSITIVE_INFINITY;
-                if (scene.hasGroundPlane()) {
-                    double t = (scene.groundZ() - oz) / dz;
-                    if (t > 0) tg = t;
-                }
-                cls[s] = tracer.occluded(ox, oy, oz, dx, dy, dz, tg) ? BLOCK : GROUND;
+                continue;
             }
+            double tg = Double.POSITIVE_INFINITY; // ray parameter of the ground plane, from either side
+            if (scene.hasGroundPlane() && dz != 0) {
+                double t = (scene.groundZ() - oz) / dz;
+                if (t > 0) tg = t;
+            }
+            if (tracer.occluded(ox, oy, oz, dx, dy, dz, tg)) cls[s] = BLOCK; // a triangle before the plane
+            else if (tg < Double.POSITIVE_INFINITY) cls[s] = GROUND;
+            else cls[s] = dz < 0 ? GROUND : SKY;
         }
     }
 }

@@ -10,8 +10,10 @@ import org.solmass.surface.Patch;
  * <p>Layout (see docs/scene.md): the BVH is built with a binned surface-area heuristic
  * (Wald, 2007, "On fast construction of SAH-based bounding volume hierarchies", IEEE Symposium on
  * Interactive Ray Tracing) and flattened depth-first into one linear array, the first child right
- * after its parent and the parent storing the second child's offset (Pharr, Jakob and Humphreys,
- * Physically Based Rendering, 3rd ed., 2016, section 4.3.4 "Compact BVH for traversal"). Triangles are
+ * after its parent (Pharr, Jakob and Humphreys, Physically Based Rendering, 3rd ed., 2016,
+ * section 4.3.4 "Compact BVH for traversal"); each node stores both children's boxes so one node
+ * fetch tests two boxes and only boxes that are hit are pushed (the node layout of Aila and Laine,
+ * 2009, "Understanding the efficiency of ray traversal on GPUs", High Performance Graphics). Triangles are
  * reordered into leaf order and stored as vertex 0 plus the two edge vectors for the
  * Moller-Trumbore test.
  *
@@ -22,8 +24,14 @@ import org.solmass.surface.Patch;
  * <p>Immutable and thread-safe; each thread queries through its own {@link Tracer}.
  */
 public final class Scene {
-    /** Words per BVH node in {@link #nodes}: min x,y,z, max x,y,z, offset bits, count/axis bits. */
-    static final int NODE_WORDS = 8;
+    /**
+     * Words per BVH node in {@link #nodes} (64 bytes, one cache line): child A min x,y,z, max x,y,z;
+     * child B min x,y,z, max x,y,z; child A reference; child B reference; 2 unused. A reference is the
+     * int bit pattern of {@code node << 1} for an interior child, or of
+     * {@code (firstTriangle << 3 | (count - 1)) << 1 | 1} for a leaf of 1..8 triangles; both are
+     * non-negative ints below 2^31 - 2^23, never a NaN pattern, so they survive float storage.
+     */
+    static final int NODE_WORDS = 16;
     /** Floats per triangle in {@link #tris}: v0 x,y,z, e1 = v1-v0, e2 = v2-v0. */
     static final int TRI_WORDS = 9;
 
@@ -106,6 +114,7 @@ public final class Scene {
 
     public int triangleCount() { return triangleCount; }
 
+    /** Interior BVH nodes (each holds its two children's boxes). */
     public int nodeCount() { return nodeCount; }
 
     /** Depth of the deepest BVH leaf (root = 0). */

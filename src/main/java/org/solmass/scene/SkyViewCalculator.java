@@ -30,6 +30,11 @@ import java.util.stream.IntStream;
 public final class SkyViewCalculator {
     private SkyViewCalculator() {}
 
+    /** {@link #compute(Scene, List, int, long, boolean[], IntConsumer)} with no ground-flagged triangles and no progress. */
+    public static ViewFactors[] compute(Scene scene, List<Patch> patches, int raysPerPatch, long seed) {
+        return compute(scene, patches, raysPerPatch, seed, null, null);
+    }
+
     /**
      * View factors of every patch, index = position in {@code patches}.
      *

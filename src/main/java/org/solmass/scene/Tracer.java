@@ -6,9 +6,9 @@ package org.solmass.scene;
  * make one per thread with {@link Scene#tracer()}.
  *
  * <p>Traversal is the stack-based ordered traversal of Pharr, Jakob and Humphreys, Physically Based
- * Rendering, 3rd ed., 2016, section 4.3.5: slab test with a precomputed inverse direction (Kay and
- * Kajiya, 1986, SIGGRAPH "Ray tracing complex scenes"), near child first according to the sign of
- * the direction on the node's split axis. Triangles: Moller and Trumbore, 1997, "Fast, minimum
+ * Rendering, 3rd ed., 2016, section 4.3.5, on nodes that hold both children's boxes: slab test with a
+ * precomputed inverse direction (Kay and Kajiya, 1986, SIGGRAPH "Ray tracing complex scenes") of both
+ * children at once, the nearer child entered first and the farther pushed only if its box is hit. Triangles: Moller and Trumbore, 1997, "Fast, minimum
  * storage ray-triangle intersection", Journal of Graphics Tools 2(1), two-sided (no culling of
  * back faces). Intersections run in float on coordinates relative to the scene centre.
  *
@@ -27,6 +27,7 @@ public final class Tracer {
     private final float[] nodes;
     private final float[] tris;
     private final int[] stack;
+    private final float[] stackT;
     private double hitT = Double.POSITIVE_INFINITY, hitU, hitV;
     private int hitTriangle = MISS;
 
@@ -35,6 +36,7 @@ public final class Tracer {
         this.nodes = scene.nodes;
         this.tris = scene.tris;
         this.stack = new int[scene.maxDepth + 2];
+        this.stackT = new float[scene.maxDepth + 2];
     }
 
     public Scene scene() { return scene; }
@@ -100,82 +102,96 @@ public final class Tracer {
         float ix = 1f / (Math.abs(dx) < TINY_DIR ? Math.copySign(TINY_DIR, dx) : dx);
         float iy = 1f / (Math.abs(dy) < TINY_DIR ? Math.copySign(TINY_DIR, dy) : dy);
         float iz = 1f / (Math.abs(dz) < TINY_DIR ? Math.copySign(TINY_DIR, dz) : dz);
-        int negMask = (ix < 0 ? 1 : 0) | (iy < 0 ? 2 : 0) | (iz < 0 ? 4 : 0);
         int loX = ix < 0 ? 3 : 0, hiX = 3 - loX;
         int loY = iy < 0 ? 4 : 1, hiY = 5 - loY;
         int loZ = iz < 0 ? 5 : 2, hiZ = 7 - loZ;
         float oix = ox * ix, oiy = oy * iy, oiz = oz * iz;
-        int sp = 0, node = 0;
+        int sp = 0, ref = 0;
         while (true) {
-            int b = node << 3;
-            float t0 = n[b + loX] * ix - oix, t1 = n[b + hiX] * ix - oix;
-            float ty0 = n[b + loY] * iy - oiy, ty1 = n[b + hiY] * iy - oiy;
-            float tz0 = n[b + loZ] * iz - oiz, tz1 = n[b + hiZ] * iz - oiz;
-            if (ty0 > t0) t0 = ty0;
-            if (tz0 > t0) t0 = tz0;
-            if (ty1 < t1) t1 = ty1;
-            if (tz1 < t1) t1 = tz1;
-            if (t0 < 0f) t0 = 0f;
-            if (t1 > tMax) t1 = tMax;
-            if (t0 <= t1) {
-                int off = Float.floatToRawIntBits(n[b + 6]);
-                int w = Float.floatToRawIntBits(n[b + 7]);
-                int cnt = w >>> 2;
-                if (cnt == 0) {
-                    if (((negMask >> (w & 3)) & 1) != 0) { st[sp++] = node + 1; node = off; }
-                    else { st[sp++] = off; node = node + 1; }
+            if ((ref & 1) == 0) {
+                int b = (ref >>> 1) << 4;
+                float a0 = n[b + loX] * ix - oix, a1 = n[b + hiX] * ix - oix;
+                float ay0 = n[b + loY] * iy - oiy, ay1 = n[b + hiY] * iy - oiy;
+                float az0 = n[b + loZ] * iz - oiz, az1 = n[b + hiZ] * iz - oiz;
+                float b0 = n[b + 6 + loX] * ix - oix, b1 = n[b + 6 + hiX] * ix - oix;
+                float by0 = n[b + 6 + loY] * iy - oiy, by1 = n[b + 6 + hiY] * iy - oiy;
+                float bz0 = n[b + 6 + loZ] * iz - oiz, bz1 = n[b + 6 + hiZ] * iz - oiz;
+                a0 = Math.max(Math.max(a0, ay0), Math.max(az0, 0f)); // branch-free (intrinsic)
+                a1 = Math.min(Math.min(a1, ay1), Math.min(az1, tMax));
+                b0 = Math.max(Math.max(b0, by0), Math.max(bz0, 0f));
+                b1 = Math.min(Math.min(b1, by1), Math.min(bz1, tMax));
+                boolean hitA = a0 <= a1, hitB = b0 <= b1;
+                if (hitA) {
+                    int ra = Float.floatToRawIntBits(n[b + 12]);
+                    if (hitB) {
+                        int rb = Float.floatToRawIntBits(n[b + 13]);
+                        if (b0 < a0) { st[sp++] = ra; ref = rb; } else { st[sp++] = rb; ref = ra; }
+                    } else {
+                        ref = ra;
+                    }
                     continue;
                 }
-                for (int i = off, e = off + cnt; i < e; i++) {
+                if (hitB) { ref = Float.floatToRawIntBits(n[b + 13]); continue; }
+            } else {
+                int first = ref >>> 4, end = first + ((ref >>> 1) & 7) + 1;
+                for (int i = first; i < end; i++) {
                     if (intersect(t, i, ox, oy, oz, dx, dy, dz, tMax, false) > 0f) return true;
                 }
             }
             if (sp == 0) return false;
-            node = st[--sp];
+            ref = st[--sp];
         }
     }
 
     /** Closest triangle (leaf-order index) with t in (0, tMax), or -1. */
     private int closest(float ox, float oy, float oz, float dx, float dy, float dz, float tMax) {
-        final float[] n = nodes, t = tris;
+        final float[] n = nodes, t = tris, stT = stackT;
         final int[] st = stack;
         float ix = 1f / (Math.abs(dx) < TINY_DIR ? Math.copySign(TINY_DIR, dx) : dx);
         float iy = 1f / (Math.abs(dy) < TINY_DIR ? Math.copySign(TINY_DIR, dy) : dy);
         float iz = 1f / (Math.abs(dz) < TINY_DIR ? Math.copySign(TINY_DIR, dz) : dz);
-        int negMask = (ix < 0 ? 1 : 0) | (iy < 0 ? 2 : 0) | (iz < 0 ? 4 : 0);
         int loX = ix < 0 ? 3 : 0, hiX = 3 - loX;
         int loY = iy < 0 ? 4 : 1, hiY = 5 - loY;
         int loZ = iz < 0 ? 5 : 2, hiZ = 7 - loZ;
         float oix = ox * ix, oiy = oy * iy, oiz = oz * iz;
-        int sp = 0, node = 0, best = -1;
+        int sp = 0, ref = 0, best = -1;
         float bestT = tMax;
         while (true) {
-            int b = node << 3;
-            float t0 = n[b + loX] * ix - oix, t1 = n[b + hiX] * ix - oix;
-            float ty0 = n[b + loY] * iy - oiy, ty1 = n[b + hiY] * iy - oiy;
-            float tz0 = n[b + loZ] * iz - oiz, tz1 = n[b + hiZ] * iz - oiz;
-            if (ty0 > t0) t0 = ty0;
-            if (tz0 > t0) t0 = tz0;
-            if (ty1 < t1) t1 = ty1;
-            if (tz1 < t1) t1 = tz1;
-            if (t0 < 0f) t0 = 0f;
-            if (t1 > bestT) t1 = bestT;
-            if (t0 <= t1) {
-                int off = Float.floatToRawIntBits(n[b + 6]);
-                int w = Float.floatToRawIntBits(n[b + 7]);
-                int cnt = w >>> 2;
-                if (cnt == 0) {
-                    if (((negMask >> (w & 3)) & 1) != 0) { st[sp++] = node + 1; node = off; }
-                    else { st[sp++] = off; node = node + 1; }
+            if ((ref & 1) == 0) {
+                int b = (ref >>> 1) << 4;
+                float a0 = n[b + loX] * ix - oix, a1 = n[b + hiX] * ix - oix;
+                float ay0 = n[b + loY] * iy - oiy, ay1 = n[b + hiY] * iy - oiy;
+                float az0 = n[b + loZ] * iz - oiz, az1 = n[b + hiZ] * iz - oiz;
+                float b0 = n[b + 6 + loX] * ix - oix, b1 = n[b + 6 + hiX] * ix - oix;
+                float by0 = n[b + 6 + loY] * iy - oiy, by1 = n[b + 6 + hiY] * iy - oiy;
+                float bz0 = n[b + 6 + loZ] * iz - oiz, bz1 = n[b + 6 + hiZ] * iz - oiz;
+                a0 = Math.max(Math.max(a0, ay0), Math.max(az0, 0f)); // branch-free (intrinsic)
+                a1 = Math.min(Math.min(a1, ay1), Math.min(az1, bestT));
+                b0 = Math.max(Math.max(b0, by0), Math.max(bz0, 0f));
+                b1 = Math.min(Math.min(b1, by1), Math.min(bz1, bestT));
+                boolean hitA = a0 <= a1, hitB = b0 <= b1;
+                if (hitA) {
+                    int ra = Float.floatToRawIntBits(n[b + 12]);
+                    if (hitB) {
+                        int rb = Float.floatToRawIntBits(n[b + 13]);
+                        if (b0 < a0) { stT[sp] = a0; st[sp++] = ra; ref = rb; } else { stT[sp] = b0; st[sp++] = rb; ref = ra; }
+                    } else {
+                        ref = ra;
+                    }
                     continue;
                 }
-                for (int i = off, e = off + cnt; i < e; i++) {
+                if (hitB) { ref = Float.floatToRawIntBits(n[b + 13]); continue; }
+            } else {
+                int first = ref >>> 4, end = first + ((ref >>> 1) & 7) + 1;
+                for (int i = first; i < end; i++) {
                     float h = intersect(t, i, ox, oy, oz, dx, dy, dz, bestT, false);
                     if (h > 0f) { bestT = h; best = i; }
                 }
             }
-            if (sp == 0) return best;
-            node = st[--sp];
+            do { // pop, skipping entries that start beyond the closest hit so far
+                if (sp == 0) return best;
+                ref = st[--sp];
+            } while (stT[sp] > bestT);
         }
     }
 

@@ -84,8 +84,9 @@ class ViewFactorPropertyTest {
         // closest-hit path does (same directions, same scene)
         Object[] c = randomCase(11);
         SceneFixtures f = (SceneFixtures) c[0];
-        for (boolean plane : new boolean[] {true, false}) {
-            Scene s = Scene.build(f.model(), plane, 0.0);
+        // ground plane at 0, none, and at 8 m (some patches then lie below it and look up through it)
+        for (double gz : new double[] {0, Double.NaN, 8}) {
+            Scene s = Scene.build(f.model(), !Double.isNaN(gz), Double.isNaN(gz) ? 0 : gz);
             HemisphereSampler hs = new HemisphereSampler(s, 400);
             int n = hs.rayCount();
             double[] d1 = new double[3 * n], d2 = new double[3 * n], dist = new double[n];
