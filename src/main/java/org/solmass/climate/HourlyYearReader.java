@@ -85,8 +85,9 @@ final class HourlyYearReader {
         }
         List<Step> steps = new ArrayList<>(n);
         Instant first = start(t[0], step, spec.intervalLabel());
+        SolarCalculator.SunUp[] up = calc.sunUpSequence(first, step, n);
         for (int k = 0; k < n; k++) {
-            Slot s = Slot.of(calc, off, first.plusSeconds(k * step), step, 1);
+            Slot s = Slot.of(up[k], off, first.plusSeconds(k * step), step, 1);
             double[] c = Components.check(s, v[0][k], v[2][k], v[1][k], rep, where[k]);
             double g = c[0], dn = c[1], dh = c[2];
             double[] r;

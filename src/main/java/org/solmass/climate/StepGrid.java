@@ -50,8 +50,10 @@ final class StepGrid {
         int n = Year.of(year).length() * 1440 / stepMinutes;
         LocalDateTime t0 = LocalDate.of(year, 1, 1).atStartOfDay();
         List<Slot> slots = new ArrayList<>(n);
+        Instant first = t0.toInstant(off);
+        SolarCalculator.SunUp[] up = calc.sunUpSequence(first, stepMinutes * 60L, n);
         for (int k = 0; k < n; k++) {
-            slots.add(Slot.of(calc, off, t0.plusMinutes((long) k * stepMinutes).toInstant(off), stepMinutes * 60L, 1));
+            slots.add(Slot.of(up[k], off, first.plusSeconds(k * stepMinutes * 60L), stepMinutes * 60L, 1));
         }
         return slots;
     }

@@ -68,9 +68,28 @@ public final class SolarCalculator {
      * @param durationSec interval length, seconds
      */
     public SunUp sunUp(Instant start, long durationSec) {
-        Instant end = start.plusSeconds(durationSec);
+        return sunUp(start, durationSec, at(start), at(start.plusSeconds(durationSec)));
+    }
+
+    /**
+     * {@link #sunUp(Instant, long)} for n contiguous intervals of equal length from {@code first}:
+     * each boundary position is computed once.
+     */
+    public SunUp[] sunUpSequence(Instant first, long durationSec, int n) {
+        SunUp[] out = new SunUp[n];
+        SunPosition prev = at(first);
+        for (int k = 0; k < n; k++) {
+            Instant s = first.plusSeconds(k * durationSec);
+            SunPosition next = at(s.plusSeconds(durationSec));
+            out[k] = sunUp(s, durationSec, prev, next);
+            prev = next;
+        }
+        return out;
+    }
+
+    private SunUp sunUp(Instant start, long durationSec, SunPosition pStart, SunPosition pEnd) {
         Instant mid = start.plusSeconds(durationSec / 2);
-        SunPosition pStart = at(start), pEnd = at(end), pMid = at(mid);
+        SunPosition pMid = at(mid);
         boolean upS = up(pStart), upE = up(pEnd), upM = up(pMid);
         double riseSec, setSec; // sun-up part [riseSec, setSec] from start
         if (upS && upE) {
