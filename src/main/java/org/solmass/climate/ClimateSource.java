@@ -52,8 +52,9 @@ public final class ClimateSource {
             if (s.sunUpFraction() <= 0) { steps.add(s.toStep(0, 0, 0, Double.NaN)); continue; }
             double cz = Math.max(0, s.sun().cosZenith());
             double tb = sky[s.month() - 1].beamTransmittance(cz);
-            double dni = Components.lowSun(s) ? 0 : s.extraNormalWm2() * tb * s.sunUpFraction();
+            double dni = s.extraNormalWm2() * tb * s.sunUpFraction();
             double dhi = s.extraNormalWm2() * cz * ClearSky.diffuseTransmittance(tb) * s.sunUpFraction();
+            if (Components.lowSun(s)) { dhi += dni * cz; dni = 0; } // low-sun cut-off: beam counted as diffuse
             steps.add(s.toStep(dni * cz + dhi, dni, dhi, Double.NaN));
         }
         String what = spec.timeBase() == TimeBase.AVERAGE_DAYS ? "average days" : "year " + spec.year();
