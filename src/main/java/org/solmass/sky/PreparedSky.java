@@ -13,6 +13,8 @@ import org.solmass.sun.SunPosition;
  * <p>Per step on an unobstructed plane (W/m2): beam = DNI max(0, n.s) (Duffie &amp; Beckman 2013
  * eq. 2.15.1 first term, written with DNI); sky diffuse per {@link SkyModel} clamped at 0;
  * ground-reflected = albedo GHI (1 - cos b)/2 (Liu &amp; Jordan 1963; D&amp;B eq. 2.15.1 third term).
+ *
+ * <p>Immutable after construction: one instance may be shared by all threads of a run.
  */
 public final class PreparedSky {
     private final int n;
@@ -74,6 +76,8 @@ public final class PreparedSky {
     public double sunX(int i) { return sx[i]; }
     public double sunY(int i) { return sy[i]; }
     public double sunZ(int i) { return sz[i]; }
+    /** Whether the sun is up during step i (its sun-up middle is above the horizon): cast sun rays only then. */
+    public boolean sunUp(int i) { return sz[i] > 0; }
     public double dni(int i) { return dni[i]; }
     public double dhi(int i) { return dhi[i]; }
     public double ghi(int i) { return ghi[i]; }
