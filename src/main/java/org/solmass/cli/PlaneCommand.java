@@ -61,6 +61,9 @@ public final class PlaneCommand implements Callable<Integer> {
         if (spec.kind() == ClimateSpec.Kind.FILE && !java.nio.file.Files.isRegularFile(spec.file())) {
             throw new InputException("--climate", "no such file '" + climate + "' (expected clear-sky or a climate CSV file)");
         }
+        if (spec.kind() == ClimateSpec.Kind.FILE && !timeBase.equals("average-days")) {
+            throw new InputException("--time-base", "applies to --climate clear-sky only (a file's format sets its time base)");
+        }
         if (spec.kind() == ClimateSpec.Kind.CLEAR_SKY) {
             switch (timeBase) {
                 case "average-days": break;

@@ -52,8 +52,9 @@ public final class ClimateSource {
             if (s.sunUpFraction() <= 0) { steps.add(s.toStep(0, 0, 0, Double.NaN)); continue; }
             double cz = Math.max(0, s.sun().cosZenith());
             double tb = sky[s.month() - 1].beamTransmittance(cz);
-            double dni = Components.lowSun(s) ? 0 : s.extraNormalWm2() * tb * s.sunUpFraction();
+            double dni = s.extraNormalWm2() * tb * s.sunUpFraction();
             double dhi = s.extraNormalWm2() * cz * ClearSky.diffuseTransmittance(tb) * s.sunUpFraction();
+            if (Components.lowSun(s)) { dhi += dni * cz; dni = 0; } // low-sun cut-off: beam counted as diffuse
             steps.add(s.toStep(dni * cz + dhi, dni, dhi, Double.NaN));
         }
         String what = spec.timeBase() == TimeBase.AVERAGE_DAYS ? "average days" : "year " + spec.year();
@@ -84,9 +85,16 @@ public final class ClimateSource {
             double[] g = new double[24], d = new double[24];
             for (int h = 0; h < 24; h++) { g[h] = v[m][h][0]; d[h] = v[m][h][1]; }
             moveNightValues(day, g, d, rep, where[m]);
+            double dayWh = 0;
+            for (int h = 0; h < 24; h++) dayWh += g[h];
+            double h0 = SolarGeometry.dailyExtraterrestrialWhM2(calc.site().latitudeDeg(), SolarGeometry.kleinDayOfYear(m + 1));
+            if (dayWh > 0 && dayWh >= h0) {
+                throw new InputException(csv.name, String.format("month %d: the day total of the table, %.0f Wh/m2, is not below the extraterrestrial"
+                        + " daily irradiation %.0f Wh/m2 of the month's average day", m + 1, dayWh, h0));
+            }
             for (int h = 0; h < 24; h++) {
                 Slot s = day.get(h);
-                double[] c = Components.check(s, g[h], Double.NaN, d[h], rep, where[m][h]);
+                double[] c = Components.check(s, g[h], Double.NaN, d[h], rep, where[m][h], false);
                 double[] r = Components.fromGhiDhi(s, c[0], c[2], rep, where[m][h]);
                 steps.add(s.toStep(r[0], r[1], r[2], v[m][h][2]));
             }

@@ -85,6 +85,15 @@ public final class Components {
      * set to 0 / clipped and reported. Returns the repaired {ghi, dni, dhi} (NaN kept).
      */
     static double[] check(Slot s, double ghi, double dni, double dhi, ClimateReport.Builder rep, String where) {
+        return check(s, ghi, dni, dhi, rep, where, true);
+    }
+
+    /**
+     * As above; {@code stepGhiLimit = false} replaces the per-step GHI limit by GHI &lt;= G0n (for
+     * monthly mean hours, whose sunrise hours hold light of other days of the month; their
+     * daily total is checked against H0 instead).
+     */
+    static double[] check(Slot s, double ghi, double dni, double dhi, ClimateReport.Builder rep, String where, boolean stepGhiLimit) {
         double[] v = {ghi, dni, dhi};
         String[] names = {"GHI", "DNI", "DHI"};
         for (int i = 0; i < 3; i++) {
@@ -101,7 +110,7 @@ public final class Components {
             }
         }
         if (!Double.isNaN(v[0])) {
-            double limit = GHI_LIMIT_FACTOR * s.extraHorizontalWm2() + GHI_LIMIT_SLACK_WM2;
+            double limit = stepGhiLimit ? GHI_LIMIT_FACTOR * s.extraHorizontalWm2() + GHI_LIMIT_SLACK_WM2 : s.extraNormalWm2();
             if (s.sunUpFraction() > 0 && v[0] > limit) {
                 throw new InputException(where, String.format("GHI = %.1f W/m2 is above what the extraterrestrial irradiance allows (%.1f W/m2 with %.2f x extraterrestrial horizontal + %.0f)",
                         v[0], limit, GHI_LIMIT_FACTOR, GHI_LIMIT_SLACK_WM2));

@@ -58,35 +58,37 @@ final class HourlyYearReader {
         double[][] v = new double[4][n];
         for (double[] a : v) Arrays.fill(a, Double.NaN);
         String[] where = new String[n];
-        boolean[] present = new boolean[n];
         for (int i = 0; i < n0; i++) {
             CsvLines.Line l = csv.rows.get(i);
             long d = Duration.between(t[0], t[i]).getSeconds();
             if (d % step != 0) throw new InputException(csv.at(l), "timestamp is not on the " + step / 60 + "-minute grid of the first rows");
             int k = (int) (d / step);
-            present[k] = true;
             where[k] = csv.at(l);
             int[] cols = {cg, cd, cn, cT};
             String[] names = {"ghi", "dhi", "dni", "temp"};
             for (int c = 0; c < 4; c++) if (cols[c] >= 0) v[c][k] = csv.number(l, cols[c], names[c], true);
         }
         ClimateReport.Builder rep = new ClimateReport.Builder();
+        String[] missingAt = new String[n];
         for (int k = 0; k < n; k++) {
-            if (where[k] == null) where[k] = csv.name + ": missing step at " + LocalDateTime.ofInstant(t[0].plusSeconds(k * step), off)
-                    + " (after " + lastBefore(where, k) + ")";
+            if (where[k] == null) {
+                where[k] = where[k - 1]; // the line before the gap
+                missingAt[k] = LocalDateTime.ofInstant(t[0].plusSeconds(k * step), off).toString();
+            }
         }
         int[] cols = {cg, cd, cn, cT};
         String[] names = {"GHI", "DHI", "DNI", "temperature"};
-        for (int c = 0; c < 4; c++) if (cols[c] >= 0) fill(v[c], names[c], present, where, spec.fillGapsMaxSteps(), rep);
-        for (int k = 0; k < n; k++) if (!present[k]) rep.repair("missing steps filled by linear interpolation", where[k]);
+        for (int c = 0; c < 4; c++) if (cols[c] >= 0) fill(v[c], names[c], missingAt, where, spec.fillGapsMaxSteps(), rep);
+        for (int k = 0; k < n; k++) if (missingAt[k] != null) rep.repair("missing steps filled by linear interpolation", missingAt[k]);
         double hours = n * step / 3600.0;
         if (Math.abs(hours - 8760) > 1e-6 && Math.abs(hours - 8784) > 1e-6) {
             rep.warn(String.format("the file covers %.1f h, not a whole year (8760 or 8784 h): sums are over the file's period", hours));
         }
         List<Step> steps = new ArrayList<>(n);
         Instant first = start(t[0], step, spec.intervalLabel());
+        SolarCalculator.SunUp[] up = calc.sunUpSequence(first, step, n);
         for (int k = 0; k < n; k++) {
-            Slot s = Slot.of(calc, off, first.plusSeconds(k * step), step, 1);
+            Slot s = Slot.of(up[k], off, first.plusSeconds(k * step), step, 1);
             double[] c = Components.check(s, v[0][k], v[2][k], v[1][k], rep, where[k]);
             double g = c[0], dn = c[1], dh = c[2];
             double[] r;
@@ -103,22 +105,18 @@ final class HourlyYearReader {
                 + step / 60 + "-minute steps, labels at interval " + spec.intervalLabel().name().toLowerCase(Locale.ROOT) + ")", rep.build());
     }
 
-    private static String lastBefore(String[] where, int k) {
-        for (int j = k - 1; j >= 0; j--) if (where[j] != null && !where[j].contains("missing step")) return where[j];
-        return "the start";
-    }
-
     /** Linear interpolation over runs of NaN no longer than maxRun with values on both sides; else an error. */
-    private static void fill(double[] a, String name, boolean[] present, String[] where, int maxRun, ClimateReport.Builder rep) {
+    private static void fill(double[] a, String name, String[] missingAt, String[] where, int maxRun, ClimateReport.Builder rep) {
         int n = a.length;
         for (int i = 0; i < n; ) {
             if (!Double.isNaN(a[i])) { i++; continue; }
             int j = i;
             while (j < n && Double.isNaN(a[j])) j++;
             int run = j - i;
-            boolean missingRows = !present[i];
+            boolean missingRows = missingAt[i] != null;
             if (run > maxRun || i == 0 || j == n) {
                 throw new InputException(where[i], (missingRows ? "missing step" : "missing " + name + " value") + (run > 1 ? "s (" + run + " in a row)" : "")
+                        + (missingRows ? " after this line, from " + missingAt[i] : "")
                         + (maxRun > 0 ? "; only gaps of up to " + maxRun + " steps inside the file are filled" : "; use --fill-gaps N to interpolate short gaps"));
             }
             for (int k = i; k < j; k++) a[k] = a[i - 1] + (a[j] - a[i - 1]) * (k - i + 1) / (run + 1);

@@ -16,8 +16,11 @@ record Slot(Instant start, double durationH, int month, int dayOfYear, double lo
             SunPosition sun, double sunUpFraction, double extraNormalWm2, double weightDays) {
 
     static Slot of(SolarCalculator calc, ZoneOffset standardOffset, Instant start, long durationSec, double weightDays) {
+        return of(calc.sunUp(start, durationSec), standardOffset, start, durationSec, weightDays);
+    }
+
+    static Slot of(SolarCalculator.SunUp up, ZoneOffset standardOffset, Instant start, long durationSec, double weightDays) {
         LocalDateTime lst = LocalDateTime.ofInstant(start, standardOffset);
-        SolarCalculator.SunUp up = calc.sunUp(start, durationSec);
         int doy = lst.getDayOfYear();
         double hour = lst.getHour() + lst.getMinute() / 60.0 + lst.getSecond() / 3600.0;
         return new Slot(start, durationSec / 3600.0, lst.getMonthValue(), doy, hour, up.sun(), up.fraction(),

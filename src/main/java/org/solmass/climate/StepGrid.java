@@ -3,6 +3,9 @@ package org.solmass.climate;
 import org.solmass.InputException;
 import org.solmass.sun.SolarCalculator;
 import org.solmass.sun.SolarGeometry;
+import org.solmass.sun.SunPath;
+
+import java.time.Instant;
 
 import java.time.LocalDate;
 import java.time.LocalDateTime;
@@ -16,7 +19,7 @@ final class StepGrid {
     private StepGrid() {}
 
     /** Reference non-leap year of the average days (its calendar and Delta-T only). */
-    static final int AVERAGE_DAY_YEAR = 2025;
+    static final int AVERAGE_DAY_YEAR = SunPath.AVERAGE_DAY_YEAR;
 
     static void checkStepMinutes(int stepMinutes, String where) {
         if (stepMinutes < 1 || stepMinutes > 60 || 60 % stepMinutes != 0) {
@@ -30,11 +33,9 @@ final class StepGrid {
         ZoneOffset off = calc.site().standardOffset(AVERAGE_DAY_YEAR);
         List<List<Slot>> months = new ArrayList<>();
         for (int m = 1; m <= 12; m++) {
-            LocalDate day = LocalDate.ofYearDay(AVERAGE_DAY_YEAR, SolarGeometry.kleinDayOfYear(m));
             List<Slot> slots = new ArrayList<>();
-            for (int k = 0; k < 1440 / stepMinutes; k++) {
-                LocalDateTime t = day.atStartOfDay().plusMinutes((long) k * stepMinutes);
-                slots.add(Slot.of(calc, off, t.toInstant(off), stepMinutes * 60L, SolarGeometry.daysInMonth(m)));
+            for (Instant t : SunPath.averageDayStarts(calc.site(), m, stepMinutes)) {
+                slots.add(Slot.of(calc, off, t, stepMinutes * 60L, SolarGeometry.daysInMonth(m)));
             }
             months.add(slots);
         }
@@ -49,8 +50,10 @@ final class StepGrid {
         int n = Year.of(year).length() * 1440 / stepMinutes;
         LocalDateTime t0 = LocalDate.of(year, 1, 1).atStartOfDay();
         List<Slot> slots = new ArrayList<>(n);
+        Instant first = t0.toInstant(off);
+        SolarCalculator.SunUp[] up = calc.sunUpSequence(first, stepMinutes * 60L, n);
         for (int k = 0; k < n; k++) {
-            slots.add(Slot.of(calc, off, t0.plusMinutes((long) k * stepMinutes).toInstant(off), stepMinutes * 60L, 1));
+            slots.add(Slot.of(up[k], off, first.plusSeconds(k * stepMinutes * 60L), stepMinutes * 60L, 1));
         }
         return slots;
     }

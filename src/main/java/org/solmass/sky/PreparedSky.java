@@ -13,11 +13,17 @@ import org.solmass.sun.SunPosition;
  * <p>Per step on an unobstructed plane (W/m2): beam = DNI max(0, n.s) (Duffie &amp; Beckman 2013
  * eq. 2.15.1 first term, written with DNI); sky diffuse per {@link SkyModel} clamped at 0;
  * ground-reflected = albedo GHI (1 - cos b)/2 (Liu &amp; Jordan 1963; D&amp;B eq. 2.15.1 third term).
+ *
+ * <p>Immutable after construction: one instance may be shared by all threads of a run.
  */
 public final class PreparedSky {
     private final int n;
     private final double[] sx, sy, sz, dni, dhi, ghi, f1, f2, hours;
     private final int[] month;
+    /** Compact copies holding only the steps with light (GHI or DNI above 0), for the sums. */
+    private final int nLit;
+    private final double[] lx, ly, lz, ldni, ldhi, lghi, lf1, lf2, lhours;
+    private final int[] lmonth;
     private final TimeBase timeBase;
     private final SkyModel model;
 
@@ -44,7 +50,21 @@ public final class PreparedSky {
             hours[i] = s.weightedHours();
             month[i] = s.month() - 1;
         }
+        int lit = 0;
+        for (int i = 0; i < n; i++) if (ghi[i] > 0 || dni[i] > 0) lit++;
+        nLit = lit;
+        lx = new double[lit]; ly = new double[lit]; lz = new double[lit]; ldni = new double[lit]; ldhi = new double[lit];
+        lghi = new double[lit]; lf1 = new double[lit]; lf2 = new double[lit]; lhours = new double[lit]; lmonth = new int[lit];
+        for (int i = 0, k = 0; i < n; i++) {
+            if (!(ghi[i] > 0 || dni[i] > 0)) continue;
+            lx[k] = sx[i]; ly[k] = sy[i]; lz[k] = sz[i]; ldni[k] = dni[i]; ldhi[k] = dhi[i]; lghi[k] = ghi[i];
+            lf1[k] = f1[i]; lf2[k] = f2[i]; lhours[k] = hours[i]; lmonth[k] = month[i];
+            k++;
+        }
     }
+
+    /** Number of steps with light (the others add nothing to any sum). */
+    public int litSteps() { return nLit; }
 
     public static PreparedSky of(WeatherSeries series, SkyModel model) { return new PreparedSky(series, model); }
 
@@ -56,6 +76,8 @@ public final class PreparedSky {
     public double sunX(int i) { return sx[i]; }
     public double sunY(int i) { return sy[i]; }
     public double sunZ(int i) { return sz[i]; }
+    /** Whether the sun is up during step i (its sun-up middle is above the horizon): cast sun rays only then. */
+    public boolean sunUp(int i) { return sz[i] > 0; }
     public double dni(int i) { return dni[i]; }
     public double dhi(int i) { return dhi[i]; }
     public double ghi(int i) { return ghi[i]; }
@@ -104,19 +126,18 @@ public final class PreparedSky {
      */
     public void sumInto(double nx, double ny, double nz, double albedo, double[] wh36) {
         double sinTilt = Math.sqrt(Math.max(0, 1 - nz * nz)), svf = (1 + nz) / 2, gvf = (1 - nz) / 2;
-        for (int i = 0; i < n; i++) {
-            double g = ghi[i];
-            if (g <= 0 && dni[i] <= 0) continue;
-            double h = hours[i];
-            int m = month[i];
-            double c = nx * sx[i] + ny * sy[i] + nz * sz[i];
-            if (c > 0) wh36[m] += dni[i] * c * h;
-            double d = dhi[i];
+        double refl = albedo * gvf;
+        for (int i = 0; i < nLit; i++) {
+            double h = lhours[i];
+            int m = lmonth[i];
+            double c = nx * lx[i] + ny * ly[i] + nz * lz[i];
+            if (c > 0) wh36[m] += ldni[i] * c * h;
+            double d = ldhi[i];
             if (d > 0) {
-                double v = d * ((1 - f1[i]) * svf + f1[i] * SkyModel.circumsolarRatio(c, sz[i]) + f2[i] * sinTilt);
+                double v = d * ((1 - lf1[i]) * svf + lf1[i] * SkyModel.circumsolarRatio(c, lz[i]) + lf2[i] * sinTilt);
                 if (v > 0) wh36[12 + m] += v * h;
             }
-            wh36[24 + m] += albedo * g * gvf * h;
+            wh36[24 + m] += refl * lghi[i] * h;
         }
     }
 

@@ -60,22 +60,45 @@ public final class SolarCalculator {
 
     /**
      * The part of an interval during which the sun is up, and the sun position at the middle of
-     * that part. Sunrise and sunset inside the interval are located by bisection to 10 s. An interval
-     * is assumed to hold at most one sunrise and one sunset (true for steps up to a few hours,
-     * except within a few days of the polar day/night transition).
+     * that part. Sunrise and sunset inside the interval are located by bisection to 10 s, with the
+     * sun tested at the interval's start, middle and end; an interval is assumed to hold at most one
+     * sunrise and one sunset (true for steps up to a few hours). When the sun sets and rises again
+     * inside one interval, the position is that of the longer sun-up part.
      *
      * @param start       interval start
      * @param durationSec interval length, seconds
      */
     public SunUp sunUp(Instant start, long durationSec) {
-        Instant end = start.plusSeconds(durationSec);
+        return sunUp(start, durationSec, at(start), at(start.plusSeconds(durationSec)));
+    }
+
+    /**
+     * {@link #sunUp(Instant, long)} for n contiguous intervals of equal length from {@code first}:
+     * each boundary position is computed once.
+     */
+    public SunUp[] sunUpSequence(Instant first, long durationSec, int n) {
+        SunUp[] out = new SunUp[n];
+        SunPosition prev = at(first);
+        for (int k = 0; k < n; k++) {
+            Instant s = first.plusSeconds(k * durationSec);
+            SunPosition next = at(s.plusSeconds(durationSec));
+            out[k] = sunUp(s, durationSec, prev, next);
+            prev = next;
+        }
+        return out;
+    }
+
+    private SunUp sunUp(Instant start, long durationSec, SunPosition pStart, SunPosition pEnd) {
         Instant mid = start.plusSeconds(durationSec / 2);
-        SunPosition pStart = at(start), pEnd = at(end), pMid = at(mid);
+        SunPosition pMid = at(mid);
         boolean upS = up(pStart), upE = up(pEnd), upM = up(pMid);
         double riseSec, setSec; // sun-up part [riseSec, setSec] from start
         if (upS && upE) {
-            if (!upM) return new SunUp(0, pMid); // dips below the horizon in the middle: ignore the touch
-            return new SunUp(1, pMid);
+            if (upM) return new SunUp(1, pMid);
+            // sets and rises again inside the interval (near the polar day): the longer sun-up part
+            double set = crossing(start, 0, durationSec / 2.0, true), rise = crossing(start, durationSec / 2.0, durationSec, false);
+            double midUp = set > durationSec - rise ? set / 2 : (rise + durationSec) / 2;
+            return new SunUp(1 - (rise - set) / durationSec, clampUp(at(start.plusMillis(Math.round(1000 * midUp)))));
         } else if (!upS && !upE) {
             if (!upM) return new SunUp(0, pMid);
             riseSec = crossing(start, 0, durationSec / 2.0, false);
@@ -88,9 +111,12 @@ public final class SolarCalculator {
             setSec = durationSec;
         }
         double frac = (setSec - riseSec) / durationSec;
-        SunPosition p = at(start.plusMillis(Math.round(500 * (riseSec + setSec))));
-        if (!up(p)) p = new SunPosition(p.azimuthDeg(), Math.min(p.zenithDeg(), 90.0));
-        return new SunUp(frac, p);
+        return new SunUp(frac, clampUp(at(start.plusMillis(Math.round(500 * (riseSec + setSec))))));
+    }
+
+    /** A sun-up middle found by bisection may sit a hair below the horizon: put it on the horizon. */
+    private static SunPosition clampUp(SunPosition p) {
+        return up(p) ? p : new SunPosition(p.azimuthDeg(), Math.min(p.zenithDeg(), 90.0));
     }
 
     /**

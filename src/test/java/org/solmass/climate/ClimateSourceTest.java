@@ -144,6 +144,30 @@ class ClimateSourceTest {
         return t;
     }
 
+    /**
+     * A monthly mean sunrise hour holds light from the month's later days even where the sun is
+     * barely up on Klein's day: accepted (only GHI <= G0n per hour, and the day total against H0).
+     */
+    @Test
+    void monthHourSunriseHourOfOtherDaysIsAccepted() throws IOException {
+        List<String> rows = monthHourRows(0);
+        WeatherSeries ref = ClimateSource.load(SITE, ClimateSpec.file(write("mh0.csv", rows)));
+        int firstUp = -1;
+        for (int h = 0; h < 24 && firstUp < 0; h++) if (ref.step(2 * 24 + h).sunUpFraction() > 0) firstUp = h;
+        rows.set(1 + 2 * 24 + firstUp, "3," + firstUp + ",45,30,5");
+        WeatherSeries s = ClimateSource.load(SITE, ClimateSpec.file(write("mh.csv", rows)));
+        assertEquals(45, s.step(2 * 24 + firstUp).ghiWm2(), 1e-9);
+        ClimateSourceTest.assertClosure(s);
+    }
+
+    @Test
+    void monthHourDayAboveExtraterrestrialIsAnError() throws IOException {
+        List<String> rows = monthHourRows(0);
+        rows.set(1 + 11 * 24 + 12, "12,12,1300,100,5");
+        InputException e = assertThrows(InputException.class, () -> ClimateSource.load(SITE, ClimateSpec.file(write("mh.csv", rows))));
+        assertTrue(e.getMessage().contains("month 12") && e.getMessage().contains("extraterrestrial"), e.getMessage());
+    }
+
     @Test
     void monthHourMissingRowIsAnError() throws IOException {
         List<String> rows = monthHourRows(0);
