@@ -166,14 +166,11 @@ public final class StudyReader {
         JsonCursor k = c.child("climate", raw == null ? JsonNodeFactory.instance.objectNode() : raw);
         String source = k.string("source", CLEAR_SKY);
         Path file = source.equalsIgnoreCase(CLEAR_SKY) ? null : base.resolve(source).normalize();
-        Climate climate = new Climate(file,
-                k.choice("format", ClimateFormat.class, ClimateFormat.AUTO),
+        ClimateFormat format = k.choice("format", ClimateFormat.class, ClimateFormat.AUTO);
+        Climate climate = new Climate(file, file == null ? ClimateFormat.AUTO : format,   // format is moot for clear-sky
                 k.choice("interval_label", IntervalLabel.class, IntervalLabel.END),
                 k.bool("fill_gaps", false),
                 k.integer("year", Climate.DEFAULT_YEAR, 1900, 2100));
-        if (file == null && climate.format() != ClimateFormat.AUTO) {
-            throw k.error("format", "only applies to a climate file; climate.source is \"clear-sky\"");
-        }
         k.finish();
         return climate;
     }
