@@ -126,7 +126,7 @@ final class MapScene {
         }
 
         double finalEdgePx = meanPatchEdgeM * scale / 2;
-        double outlineAlpha = finalEdgePx >= 6 ? 0.30 : finalEdgePx >= 3 ? 0.15 : 0;
+        double outlineAlpha = finalEdgePx >= 10 ? 0.28 : finalEdgePx >= 6 ? 0.14 : 0;   // no hatching of small patches
         for (int p = 0; p < patchColour.length; p++) {
             Patch q = patches.get(p);
             if (q.normal().dot(v) <= 1e-6) continue;
