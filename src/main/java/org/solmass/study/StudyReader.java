@@ -222,6 +222,27 @@ public final class StudyReader {
         }
     }
 
+    /**
+     * Checks that every name in model.analyse and model.context is a block of the model.
+     *
+     * @param blockNames the model's block names
+     * @throws InputException naming the study file and key (or the flag, for a study made from flags)
+     */
+    public static void checkBlockNames(Study study, List<String> blockNames) {
+        String[] keys = {"analyse", "context"};
+        List<List<String>> lists = List.of(study.model().analyse(), study.model().context());
+        for (int k = 0; k < 2; k++) {
+            List<String> names = lists.get(k);
+            for (int i = 0; i < names.size(); i++) {
+                if (blockNames.contains(names.get(i))) continue;
+                String where = study.source() == null ? "--" + keys[k] : study.source() + ": model." + keys[k] + "[" + i + "]";
+                String have = String.join(", ", blockNames.subList(0, Math.min(20, blockNames.size())))
+                        + (blockNames.size() > 20 ? ", ..." : "");
+                throw new InputException(where, "no block named \"" + names.get(i) + "\" in the model (it has: " + have + ")");
+            }
+        }
+    }
+
     /** Lists kept for callers that want the supported labels (CLI help). */
     public static List<String> labels(Class<? extends Enum<?>> type) {
         java.util.ArrayList<String> out = new java.util.ArrayList<>();
