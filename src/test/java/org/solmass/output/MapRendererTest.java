@@ -39,7 +39,7 @@ class MapRendererTest {
 
     @Test
     void contextBlocksAreNeutralGreyAndAnalysedFacesAreNot() {
-        SyntheticScene s = SyntheticScene.district(2.0);
+        SyntheticScene s = SyntheticScene.district(2.0).gableHouse("House", -30, 45, 16, 9, 6, 10, 25);
         BufferedImage img = MapRenderer.render(s.model(), s.analysedBlocks(), s.patches, s.values(), "Annual irradiation",
                 "kWh/m2", MapRenderer.Options.of(1000, 600, "t"));
         boolean[] nearRamp = nearRampLookup(10);
