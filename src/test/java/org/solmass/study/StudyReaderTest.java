@@ -266,6 +266,13 @@ class StudyReaderTest {
     }
 
     @Test
+    void anEmptyListFlagLeavesTheFilesList() throws Exception {
+        Study s = StudyReader.read(write("s.json", FULL), new StudyOverrides().analyse(List.of()).context(List.of()));
+        assertEquals(List.of("A", "B"), s.model().analyse());
+        assertEquals(List.of("C"), s.model().context());
+    }
+
+    @Test
     void flagsAloneMakeAStudyAndMissingOnesNameTheFlag() {
         Study s = StudyReader.read(null, new StudyOverrides().model(Path.of("x/model.obj")).latitude(40.0).longitude(-3.7).zone("Europe/Madrid"));
         assertEquals("model", s.name());
