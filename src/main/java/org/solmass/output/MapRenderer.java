@@ -104,10 +104,22 @@ public final class MapRenderer {
         MapView axo = MapView.looking(eye);
         MapView plan = MapView.looking(Vec3.UP);
         MapScene scene = new MapScene(model, analysedBlock, patches, values, lo, hi);
-        panel(g, scene, axo, MARGIN, panelTop, axoW, panelH,
+        int captionH = 24, tileH = panelH - captionH;
+        int[][] plPixels = new int[1][];
+        Thread planThread = new Thread(() -> plPixels[0] = scene.draw(plan, planW * 2, tileH * 2), "solmass-map-plan");
+        planThread.start();
+        int[] axoPixels = scene.draw(axo, axoW * 2, tileH * 2);
+        try {
+            planThread.join();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted while rendering the map", e);
+        }
+        if (plPixels[0] == null) throw new IllegalStateException("the plan panel failed to render");
+        panel(g, axoPixels, axo, MARGIN, panelTop, axoW, panelH, captionH,
                 String.format(java.util.Locale.ROOT, "View from the %s, %.0f\u00b0 above the horizon",
                         compass(o.viewAzimuthDeg()), o.viewElevationDeg()));
-        panel(g, scene, plan, 2 * MARGIN + axoW, panelTop, planW, panelH, "Plan, north up");
+        panel(g, plPixels[0], plan, 2 * MARGIN + axoW, panelTop, planW, panelH, captionH, "Plan, north up");
 
         title(g, w, o.title(), label, unit);
         legend(g, w, h - LEGEND_H, lo, hi, label, unit, auto, scene.hasMissing());
@@ -115,9 +127,7 @@ public final class MapRenderer {
         return img;
     }
 
-    private static void panel(Graphics2D g, MapScene scene, MapView view, int x, int y, int pw, int ph, String caption) {
-        int captionH = 24;
-        int[] pixels = scene.draw(view, pw * 2, (ph - captionH) * 2);
+    private static void panel(Graphics2D g, int[] pixels, MapView view, int x, int y, int pw, int ph, int captionH, String caption) {
         BufferedImage tile = new BufferedImage(pw, ph - captionH, BufferedImage.TYPE_INT_RGB);
         tile.setRGB(0, 0, pw, ph - captionH, pixels, 0, pw);
         g.drawImage(tile, x, y + captionH, null);

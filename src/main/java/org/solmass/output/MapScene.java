@@ -24,7 +24,8 @@ final class MapScene {
     private final int[] patchColour;
     private final int[] triColour;
     private final double[] triNormal;
-    private final float[] edges;   // x0,y0,z0,x1,y1,z1 per edge
+    private final double[] edges;  // x0,y0,z0,x1,y1,z1 per edge
+    private final double cx, cy, cz;  // centre of the model's bounds: projections are relative to it (float depth precision)
     private final double[] ground; // 4 corners x,y,z
     private final double meanPatchEdgeM;
     private final boolean missing;
@@ -57,6 +58,9 @@ final class MapScene {
         edges = creases(model, triNormal);
         double[] b = model.bounds();
         if (!(b[0] <= b[3])) b = new double[] {0, 0, 0, 1, 1, 1};
+        cx = (b[0] + b[3]) / 2;
+        cy = (b[1] + b[4]) / 2;
+        cz = (b[2] + b[5]) / 2;
         double pad = Math.max(5, 0.12 * Math.max(b[3] - b[0], b[4] - b[1]));
         ground = new double[] {b[0] - pad, b[1] - pad, b[2], b[3] + pad, b[1] - pad, b[2],
                 b[3] + pad, b[4] + pad, b[2], b[0] - pad, b[4] + pad, b[2]};
@@ -86,16 +90,17 @@ final class MapScene {
             if (pass == 1 && vx.length > 0) {   // fit to the model; the ground plane is a backdrop
                 double fr = minR, fu = minU, gr = maxR, gu = maxU;
                 for (int i = 0; i + 2 < pts.length; i += 3) {
-                    double pd = pts[i] * v.x() + pts[i + 1] * v.y() + pts[i + 2] * v.z();
+                    double pd = (pts[i] - cx) * v.x() + (pts[i + 1] - cy) * v.y() + (pts[i + 2] - cz) * v.z();
                     minD = Math.min(minD, pd); maxD = Math.max(maxD, pd);
                 }
                 minR = fr; minU = fu; maxR = gr; maxU = gu;
                 break;
             }
             for (int i = 0; i + 2 < pts.length; i += 3) {
-                double pr = pts[i] * r.x() + pts[i + 1] * r.y() + pts[i + 2] * r.z();
-                double pu = pts[i] * u.x() + pts[i + 1] * u.y() + pts[i + 2] * u.z();
-                double pd = pts[i] * v.x() + pts[i + 1] * v.y() + pts[i + 2] * v.z();
+                double x = pts[i] - cx, y = pts[i + 1] - cy, z = pts[i + 2] - cz;
+                double pr = x * r.x() + y * r.y() + z * r.z();
+                double pu = x * u.x() + y * u.y() + z * u.z();
+                double pd = x * v.x() + y * v.y() + z * v.z();
                 minR = Math.min(minR, pr); maxR = Math.max(maxR, pr);
                 minU = Math.min(minU, pu); maxU = Math.max(maxU, pu);
                 minD = Math.min(minD, pd); maxD = Math.max(maxD, pd);
@@ -103,7 +108,7 @@ final class MapScene {
         }
         double scale = Math.min(w * 0.92 / Math.max(1e-9, maxR - minR), h * 0.88 / Math.max(1e-9, maxU - minU));
         double ox = (w - (maxR - minR) * scale) / 2 - minR * scale, oy = (h - (maxU - minU) * scale) / 2 + maxU * scale;
-        Projector P = new Projector(r, u, v, scale, ox, oy);
+        Projector P = new Projector(r, u, v, scale, ox, oy, cx, cy, cz);
         float bias = (float) (2e-4 * Math.max(1e-6, maxD - minD));
         Raster ras = new Raster(w, h, MapRenderer.BACKGROUND);
 
@@ -126,7 +131,7 @@ final class MapScene {
         }
 
         double finalEdgePx = meanPatchEdgeM * scale / 2;
-        double outlineAlpha = finalEdgePx >= 6 ? 0.30 : finalEdgePx >= 3 ? 0.15 : 0;
+        double outlineAlpha = finalEdgePx >= 10 ? 0.28 : finalEdgePx >= 6 ? 0.14 : 0;   // no hatching of small patches
         for (int p = 0; p < patchColour.length; p++) {
             Patch q = patches.get(p);
             if (q.normal().dot(v) <= 1e-6) continue;
@@ -162,17 +167,21 @@ final class MapScene {
 
     /** Projects model points to supersampled screen coordinates; fields hold the last result. */
     private static final class Projector {
-        final double rx, ry, rz, ux, uy, uz, vx, vy, vz, s, ox, oy;
+        final double rx, ry, rz, ux, uy, uz, vx, vy, vz, s, ox, oy, cx, cy, cz;
         double sx, sy, depth;
 
-        Projector(Vec3 r, Vec3 u, Vec3 v, double s, double ox, double oy) {
+        Projector(Vec3 r, Vec3 u, Vec3 v, double s, double ox, double oy, double cx, double cy, double cz) {
+            this.cx = cx;
+            this.cy = cy;
+            this.cz = cz;
             rx = r.x(); ry = r.y(); rz = r.z(); ux = u.x(); uy = u.y(); uz = u.z(); vx = v.x(); vy = v.y(); vz = v.z();
             this.s = s;
             this.ox = ox;
             this.oy = oy;
         }
 
-        void project(double x, double y, double z) {
+        void project(double px, double py, double pz) {
+            double x = px - cx, y = py - cy, z = pz - cz;
             sx = (x * rx + y * ry + z * rz) * s + ox;
             sy = oy - (x * ux + y * uy + z * uz) * s;
             depth = x * vx + y * vy + z * vz;
@@ -183,7 +192,7 @@ final class MapScene {
      * Edges to outline: shared by two triangles whose normals differ by more than 25 deg, or used by
      * one triangle only. Endpoints are matched by position (to 1 mm), so unshared vertices still pair.
      */
-    private static float[] creases(MassingModel m, double[] normal) {
+    private static double[] creases(MassingModel m, double[] normal) {
         record Key(long ax, long ay, long az, long bx, long by, long bz) {}
         Map<Key, int[]> seen = new HashMap<>();
         List<Key> order = new ArrayList<>();
@@ -207,7 +216,7 @@ final class MapScene {
                 }
             }
         }
-        float[] out = new float[order.size() * 6];
+        double[] out = new double[order.size() * 6];
         int n = 0;
         for (Key key : order) {
             int[] rec = seen.get(key);
@@ -218,8 +227,8 @@ final class MapScene {
                 draw = dot < CREASE_COS;
             }
             if (!draw) continue;
-            out[n++] = key.ax() / 1000f; out[n++] = key.ay() / 1000f; out[n++] = key.az() / 1000f;
-            out[n++] = key.bx() / 1000f; out[n++] = key.by() / 1000f; out[n++] = key.bz() / 1000f;
+            out[n++] = key.ax() / 1000.0; out[n++] = key.ay() / 1000.0; out[n++] = key.az() / 1000.0;
+            out[n++] = key.bx() / 1000.0; out[n++] = key.by() / 1000.0; out[n++] = key.bz() / 1000.0;
         }
         return java.util.Arrays.copyOf(out, n);
     }

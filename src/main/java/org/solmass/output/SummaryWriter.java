@@ -109,7 +109,8 @@ public final class SummaryWriter {
             ObjectNode gk = g.putObject("by_kind");
             Group[] bk = byBlockKind.get(e.getKey());
             for (SurfaceKind k : SurfaceKind.values()) if (bk[k.ordinal()] != null) gk.set(k.label(), emit.group(bk[k.ordinal()]));
-            bn.set(blockNames.get(e.getKey()), g);
+            String name = blockNames.get(e.getKey());
+            bn.set(bn.has(name) ? name + " (block " + e.getKey() + ")" : name, g);   // two blocks may share a name
         }
         ArrayNode ca = root.putArray("cautions");
         for (String c : cautions) ca.add(c);

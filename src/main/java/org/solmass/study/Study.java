@@ -67,6 +67,13 @@ public record Study(String name, String description, Path source, Model model, S
             if (context.contains(blockName)) return false;
             return analyse.isEmpty() || analyse.contains(blockName);
         }
+
+        /** {@link #isAnalysed} for every block of a model, index = block id. */
+        public boolean[] analysedMask(List<String> blockNames) {
+            boolean[] m = new boolean[blockNames.size()];
+            for (int i = 0; i < m.length; i++) m[i] = isAnalysed(blockNames.get(i));
+            return m;
+        }
     }
 
     /**

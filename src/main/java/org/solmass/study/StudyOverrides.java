@@ -36,10 +36,11 @@ public final class StudyOverrides {
      * @param flag the flag as the user typed it, for messages ("--lat")
      * @param keyPath the study key path ("site.latitude")
      * @param value a String, Number, Boolean, Path (made absolute against the working directory) or
-     *              List of Strings; null leaves the key as it is
+     *              List of Strings; null (and an empty list, as picocli gives for an absent
+     *              repeatable option) leaves the key as it is
      */
     public StudyOverrides set(String flag, String keyPath, Object value) {
-        if (value == null) return this;
+        if (value == null || (value instanceof List<?> l && l.isEmpty())) return this;
         String[] parts = keyPath.split("\\.");
         ObjectNode o = tree;
         for (int i = 0; i < parts.length - 1; i++) {

@@ -166,14 +166,11 @@ public final class StudyReader {
         JsonCursor k = c.child("climate", raw == null ? JsonNodeFactory.instance.objectNode() : raw);
         String source = k.string("source", CLEAR_SKY);
         Path file = source.equalsIgnoreCase(CLEAR_SKY) ? null : base.resolve(source).normalize();
-        Climate climate = new Climate(file,
-                k.choice("format", ClimateFormat.class, ClimateFormat.AUTO),
+        ClimateFormat format = k.choice("format", ClimateFormat.class, ClimateFormat.AUTO);
+        Climate climate = new Climate(file, file == null ? ClimateFormat.AUTO : format,   // format is moot for clear-sky
                 k.choice("interval_label", IntervalLabel.class, IntervalLabel.END),
                 k.bool("fill_gaps", false),
                 k.integer("year", Climate.DEFAULT_YEAR, 1900, 2100));
-        if (file == null && climate.format() != ClimateFormat.AUTO) {
-            throw k.error("format", "only applies to a climate file; climate.source is \"clear-sky\"");
-        }
         k.finish();
         return climate;
     }
@@ -222,6 +219,27 @@ public final class StudyReader {
             JsonNode have = into.get(e.getKey());
             if (have instanceof ObjectNode h && e.getValue() instanceof ObjectNode v) merge(h, v);
             else into.set(e.getKey(), e.getValue().deepCopy());
+        }
+    }
+
+    /**
+     * Checks that every name in model.analyse and model.context is a block of the model.
+     *
+     * @param blockNames the model's block names
+     * @throws InputException naming the study file and key (or the flag, for a study made from flags)
+     */
+    public static void checkBlockNames(Study study, List<String> blockNames) {
+        String[] keys = {"analyse", "context"};
+        List<List<String>> lists = List.of(study.model().analyse(), study.model().context());
+        for (int k = 0; k < 2; k++) {
+            List<String> names = lists.get(k);
+            for (int i = 0; i < names.size(); i++) {
+                if (blockNames.contains(names.get(i))) continue;
+                String where = study.source() == null ? "--" + keys[k] : study.source() + ": model." + keys[k] + "[" + i + "]";
+                String have = String.join(", ", blockNames.subList(0, Math.min(20, blockNames.size())))
+                        + (blockNames.size() > 20 ? ", ..." : "");
+                throw new InputException(where, "no block named \"" + names.get(i) + "\" in the model (it has: " + have + ")");
+            }
         }
     }
 

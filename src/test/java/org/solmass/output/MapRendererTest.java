@@ -39,7 +39,7 @@ class MapRendererTest {
 
     @Test
     void contextBlocksAreNeutralGreyAndAnalysedFacesAreNot() {
-        SyntheticScene s = SyntheticScene.district(2.0);
+        SyntheticScene s = SyntheticScene.district(2.0).gableHouse("House", -30, 45, 16, 9, 6, 10, 25);
         BufferedImage img = MapRenderer.render(s.model(), s.analysedBlocks(), s.patches, s.values(), "Annual irradiation",
                 "kWh/m2", MapRenderer.Options.of(1000, 600, "t"));
         boolean[] nearRamp = nearRampLookup(10);
@@ -54,6 +54,37 @@ class MapRendererTest {
         }
         assertTrue(grey > 0.03 * img.getWidth() * img.getHeight(), "context grey pixels: " + grey);
         assertTrue(ramp > 0.05 * img.getWidth() * img.getHeight(), "ramp pixels: " + ramp);
+    }
+
+    @Test
+    void projectedCoordinatesFarFromTheOriginGiveTheSameMap() {
+        // Survey coordinates (hundreds of km) must not cost depth precision: the map of a scene moved by
+        // (500 km, 5000 km, 300 m) matches the map at the origin, up to the odd pixel on an edge where
+        // rounding of the shifted coordinates lands a sample on the other side.
+        SyntheticScene s = SyntheticScene.district(2.0);
+        org.solmass.model.MassingModel m = s.model();
+        double dx = 500_000, dy = 5_000_000, dz = 300;
+        double[] vs = m.vertices().clone();
+        for (int i = 0; i < vs.length; i += 3) {
+            vs[i] += dx; vs[i + 1] += dy; vs[i + 2] += dz;
+        }
+        org.solmass.model.MassingModel moved = new org.solmass.model.MassingModel(null, m.blockNames(), m.materialNames(), vs,
+                m.triangles(), m.triangleBlock(), m.triangleMaterial(), m.triangleLine(), 0);
+        java.util.List<org.solmass.surface.Patch> movedPatches = new java.util.ArrayList<>();
+        for (org.solmass.surface.Patch p : s.patches) {
+            double[] o = p.outline().clone();
+            for (int i = 0; i < o.length; i += 3) {
+                o[i] += dx; o[i + 1] += dy; o[i + 2] += dz;
+            }
+            movedPatches.add(new org.solmass.surface.Patch(p.index(), p.id(), p.block(), p.blockName(), p.surface(), p.kind(),
+                    p.centroid().plus(new org.solmass.model.Vec3(dx, dy, dz)), p.normal(), p.areaM2(), p.tiltDeg(), p.azimuthDeg(), o));
+        }
+        MapRenderer.Options opt = MapRenderer.Options.of(900, 500, "t");
+        BufferedImage a = MapRenderer.render(m, s.analysedBlocks(), s.patches, s.values(), "q", "kWh/m2", opt);
+        BufferedImage b = MapRenderer.render(moved, s.analysedBlocks(), movedPatches, s.values(), "q", "kWh/m2", opt);
+        int differ = 0;
+        for (int y = 0; y < a.getHeight(); y++) for (int x = 0; x < a.getWidth(); x++) if (a.getRGB(x, y) != b.getRGB(x, y)) differ++;
+        assertTrue(differ < 0.002 * a.getWidth() * a.getHeight(), differ + " pixels differ");
     }
 
     @Test

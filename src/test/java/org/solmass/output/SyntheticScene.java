@@ -38,6 +38,39 @@ final class SyntheticScene {
         return this;
     }
 
+    /**
+     * A gable-roofed house rotated by {@code rotDeg} (counter-clockwise seen from above) about its
+     * south-west corner: walls and both roof slopes get patches; the two gable triangles are faces of
+     * the block without patches.
+     */
+    SyntheticScene gableHouse(String name, double x0, double y0, double length, double width, double eave, double ridge, double rotDeg) {
+        int b = blocks.size();
+        blocks.add(name);
+        analysed.add(true);
+        double c = Math.cos(Math.toRadians(rotDeg)), sn = Math.sin(Math.toRadians(rotDeg));
+        Vec3 ex = new Vec3(c * length, sn * length, 0), ey = new Vec3(-sn * width, c * width, 0), up = new Vec3(0, 0, eave);
+        Vec3 o = new Vec3(x0, y0, 0);
+        Vec3 half = ey.times(0.5), rise = new Vec3(0, 0, ridge - eave);
+        face(b, true, o, ex, up);                                        // long wall, front
+        face(b, true, o.plus(ex).plus(ey), ex.times(-1), up);            // long wall, back
+        face(b, true, o.plus(ex), ey, up);                               // end wall
+        face(b, true, o.plus(ey), ey.times(-1), up);                     // other end wall
+        face(b, true, o.plus(up), ex, half.plus(rise));                  // front slope
+        face(b, true, o.plus(ex).plus(ey).plus(up), ex.times(-1), half.times(-1).plus(rise));  // back slope
+        triangle(b, o.plus(ex).plus(up), o.plus(ex).plus(ey).plus(up), o.plus(ex).plus(half).plus(up).plus(rise));
+        triangle(b, o.plus(ey).plus(up), o.plus(up), o.plus(half).plus(up).plus(rise));
+        return this;
+    }
+
+    private void triangle(int block, Vec3 a, Vec3 b2, Vec3 c) {
+        int base = vertices.size() / 3;
+        for (Vec3 p : new Vec3[] {a, b2, c}) {
+            vertices.add(p.x()); vertices.add(p.y()); vertices.add(p.z());
+        }
+        triangles.add(base); triangles.add(base + 1); triangles.add(base + 2);
+        triangleBlock.add(block);
+    }
+
     /** A flat ground face (a courtyard floor) at z = 0, analysed. */
     SyntheticScene groundFace(String name, double x0, double y0, double x1, double y1) {
         int b = blocks.size();
@@ -58,7 +91,7 @@ final class SyntheticScene {
         triangleBlock.add(block);
         if (!analyse) return;
         Vec3 n = u.cross(v).normalized();
-        SurfaceKind kind = n.z() > 0.5 ? (o.z() > 0.01 ? SurfaceKind.ROOF : SurfaceKind.GROUND) : SurfaceKind.FACADE;
+        SurfaceKind kind = n.z() > 0.3 ? (o.z() > 0.01 ? SurfaceKind.ROOF : SurfaceKind.GROUND) : SurfaceKind.FACADE;
         int nu = Math.max(1, (int) Math.ceil(u.length() / patchM - 1e-9)), nv = Math.max(1, (int) Math.ceil(v.length() / patchM - 1e-9));
         Vec3 du = u.times(1.0 / nu), dv = v.times(1.0 / nv);
         double tilt = Math.toDegrees(Math.acos(Math.max(-1, Math.min(1, n.z()))));

@@ -1,0 +1,68 @@
+package org.solmass.output;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.solmass.InputException;
+import org.solmass.study.Study;
+import org.solmass.study.StudyOverrides;
+import org.solmass.study.StudyReader;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import java.util.Map;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+class ResultsFolderTest {
+    @TempDir Path dir;
+
+    @Test
+    void writesEveryFileAndTheyReadBack() throws Exception {
+        SyntheticScene s = SyntheticScene.district(2.0);
+        Path obj = dir.resolve("district.obj");
+        Files.writeString(obj, "# stands in for the model file of this invented scene\n");
+        Study study = StudyReader.read(null, new StudyOverrides().model(obj).latitude(47.0).longitude(8.0).zone("+01:00")
+                .context(List.of("Neighbour east", "Neighbour south")).out(dir.resolve("out")).monthHourCsv(true));
+        ResultTable t = new ResultTable(s.patches);
+        double[] v = s.values();
+        t.put("sky_view_factor", "", new double[v.length]);
+        t.put("annual_kwh_m2", "kWh/m2", v);
+        float[] mh = new float[s.patches.size() * 288];
+        for (int i = 0; i < mh.length; i++) mh[i] = (i % 24) * 10.5f;
+        RunRecord run = RunRecord.of("test", study, "average-days", Map.of("patches", (long) v.length), Map.of(), Instant.EPOCH);
+        List<Path> files = ResultsFolder.write(new ResultsFolder.Results(study, s.model(), t, mh, run, List.of("invented scene")));
+        Path out = dir.resolve("out");
+        assertEquals(List.of(out.resolve("patches.csv"), out.resolve("month-hour.csv"), out.resolve("summary.json"),
+                out.resolve("map.png"), out.resolve("run.json")), files);
+        assertEquals(v.length, PatchCsvReader.read(out.resolve("patches.csv")).size());
+        Map<String, float[]> back = MonthHourCsvReader.read(out.resolve("month-hour.csv"));
+        assertEquals(v.length, back.size());
+        assertEquals(mh[288 + 5 * 24 + 7], back.get(s.patches.get(1).id())[5 * 24 + 7], 0.05f);   // 1 decimal
+        JsonNode sum = new ObjectMapper().readTree(out.resolve("summary.json").toFile());
+        assertEquals(v.length, sum.get("all").get("patches").asInt());
+        assertEquals("invented scene", sum.get("cautions").get(0).asText());
+        assertEquals(study, RunRecord.read(out).study());
+        assertTrue(Files.size(out.resolve("map.png")) > 10_000);
+    }
+
+    @Test
+    void unknownBlockNamesInTheStudyAreNamed() {
+        Study study = StudyReader.read(null, new StudyOverrides().model(Path.of("m.obj")).latitude(1.0).longitude(1.0)
+                .zone("UTC").analyse(List.of("A", "Z")));
+        InputException e = assertThrows(InputException.class, () -> StudyReader.checkBlockNames(study, List.of("A", "B")));
+        assertEquals("--analyse: no block named \"Z\" in the model (it has: A, B)", e.getMessage());
+        StudyReader.checkBlockNames(StudyReader.read(null, new StudyOverrides().model(Path.of("m.obj")).latitude(1.0)
+                .longitude(1.0).zone("UTC").analyse(List.of("B"))), List.of("A", "B"));
+    }
+
+    @Test
+    void columnLabelsAreReadable() {
+        assertEquals("Annual irradiation", ResultsFolder.labelOf("annual_kwh_m2"));
+        assertEquals("March irradiation", ResultsFolder.labelOf("m03_kwh_m2"));
+        assertEquals("sun hours", ResultsFolder.labelOf("sun_hours"));
+    }
+}

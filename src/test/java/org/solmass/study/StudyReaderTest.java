@@ -1,0 +1,297 @@
+package org.solmass.study;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.solmass.InputException;
+import org.solmass.study.Study.*;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+class StudyReaderTest {
+    @TempDir Path dir;
+
+    static final String FULL = """
+            {
+              "name": "Invented courtyard",
+              "description": "invented scenario",
+              "model": { "file": "massing/block.obj", "up": "y", "unit": "cm", "north_deg": 12.5,
+                         "analyse": ["A", "B"], "context": ["C"] },
+              "site": { "latitude": 48.2, "longitude": 16.37, "elevation_m": 180, "zone": "Europe/Vienna" },
+              "climate": { "source": "weather/year.csv", "format": "hourly", "interval_label": "start",
+                           "fill_gaps": true, "year": 2019 },
+              "albedo": { "ground": 0.15, "blocks_default": 0.35, "blocks": { "A": 0.5 }, "materials": { "glass": 0.08 } },
+              "ground_irradiance": "shaded",
+              "patch_m": 0.5,
+              "rays": 256,
+              "sky": "isotropic",
+              "time_base": "hourly-year",
+              "sun_bins": 2048,
+              "step_minutes": 15,
+              "outputs": { "folder": "out", "month_hour_csv": true, "map": false,
+                           "map_width_px": 1200, "map_height_px": 700, "thresholds_kwh_m2": [400, 800] },
+              "threads": 2
+            }
+            """;
+
+    private Path write(String name, String json) throws Exception {
+        Path p = dir.resolve(name);
+        Files.createDirectories(p.getParent());
+        Files.writeString(p, json);
+        return p;
+    }
+
+    private InputException fails(String json) throws Exception {
+        Path p = write("study.json", json);
+        return assertThrows(InputException.class, () -> StudyReader.read(p));
+    }
+
+    private static final String MIN_SITE = "\"site\": {\"latitude\": 52, \"longitude\": 13, \"zone\": \"+01:00\"}";
+
+    @Test
+    void everyKeyIsParsedAndRelativePathsResolveAgainstTheStudyFolder() throws Exception {
+        Path p = write("studies/full.json", FULL);
+        Study s = StudyReader.read(p);
+        Path base = p.toAbsolutePath().getParent();
+        assertEquals("Invented courtyard", s.name());
+        assertEquals("invented scenario", s.description());
+        assertEquals(p.toAbsolutePath().normalize(), s.source());
+        assertEquals(base.resolve("massing/block.obj"), s.model().file());
+        assertEquals(UpAxis.Y, s.model().up());
+        assertEquals(LengthUnit.CM, s.model().unit());
+        assertEquals(12.5, s.model().northDeg());
+        assertEquals(List.of("A", "B"), s.model().analyse());
+        assertEquals(List.of("C"), s.model().context());
+        assertEquals(new Site(48.2, 16.37, 180, "Europe/Vienna"), s.site());
+        assertEquals(base.resolve("weather/year.csv"), s.climate().file());
+        assertEquals(ClimateFormat.HOURLY, s.climate().format());
+        assertEquals(IntervalLabel.START, s.climate().intervalLabel());
+        assertTrue(s.climate().fillGaps());
+        assertEquals(2019, s.climate().year());
+        assertEquals(0.15, s.albedo().ground());
+        assertEquals(0.35, s.albedo().blocksDefault());
+        assertEquals(Map.of("A", 0.5), s.albedo().blocks());
+        assertEquals(Map.of("glass", 0.08), s.albedo().materials());
+        assertEquals(GroundIrradiance.SHADED, s.groundIrradiance());
+        assertEquals(0.5, s.patchM());
+        assertEquals(256, s.rays());
+        assertEquals(SkyModel.ISOTROPIC, s.sky());
+        assertEquals(TimeBase.HOURLY_YEAR, s.timeBase());
+        assertEquals(2048, s.sunBins());
+        assertEquals(15, s.stepMinutes());
+        assertEquals(base.resolve("out"), s.outputs().folder());
+        assertTrue(s.outputs().monthHourCsv());
+        assertFalse(s.outputs().map());
+        assertEquals(1200, s.outputs().mapWidthPx());
+        assertEquals(700, s.outputs().mapHeightPx());
+        assertEquals(List.of(400.0, 800.0), s.outputs().thresholdsKwhM2());
+        assertEquals(2, s.threads());
+    }
+
+    @Test
+    void defaultsApplyWhereKeysAreLeftOut() throws Exception {
+        Path p = write("minimal.json", "{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + "}");
+        Study s = StudyReader.read(p);
+        assertEquals("minimal", s.name());
+        assertEquals("", s.description());
+        assertEquals(UpAxis.Z, s.model().up());
+        assertEquals(LengthUnit.M, s.model().unit());
+        assertEquals(0, s.model().northDeg());
+        assertTrue(s.model().analyse().isEmpty());
+        assertTrue(s.model().isAnalysed("anything"));
+        assertEquals(0, s.site().elevationM());
+        assertTrue(s.climate().isClearSky());
+        assertEquals(ClimateFormat.AUTO, s.climate().format());
+        assertEquals(IntervalLabel.END, s.climate().intervalLabel());
+        assertFalse(s.climate().fillGaps());
+        assertEquals(Climate.DEFAULT_YEAR, s.climate().year());
+        assertEquals(0.2, s.albedo().ground());
+        assertEquals(0.3, s.albedo().blocksDefault());
+        assertEquals(GroundIrradiance.UNSHADED, s.groundIrradiance());
+        assertEquals(1.0, s.patchM());
+        assertEquals(1024, s.rays());
+        assertEquals(SkyModel.PEREZ, s.sky());
+        assertEquals(TimeBase.AUTO, s.timeBase());
+        assertEquals(4096, s.sunBins());
+        assertEquals(60, s.stepMinutes());
+        assertEquals(dir.toAbsolutePath().resolve("results"), s.outputs().folder());
+        assertFalse(s.outputs().monthHourCsv());
+        assertTrue(s.outputs().map());
+        assertEquals(List.of(300.0, 600.0, 900.0, 1200.0), s.outputs().thresholdsKwhM2());
+        assertEquals(0, s.threads());
+    }
+
+    @Test
+    void albedoOfAFacePrefersMaterialThenBlockThenDefault() throws Exception {
+        Study s = StudyReader.read(write("s.json", FULL));
+        assertEquals(0.08, s.albedo().of("A", "glass"));
+        assertEquals(0.5, s.albedo().of("A", "brick"));
+        assertEquals(0.35, s.albedo().of("B", null));
+    }
+
+    @Test
+    void contextBlocksAreNotAnalysed() throws Exception {
+        Study s = StudyReader.read(write("s.json", FULL));
+        assertTrue(s.model().isAnalysed("A"));
+        assertFalse(s.model().isAnalysed("C"));
+        assertFalse(s.model().isAnalysed("D"));   // analyse lists A and B only
+    }
+
+    @Test
+    void unknownKeyIsNamedWithItsFullPath() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, \"site\": {\"latitude\": 52, \"longitude\": 13, \"zone\": \"UTC\", \"lattitude\": 1}}");
+        assertTrue(e.getMessage().contains("study.json: site.lattitude: unknown key"), e.getMessage());
+    }
+
+    @Test
+    void unknownTopLevelKeyIsAnError() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", \"patch_size\": 2}");
+        assertTrue(e.getMessage().contains("patch_size: unknown key"), e.getMessage());
+    }
+
+    @Test
+    void wrongTypeNamesTheKeyAndWhatWasExpected() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, \"site\": {\"latitude\": \"north\", \"longitude\": 13, \"zone\": \"UTC\"}}");
+        assertTrue(e.getMessage().endsWith("study.json: site.latitude: expected a number from -90 to 90, got \"north\""), e.getMessage());
+    }
+
+    @Test
+    void latitudeOutOfRangeIsAnError() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, \"site\": {\"latitude\": 95, \"longitude\": 13, \"zone\": \"UTC\"}}");
+        assertTrue(e.getMessage().contains("site.latitude: expected a number from -90 to 90, got 95"), e.getMessage());
+    }
+
+    @Test
+    void longitudeOutOfRangeIsAnError() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, \"site\": {\"latitude\": 5, \"longitude\": 181, \"zone\": \"UTC\"}}");
+        assertTrue(e.getMessage().contains("site.longitude"), e.getMessage());
+    }
+
+    @Test
+    void patchSizeMustBePositive() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", \"patch_m\": 0}");
+        assertTrue(e.getMessage().contains("patch_m: expected a number greater than 0"), e.getMessage());
+    }
+
+    @Test
+    void raysMustBeAPositiveWholeNumber() throws Exception {
+        assertTrue(fails("{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", \"rays\": 0}").getMessage().contains("rays: expected a whole number"));
+        assertTrue(fails("{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", \"rays\": 10.5}").getMessage().contains("rays: expected a whole number"));
+    }
+
+    @Test
+    void albedoOutsideZeroToOneIsAnError() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", \"albedo\": {\"blocks\": {\"Tower\": 1.2}}}");
+        assertTrue(e.getMessage().contains("albedo.blocks.Tower: expected a number from 0 to 1, got 1.2"), e.getMessage());
+    }
+
+    @Test
+    void unknownChoiceListsTheAllowedValues() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", \"sky\": \"cloudy\"}");
+        assertTrue(e.getMessage().contains("sky: expected one of perez, isotropic, got \"cloudy\""), e.getMessage());
+    }
+
+    @Test
+    void badTimeZoneIsAnError() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, \"site\": {\"latitude\": 5, \"longitude\": 1, \"zone\": \"Mars/Olympus\"}}");
+        assertTrue(e.getMessage().contains("site.zone: expected an IANA time zone"), e.getMessage());
+    }
+
+    @Test
+    void missingRequiredKeyIsNamed() throws Exception {
+        InputException e = fails("{" + MIN_SITE + "}");
+        assertTrue(e.getMessage().contains("model.file: missing"), e.getMessage());
+    }
+
+    @Test
+    void wrongTypeInsideAnArrayNamesTheIndex() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\", \"analyse\": [\"A\", 3]}, " + MIN_SITE + "}");
+        assertTrue(e.getMessage().contains("model.analyse[1]: expected a name"), e.getMessage());
+    }
+
+    @Test
+    void stepMinutesMustDivideAnHour() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", \"step_minutes\": 7}");
+        assertTrue(e.getMessage().contains("step_minutes: expected a whole number of minutes that divides 60"), e.getMessage());
+    }
+
+    @Test
+    void thresholdsMustAscend() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", \"outputs\": {\"thresholds_kwh_m2\": [600, 300]}}");
+        assertTrue(e.getMessage().contains("outputs.thresholds_kwh_m2[1]: expected numbers in ascending order"), e.getMessage());
+    }
+
+    @Test
+    void blockBothAnalysedAndContextIsAnError() throws Exception {
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\", \"analyse\": [\"A\"], \"context\": [\"A\"]}, " + MIN_SITE + "}");
+        assertTrue(e.getMessage().contains("model.context[0]"), e.getMessage());
+    }
+
+    @Test
+    void invalidJsonNamesTheLine() throws Exception {
+        InputException e = fails("{\n  \"model\": {\"file\": \"m.obj\"},\n  \"rays\": 12,,\n}");
+        assertTrue(e.getMessage().contains("study.json:3: not valid JSON"), e.getMessage());
+    }
+
+    @Test
+    void duplicateKeyIsAnError() throws Exception {
+        InputException e = fails("{\"rays\": 1, \"rays\": 2}");
+        assertTrue(e.getMessage().contains("not valid JSON") && e.getMessage().contains("rays"), e.getMessage());
+    }
+
+    @Test
+    void climateShorthandTextIsTheSource() throws Exception {
+        Study s = StudyReader.read(write("s.json", "{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", \"climate\": \"w.csv\"}"));
+        assertEquals(dir.toAbsolutePath().resolve("w.csv"), s.climate().file());
+    }
+
+    @Test
+    void flagsOverrideTheFileAndErrorsNameTheFlag() throws Exception {
+        Path p = write("s.json", FULL);
+        Study s = StudyReader.read(p, new StudyOverrides().latitude(10.0).rays(64).sky("perez").climate("clear-sky")
+                .out(Path.of("flag-out")));
+        assertEquals(10.0, s.site().latitudeDeg());
+        assertEquals(16.37, s.site().longitudeDeg());   // from the file
+        assertEquals(64, s.rays());
+        assertEquals(SkyModel.PEREZ, s.sky());
+        assertTrue(s.climate().isClearSky());
+        assertEquals(ClimateFormat.AUTO, s.climate().format());   // the file's "hourly" is moot for clear-sky
+        assertEquals(Path.of("flag-out").toAbsolutePath().normalize(), s.outputs().folder()); // working directory, not the study folder
+        InputException e = assertThrows(InputException.class, () -> StudyReader.read(p, new StudyOverrides().latitude(95.0)));
+        assertEquals("--lat: expected a number from -90 to 90, got 95.0", e.getMessage());
+    }
+
+    @Test
+    void anEmptyListFlagLeavesTheFilesList() throws Exception {
+        Study s = StudyReader.read(write("s.json", FULL), new StudyOverrides().analyse(List.of()).context(List.of()));
+        assertEquals(List.of("A", "B"), s.model().analyse());
+        assertEquals(List.of("C"), s.model().context());
+    }
+
+    @Test
+    void flagsAloneMakeAStudyAndMissingOnesNameTheFlag() {
+        Study s = StudyReader.read(null, new StudyOverrides().model(Path.of("x/model.obj")).latitude(40.0).longitude(-3.7).zone("Europe/Madrid"));
+        assertEquals("model", s.name());
+        assertNull(s.source());
+        assertEquals(Path.of("x/model.obj").toAbsolutePath().normalize(), s.model().file());
+        InputException e = assertThrows(InputException.class, () -> StudyReader.read(null, new StudyOverrides().model(Path.of("m.obj")).latitude(40.0).longitude(1.0)));
+        assertTrue(e.getMessage().startsWith("--zone: missing"), e.getMessage());
+    }
+
+    @Test
+    void writtenStudyReadsBackEqual() throws Exception {
+        Study s = StudyReader.read(write("s.json", FULL));
+        String json = StudyWriter.toJson(s);
+        Path again = write("again/written.json", json);
+        Study t = StudyReader.read(again);
+        assertEquals(new Study(s.name(), s.description(), again.toAbsolutePath().normalize(), s.model(), s.site(), s.climate(),
+                s.albedo(), s.groundIrradiance(), s.patchM(), s.rays(), s.sky(), s.timeBase(), s.sunBins(), s.stepMinutes(),
+                s.outputs(), s.threads()), t);
+        assertEquals(json, StudyWriter.toJson(t));
+        assertTrue(json.endsWith("}\n") && !json.contains("\r"));
+    }
+}
