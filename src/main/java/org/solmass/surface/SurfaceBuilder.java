@@ -32,9 +32,10 @@ import java.util.stream.IntStream;
  *
  * <p>Tolerances scale with the model's bounding-box diagonal D: weld tolerance
  * {@code max(1e-6 D, 1e-9 m)} rounded down to a power of ten (so that decimal coordinates stay on the
- * grid); plane distance tolerance {@code max(1e-5 D, 1 mm)}. The frame used for the union has its
- * origin at the first vertex of the group's first triangle, projected onto the mean plane, so
- * axis-aligned faces with decimal coordinates keep exact local coordinates and exact areas.
+ * grid); plane distance tolerance {@code max(1e-5 D, 1 mm)}. A surface's plane has the area-weighted
+ * mean normal of its triangles and passes through the first vertex of its first triangle, which is
+ * also the origin of the frame used for the union, so axis-aligned faces with decimal coordinates
+ * keep exact local coordinates and exact areas.
  */
 public final class SurfaceBuilder {
     /** Maximum angle between the normals of coplanar triangles, degrees. */
@@ -55,9 +56,12 @@ public final class SurfaceBuilder {
     private SurfaceBuilder() {}
 
     /** Weld tolerance for a model, metres. */
-    public static double weldTolerance(MassingModel m) {
+    public static double weldTolerance(MassingModel m) { return Math.pow(10, -weldDigits(m)); }
+
+    /** The weld grid is {@code 10^-digits} metres: a power of ten, so decimal coordinates stay on it. */
+    static int weldDigits(MassingModel m) {
         double w = Math.max(WELD_REL * diagonal(m), 1e-9);
-        return Math.pow(10, Math.floor(Math.log10(w))); // a power of ten: decimal coordinates stay exact
+        return (int) -Math.floor(Math.log10(w));
     }
 
     /** Plane distance tolerance for a model, metres. */
@@ -73,8 +77,10 @@ public final class SurfaceBuilder {
     /** Builds the surfaces of all blocks, ordered by block, then by first triangle, then by part. */
     public static List<Surface> build(MassingModel m) {
         List<IntList> groups = groupCoplanar(m);
-        double weld = weldTolerance(m), ground = m.minZ();
-        PrecisionModel pm = new PrecisionModel(1.0 / weld);
+        double ground = m.minZ();
+        int digits = weldDigits(m);
+        // exact scale 10^digits (1 / 1e-5 is not exactly 1e5 in binary floating point)
+        PrecisionModel pm = new PrecisionModel(digits >= 0 ? Math.pow(10, digits) : 1.0 / Math.pow(10, -digits));
         List<List<Draft>> perGroup = IntStream.range(0, groups.size()).parallel()
                 .mapToObj(g -> unite(m, groups.get(g), pm, ground)).toList();
         List<Surface> out = new ArrayList<>();
@@ -167,24 +173,19 @@ public final class SurfaceBuilder {
         double[] v = m.vertices();
         int[] tri = m.triangles();
         int k = group.size();
-        double sx = 0, sy = 0, sz = 0, sa = 0, cx = 0, cy = 0, cz = 0;
+        double sx = 0, sy = 0, sz = 0;
         for (int i = 0; i < k; i++) {
             int t = group.get(i);
             double[] c = crossOf(v, tri, t);
             sx += c[0]; sy += c[1]; sz += c[2];
-            double a2 = Math.sqrt(c[0] * c[0] + c[1] * c[1] + c[2] * c[2]);
-            sa += a2;
-            for (int j = 0; j < 3; j++) {
-                int p = tri[3 * t + j] * 3;
-                cx += a2 * v[p] / 3; cy += a2 * v[p + 1] / 3; cz += a2 * v[p + 2] / 3;
-            }
         }
         Vec3 normal = new Vec3(sx, sy, sz).normalized();
-        Vec3 centre = new Vec3(cx / sa, cy / sa, cz / sa); // area centroid of the group, on its mean plane
-        double offset = normal.dot(centre);
+        // The plane: area-weighted mean normal through the first vertex of the group's first triangle
+        // (every corner of the group is within the plane tolerance of that vertex's plane).
         int first = tri[3 * group.get(0)] * 3;
         Vec3 p0 = new Vec3(v[first], v[first + 1], v[first + 2]);
-        SurfaceFrame f0 = SurfaceFrame.of(normal, p0.minus(normal.times(normal.dot(p0) - offset)));
+        double offset = normal.dot(p0);
+        SurfaceFrame f0 = SurfaceFrame.of(normal, p0);
         GeometryFactory gf = new GeometryFactory(pm);
         List<Geometry> polys = new ArrayList<>(k);
         Coordinate[][] triCoords = new Coordinate[k][];
