@@ -59,6 +59,7 @@ public final class Patcher {
             Surface sf = surfaces.get(i);
             if (!analysed[sf.block()]) return List.<Patch>of();
             if (sf.kind() == SurfaceKind.UNDERSIDE && !options.includeUndersides()) return List.<Patch>of();
+            checkGridSize(model, sf, s);
             List<Piece> pieces = mergeSlivers(cut(sf.polygon(), s), SLIVER_FRACTION * s * s);
             List<Patch> ps = new ArrayList<>(pieces.size());
             for (Piece p : pieces) if (p.alive) ps.add(toPatch(ps.size(), model, sf, p, s));
@@ -74,6 +75,21 @@ public final class Patcher {
             }
         }
         return new PatchSet(model, options, surfaces, List.copyOf(patches), analysed, ground, model.minZ());
+    }
+
+    /** Largest grid (cells of one surface's envelope) patched before giving up as a likely unit error. */
+    public static final long MAX_CELLS_PER_SURFACE = 20_000_000L;
+
+    private static void checkGridSize(MassingModel model, Surface sf, double s) {
+        var env = sf.polygon().getEnvelopeInternal();
+        double cells = Math.ceil(env.getMaxX() / s) * Math.ceil(env.getMaxY() / s);
+        if (cells > MAX_CELLS_PER_SURFACE) {
+            throw new InputException("patch size", String.format(java.util.Locale.ROOT,
+                    "surface %s of block '%s' is %.0f m x %.0f m, which at %.3g m patches is %.3g grid cells"
+                            + " (limit %d); check the model's length unit or choose a larger patch size",
+                    sf.label(), model.blockNames().get(sf.block()), env.getMaxX(), env.getMaxY(), s, cells,
+                    MAX_CELLS_PER_SURFACE));
+        }
     }
 
     private static boolean[] selectBlocks(MassingModel model, Set<String> names) {

@@ -109,7 +109,7 @@ public final class SurfaceBuilder {
         double[] n = new double[3];
         int last = -1;
         for (int t = 0; t < nt; t++) {
-            unitNormal(v, tri, t, n);
+            if (!unitNormal(v, tri, t, n)) continue; // zero-area triangle (only in synthetic models)
             int found = -1;
             if (last >= 0 && tb[groups.get(last).get(0)] == tb[t] && matches(planes.get(last), n, v, tri, t, tol)) {
                 found = last;
@@ -154,10 +154,13 @@ public final class SurfaceBuilder {
         return true;
     }
 
-    static void unitNormal(double[] v, int[] tri, int t, double[] out) {
+    /** Writes the unit normal of triangle t; false (and nothing written) for a zero-area triangle. */
+    static boolean unitNormal(double[] v, int[] tri, int t, double[] out) {
         double[] c = crossOf(v, tri, t);
         double l = Math.sqrt(c[0] * c[0] + c[1] * c[1] + c[2] * c[2]);
+        if (!(l > 0) || !Double.isFinite(l)) return false;
         out[0] = c[0] / l; out[1] = c[1] / l; out[2] = c[2] / l;
+        return true;
     }
 
     /** Cross product (b - a) x (c - a) of triangle t: twice its area times its unit normal. */

@@ -221,6 +221,14 @@ class PatcherTest {
     }
 
     @Test
+    void hugeSurfaceForThePatchSizeIsAnInputErrorNotAHang() {
+        // a 100 km wall (e.g. millimetres read as metres) at 1 m patches: 1e5 x 5e4 cells
+        MassingModel m = new TestObj().quad(0, 0, 0, 1e5, 0, 0, 1e5, 0, 5e4, 0, 0, 5e4).model();
+        InputException e = assertThrows(InputException.class, () -> Patcher.build(m, PatchOptions.defaults()));
+        assertTrue(e.getMessage().contains("B0-S0"), e.getMessage());
+    }
+
+    @Test
     void patchSizeMustBePositive() {
         assertThrows(InputException.class, () -> new PatchOptions(0, Set.of(), false));
         assertThrows(InputException.class, () -> new PatchOptions(Double.NaN, Set.of(), false));
