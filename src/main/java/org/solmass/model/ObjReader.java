@@ -123,6 +123,7 @@ public final class ObjReader {
             int startLine = 0;
             while ((line = r.readLine()) != null) {
                 lineNo++;
+                if (lineNo == 1 && !line.isEmpty() && line.charAt(0) == '\uFEFF') line = line.substring(1); // UTF-8 BOM
                 int end = line.length();
                 while (end > 0 && line.charAt(end - 1) <= ' ') end--;
                 if (end > 0 && line.charAt(end - 1) == '\\') {

@@ -5,9 +5,10 @@ import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.Point;
 import org.locationtech.jts.geom.Polygon;
-import org.locationtech.jts.geom.PrecisionModel;
+import org.locationtech.jts.geom.LinearRing;
+import org.locationtech.jts.algorithm.Area;
 import org.locationtech.jts.geom.util.AffineTransformation;
-import org.locationtech.jts.operation.overlayng.UnaryUnionNG;
+import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
 import org.solmass.model.IntList;
 import org.solmass.model.MassingModel;
 import org.solmass.model.Vec3;
@@ -25,17 +26,18 @@ import java.util.stream.IntStream;
  * and every corner of the candidate lies within the plane distance tolerance of the plane of the
  * group's first triangle (compared with the first triangle, not chained, so that a finely
  * tessellated curved wall does not drift into one "plane"). The group is then projected into its
- * frame and united with JTS (OverlayNG) on a fixed precision grid of the weld tolerance: vertices
- * closer than that snap together, which welds the duplicate vertices CAD exports write and closes
- * hairline gaps. Each connected part of the union (triangles sharing an edge, including
- * T-junctions) is one surface; parts that only touch at a point are separate surfaces.
+ * frame and united with JTS (OverlayNG). Before that, vertices are welded by position
+ * ({@link VertexWelder}): CAD exports write duplicate vertices per face, and welded corners make
+ * shared edges coincide exactly. Each connected part of the union (triangles sharing an edge,
+ * including T-junctions) is one surface; parts that only touch at a point are separate surfaces.
+ * Holes narrower than the weld tolerance (mean width = 2 area / perimeter) are hairline gaps
+ * between triangles, not openings, and are filled.
  *
  * <p>Tolerances scale with the model's bounding-box diagonal D: weld tolerance
- * {@code max(1e-6 D, 1e-9 m)} rounded down to a power of ten (so that decimal coordinates stay on the
- * grid); plane distance tolerance {@code max(1e-5 D, 1 mm)}. A surface's plane has the area-weighted
- * mean normal of its triangles and passes through the first vertex of its first triangle, which is
- * also the origin of the frame used for the union, so axis-aligned faces with decimal coordinates
- * keep exact local coordinates and exact areas.
+ * {@code max(1e-6 D, 1e-9 m)}; plane distance tolerance {@code max(1e-5 D, 1 mm)}. A surface's plane
+ * has the area-weighted mean normal of its triangles and passes through the first vertex of its
+ * first triangle, which is also the origin of the frame used for the union, so axis-aligned faces
+ * keep exact local coordinates.
  */
 public final class SurfaceBuilder {
     /** Maximum angle between the normals of coplanar triangles, degrees. */
@@ -56,13 +58,7 @@ public final class SurfaceBuilder {
     private SurfaceBuilder() {}
 
     /** Weld tolerance for a model, metres. */
-    public static double weldTolerance(MassingModel m) { return Math.pow(10, -weldDigits(m)); }
-
-    /** The weld grid is {@code 10^-digits} metres: a power of ten, so decimal coordinates stay on it. */
-    static int weldDigits(MassingModel m) {
-        double w = Math.max(WELD_REL * diagonal(m), 1e-9);
-        return (int) -Math.floor(Math.log10(w));
-    }
+    public static double weldTolerance(MassingModel m) { return Math.max(WELD_REL * diagonal(m), 1e-9); }
 
     /** Plane distance tolerance for a model, metres. */
     public static double planeTolerance(MassingModel m) { return Math.max(PLANE_REL * diagonal(m), PLANE_MIN_M); }
@@ -77,12 +73,10 @@ public final class SurfaceBuilder {
     /** Builds the surfaces of all blocks, ordered by block, then by first triangle, then by part. */
     public static List<Surface> build(MassingModel m) {
         List<IntList> groups = groupCoplanar(m);
-        double ground = m.minZ();
-        int digits = weldDigits(m);
-        // exact scale 10^digits (1 / 1e-5 is not exactly 1e5 in binary floating point)
-        PrecisionModel pm = new PrecisionModel(digits >= 0 ? Math.pow(10, digits) : 1.0 / Math.pow(10, -digits));
+        double ground = m.minZ(), weld = weldTolerance(m);
+        int[] rep = VertexWelder.weld(m.vertices(), weld);
         List<List<Draft>> perGroup = IntStream.range(0, groups.size()).parallel()
-                .mapToObj(g -> unite(m, groups.get(g), pm, ground)).toList();
+                .mapToObj(g -> unite(m, groups.get(g), rep, weld, ground)).toList();
         List<Surface> out = new ArrayList<>();
         int[] perBlock = new int[m.blockNames().size()];
         for (List<Draft> ds : perGroup) {
@@ -171,8 +165,22 @@ public final class SurfaceBuilder {
         return new double[]{uy * wz - uz * wy, uz * wx - ux * wz, ux * wy - uy * wx};
     }
 
+    /** The polygon without holes whose mean width (2 area / perimeter) is below {@code weld}. */
+    static Polygon fillHairlineHoles(Polygon p, double weld) {
+        int nh = p.getNumInteriorRing();
+        if (nh == 0) return p;
+        List<LinearRing> keep = new ArrayList<>(nh);
+        for (int h = 0; h < nh; h++) {
+            LinearRing r = p.getInteriorRingN(h);
+            double area = Math.abs(Area.ofRing(r.getCoordinateSequence())), len = r.getLength();
+            if (2 * area / len >= weld) keep.add(r);
+        }
+        if (keep.size() == nh) return p;
+        return p.getFactory().createPolygon(p.getExteriorRing(), keep.toArray(new LinearRing[0]));
+    }
+
     /** Unites one coplanar group into one surface per connected part. */
-    private static List<Draft> unite(MassingModel m, IntList group, PrecisionModel pm, double groundZ) {
+    private static List<Draft> unite(MassingModel m, IntList group, int[] rep, double weld, double groundZ) {
         double[] v = m.vertices();
         int[] tri = m.triangles();
         int k = group.size();
@@ -185,30 +193,29 @@ public final class SurfaceBuilder {
         Vec3 normal = new Vec3(sx, sy, sz).normalized();
         // The plane: area-weighted mean normal through the first vertex of the group's first triangle
         // (every corner of the group is within the plane tolerance of that vertex's plane).
-        int first = tri[3 * group.get(0)] * 3;
+        int first = rep[tri[3 * group.get(0)]] * 3;
         Vec3 p0 = new Vec3(v[first], v[first + 1], v[first + 2]);
         double offset = normal.dot(p0);
         SurfaceFrame f0 = SurfaceFrame.of(normal, p0);
-        GeometryFactory gf = new GeometryFactory(pm);
+        GeometryFactory gf = FLOATING;
         List<Geometry> polys = new ArrayList<>(k);
         Coordinate[][] triCoords = new Coordinate[k][];
         for (int i = 0; i < k; i++) {
             int t = group.get(i);
             Coordinate[] cs = new Coordinate[4];
             for (int j = 0; j < 3; j++) {
-                int p = tri[3 * t + j] * 3;
+                int p = rep[tri[3 * t + j]] * 3;
                 cs[j] = new Coordinate(f0.localX(v[p], v[p + 1], v[p + 2]), f0.localY(v[p], v[p + 1], v[p + 2]));
-                pm.makePrecise(cs[j]);
             }
             cs[3] = cs[0].copy();
             triCoords[i] = cs;
             polys.add(gf.createPolygon(cs));
         }
-        Geometry union = UnaryUnionNG.union(polys, gf, pm);
+        Geometry union = OverlayNGRobust.union(polys, gf);
         List<Polygon> parts = new ArrayList<>();
         for (int i = 0; i < union.getNumGeometries(); i++) {
             Geometry g = union.getGeometryN(i);
-            if (g instanceof Polygon p && p.getArea() > 0) parts.add(p);
+            if (g instanceof Polygon p && p.getArea() > 0) parts.add(fillHairlineHoles(p, weld));
         }
         List<Draft> out = new ArrayList<>(parts.size());
         if (parts.isEmpty()) return out;
@@ -234,9 +241,8 @@ public final class SurfaceBuilder {
             for (int i = 0; i < k; i++) if (partOf[i] == p) ts.add(group.get(i));
             var env = poly.getEnvelopeInternal();
             SurfaceFrame frame = f0.withOrigin(f0.toWorld(env.getMinX(), env.getMinY()));
-            // Patching works in floating precision: copy the snapped polygon into a floating factory.
-            Polygon local = (Polygon) FLOATING.createGeometry(
-                    AffineTransformation.translationInstance(-env.getMinX(), -env.getMinY()).transform(poly));
+            Polygon local = (Polygon) AffineTransformation.translationInstance(-env.getMinX(), -env.getMinY())
+                    .transform(poly);
             double maxZ = Double.NEGATIVE_INFINITY;
             for (Coordinate c : local.getExteriorRing().getCoordinates()) {
                 maxZ = Math.max(maxZ, frame.toWorld(c.x, c.y).z());

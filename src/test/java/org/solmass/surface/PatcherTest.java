@@ -89,6 +89,52 @@ class PatcherTest {
     }
 
     @Test
+    void southSlopeOfAGableRoofIsARoofTiltedThirtyDegreesFacingSouth() {
+        // slope rising 3 m horizontally at 30 deg: slope length 3 / cos 30, area 10 x 3 / cos 30 (trigonometry)
+        double zr = 4 + 3 * Math.tan(Math.toRadians(30));
+        MassingModel m = new TestObj().block("house")
+                .quad(0, 0, 4, 10, 0, 4, 10, 3, zr, 0, 3, zr)     // south slope
+                .quad(10, 6, 4, 0, 6, 4, 0, 3, zr, 10, 3, zr)     // north slope
+                .quad(0, 0, 0, 10, 0, 0, 10, 0, 4, 0, 0, 4)       // south wall
+                .model();
+        PatchSet ps = Patcher.build(m, PatchOptions.defaults());
+        Surface south = ps.surfaces().stream().filter(x -> x.normal().y() < 0 && x.normal().z() > 0.5).findFirst().orElseThrow();
+        assertEquals(SurfaceKind.ROOF, south.kind());
+        assertEquals(30, south.tiltDeg(), 1e-9);
+        assertEquals(180, south.azimuthDeg(), 1e-9);
+        assertEquals(30 / Math.cos(Math.toRadians(30)), south.areaM2(), 1e-9);
+        assertEquals(Math.sin(Math.toRadians(30)), south.frame().v().z(), 1e-12, "v runs up the slope");
+        assertEquals(1, south.frame().u().x(), 1e-12);
+        assertAreasSum(ps, "gable");
+        for (Patch p : ps.patches()) {
+            if (p.surface() != south.id()) continue;
+            assertEquals(30, p.tiltDeg(), 1e-9);
+            assertEquals(180, p.azimuthDeg(), 1e-9);
+        }
+        Surface north = ps.surfaces().stream().filter(x -> x.normal().y() > 0 && x.normal().z() > 0.5).findFirst().orElseThrow();
+        assertEquals(0, north.azimuthDeg(), 1e-9);
+    }
+
+    @Test
+    void yUpExportOfTheSameBoxGivesTheSameKindsAndAreas() {
+        // the box_plaza block written Y-up: OBJ (x, y, z) = (x, z, -y) of the Z-up model
+        MassingModel zUp = SurfaceBuilderTest.fixture("box_plaza.obj");
+        StringBuilder sb = new StringBuilder();
+        double[] v = zUp.vertices();
+        for (int i = 0; i < v.length; i += 3) sb.append("v ").append(v[i]).append(' ').append(v[i + 2]).append(' ').append(-v[i + 1]).append('\n');
+        for (int t = 0; t < zUp.triangleCount(); t++) {
+            sb.append("f ").append(zUp.triangles()[3 * t] + 1).append(' ').append(zUp.triangles()[3 * t + 1] + 1)
+                    .append(' ').append(zUp.triangles()[3 * t + 2] + 1).append('\n');
+        }
+        MassingModel yUp = org.solmass.model.ObjReader.parse(sb.toString(), "yup.obj",
+                new ModelOptions(UpAxis.Y, LengthUnit.M, 0)).model();
+        assertArrayEquals(zUp.vertices(), yUp.vertices(), 1e-12);
+        double[] a = Patcher.build(zUp, PatchOptions.defaults()).surfaces().stream().mapToDouble(Surface::areaM2).sorted().toArray();
+        double[] b = Patcher.build(yUp, PatchOptions.defaults()).surfaces().stream().mapToDouble(Surface::areaM2).sorted().toArray();
+        assertArrayEquals(a, b, 1e-9);
+    }
+
+    @Test
     void patchAreasSumToSurfaceAreasForRandomBoxes() {
         Random rnd = new Random(2026);
         for (int trial = 0; trial < 25; trial++) {
