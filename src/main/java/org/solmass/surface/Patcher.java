@@ -54,12 +54,12 @@ public final class Patcher {
     public static PatchSet build(MassingModel model, List<Surface> surfaces, PatchOptions options) {
         boolean[] analysed = selectBlocks(model, options.analysedBlocks());
         double s = options.patchSizeM();
+        for (Surface sf : surfaces) if (analysed[sf.block()]) checkGridSize(model, sf, s); // first offender reported
         // Per surface in parallel: cut, merge slivers, build patches with surface-local indices.
         List<List<Patch>> perSurface = IntStream.range(0, surfaces.size()).parallel().mapToObj(i -> {
             Surface sf = surfaces.get(i);
             if (!analysed[sf.block()]) return List.<Patch>of();
             if (sf.kind() == SurfaceKind.UNDERSIDE && !options.includeUndersides()) return List.<Patch>of();
-            checkGridSize(model, sf, s);
             List<Piece> pieces = mergeSlivers(cut(sf.polygon(), s), SLIVER_FRACTION * s * s);
             List<Patch> ps = new ArrayList<>(pieces.size());
             for (Piece p : pieces) if (p.alive) ps.add(toPatch(ps.size(), model, sf, p, s));
