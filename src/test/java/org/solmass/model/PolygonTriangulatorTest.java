@@ -71,7 +71,7 @@ class PolygonTriangulatorTest {
         org.locationtech.jts.geom.GeometryFactory gf = new org.locationtech.jts.geom.GeometryFactory();
         PolygonTriangulator tri = new PolygonTriangulator();
         int tested = 0;
-        for (int trial = 0; trial < 300; trial++) {
+        for (int trial = 0; trial < 150; trial++) {
             java.util.List<org.locationtech.jts.geom.Geometry> cells = new java.util.ArrayList<>();
             for (int k = 0; k < 6 + rnd.nextInt(30); k++) {
                 int x = rnd.nextInt(8), y = rnd.nextInt(8);
@@ -106,7 +106,7 @@ class PolygonTriangulatorTest {
             assertEquals(shell.getArea(), sum, 1e-9, "trial " + trial + " " + shell);
             tested++;
         }
-        assertTrue(tested > 100, "tested " + tested);
+        assertTrue(tested > 50, "tested " + tested);
     }
 
     @Test

@@ -225,6 +225,31 @@ class PatcherTest {
     }
 
     @Test
+    void resultDoesNotDependOnTheThreadCount() throws Exception {
+        TestObj o = new TestObj();
+        for (int b = 0; b < 6; b++) o.block("b" + b).box(b * 7.3, b * 2.1, 0, 5.5, 4.25, 3 + b);
+        MassingModel m = o.model(new ModelOptions(UpAxis.Z, LengthUnit.M, 23));
+        PatchOptions opt = size(0.8);
+        java.util.concurrent.ForkJoinPool one = new java.util.concurrent.ForkJoinPool(1);
+        java.util.concurrent.ForkJoinPool four = new java.util.concurrent.ForkJoinPool(4);
+        try {
+            PatchSet a = one.submit(() -> Patcher.build(m, opt)).get();
+            PatchSet b = four.submit(() -> Patcher.build(m, opt)).get();
+            assertEquals(a.patchCount(), b.patchCount());
+            for (int i = 0; i < a.patchCount(); i++) {
+                Patch p = a.patches().get(i), q = b.patches().get(i);
+                assertEquals(p.id(), q.id());
+                assertEquals(p.areaM2(), q.areaM2(), 0);
+                assertEquals(p.centroid(), q.centroid());
+                assertArrayEquals(p.outline(), q.outline(), 0);
+            }
+        } finally {
+            one.shutdown();
+            four.shutdown();
+        }
+    }
+
+    @Test
     void onlyTheNamedBlocksArePatchedWithTheSameIds() {
         MassingModel m = SurfaceBuilderTest.fixture("box_plaza.obj");
         PatchSet all = Patcher.build(m, PatchOptions.defaults());
