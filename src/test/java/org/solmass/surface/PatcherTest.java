@@ -56,6 +56,8 @@ class PatcherTest {
         // total: roof 60 + facades 40 + 24 + 40 + 24 + plaza 24 (underside not analysed by default)
         assertEquals(212, ps.totalPatchAreaM2(), 1e-9);
         assertEquals(212, ps.patchCount());
+        assertEquals(java.util.Map.of(SurfaceKind.ROOF, 60, SurfaceKind.FACADE, 128, SurfaceKind.GROUND, 24,
+                SurfaceKind.UNDERSIDE, 0), ps.patchCountByKind());
         assertAreasSum(ps, "box");
     }
 
