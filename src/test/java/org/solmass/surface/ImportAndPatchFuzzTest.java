@@ -1,9 +1,10 @@
-package org.solmass.model;
+package org.solmass.surface;
 
 import org.junit.jupiter.api.Test;
 import org.solmass.InputException;
-import org.solmass.surface.PatchOptions;
-import org.solmass.surface.Patcher;
+import org.solmass.model.MassingModel;
+import org.solmass.model.ModelOptions;
+import org.solmass.model.ObjReader;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -12,7 +13,7 @@ import java.util.Random;
 import static org.junit.jupiter.api.Assertions.*;
 
 /** Mutated fixtures either import (and patch) or fail with an InputException naming the source. */
-class ObjReaderFuzzTest {
+class ImportAndPatchFuzzTest {
     private static final String[] FIXTURES = {"box_plaza.obj", "lshape.obj", "usemtl.obj", "blocks.obj", "continuation.obj"};
     private static final String[] TOKENS = {" ", "\n", "\\\n", "/", "//", "-", "0", "1", "-1", "9", "f ", "v ", "o x",
             "g", "#", "1e308", "nan", "2.5", "\t", "usemtl", "-0"};
@@ -22,7 +23,7 @@ class ObjReaderFuzzTest {
         Random rnd = new Random(99);
         int ok = 0, rejected = 0;
         for (int trial = 0; trial < 250; trial++) {
-            String base = Files.readString(ObjReaderTest.fixture(FIXTURES[trial % FIXTURES.length]));
+            String base = Files.readString(java.nio.file.Path.of(ImportAndPatchFuzzTest.class.getResource("/obj/" + FIXTURES[trial % FIXTURES.length]).getPath()));
             StringBuilder sb = new StringBuilder(base);
             int edits = 1 + rnd.nextInt(4);
             for (int e = 0; e < edits; e++) {
