@@ -19,11 +19,11 @@ class ImportAndPatchFuzzTest {
             "g", "#", "1e308", "nan", "2.5", "\t", "usemtl", "-0"};
 
     @Test
-    void mutatedObjNeverFailsWithAnythingButAnInputError() throws IOException {
+    void mutatedObjNeverFailsWithAnythingButAnInputError() throws IOException, java.net.URISyntaxException {
         Random rnd = new Random(99);
         int ok = 0, rejected = 0;
         for (int trial = 0; trial < 250; trial++) {
-            String base = Files.readString(java.nio.file.Path.of(ImportAndPatchFuzzTest.class.getResource("/obj/" + FIXTURES[trial % FIXTURES.length]).getPath()));
+            String base = Files.readString(java.nio.file.Path.of(ImportAndPatchFuzzTest.class.getResource("/obj/" + FIXTURES[trial % FIXTURES.length]).toURI()));
             StringBuilder sb = new StringBuilder(base);
             int edits = 1 + rnd.nextInt(4);
             for (int e = 0; e < edits; e++) {
