@@ -178,7 +178,7 @@ public final class ObjReader {
                 while (pos < n && s.charAt(pos) <= ' ') pos++;
                 int e = pos;
                 while (e < n && s.charAt(e) > ' ') e++;
-                if (e == pos) {
+                if (e == pos || s.charAt(pos) == '#') {
                     throw new InputException(at(ln), "vertex needs 3 coordinates (v x y z), found " + c);
                 }
                 double d;
@@ -208,7 +208,7 @@ public final class ObjReader {
             int nv = verts.size() / 3;
             while (true) {
                 while (pos < n && s.charAt(pos) <= ' ') pos++;
-                if (pos >= n) break;
+                if (pos >= n || s.charAt(pos) == '#') break; // end of line or a trailing comment
                 int e = pos;
                 while (e < n && s.charAt(e) > ' ') e++;
                 int slash = pos;

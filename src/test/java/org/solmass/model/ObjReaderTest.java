@@ -157,6 +157,13 @@ class ObjReaderTest {
     }
 
     @Test
+    void trailingCommentsAfterVerticesAndFacesAreIgnored() {
+        MassingModel m = ObjReader.parse("v 0 0 0 # origin\nv 1 0 0\nv 0 1 0\nf 1 2 3 # first\n", "c.obj",
+                ModelOptions.defaults()).model();
+        assertEquals(1, m.triangleCount());
+    }
+
+    @Test
     void byteOrderMarkAndWindowsLineEndsAreAccepted() {
         ObjReader.Result r = ObjReader.parse("\uFEFFv 0 0 0\r\nv 1 0 0\r\nv 0 1 0\r\nf 1 2 3\r\n", "bom.obj",
                 ModelOptions.defaults());
