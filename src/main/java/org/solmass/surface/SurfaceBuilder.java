@@ -1,6 +1,9 @@
 package org.solmass.surface;
 
 import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.Envelope;
+import org.locationtech.jts.geom.Location;
+import org.locationtech.jts.algorithm.locate.IndexedPointInAreaLocator;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.Point;
@@ -209,7 +212,9 @@ public final class SurfaceBuilder {
             }
             cs[3] = cs[0].copy();
             triCoords[i] = cs;
-            polys.add(gf.createPolygon(cs));
+            double twiceArea = (cs[1].x - cs[0].x) * (cs[2].y - cs[0].y) - (cs[1].y - cs[0].y) * (cs[2].x - cs[0].x);
+            if (twiceArea != 0) polys.add(gf.createPolygon(cs)); // a triangle collapsed by welding adds nothing
+
         }
         Geometry union = OverlayNGRobust.union(polys, gf);
         List<Polygon> parts = new ArrayList<>();
@@ -221,17 +226,26 @@ public final class SurfaceBuilder {
         if (parts.isEmpty()) return out;
         int[] partOf = new int[k];
         if (parts.size() > 1) {
+            Envelope[] envs = new Envelope[parts.size()];
+            IndexedPointInAreaLocator[] locators = new IndexedPointInAreaLocator[parts.size()];
+            for (int p = 0; p < parts.size(); p++) {
+                envs[p] = parts.get(p).getEnvelopeInternal();
+                locators[p] = new IndexedPointInAreaLocator(parts.get(p));
+            }
             for (int i = 0; i < k; i++) {
                 Coordinate[] cs = triCoords[i];
                 Point c = gf.createPoint(new Coordinate((cs[0].x + cs[1].x + cs[2].x) / 3,
                         (cs[0].y + cs[1].y + cs[2].y) / 3));
-                int best = 0; double bestD = Double.POSITIVE_INFINITY;
-                for (int p = 0; p < parts.size(); p++) {
-                    double d = parts.get(p).distance(c);
-                    if (d < bestD) { bestD = d; best = p; }
-                    if (d == 0) break;
+                int best = -1;
+                for (int p = 0; p < parts.size() && best < 0; p++) {
+                    if (envs[p].covers(c.getCoordinate()) && locators[p].locate(c.getCoordinate()) != Location.EXTERIOR) best = p;
                 }
-                partOf[i] = best;
+                double bestD = Double.POSITIVE_INFINITY;
+                for (int p = 0; p < parts.size() && best < 0; p++) { // centroid off every part: nearest part
+                    double d = parts.get(p).distance(c);
+                    if (d < bestD) { bestD = d; partOf[i] = p; }
+                }
+                if (best >= 0) partOf[i] = best;
             }
         }
         int block = m.triangleBlock()[group.get(0)];

@@ -141,6 +141,10 @@ class SurfaceBuilderTest {
         assertEquals(3, ss.size());
         assertEquals(List.of(0, 0, 1), ss.stream().map(Surface::block).toList());
         assertEquals(List.of(0, 1, 0), ss.stream().map(Surface::indexInBlock).toList());
+        // each part keeps the two triangles of its own quad (triangles 0-1, 2-3, 4-5 in file order)
+        assertArrayEquals(new int[]{0, 1}, ss.get(0).triangles());
+        assertArrayEquals(new int[]{2, 3}, ss.get(1).triangles());
+        assertArrayEquals(new int[]{4, 5}, ss.get(2).triangles());
     }
 
     @Test
