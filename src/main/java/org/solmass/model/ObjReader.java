@@ -123,6 +123,7 @@ public final class ObjReader {
             int startLine = 0;
             while ((line = r.readLine()) != null) {
                 lineNo++;
+                if (lineNo == 1 && !line.isEmpty() && line.charAt(0) == '\uFEFF') line = line.substring(1); // UTF-8 BOM
                 int end = line.length();
                 while (end > 0 && line.charAt(end - 1) <= ' ') end--;
                 if (end > 0 && line.charAt(end - 1) == '\\') {
@@ -177,7 +178,7 @@ public final class ObjReader {
                 while (pos < n && s.charAt(pos) <= ' ') pos++;
                 int e = pos;
                 while (e < n && s.charAt(e) > ' ') e++;
-                if (e == pos) {
+                if (e == pos || s.charAt(pos) == '#') {
                     throw new InputException(at(ln), "vertex needs 3 coordinates (v x y z), found " + c);
                 }
                 double d;
@@ -207,7 +208,7 @@ public final class ObjReader {
             int nv = verts.size() / 3;
             while (true) {
                 while (pos < n && s.charAt(pos) <= ' ') pos++;
-                if (pos >= n) break;
+                if (pos >= n || s.charAt(pos) == '#') break; // end of line or a trailing comment
                 int e = pos;
                 while (e < n && s.charAt(e) > ' ') e++;
                 int slash = pos;

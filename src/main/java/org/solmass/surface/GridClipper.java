@@ -26,8 +26,8 @@ final class GridClipper {
 
     private GridClipper() {}
 
-    /** One clipped piece: a polygon in cell (i, j). */
-    record Cut(Polygon polygon, int i, int j) {}
+    /** One clipped piece: a polygon in cell (i, j); {@code full} when it is the whole cell. */
+    record Cut(Polygon polygon, int i, int j, boolean full) {}
 
     static List<Cut> cut(Polygon poly, double s) {
         Envelope env = poly.getEnvelopeInternal();
@@ -52,13 +52,13 @@ final class GridClipper {
                 if (boundary[j * nu + i]) {
                     Geometry clip = OverlayNGRobust.overlay(poly, rect(x0, y0, x1, y1), OverlayNG.INTERSECTION);
                     for (int p = 0; p < clip.getNumGeometries(); p++) {
-                        if (clip.getGeometryN(p) instanceof Polygon part && part.getArea() > 0) out.add(new Cut(part, i, j));
+                        if (clip.getGeometryN(p) instanceof Polygon part && part.getArea() > 0) out.add(new Cut(part, i, j, false));
                     }
                     continue;
                 }
                 double cx = (i + 0.5) * s;
                 while (k < nx && xs[k] < cx) k++;
-                if ((k & 1) == 1) out.add(new Cut(rect(x0, y0, x1, y1), i, j));
+                if ((k & 1) == 1) out.add(new Cut(rect(x0, y0, x1, y1), i, j, true));
             }
         }
         return out;

@@ -24,6 +24,14 @@ public record PatchSet(MassingModel model, PatchOptions options, List<Surface> s
 
     public int patchCount() { return patches.size(); }
 
+    /** Number of patches of each kind (every kind present as a key, in enum order). */
+    public java.util.Map<SurfaceKind, Integer> patchCountByKind() {
+        java.util.Map<SurfaceKind, Integer> m = new java.util.EnumMap<>(SurfaceKind.class);
+        for (SurfaceKind k : SurfaceKind.values()) m.put(k, 0);
+        for (Patch p : patches) m.merge(p.kind(), 1, Integer::sum);
+        return m;
+    }
+
     /** Sum of the patch areas, square metres. */
     public double totalPatchAreaM2() {
         double s = 0;

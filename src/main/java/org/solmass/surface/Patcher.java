@@ -54,24 +54,42 @@ public final class Patcher {
     public static PatchSet build(MassingModel model, List<Surface> surfaces, PatchOptions options) {
         boolean[] analysed = selectBlocks(model, options.analysedBlocks());
         double s = options.patchSizeM();
-        List<List<Piece>> pieces = IntStream.range(0, surfaces.size()).parallel().mapToObj(i -> {
+        for (Surface sf : surfaces) if (analysed[sf.block()]) checkGridSize(model, sf, s); // first offender reported
+        // Per surface in parallel: cut, merge slivers, build patches with surface-local indices.
+        List<List<Patch>> perSurface = IntStream.range(0, surfaces.size()).parallel().mapToObj(i -> {
             Surface sf = surfaces.get(i);
-            if (!analysed[sf.block()]) return List.<Piece>of();
-            if (sf.kind() == SurfaceKind.UNDERSIDE && !options.includeUndersides()) return List.<Piece>of();
-            return mergeSlivers(cut(sf.polygon(), s), SLIVER_FRACTION * s * s);
+            if (!analysed[sf.block()]) return List.<Patch>of();
+            if (sf.kind() == SurfaceKind.UNDERSIDE && !options.includeUndersides()) return List.<Patch>of();
+            List<Piece> pieces = mergeSlivers(cut(sf.polygon(), s), SLIVER_FRACTION * s * s);
+            List<Patch> ps = new ArrayList<>(pieces.size());
+            for (Piece p : pieces) if (p.alive) ps.add(toPatch(ps.size(), model, sf, p, s));
+            return ps;
         }).toList();
         List<Patch> patches = new ArrayList<>();
         boolean ground = false;
         for (Surface sf : surfaces) ground |= sf.kind() == SurfaceKind.GROUND;
-        for (int i = 0; i < surfaces.size(); i++) {
-            Surface sf = surfaces.get(i);
-            int n = 0;
-            for (Piece p : pieces.get(i)) {
-                if (!p.alive) continue;
-                patches.add(toPatch(patches.size(), model, sf, p.geom, n++));
+        for (List<Patch> ps : perSurface) {
+            for (Patch p : ps) {
+                patches.add(new Patch(patches.size(), p.id(), p.block(), p.blockName(), p.surface(), p.kind(),
+                        p.centroid(), p.normal(), p.areaM2(), p.tiltDeg(), p.azimuthDeg(), p.outline()));
             }
         }
         return new PatchSet(model, options, surfaces, List.copyOf(patches), analysed, ground, model.minZ());
+    }
+
+    /** Largest grid (cells of one surface's envelope) patched before giving up as a likely unit error. */
+    public static final long MAX_CELLS_PER_SURFACE = 20_000_000L;
+
+    private static void checkGridSize(MassingModel model, Surface sf, double s) {
+        var env = sf.polygon().getEnvelopeInternal();
+        double cells = Math.ceil(env.getMaxX() / s) * Math.ceil(env.getMaxY() / s);
+        if (cells > MAX_CELLS_PER_SURFACE) {
+            throw new InputException("patch size", String.format(java.util.Locale.ROOT,
+                    "surface %s of block '%s' is %.0f m x %.0f m, which at %.3g m patches is %.3g grid cells"
+                            + " (limit %d); check the model's length unit or choose a larger patch size",
+                    sf.label(), model.blockNames().get(sf.block()), env.getMaxX(), env.getMaxY(), s, cells,
+                    MAX_CELLS_PER_SURFACE));
+        }
     }
 
     private static boolean[] selectBlocks(MassingModel model, Set<String> names) {
@@ -99,20 +117,27 @@ public final class Patcher {
         double area;
         final int i, j;
         boolean alive = true;
+        /** Whether the piece is still the whole, unclipped cell (i, j). */
+        boolean full;
 
-        Piece(Geometry g, int i, int j) { this.geom = g; this.area = g.getArea(); this.i = i; this.j = j; }
+        Piece(Geometry g, int i, int j, boolean full) {
+            this.geom = g; this.area = g.getArea(); this.i = i; this.j = j; this.full = full;
+        }
     }
 
     /** Clips the grid of cell size {@code s}, anchored at (0, 0), to the polygon. */
     static List<Piece> cut(Polygon poly, double s) {
         List<GridClipper.Cut> cuts = GridClipper.cut(poly, s);
         List<Piece> out = new ArrayList<>(cuts.size());
-        for (GridClipper.Cut c : cuts) out.add(new Piece(c.polygon(), c.i(), c.j()));
+        for (GridClipper.Cut c : cuts) out.add(new Piece(c.polygon(), c.i(), c.j(), c.full()));
         return out;
     }
 
     /** Merges pieces below {@code minArea} into neighbours; see the class comment. */
     static List<Piece> mergeSlivers(List<Piece> pieces, double minArea) {
+        boolean any = false;
+        for (Piece p : pieces) any |= p.area < minArea;
+        if (!any || pieces.size() < 2) return pieces;
         Map<Long, List<Piece>> byCell = new HashMap<>();
         for (Piece p : pieces) byCell.computeIfAbsent(cellKey(p.i, p.j), k -> new ArrayList<>()).add(p);
         boolean changed = true;
@@ -146,6 +171,7 @@ public final class Patcher {
                 if (best == null) continue;
                 best.geom = OverlayNGRobust.overlay(best.geom, p.geom, OverlayNG.UNION);
                 best.area = best.geom.getArea();
+                best.full = false;
                 p.alive = false;
                 byCell.get(cellKey(p.i, p.j)).add(best);
                 changed = true;
@@ -156,20 +182,33 @@ public final class Patcher {
 
     private static long cellKey(int i, int j) { return ((long) i << 32) ^ (j & 0xffffffffL); }
 
-    private static Patch toPatch(int index, MassingModel model, Surface sf, Geometry g, int n) {
+    private static Patch toPatch(int n, MassingModel model, Surface sf, Piece piece, double s) {
         SurfaceFrame f = sf.frame();
-        Coordinate c = g.getCentroid().getCoordinate();
-        Polygon largest = null;
-        for (int k = 0; k < g.getNumGeometries(); k++) {
-            Geometry part = g.getGeometryN(k);
-            if (part instanceof Polygon p && (largest == null || p.getArea() > largest.getArea())) largest = p;
+        Geometry g = piece.geom;
+        Vec3 centroid;
+        double[] outline;
+        if (piece.full) { // whole cell: centre and corners are known
+            double x0 = piece.i * s, y0 = piece.j * s;
+            centroid = f.toWorld(x0 + 0.5 * s, y0 + 0.5 * s);
+            outline = new double[12];
+            double[][] cs = {{x0, y0}, {x0 + s, y0}, {x0 + s, y0 + s}, {x0, y0 + s}};
+            for (int k = 0; k < 4; k++) {
+                Vec3 w = f.toWorld(cs[k][0], cs[k][1]);
+                outline[3 * k] = w.x(); outline[3 * k + 1] = w.y(); outline[3 * k + 2] = w.z();
+            }
+        } else {
+            Coordinate c = g.getCentroid().getCoordinate();
+            centroid = f.toWorld(c.x, c.y);
+            Polygon largest = null;
+            for (int k = 0; k < g.getNumGeometries(); k++) {
+                if (g.getGeometryN(k) instanceof Polygon p && (largest == null || p.getArea() > largest.getArea())) largest = p;
+            }
+            outline = outline(largest.getExteriorRing().getCoordinates(), f);
         }
-        double[] outline = outline(largest.getExteriorRing().getCoordinates(), f);
         String id = sf.label() + "-P" + pad4(n);
         Vec3 nrm = sf.normal();
-        return new Patch(index, id, sf.block(), model.blockNames().get(sf.block()), sf.id(), sf.kind(),
-                f.toWorld(c.x, c.y), nrm, g.getArea(), SurfaceClassifier.tiltDeg(nrm),
-                SurfaceClassifier.azimuthDeg(nrm), outline);
+        return new Patch(n, id, sf.block(), model.blockNames().get(sf.block()), sf.id(), sf.kind(),
+                centroid, nrm, piece.area, SurfaceClassifier.tiltDeg(nrm), SurfaceClassifier.azimuthDeg(nrm), outline);
     }
 
     /**

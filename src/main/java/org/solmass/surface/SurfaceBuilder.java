@@ -1,13 +1,17 @@
 package org.solmass.surface;
 
 import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.Envelope;
+import org.locationtech.jts.geom.Location;
+import org.locationtech.jts.algorithm.locate.IndexedPointInAreaLocator;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.Point;
 import org.locationtech.jts.geom.Polygon;
-import org.locationtech.jts.geom.PrecisionModel;
+import org.locationtech.jts.geom.LinearRing;
+import org.locationtech.jts.algorithm.Area;
 import org.locationtech.jts.geom.util.AffineTransformation;
-import org.locationtech.jts.operation.overlayng.UnaryUnionNG;
+import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
 import org.solmass.model.IntList;
 import org.solmass.model.MassingModel;
 import org.solmass.model.Vec3;
@@ -25,16 +29,18 @@ import java.util.stream.IntStream;
  * and every corner of the candidate lies within the plane distance tolerance of the plane of the
  * group's first triangle (compared with the first triangle, not chained, so that a finely
  * tessellated curved wall does not drift into one "plane"). The group is then projected into its
- * frame and united with JTS (OverlayNG) on a fixed precision grid of the weld tolerance: vertices
- * closer than that snap together, which welds the duplicate vertices CAD exports write and closes
- * hairline gaps. Each connected part of the union (triangles sharing an edge, including
- * T-junctions) is one surface; parts that only touch at a point are separate surfaces.
+ * frame and united with JTS (OverlayNG). Before that, vertices are welded by position
+ * ({@link VertexWelder}): CAD exports write duplicate vertices per face, and welded corners make
+ * shared edges coincide exactly. Each connected part of the union (triangles sharing an edge,
+ * including T-junctions) is one surface; parts that only touch at a point are separate surfaces.
+ * Holes narrower than the weld tolerance (mean width = 2 area / perimeter) are hairline gaps
+ * between triangles, not openings, and are filled.
  *
  * <p>Tolerances scale with the model's bounding-box diagonal D: weld tolerance
- * {@code max(1e-6 D, 1e-9 m)} rounded down to a power of ten (so that decimal coordinates stay on the
- * grid); plane distance tolerance {@code max(1e-5 D, 1 mm)}. The frame used for the union has its
- * origin at the first vertex of the group's first triangle, projected onto the mean plane, so
- * axis-aligned faces with decimal coordinates keep exact local coordinates and exact areas.
+ * {@code max(1e-6 D, 1e-9 m)}; plane distance tolerance {@code max(1e-5 D, 1 mm)}. A surface's plane
+ * has the area-weighted mean normal of its triangles and passes through the first vertex of its
+ * first triangle, which is also the origin of the frame used for the union, so axis-aligned faces
+ * keep exact local coordinates.
  */
 public final class SurfaceBuilder {
     /** Maximum angle between the normals of coplanar triangles, degrees. */
@@ -55,10 +61,7 @@ public final class SurfaceBuilder {
     private SurfaceBuilder() {}
 
     /** Weld tolerance for a model, metres. */
-    public static double weldTolerance(MassingModel m) {
-        double w = Math.max(WELD_REL * diagonal(m), 1e-9);
-        return Math.pow(10, Math.floor(Math.log10(w))); // a power of ten: decimal coordinates stay exact
-    }
+    public static double weldTolerance(MassingModel m) { return Math.max(WELD_REL * diagonal(m), 1e-9); }
 
     /** Plane distance tolerance for a model, metres. */
     public static double planeTolerance(MassingModel m) { return Math.max(PLANE_REL * diagonal(m), PLANE_MIN_M); }
@@ -73,10 +76,10 @@ public final class SurfaceBuilder {
     /** Builds the surfaces of all blocks, ordered by block, then by first triangle, then by part. */
     public static List<Surface> build(MassingModel m) {
         List<IntList> groups = groupCoplanar(m);
-        double weld = weldTolerance(m), ground = m.minZ();
-        PrecisionModel pm = new PrecisionModel(1.0 / weld);
+        double ground = m.minZ(), weld = weldTolerance(m);
+        int[] rep = VertexWelder.weld(m.vertices(), weld);
         List<List<Draft>> perGroup = IntStream.range(0, groups.size()).parallel()
-                .mapToObj(g -> unite(m, groups.get(g), pm, ground)).toList();
+                .mapToObj(g -> unite(m, groups.get(g), rep, weld, ground)).toList();
         List<Surface> out = new ArrayList<>();
         int[] perBlock = new int[m.blockNames().size()];
         for (List<Draft> ds : perGroup) {
@@ -103,7 +106,7 @@ public final class SurfaceBuilder {
         double[] n = new double[3];
         int last = -1;
         for (int t = 0; t < nt; t++) {
-            unitNormal(v, tri, t, n);
+            if (!unitNormal(v, tri, t, n)) continue; // zero-area triangle (only in synthetic models)
             int found = -1;
             if (last >= 0 && tb[groups.get(last).get(0)] == tb[t] && matches(planes.get(last), n, v, tri, t, tol)) {
                 found = last;
@@ -148,10 +151,13 @@ public final class SurfaceBuilder {
         return true;
     }
 
-    static void unitNormal(double[] v, int[] tri, int t, double[] out) {
+    /** Writes the unit normal of triangle t; false (and nothing written) for a zero-area triangle. */
+    static boolean unitNormal(double[] v, int[] tri, int t, double[] out) {
         double[] c = crossOf(v, tri, t);
         double l = Math.sqrt(c[0] * c[0] + c[1] * c[1] + c[2] * c[2]);
+        if (!(l > 0) || !Double.isFinite(l)) return false;
         out[0] = c[0] / l; out[1] = c[1] / l; out[2] = c[2] / l;
+        return true;
     }
 
     /** Cross product (b - a) x (c - a) of triangle t: twice its area times its unit normal. */
@@ -162,65 +168,84 @@ public final class SurfaceBuilder {
         return new double[]{uy * wz - uz * wy, uz * wx - ux * wz, ux * wy - uy * wx};
     }
 
+    /** The polygon without holes whose mean width (2 area / perimeter) is below {@code weld}. */
+    static Polygon fillHairlineHoles(Polygon p, double weld) {
+        int nh = p.getNumInteriorRing();
+        if (nh == 0) return p;
+        List<LinearRing> keep = new ArrayList<>(nh);
+        for (int h = 0; h < nh; h++) {
+            LinearRing r = p.getInteriorRingN(h);
+            double area = Math.abs(Area.ofRing(r.getCoordinateSequence())), len = r.getLength();
+            if (2 * area / len >= weld) keep.add(r);
+        }
+        if (keep.size() == nh) return p;
+        return p.getFactory().createPolygon(p.getExteriorRing(), keep.toArray(new LinearRing[0]));
+    }
+
     /** Unites one coplanar group into one surface per connected part. */
-    private static List<Draft> unite(MassingModel m, IntList group, PrecisionModel pm, double groundZ) {
+    private static List<Draft> unite(MassingModel m, IntList group, int[] rep, double weld, double groundZ) {
         double[] v = m.vertices();
         int[] tri = m.triangles();
         int k = group.size();
-        double sx = 0, sy = 0, sz = 0, sa = 0, cx = 0, cy = 0, cz = 0;
+        double sx = 0, sy = 0, sz = 0;
         for (int i = 0; i < k; i++) {
             int t = group.get(i);
             double[] c = crossOf(v, tri, t);
             sx += c[0]; sy += c[1]; sz += c[2];
-            double a2 = Math.sqrt(c[0] * c[0] + c[1] * c[1] + c[2] * c[2]);
-            sa += a2;
-            for (int j = 0; j < 3; j++) {
-                int p = tri[3 * t + j] * 3;
-                cx += a2 * v[p] / 3; cy += a2 * v[p + 1] / 3; cz += a2 * v[p + 2] / 3;
-            }
         }
         Vec3 normal = new Vec3(sx, sy, sz).normalized();
-        Vec3 centre = new Vec3(cx / sa, cy / sa, cz / sa); // area centroid of the group, on its mean plane
-        double offset = normal.dot(centre);
-        int first = tri[3 * group.get(0)] * 3;
+        // The plane: area-weighted mean normal through the first vertex of the group's first triangle
+        // (every corner of the group is within the plane tolerance of that vertex's plane).
+        int first = rep[tri[3 * group.get(0)]] * 3;
         Vec3 p0 = new Vec3(v[first], v[first + 1], v[first + 2]);
-        SurfaceFrame f0 = SurfaceFrame.of(normal, p0.minus(normal.times(normal.dot(p0) - offset)));
-        GeometryFactory gf = new GeometryFactory(pm);
+        double offset = normal.dot(p0);
+        SurfaceFrame f0 = SurfaceFrame.of(normal, p0);
+        GeometryFactory gf = FLOATING;
         List<Geometry> polys = new ArrayList<>(k);
         Coordinate[][] triCoords = new Coordinate[k][];
         for (int i = 0; i < k; i++) {
             int t = group.get(i);
             Coordinate[] cs = new Coordinate[4];
             for (int j = 0; j < 3; j++) {
-                int p = tri[3 * t + j] * 3;
+                int p = rep[tri[3 * t + j]] * 3;
                 cs[j] = new Coordinate(f0.localX(v[p], v[p + 1], v[p + 2]), f0.localY(v[p], v[p + 1], v[p + 2]));
-                pm.makePrecise(cs[j]);
             }
             cs[3] = cs[0].copy();
             triCoords[i] = cs;
-            polys.add(gf.createPolygon(cs));
+            double twiceArea = (cs[1].x - cs[0].x) * (cs[2].y - cs[0].y) - (cs[1].y - cs[0].y) * (cs[2].x - cs[0].x);
+            if (twiceArea != 0) polys.add(gf.createPolygon(cs)); // a triangle collapsed by welding adds nothing
+
         }
-        Geometry union = UnaryUnionNG.union(polys, gf, pm);
+        Geometry union = OverlayNGRobust.union(polys, gf);
         List<Polygon> parts = new ArrayList<>();
         for (int i = 0; i < union.getNumGeometries(); i++) {
             Geometry g = union.getGeometryN(i);
-            if (g instanceof Polygon p && p.getArea() > 0) parts.add(p);
+            if (g instanceof Polygon p && p.getArea() > 0) parts.add(fillHairlineHoles(p, weld));
         }
         List<Draft> out = new ArrayList<>(parts.size());
         if (parts.isEmpty()) return out;
         int[] partOf = new int[k];
         if (parts.size() > 1) {
+            Envelope[] envs = new Envelope[parts.size()];
+            IndexedPointInAreaLocator[] locators = new IndexedPointInAreaLocator[parts.size()];
+            for (int p = 0; p < parts.size(); p++) {
+                envs[p] = parts.get(p).getEnvelopeInternal();
+                locators[p] = new IndexedPointInAreaLocator(parts.get(p));
+            }
             for (int i = 0; i < k; i++) {
                 Coordinate[] cs = triCoords[i];
                 Point c = gf.createPoint(new Coordinate((cs[0].x + cs[1].x + cs[2].x) / 3,
                         (cs[0].y + cs[1].y + cs[2].y) / 3));
-                int best = 0; double bestD = Double.POSITIVE_INFINITY;
-                for (int p = 0; p < parts.size(); p++) {
-                    double d = parts.get(p).distance(c);
-                    if (d < bestD) { bestD = d; best = p; }
-                    if (d == 0) break;
+                int best = -1;
+                for (int p = 0; p < parts.size() && best < 0; p++) {
+                    if (envs[p].covers(c.getCoordinate()) && locators[p].locate(c.getCoordinate()) != Location.EXTERIOR) best = p;
                 }
-                partOf[i] = best;
+                double bestD = Double.POSITIVE_INFINITY;
+                for (int p = 0; p < parts.size() && best < 0; p++) { // centroid off every part: nearest part
+                    double d = parts.get(p).distance(c);
+                    if (d < bestD) { bestD = d; partOf[i] = p; }
+                }
+                if (best >= 0) partOf[i] = best;
             }
         }
         int block = m.triangleBlock()[group.get(0)];
@@ -230,9 +255,8 @@ public final class SurfaceBuilder {
             for (int i = 0; i < k; i++) if (partOf[i] == p) ts.add(group.get(i));
             var env = poly.getEnvelopeInternal();
             SurfaceFrame frame = f0.withOrigin(f0.toWorld(env.getMinX(), env.getMinY()));
-            // Patching works in floating precision: copy the snapped polygon into a floating factory.
-            Polygon local = (Polygon) FLOATING.createGeometry(
-                    AffineTransformation.translationInstance(-env.getMinX(), -env.getMinY()).transform(poly));
+            Polygon local = (Polygon) AffineTransformation.translationInstance(-env.getMinX(), -env.getMinY())
+                    .transform(poly);
             double maxZ = Double.NEGATIVE_INFINITY;
             for (Coordinate c : local.getExteriorRing().getCoordinates()) {
                 maxZ = Math.max(maxZ, frame.toWorld(c.x, c.y).z());

@@ -157,6 +157,21 @@ class ObjReaderTest {
     }
 
     @Test
+    void trailingCommentsAfterVerticesAndFacesAreIgnored() {
+        MassingModel m = ObjReader.parse("v 0 0 0 # origin\nv 1 0 0\nv 0 1 0\nf 1 2 3 # first\n", "c.obj",
+                ModelOptions.defaults()).model();
+        assertEquals(1, m.triangleCount());
+    }
+
+    @Test
+    void byteOrderMarkAndWindowsLineEndsAreAccepted() {
+        ObjReader.Result r = ObjReader.parse("\uFEFFv 0 0 0\r\nv 1 0 0\r\nv 0 1 0\r\nf 1 2 3\r\n", "bom.obj",
+                ModelOptions.defaults());
+        assertEquals(3, r.model().vertexCount());
+        assertTrue(r.warnings().isEmpty(), r.warnings().toString());
+    }
+
+    @Test
     void stringSourceWithoutNameUsesDefaultBlock() {
         MassingModel m = ObjReader.parse("v 0 0 0\nv 1 0 0\nv 0 1 0\nf 1 2 3\n", "", ModelOptions.defaults()).model();
         assertEquals(List.of("default"), m.blockNames());

@@ -64,6 +64,52 @@ class PolygonTriangulatorTest {
     }
 
     @Test
+    void randomOrthogonalPolygonsWithCollinearRunsKeepTheirArea() {
+        // Outlines of unions of random grid squares (JTS): strongly concave, many collinear vertices.
+        // Reference area: JTS Polygon.getArea of the hole-free exterior ring (shoelace).
+        Random rnd = new Random(31);
+        org.locationtech.jts.geom.GeometryFactory gf = new org.locationtech.jts.geom.GeometryFactory();
+        PolygonTriangulator tri = new PolygonTriangulator();
+        int tested = 0;
+        for (int trial = 0; trial < 150; trial++) {
+            java.util.List<org.locationtech.jts.geom.Geometry> cells = new java.util.ArrayList<>();
+            for (int k = 0; k < 6 + rnd.nextInt(30); k++) {
+                int x = rnd.nextInt(8), y = rnd.nextInt(8);
+                cells.add(gf.toGeometry(new org.locationtech.jts.geom.Envelope(x, x + 1, y, y + 1)));
+            }
+            org.locationtech.jts.geom.Geometry u = org.locationtech.jts.operation.union.UnaryUnionOp.union(cells);
+            org.locationtech.jts.geom.Polygon p = null;
+            for (int i = 0; i < u.getNumGeometries(); i++) {
+                if (u.getGeometryN(i) instanceof org.locationtech.jts.geom.Polygon q && (p == null || q.getArea() > p.getArea())) p = q;
+            }
+            org.locationtech.jts.geom.Coordinate[] cs = p.getExteriorRing().getCoordinates();
+            org.locationtech.jts.geom.Polygon shell = gf.createPolygon(cs);
+            if (!shell.isSimple() || !shell.isValid()) continue; // a shell touching itself at a corner is not simple
+            int n = cs.length - 1;
+            boolean reverse = !org.locationtech.jts.algorithm.Orientation.isCCW(cs);
+            double[] v = new double[3 * n];
+            int[] face = new int[n];
+            for (int i = 0; i < n; i++) {
+                org.locationtech.jts.geom.Coordinate c = cs[reverse ? n - i : i];
+                v[3 * i] = c.x; v[3 * i + 1] = c.y; v[3 * i + 2] = 2.0;
+                face[i] = i;
+            }
+            IntList out = new IntList();
+            tri.triangulate(face, n, v, out);
+            double sum = 0;
+            for (int t = 0; t < out.size(); t += 3) {
+                int a = out.get(t) * 3, b = out.get(t + 1) * 3, c = out.get(t + 2) * 3;
+                double cr = (v[b] - v[a]) * (v[c + 1] - v[a + 1]) - (v[b + 1] - v[a + 1]) * (v[c] - v[a]);
+                assertTrue(cr >= 0, "flipped triangle in trial " + trial);
+                sum += cr / 2;
+            }
+            assertEquals(shell.getArea(), sum, 1e-9, "trial " + trial + " " + shell);
+            tested++;
+        }
+        assertTrue(tested > 50, "tested " + tested);
+    }
+
+    @Test
     void repeatedVerticesAndClosingRepeatAreIgnored() {
         double[] v = {0, 0, 0, 1, 0, 0, 1, 1, 0, 0, 1, 0};
         IntList out = new IntList();

@@ -56,6 +56,8 @@ class PatcherTest {
         // total: roof 60 + facades 40 + 24 + 40 + 24 + plaza 24 (underside not analysed by default)
         assertEquals(212, ps.totalPatchAreaM2(), 1e-9);
         assertEquals(212, ps.patchCount());
+        assertEquals(java.util.Map.of(SurfaceKind.ROOF, 60, SurfaceKind.FACADE, 128, SurfaceKind.GROUND, 24,
+                SurfaceKind.UNDERSIDE, 0), ps.patchCountByKind());
         assertAreasSum(ps, "box");
     }
 
@@ -86,6 +88,52 @@ class PatcherTest {
         assertEquals(90, east.azimuthDeg(), 1e-9);
         Patch west = ps.patches().stream().filter(p -> p.normal().x() < -0.99).findFirst().orElseThrow();
         assertEquals(270, west.azimuthDeg(), 1e-9);
+    }
+
+    @Test
+    void southSlopeOfAGableRoofIsARoofTiltedThirtyDegreesFacingSouth() {
+        // slope rising 3 m horizontally at 30 deg: slope length 3 / cos 30, area 10 x 3 / cos 30 (trigonometry)
+        double zr = 4 + 3 * Math.tan(Math.toRadians(30));
+        MassingModel m = new TestObj().block("house")
+                .quad(0, 0, 4, 10, 0, 4, 10, 3, zr, 0, 3, zr)     // south slope
+                .quad(10, 6, 4, 0, 6, 4, 0, 3, zr, 10, 3, zr)     // north slope
+                .quad(0, 0, 0, 10, 0, 0, 10, 0, 4, 0, 0, 4)       // south wall
+                .model();
+        PatchSet ps = Patcher.build(m, PatchOptions.defaults());
+        Surface south = ps.surfaces().stream().filter(x -> x.normal().y() < 0 && x.normal().z() > 0.5).findFirst().orElseThrow();
+        assertEquals(SurfaceKind.ROOF, south.kind());
+        assertEquals(30, south.tiltDeg(), 1e-9);
+        assertEquals(180, south.azimuthDeg(), 1e-9);
+        assertEquals(30 / Math.cos(Math.toRadians(30)), south.areaM2(), 1e-9);
+        assertEquals(Math.sin(Math.toRadians(30)), south.frame().v().z(), 1e-12, "v runs up the slope");
+        assertEquals(1, south.frame().u().x(), 1e-12);
+        assertAreasSum(ps, "gable");
+        for (Patch p : ps.patches()) {
+            if (p.surface() != south.id()) continue;
+            assertEquals(30, p.tiltDeg(), 1e-9);
+            assertEquals(180, p.azimuthDeg(), 1e-9);
+        }
+        Surface north = ps.surfaces().stream().filter(x -> x.normal().y() > 0 && x.normal().z() > 0.5).findFirst().orElseThrow();
+        assertEquals(0, north.azimuthDeg(), 1e-9);
+    }
+
+    @Test
+    void yUpExportOfTheSameBoxGivesTheSameKindsAndAreas() {
+        // the box_plaza block written Y-up: OBJ (x, y, z) = (x, z, -y) of the Z-up model
+        MassingModel zUp = SurfaceBuilderTest.fixture("box_plaza.obj");
+        StringBuilder sb = new StringBuilder();
+        double[] v = zUp.vertices();
+        for (int i = 0; i < v.length; i += 3) sb.append("v ").append(v[i]).append(' ').append(v[i + 2]).append(' ').append(-v[i + 1]).append('\n');
+        for (int t = 0; t < zUp.triangleCount(); t++) {
+            sb.append("f ").append(zUp.triangles()[3 * t] + 1).append(' ').append(zUp.triangles()[3 * t + 1] + 1)
+                    .append(' ').append(zUp.triangles()[3 * t + 2] + 1).append('\n');
+        }
+        MassingModel yUp = org.solmass.model.ObjReader.parse(sb.toString(), "yup.obj",
+                new ModelOptions(UpAxis.Y, LengthUnit.M, 0)).model();
+        assertArrayEquals(zUp.vertices(), yUp.vertices(), 1e-12);
+        double[] a = Patcher.build(zUp, PatchOptions.defaults()).surfaces().stream().mapToDouble(Surface::areaM2).sorted().toArray();
+        double[] b = Patcher.build(yUp, PatchOptions.defaults()).surfaces().stream().mapToDouble(Surface::areaM2).sorted().toArray();
+        assertArrayEquals(a, b, 1e-9);
     }
 
     @Test
@@ -179,6 +227,31 @@ class PatcherTest {
     }
 
     @Test
+    void resultDoesNotDependOnTheThreadCount() throws Exception {
+        TestObj o = new TestObj();
+        for (int b = 0; b < 6; b++) o.block("b" + b).box(b * 7.3, b * 2.1, 0, 5.5, 4.25, 3 + b);
+        MassingModel m = o.model(new ModelOptions(UpAxis.Z, LengthUnit.M, 23));
+        PatchOptions opt = size(0.8);
+        java.util.concurrent.ForkJoinPool one = new java.util.concurrent.ForkJoinPool(1);
+        java.util.concurrent.ForkJoinPool four = new java.util.concurrent.ForkJoinPool(4);
+        try {
+            PatchSet a = one.submit(() -> Patcher.build(m, opt)).get();
+            PatchSet b = four.submit(() -> Patcher.build(m, opt)).get();
+            assertEquals(a.patchCount(), b.patchCount());
+            for (int i = 0; i < a.patchCount(); i++) {
+                Patch p = a.patches().get(i), q = b.patches().get(i);
+                assertEquals(p.id(), q.id());
+                assertEquals(p.areaM2(), q.areaM2(), 0);
+                assertEquals(p.centroid(), q.centroid());
+                assertArrayEquals(p.outline(), q.outline(), 0);
+            }
+        } finally {
+            one.shutdown();
+            four.shutdown();
+        }
+    }
+
+    @Test
     void onlyTheNamedBlocksArePatchedWithTheSameIds() {
         MassingModel m = SurfaceBuilderTest.fixture("box_plaza.obj");
         PatchSet all = Patcher.build(m, PatchOptions.defaults());
@@ -218,6 +291,14 @@ class PatcherTest {
         PatchSet box = Patcher.build(new TestObj().box(0, 0, 1.5, 3, 3, 3).model(), PatchOptions.defaults());
         assertFalse(box.hasGroundFaces());
         assertEquals(1.5, box.groundLevelZ(), 0);
+    }
+
+    @Test
+    void hugeSurfaceForThePatchSizeIsAnInputErrorNotAHang() {
+        // a 100 km wall (e.g. millimetres read as metres) at 1 m patches: 1e5 x 5e4 cells
+        MassingModel m = new TestObj().quad(0, 0, 0, 1e5, 0, 0, 1e5, 0, 5e4, 0, 0, 5e4).model();
+        InputException e = assertThrows(InputException.class, () -> Patcher.build(m, PatchOptions.defaults()));
+        assertTrue(e.getMessage().contains("B0-S0"), e.getMessage());
     }
 
     @Test

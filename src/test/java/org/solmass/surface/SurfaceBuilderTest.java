@@ -68,6 +68,46 @@ class SurfaceBuilderTest {
     }
 
     @Test
+    void noisyDuplicatedVerticesOfARotatedWallWeldIntoOneSurface() {
+        // 6 x 3 m wall split into 3 x 3 quads, each with its own vertex copies carrying +-3e-7 m of
+        // noise (float32-like), model rotated by 37 deg: one surface of 18 m2, no holes
+        java.util.Random rnd = new java.util.Random(5);
+        TestObj o = new TestObj();
+        for (int i = 0; i < 3; i++) {
+            for (int j = 0; j < 3; j++) {
+                double[] c = {2 * i, 0, j, 2 * i + 2, 0, j, 2 * i + 2, 0, j + 1, 2 * i, 0, j + 1};
+                for (int k = 0; k < c.length; k++) if (k % 3 != 1) c[k] += (rnd.nextDouble() - 0.5) * 6e-7;
+                o.quad(c);
+            }
+        }
+        MassingModel m = o.model(new ModelOptions(org.solmass.model.UpAxis.Z, org.solmass.model.LengthUnit.M, 37));
+        List<Surface> ss = SurfaceBuilder.build(m);
+        assertEquals(1, ss.size());
+        assertEquals(0, ss.get(0).polygon().getNumInteriorRing());
+        assertEquals(18, ss.get(0).areaM2(), 1e-5); // noise of 3e-7 m on a 18 m perimeter: < 1e-5 m2
+        assertEquals(18, ss.get(0).triangles().length);
+    }
+
+    @Test
+    void smallRealOpeningIsKeptAsAHole() {
+        // 4 x 4 m roof with a 0.1 x 0.1 m opening (far wider than the weld tolerance): area 16 - 0.01
+        MassingModel m = new TestObj()
+                .quad(0, 0, 3, 4, 0, 3, 2.05, 1.95, 3, 1.95, 1.95, 3)
+                .quad(4, 0, 3, 4, 4, 3, 2.05, 2.05, 3, 2.05, 1.95, 3)
+                .quad(4, 4, 3, 0, 4, 3, 1.95, 2.05, 3, 2.05, 2.05, 3)
+                .quad(0, 4, 3, 0, 0, 3, 1.95, 1.95, 3, 1.95, 2.05, 3).model();
+        Surface s = SurfaceBuilder.build(m).get(0);
+        assertEquals(1, s.polygon().getNumInteriorRing());
+        assertEquals(15.99, s.areaM2(), 1e-9);
+    }
+
+    @Test
+    void welderMapsCloseVerticesToTheFirstOne() {
+        double[] v = {0, 0, 0, 1, 0, 0, 1e-7, 0, 0, 1, 2e-7, 0, 0.5, 0.5, 0.5};
+        assertArrayEquals(new int[]{0, 1, 0, 1, 4}, VertexWelder.weld(v, 1e-6));
+    }
+
+    @Test
     void tJunctionNeighboursMergeIntoOneSurface() {
         MassingModel m = new TestObj()
                 .quad(0, 0, 0, 2, 0, 0, 2, 2, 0, 0, 2, 0)
@@ -80,7 +120,7 @@ class SurfaceBuilderTest {
 
     @Test
     void nearDuplicateVerticesAreWelded() {
-        double e = 1e-9; // far below the weld tolerance 1e-6 x diagonal
+        double e = 1e-6; // below the weld tolerance 1e-6 x diagonal (4.5e-6 m here), like float32 export noise
         MassingModel m = new TestObj()
                 .quad(0, 0, 0, 2, 0, 0, 2, 2, 0, 0, 2, 0)
                 .quad(2 + e, 0, 0, 4, 0, 0, 4, 2, 0, 2 - e, 2, 0).model();
@@ -101,6 +141,10 @@ class SurfaceBuilderTest {
         assertEquals(3, ss.size());
         assertEquals(List.of(0, 0, 1), ss.stream().map(Surface::block).toList());
         assertEquals(List.of(0, 1, 0), ss.stream().map(Surface::indexInBlock).toList());
+        // each part keeps the two triangles of its own quad (triangles 0-1, 2-3, 4-5 in file order)
+        assertArrayEquals(new int[]{0, 1}, ss.get(0).triangles());
+        assertArrayEquals(new int[]{2, 3}, ss.get(1).triangles());
+        assertArrayEquals(new int[]{4, 5}, ss.get(2).triangles());
     }
 
     @Test
