@@ -54,8 +54,7 @@ public final class AnalyseCommand implements Callable<Integer> {
             o = AnalysisRun.run(study, progress);
             progress.begin("write", 0);
             for (String w : o.warnings()) System.err.println("solmass: warning: " + w);
-            double ts = AnalysisRun.seconds(t0);
-            List<Path> files = ResultFiles.write(o, ts);
+            List<Path> files = ResultFiles.write(o);
             printSummary(o, files, AnalysisRun.seconds(t0));
         }
         return Main.EXIT_OK;

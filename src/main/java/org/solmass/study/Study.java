@@ -101,7 +101,7 @@ public record Study(String name, String description, Path source, Model model, S
     public record Climate(Path file, ClimateFormat format, IntervalLabel intervalLabel, boolean fillGaps,
                           int year) {
         public static final int DEFAULT_YEAR = 2025;
-        public static final Climate CLEAR_SKY = new Climate(null, ClimateFormat.AUTO, IntervalLabel.END, false, DEFAULT_YEAR);
+        public static final Climate CLEAR_SKY = new Climate(null, ClimateFormat.AUTO, IntervalLabel.START, false, DEFAULT_YEAR);
 
         public boolean isClearSky() { return file == null; }
     }

@@ -168,7 +168,7 @@ public final class StudyReader {
         Path file = source.equalsIgnoreCase(CLEAR_SKY) ? null : base.resolve(source).normalize();
         ClimateFormat format = k.choice("format", ClimateFormat.class, ClimateFormat.AUTO);
         Climate climate = new Climate(file, file == null ? ClimateFormat.AUTO : format,   // format is moot for clear-sky
-                k.choice("interval_label", IntervalLabel.class, IntervalLabel.END),
+                k.choice("interval_label", IntervalLabel.class, IntervalLabel.START),
                 k.bool("fill_gaps", false),
                 k.integer("year", Climate.DEFAULT_YEAR, 1900, 2100));
         k.finish();

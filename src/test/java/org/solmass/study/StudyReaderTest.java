@@ -106,7 +106,7 @@ class StudyReaderTest {
         assertEquals(0, s.site().elevationM());
         assertTrue(s.climate().isClearSky());
         assertEquals(ClimateFormat.AUTO, s.climate().format());
-        assertEquals(IntervalLabel.END, s.climate().intervalLabel());
+        assertEquals(IntervalLabel.START, s.climate().intervalLabel());
         assertFalse(s.climate().fillGaps());
         assertEquals(Climate.DEFAULT_YEAR, s.climate().year());
         assertEquals(0.2, s.albedo().ground());
