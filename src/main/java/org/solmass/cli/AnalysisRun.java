@@ -64,21 +64,16 @@ public final class AnalysisRun {
     /** Names of the analysed blocks; checks that every named block exists. */
     public static Set<String> analysedBlocks(Study study, MassingModel model) {
         List<String> names = model.blockNames();
-        for (String n : study.model().analyse()) requireBlock(names, n, "model.analyse");
-        for (String n : study.model().context()) requireBlock(names, n, "model.context");
+        org.solmass.study.StudyReader.checkBlockNames(study, names);
         Set<String> out = new LinkedHashSet<>();
         for (String n : names) if (study.model().isAnalysed(n)) out.add(n);
         if (out.isEmpty()) {
-            throw new InputException("model.analyse", "no block is left to analyse: every block of "
-                    + model.source() + " is listed as context " + names);
+            String where = study.source() == null ? "--context" : study.source() + ": model.context";
+            throw new InputException(where, "no block is left to analyse: every block of "
+                    + model.source() + " " + names + " is listed as context; list at least one block in"
+                    + " model.analyse (--analyse) or drop one from the context");
         }
         return out;
-    }
-
-    private static void requireBlock(List<String> names, String n, String key) {
-        if (!names.contains(n)) {
-            throw new InputException(key, "no block named '" + n + "' in the model; its blocks are " + names);
-        }
     }
 
     /** The weather series of the study, with the time base resolved. */

@@ -21,7 +21,18 @@ public final class ClimateSource {
 
     public static WeatherSeries load(SolarCalculator calc, ClimateSpec spec) {
         if (spec.kind() == ClimateSpec.Kind.CLEAR_SKY) return clearSky(calc, spec);
-        CsvLines csv = CsvLines.read(spec.file());
+        return fromLines(calc, spec, CsvLines.read(spec.file()));
+    }
+
+    /**
+     * Reads climate text as if it were the spec's file (the spec's file is ignored; {@code name}
+     * names the text in messages). For tests and fuzzing.
+     */
+    public static WeatherSeries parse(SolarCalculator calc, ClimateSpec spec, String name, String text) {
+        return fromLines(calc, spec, CsvLines.of(name, text.lines().toList()));
+    }
+
+    private static WeatherSeries fromLines(SolarCalculator calc, ClimateSpec spec, CsvLines csv) {
         ClimateSpec.Format f = spec.format() == ClimateSpec.Format.AUTO ? detect(csv) : spec.format();
         switch (f) {
             case MONTH_HOUR: return monthHour(calc, csv);

@@ -27,9 +27,16 @@ final class CsvLines {
         List<String> text;
         try {
             text = Files.readAllLines(file, StandardCharsets.UTF_8);
+        } catch (java.nio.file.NoSuchFileException e) {
+            throw new InputException(file.toString(), "climate file not found, expected a CSV file of docs/climate-formats.md", e);
         } catch (IOException e) {
             throw new InputException(file.toString(), "cannot read climate file: " + e.getMessage(), e);
         }
+        return of(file.toString(), text);
+    }
+
+    /** The lines of a climate text already read; {@code name} names it in messages. */
+    static CsvLines of(String name, List<String> text) {
         Line header = null;
         List<Line> rows = new ArrayList<>();
         for (int i = 0; i < text.size(); i++) {
@@ -40,8 +47,8 @@ final class CsvLines {
             for (int c = 0; c < cells.length; c++) cells[c] = cells[c].strip();
             if (header == null) header = new Line(i + 1, cells); else rows.add(new Line(i + 1, cells));
         }
-        if (header == null) throw new InputException(file.toString(), "empty climate file (no header line)");
-        return new CsvLines(file.toString(), header, rows);
+        if (header == null) throw new InputException(name, "empty climate file (no header line)");
+        return new CsvLines(name, header, rows);
     }
 
     String at(Line l) { return InputException.at(name, l.number()); }

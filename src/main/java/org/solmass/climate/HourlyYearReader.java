@@ -46,13 +46,17 @@ final class HourlyYearReader {
         Instant[] t = new Instant[n0];
         for (int i = 0; i < n0; i++) {
             t[i] = parseTime(csv, csv.rows.get(i), ct, off);
-            if (i > 0 && !t[i].isAfter(t[i - 1])) throw new InputException(csv.at(csv.rows.get(i)), "timestamp not after the previous row's");
+            if (i > 0 && !t[i].isAfter(t[i - 1])) {
+                throw new InputException(csv.at(csv.rows.get(i)), "timestamp " + LocalDateTime.ofInstant(t[i], off) + " is not after the previous row's "
+                        + LocalDateTime.ofInstant(t[i - 1], off) + "; rows must be in time order, one per interval");
+            }
         }
         long step = Duration.between(t[0], t[1]).getSeconds();
         if (step <= 0) throw new InputException(csv.at(csv.rows.get(1)), "timestamps must increase");
         if (step < 60 || (step <= 3600 ? 3600 % step != 0 : step != 3600)) {
             throw new InputException(csv.at(csv.rows.get(1)), "the step (" + step + " s from the first two rows) must divide one hour");
         }
+        checkGaps(csv, t, step, off, spec.fillGapsMaxSteps());
         long span = Duration.between(t[0], t[n0 - 1]).getSeconds();
         int n = (int) (span / step) + 1;
         double[][] v = new double[4][n];
@@ -117,12 +121,34 @@ final class HourlyYearReader {
             if (run > maxRun || i == 0 || j == n) {
                 throw new InputException(where[i], (missingRows ? "missing step" : "missing " + name + " value") + (run > 1 ? "s (" + run + " in a row)" : "")
                         + (missingRows ? " after this line, from " + missingAt[i] : "")
-                        + (maxRun > 0 ? "; only gaps of up to " + maxRun + " steps inside the file are filled" : "; use --fill-gaps N to interpolate short gaps"));
+                        + gapAdvice(maxRun));
             }
             for (int k = i; k < j; k++) a[k] = a[i - 1] + (a[j] - a[i - 1]) * (k - i + 1) / (run + 1);
             if (!missingRows) rep.repair("missing " + name + " values filled by linear interpolation", where[i]);
             i = j;
         }
+    }
+
+    /**
+     * Refuses a gap between two rows longer than the gaps that are filled, before any array of the
+     * file's span is made: the span is then at most (rows x (maxRun + 1)) steps, whatever the timestamps.
+     */
+    private static void checkGaps(CsvLines csv, Instant[] t, long step, ZoneOffset off, int maxRun) {
+        for (int i = 1; i < t.length; i++) {
+            long d = Duration.between(t[i - 1], t[i]).getSeconds();
+            CsvLines.Line l = csv.rows.get(i);
+            if (d % step != 0) throw new InputException(csv.at(l), "timestamp is not on the " + step / 60 + "-minute grid of the first rows");
+            long missing = d / step - 1;
+            if (missing > maxRun) {
+                throw new InputException(csv.at(csv.rows.get(i - 1)), "missing step" + (missing > 1 ? "s (" + missing + " in a row)" : "")
+                        + " after this line, from " + LocalDateTime.ofInstant(t[i - 1].plusSeconds(step), off) + gapAdvice(maxRun));
+            }
+        }
+    }
+
+    private static String gapAdvice(int maxRun) {
+        return maxRun > 0 ? "; only gaps of up to " + maxRun + " steps inside the file are filled"
+                : "; set \"fill_gaps\": true in the study's climate object to interpolate short gaps";
     }
 
     private static int column(CsvLines csv, ClimateSpec spec, String role) {

@@ -86,7 +86,7 @@ final class JsonCursor {
         JsonNode n = raw(key);
         String expected = "expected a number from " + fmt(min) + " to " + fmt(max);
         if (n == null) {
-            if (dflt == null) throw error(key, "missing; " + expected + " is required");
+            if (dflt == null) throw error(key, "missing; " + expected);
             return dflt;
         }
         if (!n.isNumber()) throw error(key, expected + ", got " + shown(n));

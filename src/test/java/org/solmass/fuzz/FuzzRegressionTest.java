@@ -1,0 +1,54 @@
+package org.solmass.fuzz;
+
+import org.junit.jupiter.api.Test;
+import org.solmass.InputException;
+import org.solmass.climate.ClimateSource;
+import org.solmass.climate.ClimateSpec;
+import org.solmass.sun.SolarCalculator;
+import org.solmass.sun.Site;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.lang.management.ManagementFactory;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.time.ZoneId;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+/** Every input the fuzzers found, as a plain test of the fixed behaviour. */
+class FuzzRegressionTest {
+    private static final SolarCalculator CALC =
+            new SolarCalculator(new Site(51, 10, 200, ZoneId.of("Europe/Berlin")));
+
+    private static String resource(String path) throws IOException {
+        try (InputStream in = FuzzRegressionTest.class.getResourceAsStream(path)) {
+            assertNotNull(in, path);
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        }
+    }
+
+    /**
+     * Found by HourlyCsvClimateFuzzTest: a 2 KB hourly file whose last row jumps to the year 9578 made
+     * the reader allocate arrays for 66 million steps (OutOfMemoryError). Gaps are now checked row by
+     * row before any array of the file's span exists.
+     */
+    @Test
+    void hourlyFileWithAGapOfMillenniaIsAnInputErrorWithoutLargeAllocation() throws IOException {
+        String found = resource("HourlyCsvClimateFuzzTestInputs/climateTextReadsOrFailsWithAnInputError/regression-last-row-in-year-9578.csv");
+        assertEquals("f.csv:7: missing steps (7 in a row) after this line, from 2025-01-01T06:00; set \"fill_gaps\": true"
+                + " in the study's climate object to interpolate short gaps", refusedWithSmallAllocation(found));
+        String minimal = "time,ghi_wm2,dhi_wm2\n2025-01-01T00:00,0,0\n2025-01-01T01:00,0,0\n9578-01-02T23:00,0,0\n";
+        assertTrue(refusedWithSmallAllocation(minimal).startsWith("f.csv:3: missing steps ("));
+    }
+
+    private static String refusedWithSmallAllocation(String text) {
+        var threads = (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
+        long tid = Thread.currentThread().getId(), a0 = threads.getThreadAllocatedBytes(tid);
+        InputException e = assertThrows(InputException.class, () -> ClimateSource.parse(CALC,
+                ClimateSpec.file(Path.of("f.csv")).withFormat(ClimateSpec.Format.HOURLY), "f.csv", text));
+        long allocated = threads.getThreadAllocatedBytes(tid) - a0;
+        assertTrue(allocated < FuzzCheck.MAX_ALLOCATED_BYTES, allocated + " bytes allocated");
+        return e.getMessage();
+    }
+}
