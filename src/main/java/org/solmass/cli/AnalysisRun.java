@@ -1,12 +1,15 @@
 package org.solmass.cli;
 
 import org.solmass.InputException;
+import org.solmass.check.Plausibility;
+import org.solmass.check.Warning;
 import org.solmass.climate.ClimateSource;
 import org.solmass.climate.ClimateSpec;
 import org.solmass.climate.TimeBase;
 import org.solmass.climate.WeatherSeries;
 import org.solmass.irradiation.IrradiationResult;
 import org.solmass.irradiation.IrradiationSetup;
+import org.solmass.irradiation.MemoryEstimate;
 import org.solmass.irradiation.PhaseProgress;
 import org.solmass.irradiation.ShadedIrradiation;
 import org.solmass.model.LengthUnit;
@@ -78,9 +81,12 @@ public final class AnalysisRun {
 
     /** The weather series of the study, with the time base resolved. */
     public static WeatherSeries loadWeather(Study study) {
+        return ClimateSource.load(site(study), climateSpec(study));
+    }
+
+    static Site site(Study study) {
         Study.Site s = study.site();
-        Site site = new Site(s.latitudeDeg(), s.longitudeDeg(), s.elevationM(), Site.parseZone(s.zone(), "site.zone"));
-        return ClimateSource.load(site, climateSpec(study));
+        return new Site(s.latitudeDeg(), s.longitudeDeg(), s.elevationM(), Site.parseZone(s.zone(), "site.zone"));
     }
 
     static ClimateSpec climateSpec(Study study) {
@@ -143,6 +149,7 @@ public final class AnalysisRun {
         WeatherSeries weather = loadWeather(study);
         for (String x : weather.report().repairs()) warnings.add("climate repaired: " + x);
         for (String x : weather.report().warnings()) warnings.add("climate: " + x);
+        for (Warning x : Plausibility.check(model, site(study), weather)) warnings.add(x.toString());
         if (study.timeBase() == Study.TimeBase.AVERAGE_DAYS && weather.timeBase() != TimeBase.AVERAGE_DAYS) {
             throw new InputException("time_base", "the climate source " + weather.source()
                     + " is an hourly year; monthly-average days need a month-hour table, monthly means or clear-sky");
@@ -174,6 +181,7 @@ public final class AnalysisRun {
         ShadedIrradiation.Inputs in = IrradiationSetup.build(scene, model, patches.surfaces(), patches.patches(),
                 contextPatches, albedo, weather, skyModel(study), o);
         t.put("scene", seconds(t2));
+        requireMemory(study, in, patches.patchCount());
 
         long t3 = System.nanoTime();
         IrradiationResult r = ShadedIrradiation.run(scene, in, progress);
@@ -188,6 +196,19 @@ public final class AnalysisRun {
         counts.put("sun_directions", (long) r.sunDirections());
         counts.put("rays_per_patch", (long) org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()));
         return new Outcome(study, model, patches, weather, r, table(patches, r), warnings, counts, t);
+    }
+
+    /**
+     * Refuses, before the visibility phase, a study whose arrays would not fit the free heap
+     * ({@link MemoryEstimate}); a second look after a garbage collection avoids refusing for garbage.
+     */
+    static void requireMemory(Study study, ShadedIrradiation.Inputs in, long patches) {
+        int threads = study.threads() > 0 ? study.threads() : Runtime.getRuntime().availableProcessors();
+        MemoryEstimate m = MemoryEstimate.of(in, threads);
+        if (m.fits(MemoryEstimate.freeHeapBytes())) return;
+        System.gc();
+        m.requireFits(MemoryEstimate.freeHeapBytes(), study.patchM(), study.rays(), patches,
+                study.source() == null ? "--patch" : study.source() + ": patch_m");
     }
 
     /** Per-patch result columns in the order of docs/outputs.md. */

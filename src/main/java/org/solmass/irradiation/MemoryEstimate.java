@@ -1,0 +1,101 @@
+package org.solmass.irradiation;
+
+import org.solmass.InputException;
+
+import java.util.Locale;
+
+/**
+ * Heap the visibility and irradiation phase will still allocate, estimated from the counts before it
+ * starts, so a study too large for the JVM is refused with a patch size that fits instead of failing
+ * deep inside with OutOfMemoryError. The byte counts follow the arrays of {@link ShadedIrradiation}
+ * (4-byte floats and ints, 8-byte doubles and longs, 16-byte array headers):
+ * <ul>
+ * <li>per receiver (analysed patch, context patch or ground probe): the first-pass month-hour slot
+ *     sums, {@code float[288]}, its ground view factor, origin, normal, seed, surface and reflector
+ *     index entries;</li>
+ * <li>per analysed patch: up to one reflector reference (int + float) per hemisphere ray, about 40
+ *     per-patch result doubles (components, 3 x 12 months) and the result table's columns, and the
+ *     month-hour table {@code float[288]} when it is kept;</li>
+ * <li>per worker thread: the ray scratch arrays; per step: the sun direction table.</li>
+ * </ul>
+ * The receiver count grows as 1 / patch size squared, which gives the suggested patch size.
+ *
+ * @param bytes          estimated bytes still to allocate
+ * @param countBytes     the part that scales with the number of receivers and patches
+ */
+public record MemoryEstimate(long bytes, long countBytes) {
+    static final long PER_RECEIVER = StepTable.SLOTS * 4L + 16 + 8 + 48 + 8 + 4 + 24;
+    static final long PER_PATCH_FIXED = 40 * 8 + 36 * 8 + 2 * 16 + 30 * 8;
+    static final long PER_PATCH_PER_RAY = 4 + 4;
+    static final long PER_THREAD_PER_RAY = 24 + 4 + 4 + 8 + 4 + 4 + 8;
+    static final long PER_STEP = 16;
+    /** Share of the free heap the estimate may use: the rest is for what the estimate leaves out. */
+    static final double HEADROOM = 0.8;
+
+    /**
+     * @param receivers      all receivers: analysed patches, context patches, ground probes
+     * @param analysed       analysed patches
+     * @param raysPerPatch   hemisphere rays per analysed patch (after rounding)
+     * @param steps          weather steps
+     * @param keepMonthHour  whether the per-patch month-hour table is kept
+     * @param threads        worker threads
+     */
+    public static MemoryEstimate of(long receivers, long analysed, int raysPerPatch, int steps,
+                                    boolean keepMonthHour, int threads) {
+        long counts = receivers * PER_RECEIVER
+                + analysed * (PER_PATCH_FIXED + PER_PATCH_PER_RAY * raysPerPatch + (keepMonthHour ? StepTable.SLOTS * 4L : 0));
+        long fixed = (long) threads * raysPerPatch * PER_THREAD_PER_RAY + (long) steps * PER_STEP;
+        return new MemoryEstimate(counts + fixed, counts);
+    }
+
+    /** The estimate for inputs already built. */
+    public static MemoryEstimate of(ShadedIrradiation.Inputs in, int threads) {
+        return of(in.receivers().count, in.receivers().analysed, in.raysPerPatch(), in.steps().count,
+                in.keepMonthHour(), threads);
+    }
+
+    /**
+     * Smallest patch size (metres, rounded up to 0.05 m below 1 m and 0.25 m above) at which the
+     * estimate fits {@code budgetBytes}, from a run at {@code patchM}; NaN when even a huge patch does not fit.
+     */
+    public double fittingPatchM(double patchM, long budgetBytes) {
+        double usable = HEADROOM * budgetBytes - (bytes - countBytes);
+        if (usable <= 0) return Double.NaN;
+        double p = patchM * Math.sqrt(countBytes / usable);
+        double stepM = p < 1 ? 0.05 : 0.25;
+        return Math.ceil(p / stepM - 1e-9) * stepM;
+    }
+
+    /** Whether the estimate fits {@code budgetBytes} with the headroom. */
+    public boolean fits(long budgetBytes) {
+        return bytes <= HEADROOM * budgetBytes;
+    }
+
+    /**
+     * Throws when the estimate does not fit {@code budgetBytes}.
+     *
+     * @param where the key or flag of the patch size ("patch_m", "--patch")
+     */
+    public void requireFits(long budgetBytes, double patchM, int rays, long analysedPatches, String where) {
+        if (fits(budgetBytes)) return;
+        double fit = fittingPatchM(patchM, budgetBytes);
+        String advice = Double.isNaN(fit) || fit > 100
+                ? "no patch size fits; give Java more memory"
+                : String.format(Locale.ROOT, "use a patch size of at least %.2f m (it would fit), fewer rays, or give Java more memory", fit);
+        throw new InputException(where, String.format(Locale.ROOT,
+                "the analysis needs about %s of memory for %d patches at %.2f m with %d rays, but only %s of the Java heap is free; %s"
+                        + " (SOLMASS_JAVA_OPTS=-Xmx..., the launcher's default is -Xmx8g)",
+                size(bytes), analysedPatches, patchM, rays, size(budgetBytes), advice));
+    }
+
+    /** Free heap now: the JVM's maximum minus what is in use. */
+    public static long freeHeapBytes() {
+        Runtime rt = Runtime.getRuntime();
+        return rt.maxMemory() - (rt.totalMemory() - rt.freeMemory());
+    }
+
+    static String size(long b) {
+        return b >= 1L << 30 ? String.format(Locale.ROOT, "%.1f GB", b / (double) (1L << 30))
+                : String.format(Locale.ROOT, "%.0f MB", b / (double) (1L << 20));
+    }
+}

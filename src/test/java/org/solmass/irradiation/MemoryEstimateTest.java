@@ -1,0 +1,60 @@
+package org.solmass.irradiation;
+
+import org.junit.jupiter.api.Test;
+import org.solmass.InputException;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+/** The memory estimate follows the arrays it counts, and its refusal names a patch size that fits. */
+class MemoryEstimateTest {
+    @Test
+    void firstPassSlotSumsDominateAndEveryReceiverCostsAtLeastThem() {
+        // float[receivers x 288] of the first pass: 1152 bytes per receiver (4-byte floats)
+        MemoryEstimate m = MemoryEstimate.of(100_000, 80_000, 1024, 8760, false, 2);
+        assertTrue(m.bytes() >= 100_000L * 288 * 4);
+        assertTrue(m.countBytes() <= m.bytes());
+    }
+
+    @Test
+    void estimateIsLinearInReceiversAndMonthHourAddsOneFloatPerSlotAndPatch() {
+        MemoryEstimate a = MemoryEstimate.of(1000, 800, 256, 288, false, 4), b = MemoryEstimate.of(2000, 800, 256, 288, false, 4);
+        MemoryEstimate c = MemoryEstimate.of(3000, 800, 256, 288, false, 4);
+        assertEquals(b.bytes() - a.bytes(), c.bytes() - b.bytes());
+        assertEquals(800L * 288 * 4, MemoryEstimate.of(1000, 800, 256, 288, true, 4).bytes() - a.bytes());
+        // reflector lists: one int and one float per ray and analysed patch
+        assertEquals(800L * 8 * 256, MemoryEstimate.of(1000, 800, 512, 288, false, 0).bytes()
+                - MemoryEstimate.of(1000, 800, 256, 288, false, 0).bytes());
+    }
+
+    @Test
+    void suggestedPatchSizeFitsTheBudgetWhenCountsScaleWithTheArea() {
+        long budget = 64L << 20;
+        for (long receivers : new long[] {200_000, 1_000_000, 5_000_000}) {
+            MemoryEstimate m = MemoryEstimate.of(receivers, receivers * 3 / 4, 1024, 8760, false, 2);
+            assertFalse(m.fits(budget));
+            double p = m.fittingPatchM(1.0, budget);
+            double shrink = (1.0 / p) * (1.0 / p); // patches per area go as 1 / size^2
+            MemoryEstimate atP = MemoryEstimate.of((long) (receivers * shrink), (long) (receivers * 3 / 4 * shrink), 1024, 8760, false, 2);
+            assertTrue(atP.fits(budget), receivers + " receivers, suggested " + p + " m");
+            assertTrue(p > 1.0);
+        }
+    }
+
+    @Test
+    void tooLargeStudyIsRefusedWithAnInputErrorNamingTheFlagAndAFittingSize() {
+        MemoryEstimate m = MemoryEstimate.of(400_000, 300_000, 1024, 8760, false, 2);
+        InputException e = assertThrows(InputException.class, () -> m.requireFits(100L << 20, 0.5, 1024, 300_000, "--patch"));
+        double p = m.fittingPatchM(0.5, 100L << 20);
+        assertTrue(e.getMessage().startsWith("--patch: the analysis needs about "), e.getMessage());
+        assertTrue(e.getMessage().contains(String.format(java.util.Locale.ROOT, "use a patch size of at least %.2f m", p)), e.getMessage());
+        assertDoesNotThrow(() -> m.requireFits(8L << 30, 0.5, 1024, 300_000, "--patch"));
+    }
+
+    @Test
+    void budgetBelowTheFixedPartHasNoFittingPatchSize() {
+        MemoryEstimate m = MemoryEstimate.of(1000, 1000, 1 << 20, 8760, false, 64);
+        assertTrue(Double.isNaN(m.fittingPatchM(1, 1L << 20)));
+        InputException e = assertThrows(InputException.class, () -> m.requireFits(1L << 20, 1, 1 << 20, 1000, "patch_m"));
+        assertTrue(e.getMessage().contains("no patch size fits; give Java more memory"), e.getMessage());
+    }
+}
