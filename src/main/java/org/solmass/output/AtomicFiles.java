@@ -23,6 +23,13 @@ import java.nio.file.StandardOpenOption;
  * the writer fails, the temporary file is deleted and the old file stays as it was.
  */
 public final class AtomicFiles {
+    /**
+     * Test hook (DEVELOPERS.md, "Testing a killed run"): the system property
+     * {@code solmass.test.pauseBeforeMoveMs} makes every write wait that long with its complete
+     * temporary file in place before the move, so a test can kill the process mid-write. Unset: 0.
+     */
+    static final long PAUSE_BEFORE_MOVE_MS = Long.getLong("solmass.test.pauseBeforeMoveMs", 0L);
+
     private AtomicFiles() {}
 
     /** Writes bytes to a stream. */
@@ -55,6 +62,7 @@ public final class AtomicFiles {
                 out.flush();
                 ch.force(true);
             }
+            if (PAUSE_BEFORE_MOVE_MS > 0) pauseForTest();
             try {
                 Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE);
             } catch (AtomicMoveNotSupportedException e) {
@@ -62,6 +70,8 @@ public final class AtomicFiles {
             }
             tmp = null;
             syncFolder(dir);
+        } catch (java.nio.file.FileAlreadyExistsException e) {
+            throw new UncheckedIOException("cannot write " + target + ": " + e.getFile() + " exists and is not a folder", e);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + target + ": " + e.getMessage(), e);
         } finally {
@@ -87,6 +97,14 @@ public final class AtomicFiles {
     /** Writes {@code target} atomically with the given text. */
     public static void writeString(Path target, String text) {
         write(target, out -> out.write(text.getBytes(StandardCharsets.UTF_8)));
+    }
+
+    private static void pauseForTest() {
+        try {
+            Thread.sleep(PAUSE_BEFORE_MOVE_MS);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
     }
 
     /** Makes the rename durable where the platform allows opening a folder (Linux); ignored elsewhere. */
