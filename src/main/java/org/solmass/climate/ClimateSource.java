@@ -162,7 +162,7 @@ public final class ClimateSource {
         for (int m = 0; m < 12; m++) {
             int n = SolarGeometry.kleinDayOfYear(m + 1);
             double hWh = v[m][0] * 1000, h0 = SolarGeometry.dailyExtraterrestrialWhM2(lat, n);
-            if (hWh < 0) throw new InputException(where[m], "ghi_kwh_m2_day is negative");
+            if (hWh < 0) throw new InputException(where[m], "ghi_kwh_m2_day = " + v[m][0] + " is negative, expected a daily total of 0 kWh/m2 or more");
             if (hWh > 0 && hWh >= h0) throw new InputException(where[m], String.format(
                     "ghi_kwh_m2_day = %.3f is not below the extraterrestrial daily irradiation %.3f kWh/m2 of the month's average day", v[m][0], h0 / 1000));
             double delta = SolarGeometry.declinationDeg(n), ws = SolarGeometry.sunsetHourAngleDeg(lat, delta);

@@ -71,6 +71,12 @@ class PlausibilityTest {
     }
 
     @Test
+    void sampleCourtyardModelGivesNoWarning() {
+        MassingModel m = ObjReader.read(Path.of("sample-massing/courtyard-block.obj"), ModelOptions.defaults());
+        assertEquals(List.of(), Plausibility.model(m));
+    }
+
+    @Test
     void singleTallTowerIsNotTakenForAYUpModel() {
         String tower = "o tower\nv 0 0 0\nv 20 0 0\nv 0 20 0\nv 20 20 0\nv 0 0 150\nv 20 0 150\nv 0 20 150\nv 20 20 150\n"
                 + "f 1 3 4 2\nf 5 6 8 7\nf 1 2 6 5\nf 3 7 8 4\nf 1 5 7 3\nf 2 4 8 6\n";
