@@ -159,6 +159,7 @@ public final class AnalysisRun {
         long t1 = System.nanoTime();
         progress.begin("patches", 0);
         Set<String> analysed = analysedBlocks(study, model);
+        requireMemoryForPatches(study, model, analysed);
         PatchSet patches = Patcher.build(model, new PatchOptions(study.patchM(), analysed, false));
         Set<String> context = new LinkedHashSet<>(model.blockNames());
         context.removeAll(analysed);
@@ -208,6 +209,32 @@ public final class AnalysisRun {
         if (m.fits(MemoryEstimate.freeHeapBytes())) return;
         System.gc();
         m.requireFits(MemoryEstimate.freeHeapBytes(), study.patchM(), study.rays(), patches,
+                study.source() == null ? "--patch" : study.source() + ": patch_m");
+    }
+
+    /**
+     * The same check before patching, from the area of the blocks' faces that get patches (a huge
+     * model at a small patch size would otherwise fill the heap inside the patcher).
+     */
+    static void requireMemoryForPatches(Study study, MassingModel model, Set<String> analysed) {
+        double[] v = model.vertices();
+        int[] tr = model.triangles();
+        double inA = 0, ctxA = 0;
+        for (int t = 0; t < model.triangleCount(); t++) {
+            int a = 3 * tr[3 * t], b = 3 * tr[3 * t + 1], c = 3 * tr[3 * t + 2];
+            double ux = v[b] - v[a], uy = v[b + 1] - v[a + 1], uz = v[b + 2] - v[a + 2];
+            double wx = v[c] - v[a], wy = v[c + 1] - v[a + 1], wz = v[c + 2] - v[a + 2];
+            double cx = uy * wz - uz * wy, cy = uz * wx - ux * wz, cz = ux * wy - uy * wx;
+            double len = Math.sqrt(cx * cx + cy * cy + cz * cz), area = 0.5 * len;
+            if (cz < -0.9 * len) continue; // undersides are not patched
+            if (analysed.contains(model.blockNames().get(model.triangleBlock()[t]))) inA += area; else ctxA += area;
+        }
+        int threads = study.threads() > 0 ? study.threads() : Runtime.getRuntime().availableProcessors();
+        MemoryEstimate m = MemoryEstimate.beforePatching(inA, study.patchM(), ctxA, study.patchM() * CONTEXT_PATCH_FACTOR,
+                org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()), true, threads);
+        if (m.fits(MemoryEstimate.freeHeapBytes())) return;
+        System.gc();
+        m.requireFits(MemoryEstimate.freeHeapBytes(), study.patchM(), study.rays(), (long) Math.ceil(inA / (study.patchM() * study.patchM())),
                 study.source() == null ? "--patch" : study.source() + ": patch_m");
     }
 

@@ -48,6 +48,26 @@ public record MemoryEstimate(long bytes, long countBytes) {
         return new MemoryEstimate(counts + fixed, counts);
     }
 
+    /** Heap of one patch object with its id and outline before any result exists, bytes (common practice: a measured order of magnitude). */
+    static final long PATCH_OBJECT_BYTES = 400;
+
+    /**
+     * The estimate before patching, from surface areas: a grid of patches of side {@code patchM}
+     * covers an area A with about A / patchM^2 patches (more where surfaces end mid-cell), and each
+     * patch object comes on top of the arrays above. Lets a run stop before the patcher fills the heap.
+     *
+     * @param analysedAreaM2 area of the analysed blocks' faces, m2
+     * @param contextAreaM2  area of the context blocks' faces, m2, patched at {@code contextPatchM}
+     */
+    public static MemoryEstimate beforePatching(double analysedAreaM2, double patchM, double contextAreaM2, double contextPatchM,
+                                                int raysPerPatch, boolean keepMonthHour, int threads) {
+        long analysed = (long) Math.ceil(analysedAreaM2 / (patchM * patchM));
+        long context = (long) Math.ceil(contextAreaM2 / (contextPatchM * contextPatchM));
+        MemoryEstimate m = of(analysed + context, analysed, raysPerPatch, 0, keepMonthHour, threads);
+        long objects = (analysed + context) * PATCH_OBJECT_BYTES;
+        return new MemoryEstimate(m.bytes() + objects, m.countBytes() + objects);
+    }
+
     /** The estimate for inputs already built. */
     public static MemoryEstimate of(ShadedIrradiation.Inputs in, int threads) {
         return of(in.receivers().count, in.receivers().analysed, in.raysPerPatch(), in.steps().count,

@@ -51,6 +51,18 @@ class MemoryEstimateTest {
     }
 
     @Test
+    void estimateBeforePatchingCountsAreaOverPatchSizeSquared() {
+        // 9 km2 of roof at 1 m patches: 9 million patches, each at least its float[288] slot sums and its object
+        MemoryEstimate m = MemoryEstimate.beforePatching(9e6, 1.0, 0, 4.0, 16, false, 2);
+        assertTrue(m.bytes() >= 9_000_000L * (288 * 4 + MemoryEstimate.PATCH_OBJECT_BYTES));
+        MemoryEstimate coarse = MemoryEstimate.beforePatching(9e6, 2.0, 0, 8.0, 16, false, 2);
+        assertEquals(m.countBytes() / 4.0, coarse.countBytes(), m.countBytes() * 1e-6); // 2x the size, 1/4 the patches
+        assertFalse(m.fits(512L << 20));
+        double p = m.fittingPatchM(1.0, 512L << 20);
+        assertTrue(MemoryEstimate.beforePatching(9e6, p, 0, 4 * p, 16, false, 2).fits(512L << 20), "suggested " + p + " m");
+    }
+
+    @Test
     void budgetBelowTheFixedPartHasNoFittingPatchSize() {
         MemoryEstimate m = MemoryEstimate.of(1000, 1000, 1 << 20, 8760, false, 64);
         assertTrue(Double.isNaN(m.fittingPatchM(1, 1L << 20)));
