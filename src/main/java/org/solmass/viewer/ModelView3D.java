@@ -1,0 +1,176 @@
+package org.solmass.viewer;
+
+import javafx.scene.AmbientLight;
+import javafx.scene.DirectionalLight;
+import javafx.scene.Group;
+import javafx.scene.Node;
+import javafx.scene.image.Image;
+import javafx.scene.image.PixelFormat;
+import javafx.scene.image.WritableImage;
+import javafx.scene.paint.Color;
+import javafx.scene.paint.PhongMaterial;
+import javafx.scene.shape.Box;
+import javafx.scene.shape.CullFace;
+import javafx.scene.shape.MeshView;
+import javafx.scene.shape.TriangleMesh;
+import javafx.geometry.Point3D;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The 3D content: grey massing (lit), patch meshes coloured through the palette atlas (unlit, so
+ * their colours match the legend exactly), a ground plane, the sun path and the selection frame.
+ * Patches live in a few large meshes; a picked face maps to its patch through {@link PatchMeshData}.
+ */
+public final class ModelView3D {
+    static final Color CONTEXT_GREY = Color.rgb(0xCF, 0xCD, 0xC8);
+    static final Color ANALYSED_GREY = Color.rgb(0xB4, 0xB2, 0xAD);
+    static final Color GROUND = Color.rgb(0xDA, 0xD8, 0xD2);
+
+    private final Group root = new Group();
+    private final Group sunGroup = new Group();
+    private final Group selection = new Group();
+    private final List<PatchMeshData> patchData;
+    private final List<TriangleMesh> patchMeshes = new ArrayList<>();
+    private final List<MeshView> patchViews = new ArrayList<>();
+    private final List<MeshView> massingViews = new ArrayList<>();
+    private final List<MassingMeshData> massingData = new ArrayList<>();
+    private final WritableImage atlas = new WritableImage(PaletteAtlas.WIDTH, PaletteAtlas.HEIGHT);
+    private final PhongMaterial patchMaterial = new PhongMaterial(Color.WHITE);
+    private final SceneFrame frame;
+    private final double liftM;
+
+    /** Geometry prepared off the FX thread. */
+    public record Prepared(SceneFrame frame, double liftM, List<PatchMeshData> patches,
+                           List<MassingMeshData> analysed, List<MassingMeshData> context) {
+        public static Prepared of(ViewerData d) {
+            SceneFrame f = SceneFrame.of(d.model().bounds());
+            double lift = Math.max(0.01, Math.min(0.15, f.radiusM() * 2e-4));
+            return new Prepared(f, lift, PatchMeshData.build(d.patches(), f, lift),
+                    MassingMeshData.build(d.model(), f, d.blockAnalysed(), true),
+                    MassingMeshData.build(d.model(), f, d.blockAnalysed(), false));
+        }
+    }
+
+    public ModelView3D(ViewerData data, Prepared prep) {
+        this.frame = prep.frame();
+        this.liftM = prep.liftM();
+        this.patchData = prep.patches();
+        patchMaterial.setDiffuseMap(atlas);
+        patchMaterial.setSpecularColor(Color.BLACK);
+
+        Group massing = new Group();
+        addMassing(massing, prep.analysed(), ANALYSED_GREY);
+        addMassing(massing, prep.context(), CONTEXT_GREY);
+        Node ground = ground(data);
+        massing.getChildren().add(ground);
+
+        Group patches = new Group();
+        for (PatchMeshData pd : patchData) {
+            TriangleMesh m = new TriangleMesh();
+            m.getPoints().setAll(pd.points);
+            m.getTexCoords().setAll(pd.texCoords);
+            m.getFaces().setAll(pd.faces);
+            MeshView v = new MeshView(m);
+            v.setMaterial(patchMaterial);
+            v.setCullFace(CullFace.NONE);
+            patchMeshes.add(m);
+            patchViews.add(v);
+            patches.getChildren().add(v);
+        }
+
+        AmbientLight flat = new AmbientLight(Color.WHITE);
+        flat.getScope().addAll(patches, selection);
+        AmbientLight soft = new AmbientLight(Color.gray(0.58));
+        DirectionalLight sun = new DirectionalLight(Color.gray(0.50));
+        sun.setDirection(new Point3D(0.45, 0.8, 0.35));   // from the south-west, above (scene frame: y down)
+        soft.getScope().add(massing);
+        sun.getScope().add(massing);
+        sunGroup.setVisible(false);
+        root.getChildren().addAll(massing, patches, sunGroup, selection, flat, soft, sun);
+    }
+
+    private void addMassing(Group g, List<MassingMeshData> parts, Color c) {
+        PhongMaterial mat = new PhongMaterial(c);
+        mat.setSpecularColor(Color.BLACK);
+        for (MassingMeshData md : parts) {
+            TriangleMesh m = new TriangleMesh();
+            m.getPoints().setAll(md.points);
+            m.getTexCoords().setAll(0, 0);
+            m.getFaces().setAll(md.faces);
+            MeshView v = new MeshView(m);
+            v.setMaterial(mat);
+            v.setCullFace(CullFace.NONE);
+            massingViews.add(v);
+            massingData.add(md);
+            g.getChildren().add(v);
+        }
+    }
+
+    private Node ground(ViewerData d) {
+        double[] b = d.model().bounds();
+        double w = Math.max(b[3] - b[0], 1) * 1.6 + 20, h = Math.max(b[4] - b[1], 1) * 1.6 + 20;
+        Box g = new Box(w, 0.01, h);
+        g.setTranslateY(frame.fy(b[2]) + 3 * liftM);
+        PhongMaterial mat = new PhongMaterial(GROUND);
+        mat.setSpecularColor(Color.BLACK);
+        g.setMaterial(mat);
+        g.setMouseTransparent(true);
+        return g;
+    }
+
+    public Group node() { return root; }
+
+    public SceneFrame frame() { return frame; }
+
+    public Group sunPathGroup() { return sunGroup; }
+
+    /** Recolours the patches: palette of {@code scale}, cell per patch. */
+    public void recolour(ColourScale scale, int[] cellOfPatch) {
+        atlas.getPixelWriter().setPixels(0, 0, PaletteAtlas.WIDTH, PaletteAtlas.HEIGHT,
+                PixelFormat.getIntArgbInstance(), PaletteAtlas.pixels(scale), 0, PaletteAtlas.WIDTH);
+        for (int i = 0; i < patchData.size(); i++) {
+            PatchMeshData pd = patchData.get(i);
+            pd.recolour(cellOfPatch);
+            patchMeshes.get(i).getTexCoords().setAll(pd.texCoords);
+        }
+    }
+
+    /** Patch index of a picked face of a node, -1 if the node is not a patch mesh. */
+    public int patchAt(Node n, int face) {
+        int i = patchViews.indexOf(n);
+        return i < 0 ? -1 : patchData.get(i).patchOfFace(face);
+    }
+
+    /** Block id of a picked face of the grey massing, -1 if the node is not massing. */
+    public int blockAt(Node n, int face) {
+        int i = massingViews.indexOf(n);
+        if (i < 0) return -1;
+        int[] f = massingData.get(i).faceToBlock;
+        return face >= 0 && face < f.length ? f[face] : -1;
+    }
+
+    /** Frames the selected patch (or clears the frame when null). */
+    public void select(org.solmass.surface.Patch p) {
+        selection.getChildren().clear();
+        if (p == null) return;
+        double[] o = p.outline();
+        int n = o.length / 3;
+        double lift = 2 * liftM;
+        double r = Math.max(0.03, Math.sqrt(p.areaM2()) * 0.04);
+        PhongMaterial mat = new PhongMaterial(Color.rgb(20, 20, 24));
+        for (int i = 0; i < n; i++) {
+            int j = (i + 1) % n;
+            Point3D a = point(o, i, p, lift), b = point(o, j, p, lift);
+            selection.getChildren().add(Shapes.rod(a, b, r, mat));
+        }
+    }
+
+    private Point3D point(double[] o, int i, org.solmass.surface.Patch p, double lift) {
+        return new Point3D(frame.fx(o[3 * i] + p.normal().x() * lift), frame.fy(o[3 * i + 2] + p.normal().z() * lift),
+                frame.fz(o[3 * i + 1] + p.normal().y() * lift));
+    }
+
+    public Image atlasImage() { return atlas; }
+}
