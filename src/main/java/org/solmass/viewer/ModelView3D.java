@@ -1,7 +1,6 @@
 package org.solmass.viewer;
 
 import javafx.scene.AmbientLight;
-import javafx.scene.DirectionalLight;
 import javafx.scene.Group;
 import javafx.scene.Node;
 import javafx.scene.image.Image;
@@ -24,9 +23,9 @@ import java.util.List;
  * Patches live in a few large meshes; a picked face maps to its patch through {@link PatchMeshData}.
  */
 public final class ModelView3D {
-    static final Color CONTEXT_GREY = Color.rgb(0xCF, 0xCD, 0xC8);
-    static final Color ANALYSED_GREY = Color.rgb(0xB4, 0xB2, 0xAD);
-    static final Color GROUND = Color.rgb(0xDA, 0xD8, 0xD2);
+    static final Color CONTEXT_GREY = Color.rgb(0xE4, 0xE2, 0xDD);
+    static final Color ANALYSED_GREY = Color.rgb(0xC4, 0xC2, 0xBD);
+    static final Color GROUND = Color.rgb(0xBF, 0xBE, 0xB8);
 
     private final Group root = new Group();
     private final Group sunGroup = new Group();
@@ -80,24 +79,23 @@ public final class ModelView3D {
             patches.getChildren().add(v);
         }
 
-        AmbientLight flat = new AmbientLight(Color.WHITE);
-        flat.getScope().addAll(patches, selection);
-        AmbientLight soft = new AmbientLight(Color.gray(0.58));
-        DirectionalLight sun = new DirectionalLight(Color.gray(0.50));
-        sun.setDirection(new Point3D(0.45, 0.8, 0.35));   // from the south-west, above (scene frame: y down)
-        soft.getScope().add(massing);
-        sun.getScope().add(massing);
+        AmbientLight flat = new AmbientLight(Color.WHITE);   // the only light: shades are baked into textures
         sunGroup.setVisible(false);
-        root.getChildren().addAll(massing, patches, sunGroup, selection, flat, soft, sun);
+        root.getChildren().addAll(massing, patches, sunGroup, selection, flat);
     }
 
     private void addMassing(Group g, List<MassingMeshData> parts, Color c) {
-        PhongMaterial mat = new PhongMaterial(c);
+        WritableImage tex = new WritableImage(MassingMeshData.LEVELS, 1);
+        int rgb = ((int) Math.round(c.getRed() * 255) << 16) | ((int) Math.round(c.getGreen() * 255) << 8) | (int) Math.round(c.getBlue() * 255);
+        tex.getPixelWriter().setPixels(0, 0, MassingMeshData.LEVELS, 1, PixelFormat.getIntArgbInstance(),
+                MassingMeshData.shadeTexture(rgb), 0, MassingMeshData.LEVELS);
+        PhongMaterial mat = new PhongMaterial(Color.WHITE);
+        mat.setDiffuseMap(tex);
         mat.setSpecularColor(Color.BLACK);
         for (MassingMeshData md : parts) {
             TriangleMesh m = new TriangleMesh();
             m.getPoints().setAll(md.points);
-            m.getTexCoords().setAll(0, 0);
+            m.getTexCoords().setAll(MassingMeshData.TEX_COORDS);
             m.getFaces().setAll(md.faces);
             MeshView v = new MeshView(m);
             v.setMaterial(mat);
@@ -110,7 +108,7 @@ public final class ModelView3D {
 
     private Node ground(ViewerData d) {
         double[] b = d.model().bounds();
-        double w = Math.max(b[3] - b[0], 1) * 1.6 + 20, h = Math.max(b[4] - b[1], 1) * 1.6 + 20;
+        double w = Math.max(b[3] - b[0], b[4] - b[1]) * 8 + 200, h = w;
         Box g = new Box(w, 0.01, h);
         g.setTranslateY(frame.fy(b[2]) + 3 * liftM);
         PhongMaterial mat = new PhongMaterial(GROUND);

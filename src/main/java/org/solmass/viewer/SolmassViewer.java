@@ -93,8 +93,14 @@ public final class SolmassViewer {
         return s;
     }
 
-    /** Starts the FX toolkit once; warns on stderr when 3D is not available. */
+    /**
+     * Starts the FX toolkit once; warns on stderr when 3D is not available. Unless the user set them,
+     * asks for the ES2 pipeline (software sw as fallback) and allows it on software OpenGL (Mesa), the
+     * only pipeline that draws 3D on Linux without a GPU.
+     */
     static void startToolkit() {
+        if (System.getProperty("prism.order") == null) System.setProperty("prism.order", "es2,sw");
+        if (System.getProperty("prism.forceGPU") == null) System.setProperty("prism.forceGPU", "true");
         CountDownLatch up = new CountDownLatch(1);
         try {
             Platform.startup(up::countDown);

@@ -5,16 +5,13 @@ import javafx.scene.Group;
 import javafx.scene.paint.Color;
 import javafx.scene.paint.PhongMaterial;
 import javafx.scene.shape.Sphere;
-import javafx.scene.text.Font;
-import javafx.scene.text.Text;
-import javafx.scene.transform.Rotate;
 
 import java.util.ArrayList;
 import java.util.List;
 
 /**
  * The sun's monthly-average-day paths as thin rods on a dome over the site, with a bead at every
- * whole hour and faint lines joining the same hour across the months; compass letters on the ground.
+ * whole hour and faint lines joining the same hour across the months; the hour beads sit where the path crosses a whole local standard hour.
  */
 final class SunPathView {
     static final Color ARC = Color.rgb(0x1F, 0x5F, 0x66);
@@ -66,25 +63,6 @@ final class SunPathView {
             List<Point3D> line = new ArrayList<>();
             for (int m = 1; m <= 12; m++) if (hourPts[m][h] != null) line.add(hourPts[m][h]);
             for (int i = 0; i + 1 < line.size(); i++) g.getChildren().add(Shapes.rod(line.get(i), line.get(i + 1), r * 0.0015, lineMat));
-        }
-        return g;
-    }
-
-    /** N, E, S, W letters lying on the ground around the site. */
-    static Group compass(double radius) {
-        Group g = new Group();
-        String[] names = {"N", "E", "S", "W"};
-        double r = radius * 1.45;
-        for (int i = 0; i < 4; i++) {
-            Text t = new Text(names[i]);
-            t.setFont(Font.font("System", radius * 0.14));
-            t.setFill(Color.rgb(0x4A, 0x4A, 0x48));
-            Point3D p = onDome(r, 90 * i, 0);
-            double w = t.getLayoutBounds().getWidth(), h = t.getLayoutBounds().getHeight();
-            t.getTransforms().addAll(new javafx.scene.transform.Translate(p.getX(), -0.02, p.getZ()),
-                    new Rotate(90, Rotate.X_AXIS), new javafx.scene.transform.Translate(-w / 2, h / 3));
-            t.setMouseTransparent(true);
-            g.getChildren().add(t);
         }
         return g;
     }

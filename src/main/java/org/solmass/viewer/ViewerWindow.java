@@ -193,7 +193,7 @@ public final class ViewerWindow {
         stage.setTitle("Solmass \u2014 " + d.title());
         view = new ModelView3D(d, prep);
         rig = new CameraRig(prep.frame().radiusM());
-        javafx.scene.Group world = new javafx.scene.Group(view.node(), SunPathView.compass(prep.frame().radiusM()), rig.node());
+        javafx.scene.Group world = new javafx.scene.Group(view.node(), rig.node());
         view.sunPathGroup().getChildren().setAll(SunPathView.build(d.sunPath(), prep.frame().radiusM()));
         sub = new SubScene(world, 10, 10, true, javafx.application.Platform.isSupported(
                 javafx.application.ConditionalFeature.SCENE3D) ? SceneAntialiasing.BALANCED : SceneAntialiasing.DISABLED);
