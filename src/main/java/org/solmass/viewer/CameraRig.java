@@ -23,14 +23,25 @@ public final class CameraRig {
     private final Translate back = new Translate();
     private final DoubleProperty heading = new SimpleDoubleProperty();
     private final double radius;
+    private final double[] focus;
     private double lastX, lastY;
 
-    public CameraRig(double siteRadiusM) {
+    /**
+     * @param siteRadiusM half the diagonal of the whole model, metres (zoom limits, clipping)
+     * @param focus {x, y, z, radius} in the scene frame of what the fixed views frame
+     */
+    public CameraRig(double siteRadiusM, double[] focus) {
         this.radius = siteRadiusM;
-        camera.setFieldOfView(35);
+        this.focus = focus.clone();
+        camera.setFieldOfView(30);
         rig.getChildren().add(camera);
         camera.getTransforms().addAll(target, yaw, pitch, back);
-        setView(30, 40, 3.2 * radius);
+        preset("orbit");
+    }
+
+    /** Distance at which a sphere of the focus radius fills the view height with a margin. */
+    private double fit(double margin) {
+        return margin * focus[3] / Math.sin(Math.toRadians(camera.getFieldOfView() / 2));
     }
 
     public PerspectiveCamera camera() { return camera; }
@@ -55,17 +66,20 @@ public final class CameraRig {
 
     /** Fixed views: "top" or the side looked from, "N", "E", "S", "W". */
     public void preset(String which) {
-        target.setX(0);
-        target.setY(-0.15 * radius);
-        target.setZ(0);
+        target.setX(focus[0]);
+        target.setY(focus[1]);
+        target.setZ(focus[2]);
         switch (which) {
-            case "top": setView(0, 90, 3.4 * radius); break;
-            case "N": setView(180, 12, 3.4 * radius); break;
-            case "E": setView(270, 12, 3.4 * radius); break;
-            case "S": setView(0, 12, 3.4 * radius); break;
-            case "W": setView(90, 12, 3.4 * radius); break;
-            case "sun": setView(20, 30, 4.6 * radius); break;
-            default: setView(30, 40, 3.2 * radius); break;
+            case "top": setView(0, 90, fit(0.95)); break;
+            case "N": setView(180, 10, fit(0.9)); break;
+            case "E": setView(270, 10, fit(0.9)); break;
+            case "S": setView(0, 10, fit(0.9)); break;
+            case "W": setView(90, 10, fit(0.9)); break;
+            case "sun":
+                target.setY(0);
+                setView(25, 28, 1.25 * radius * 1.3 / Math.sin(Math.toRadians(camera.getFieldOfView() / 2)));
+                break;
+            default: setView(30, 38, fit(0.85)); break;
         }
     }
 

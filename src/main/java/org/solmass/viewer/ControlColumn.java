@@ -174,7 +174,7 @@ final class ControlColumn extends VBox {
         if (Double.isFinite(t)) {
             Threshold th = Threshold.of(data.patches(), v, t);
             thrArea.setText(String.format(Locale.ROOT, "%,d patches, %,.0f m\u00b2 (%.0f %% of the analysed area) at or above %s %s",
-                    th.count(), th.areaM2(), 100 * th.share(), thr.getText().trim(), q.unit()));
+                    th.count(), th.areaM2(), 100 * th.share(), thr.getText().trim(), Quantity.pretty(q.unit())));
         } else {
             thrArea.setText(thrOn.isSelected() ? "Type a value and press Enter." : "");
         }

@@ -32,7 +32,7 @@ final class HeatMap extends Canvas {
             }
         }
         g.setFill(Color.rgb(60, 60, 60));
-        g.setFont(Font.font(10));
+        g.setFont(Font.font(Math.max(8, Math.min(11, ch - 1))));
         g.setTextBaseline(VPos.CENTER);
         g.setTextAlign(TextAlignment.CENTER);
         for (int m = 0; m < 12; m++) g.fillText(M[m], LEFT / 2, TOP + (m + 0.5) * ch);
@@ -47,7 +47,7 @@ final class HeatMap extends Canvas {
         g.setFill(Color.rgb(60, 60, 60));
         g.setTextAlign(TextAlignment.LEFT);
         g.setTextBaseline(VPos.CENTER);
-        g.fillText(String.format(java.util.Locale.ROOT, "0 .. %.0f %s  (hour, local standard time)", max, unit), LEFT + kw + 6, ky + 4);
+        g.fillText(String.format(java.util.Locale.ROOT, "0 \u2013 %.0f %s", max, unit), LEFT + kw + 6, ky + 4);
     }
 
     static Color rgb(int c) { return Color.rgb((c >> 16) & 255, (c >> 8) & 255, c & 255); }

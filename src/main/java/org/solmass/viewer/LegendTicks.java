@@ -16,11 +16,13 @@ public final class LegendTicks {
     public static double[] ticks(double min, double max, int target) {
         if (!(max > min) || !Double.isFinite(min) || !Double.isFinite(max)) return new double[] {min};
         double step = step(min, max, target);
-        double first = Math.ceil(min / step - 1e-9) * step;
+        int e = (int) Math.floor(Math.log10(step) + 1e-9);
+        double mant = Math.round(step / Math.pow(10, e));  // 1, 2 or 5
         List<Double> out = new ArrayList<>();
-        for (double v = first; v <= max + step * 1e-9; v += step) {
-            double r = Math.round(v / step) * step;       // keep multiples exact (no 0.30000000000000004)
-            out.add(Math.abs(r) < step * 1e-9 ? 0.0 : r);
+        for (long k = (long) Math.ceil(min / step - 1e-9); k * step <= max + step * 1e-9; k++) {
+            // k x mantissa scaled by a power of ten in one rounding step: exact decimals (0.6, not 0.6000000000000001)
+            double r = e >= 0 ? k * mant * Math.pow(10, e) : k * mant / Math.pow(10, -e);
+            out.add(r == 0 ? 0.0 : r);
         }
         return out.stream().mapToDouble(Double::doubleValue).toArray();
     }

@@ -41,15 +41,37 @@ public final class ModelView3D {
     private final double liftM;
 
     /** Geometry prepared off the FX thread. */
-    public record Prepared(SceneFrame frame, double liftM, List<PatchMeshData> patches,
+    public record Prepared(SceneFrame frame, double liftM, double[] focus, List<PatchMeshData> patches,
                            List<MassingMeshData> analysed, List<MassingMeshData> context) {
         public static Prepared of(ViewerData d) {
             SceneFrame f = SceneFrame.of(d.model().bounds());
             double lift = Math.max(0.01, Math.min(0.15, f.radiusM() * 2e-4));
-            return new Prepared(f, lift, PatchMeshData.build(d.patches(), f, lift),
+            return new Prepared(f, lift, ModelView3D.focus(d, f), PatchMeshData.build(d.patches(), f, lift),
                     MassingMeshData.build(d.model(), f, d.blockAnalysed(), true),
                     MassingMeshData.build(d.model(), f, d.blockAnalysed(), false));
         }
+    }
+
+    /**
+     * What the camera frames first: {x, y, z, radius} in the scene frame, the sphere around the
+     * analysed patches (the whole model when there are none).
+     */
+    static double[] focus(ViewerData d, SceneFrame f) {
+        double[] b = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY,
+                Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
+        for (org.solmass.surface.Patch p : d.patches()) {
+            double[] o = p.outline();
+            for (int i = 0; i < o.length; i += 3) {
+                for (int k = 0; k < 3; k++) {
+                    b[k] = Math.min(b[k], o[i + k]);
+                    b[k + 3] = Math.max(b[k + 3], o[i + k]);
+                }
+            }
+        }
+        if (d.patches().isEmpty()) b = d.model().bounds();
+        double dx = b[3] - b[0], dy = b[4] - b[1], dz = b[5] - b[2];
+        double r = Math.max(1, 0.5 * Math.sqrt(dx * dx + dy * dy + dz * dz));
+        return new double[] {f.fx((b[0] + b[3]) / 2), f.fy((b[2] + b[5]) / 2), f.fz((b[1] + b[4]) / 2), r};
     }
 
     public ModelView3D(ViewerData data, Prepared prep) {

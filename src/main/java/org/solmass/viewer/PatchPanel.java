@@ -26,7 +26,7 @@ final class PatchPanel extends VBox {
     private final Label hint = new Label("Click a coloured patch in the model to see its values here.");
     private final GridPane facts = new GridPane();
     private final BarChart<String, Number> monthly;
-    private final HeatMap heat = new HeatMap(318, 150);
+    private final HeatMap heat = new HeatMap(318, 210);
     private final ComboBox<String> month = new ComboBox<>(FXCollections.observableArrayList(MONTHS));
     private final LineChart<Number, Number> daily;
     private final Label caution = new Label(Quantity.CAUTION);
@@ -65,7 +65,7 @@ final class PatchPanel extends VBox {
         caution.setWrapText(true);
         caution.getStyleClass().add("caution");
         details.getChildren().addAll(facts, section("Monthly irradiation"), monthly,
-                section("Mean irradiance by month and hour (W/m\u00b2)"), heat,
+                section("Mean irradiance by month and hour of day, local standard time (W/m\u00b2)"), heat,
                 new HBox(8, section("Daily irradiance, average day of"), month), daily, caution);
         details.setVisible(false);
         details.managedProperty().bind(details.visibleProperty());
@@ -74,6 +74,7 @@ final class PatchPanel extends VBox {
 
     private static Label section(String s) {
         Label l = new Label(s);
+        l.setWrapText(true);
         l.getStyleClass().add("section");
         return l;
     }
@@ -157,7 +158,7 @@ final class PatchPanel extends VBox {
     private int value(int r, ResultTable t, int p, String col, String label, int dec) {
         if (!t.has(col)) return r;
         String u = t.unit(col);
-        return row(r, label, fmt(t.column(col)[p], dec) + (u.isEmpty() ? "" : " " + u));
+        return row(r, label, fmt(t.column(col)[p], dec) + (u.isEmpty() ? "" : " " + Quantity.pretty(u)));
     }
 
     static String fmt(double v, int dec) {

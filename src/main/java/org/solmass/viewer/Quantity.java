@@ -73,7 +73,10 @@ public record Quantity(String column, String label, String unit, boolean divergi
     }
 
     /** Legend title: the label with its unit. */
-    public String title() { return unit.isEmpty() ? label : label + " (" + unit + ")"; }
+    public String title() { return unit.isEmpty() ? label : label + " (" + pretty(unit) + ")"; }
+
+    /** A unit as shown on screen: square metres with a superscript two ("kWh/m2" -> "kWh/m\u00b2"). */
+    public static String pretty(String unit) { return unit.replaceAll("m2\\b", "m\u00b2"); }
 
     @Override public String toString() { return label; }
 }

@@ -113,15 +113,15 @@ public final class ViewerWindow {
     }
 
     private void buildNorthArrow() {
-        Circle ring = new Circle(24, Color.rgb(255, 255, 255, 0.8));
+        Circle ring = new Circle(28, Color.rgb(255, 255, 255, 0.85));
         ring.setStroke(Color.rgb(70, 70, 70));
-        Polygon arrow = new Polygon(0, -20, 7, 8, 0, 3, -7, 8);
+        Polygon arrow = new Polygon(0, -8, 8, 20, 0, 14, -8, 20);
         arrow.setFill(Color.rgb(40, 40, 40));
         Text n = new Text("N");
-        n.setStyle("-fx-font-weight: bold; -fx-font-size: 12px;");
+        n.setStyle("-fx-font-weight: bold; -fx-font-size: 13px;");
         n.setFill(Color.rgb(40, 40, 40));
         n.setX(-n.getLayoutBounds().getWidth() / 2);
-        n.setY(-27);
+        n.setY(-12);
         north.getChildren().addAll(ring, arrow, n);
         north.setMouseTransparent(true);
     }
@@ -192,7 +192,7 @@ public final class ViewerWindow {
         this.data = d;
         stage.setTitle("Solmass \u2014 " + d.title());
         view = new ModelView3D(d, prep);
-        rig = new CameraRig(prep.frame().radiusM());
+        rig = new CameraRig(prep.frame().radiusM(), prep.focus());
         javafx.scene.Group world = new javafx.scene.Group(view.node(), rig.node());
         view.sunPathGroup().getChildren().setAll(SunPathView.build(d.sunPath(), prep.frame().radiusM()));
         sub = new SubScene(world, 10, 10, true, javafx.application.Platform.isSupported(
@@ -274,7 +274,7 @@ public final class ViewerWindow {
         }
         Quantity q = controls.quantity();
         double v = data.table().column(q.column())[p];
-        hover.setText(PatchPanel.fmt(v, Math.abs(v) < 10 ? 2 : 0) + (q.unit().isEmpty() ? "" : " " + q.unit())
+        hover.setText(PatchPanel.fmt(v, Math.abs(v) < 10 ? 2 : 0) + (q.unit().isEmpty() ? "" : " " + Quantity.pretty(q.unit()))
                 + "  \u00b7  " + data.patches().get(p).id());
         hover.setTranslateX(x + 14);
         hover.setTranslateY(y + 10);

@@ -91,7 +91,7 @@ class ViewerSmokeTest {
         int expect = scale.rgb(data.table().column("annual_kwh_m2")[shown]);
         assertTrue(distance(expect, clicked) <= 24, String.format("clicked colour %06x, patch colour %06x", clicked, expect));
         String annual = onFx(() -> ((Label) w.panel().lookup("#fact-annual-irradiation")).getText());
-        assertEquals(PatchPanel.fmt(data.table().column("annual_kwh_m2")[shown], 0) + " kWh/m2", annual);
+        assertEquals(PatchPanel.fmt(data.table().column("annual_kwh_m2")[shown], 0) + " kWh/m\u00b2", annual);
         String heading = onFx(() -> ((Label) w.panel().getChildren().get(0)).getText());
         assertEquals("Patch " + data.patches().get(shown).id(), heading);
 
