@@ -70,16 +70,16 @@ public final class CameraRig {
         target.setY(focus[1]);
         target.setZ(focus[2]);
         switch (which) {
-            case "top": setView(0, 90, fit(0.95)); break;
-            case "N": setView(180, 10, fit(0.9)); break;
-            case "E": setView(270, 10, fit(0.9)); break;
-            case "S": setView(0, 10, fit(0.9)); break;
-            case "W": setView(90, 10, fit(0.9)); break;
+            case "top": setView(0, 90, fit(1.2)); break;
+            case "N": setView(180, 10, fit(1.2)); break;
+            case "E": setView(270, 10, fit(1.2)); break;
+            case "S": setView(0, 10, fit(1.2)); break;
+            case "W": setView(90, 10, fit(1.2)); break;
             case "sun":
                 target.setY(0);
                 setView(25, 28, 1.25 * radius * 1.3 / Math.sin(Math.toRadians(camera.getFieldOfView() / 2)));
                 break;
-            default: setView(30, 38, fit(0.85)); break;
+            default: setView(30, 38, fit(1.3)); break;
         }
     }
 

@@ -23,8 +23,10 @@ public final class MassingMeshData {
             Math.cos(Math.toRadians(225)) * Math.cos(Math.toRadians(50)), Math.sin(Math.toRadians(50))};
 
     public final float[] points;
-    /** Faces as p0,t0,p1,t1,p2,t2; the three corners of a face share one texture coordinate (its shade). */
+    /** Faces as p0,n0,t0,p1,n1,t1,p2,n2,t2; the corners of a face share its normal and its texture coordinate (its shade). */
     public final int[] faces;
+    /** One unit normal per face (scene frame). */
+    public final float[] normals;
     /** Block id of each face. */
     public final int[] faceToBlock;
     /** Texture coordinates: one (u, v) per shade level. */
@@ -37,8 +39,9 @@ public final class MassingMeshData {
         }
     }
 
-    private MassingMeshData(float[] points, int[] faces, int[] faceToBlock) {
+    private MassingMeshData(float[] points, float[] normals, int[] faces, int[] faceToBlock) {
         this.points = points;
+        this.normals = normals;
         this.faces = faces;
         this.faceToBlock = faceToBlock;
     }
@@ -59,7 +62,8 @@ public final class MassingMeshData {
         for (int s = 0; s < tris.size(); s += MAX_TRIANGLES) {
             List<Integer> part = tris.subList(s, Math.min(tris.size(), s + MAX_TRIANGLES));
             float[] pts = new float[part.size() * 9];
-            int[] faces = new int[part.size() * 6];
+            int[] faces = new int[part.size() * 9];
+            float[] nrm = new float[part.size() * 3];
             int[] f2b = new int[part.size()];
             for (int k = 0; k < part.size(); k++) {
                 int t = part.get(k);
@@ -69,17 +73,25 @@ public final class MassingMeshData {
                 double nx = uy * wz - uz * wy, ny = uz * wx - ux * wz, nz = ux * wy - uy * wx;
                 double len = Math.sqrt(nx * nx + ny * ny + nz * nz);
                 int level = len > 0 ? (int) Math.round(shade(nx / len, ny / len, nz / len) * (LEVELS - 1)) : LEVELS - 1;
+                if (len > 0) {
+                    nrm[3 * k] = (float) (nx / len);
+                    nrm[3 * k + 1] = (float) (-nz / len);
+                    nrm[3 * k + 2] = (float) (ny / len);
+                } else {
+                    nrm[3 * k + 1] = -1;
+                }
                 for (int q = 0; q < 3; q++) {
                     int vi = ix[3 * t + q] * 3;
                     pts[9 * k + 3 * q] = frame.fx(v[vi]);
                     pts[9 * k + 3 * q + 1] = frame.fy(v[vi + 2]);
                     pts[9 * k + 3 * q + 2] = frame.fz(v[vi + 1]);
-                    faces[6 * k + 2 * q] = 3 * k + q;
-                    faces[6 * k + 2 * q + 1] = level;
+                    faces[9 * k + 3 * q] = 3 * k + q;
+                    faces[9 * k + 3 * q + 1] = k;
+                    faces[9 * k + 3 * q + 2] = level;
                 }
                 f2b[k] = m.triangleBlock()[t];
             }
-            out.add(new MassingMeshData(pts, faces, f2b));
+            out.add(new MassingMeshData(pts, nrm, faces, f2b));
         }
         return out;
     }

@@ -12,6 +12,7 @@ import javafx.scene.shape.Box;
 import javafx.scene.shape.CullFace;
 import javafx.scene.shape.MeshView;
 import javafx.scene.shape.TriangleMesh;
+import javafx.scene.shape.VertexFormat;
 import javafx.geometry.Point3D;
 
 import java.util.ArrayList;
@@ -31,12 +32,10 @@ public final class ModelView3D {
     private final Group sunGroup = new Group();
     private final Group selection = new Group();
     private final List<PatchMeshData> patchData;
-    private final List<TriangleMesh> patchMeshes = new ArrayList<>();
+    private final List<WritableImage> patchTextures = new ArrayList<>();
     private final List<MeshView> patchViews = new ArrayList<>();
     private final List<MeshView> massingViews = new ArrayList<>();
     private final List<MassingMeshData> massingData = new ArrayList<>();
-    private final WritableImage atlas = new WritableImage(PaletteAtlas.WIDTH, PaletteAtlas.HEIGHT);
-    private final PhongMaterial patchMaterial = new PhongMaterial(Color.WHITE);
     private final SceneFrame frame;
     private final double liftM;
 
@@ -78,8 +77,6 @@ public final class ModelView3D {
         this.frame = prep.frame();
         this.liftM = prep.liftM();
         this.patchData = prep.patches();
-        patchMaterial.setDiffuseMap(atlas);
-        patchMaterial.setSpecularColor(Color.BLACK);
 
         Group massing = new Group();
         addMassing(massing, prep.analysed(), ANALYSED_GREY);
@@ -89,14 +86,19 @@ public final class ModelView3D {
 
         Group patches = new Group();
         for (PatchMeshData pd : patchData) {
-            TriangleMesh m = new TriangleMesh();
+            TriangleMesh m = new TriangleMesh(VertexFormat.POINT_NORMAL_TEXCOORD);
             m.getPoints().setAll(pd.points);
+            m.getNormals().setAll(pd.normals);
             m.getTexCoords().setAll(pd.texCoords);
             m.getFaces().setAll(pd.faces);
+            WritableImage tex = new WritableImage(pd.atlas.width, pd.atlas.height);
+            PhongMaterial mat = new PhongMaterial(Color.WHITE);
+            mat.setDiffuseMap(tex);
+            mat.setSpecularColor(Color.BLACK);
             MeshView v = new MeshView(m);
-            v.setMaterial(patchMaterial);
+            v.setMaterial(mat);
             v.setCullFace(CullFace.NONE);
-            patchMeshes.add(m);
+            patchTextures.add(tex);
             patchViews.add(v);
             patches.getChildren().add(v);
         }
@@ -115,8 +117,9 @@ public final class ModelView3D {
         mat.setDiffuseMap(tex);
         mat.setSpecularColor(Color.BLACK);
         for (MassingMeshData md : parts) {
-            TriangleMesh m = new TriangleMesh();
+            TriangleMesh m = new TriangleMesh(VertexFormat.POINT_NORMAL_TEXCOORD);
             m.getPoints().setAll(md.points);
+            m.getNormals().setAll(md.normals);
             m.getTexCoords().setAll(MassingMeshData.TEX_COORDS);
             m.getFaces().setAll(md.faces);
             MeshView v = new MeshView(m);
@@ -146,14 +149,18 @@ public final class ModelView3D {
 
     public Group sunPathGroup() { return sunGroup; }
 
-    /** Recolours the patches: palette of {@code scale}, cell per patch. */
-    public void recolour(ColourScale scale, int[] cellOfPatch) {
-        atlas.getPixelWriter().setPixels(0, 0, PaletteAtlas.WIDTH, PaletteAtlas.HEIGHT,
-                PixelFormat.getIntArgbInstance(), PaletteAtlas.pixels(scale), 0, PaletteAtlas.WIDTH);
+    /** Recolours the patches: palette entry per patch (0..257, see {@link ColourScale}) of {@code scale}. */
+    public void recolour(ColourScale scale, int[] paletteOfPatch) {
+        int[] lut = new int[ColourScale.BELOW_INDEX + 1];
+        for (int i = 0; i < lut.length; i++) lut[i] = scale.rgbOfIndex(i);
+        int[] rgb = new int[paletteOfPatch.length];
+        for (int i = 0; i < rgb.length; i++) rgb[i] = lut[paletteOfPatch[i]];
         for (int i = 0; i < patchData.size(); i++) {
             PatchMeshData pd = patchData.get(i);
-            pd.recolour(cellOfPatch);
-            patchMeshes.get(i).getTexCoords().setAll(pd.texCoords);
+            int[] px = new int[pd.atlas.width * pd.atlas.height];
+            pd.texels(rgb, px);
+            patchTextures.get(i).getPixelWriter().setPixels(0, 0, pd.atlas.width, pd.atlas.height,
+                    PixelFormat.getIntArgbInstance(), px, 0, pd.atlas.width);
         }
     }
 
@@ -191,6 +198,4 @@ public final class ModelView3D {
         return new Point3D(frame.fx(o[3 * i] + p.normal().x() * lift), frame.fy(o[3 * i + 2] + p.normal().z() * lift),
                 frame.fz(o[3 * i + 1] + p.normal().y() * lift));
     }
-
-    public Image atlasImage() { return atlas; }
 }

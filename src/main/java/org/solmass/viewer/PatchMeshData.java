@@ -16,22 +16,30 @@ public final class PatchMeshData {
     public static final int MAX_PATCHES = 50_000;
 
     public final float[] points;
-    /** Texture coordinates, two per point, for the current colours. */
+    /** Texture coordinates, two per point, into this mesh's {@link #atlas} (fixed). */
     public final float[] texCoords;
-    /** Faces as p0,t0,p1,t1,p2,t2 (texture index = point index). */
+    /** Texel layout: one cell per patch of this mesh, in mesh order. */
+    public final PaletteAtlas atlas;
+    /** Patch index (into the study's patch list) of each patch of this mesh, in mesh order. */
+    public final int[] patches;
+    /** One unit normal per patch of the mesh (scene frame), so JavaFX need not derive them. */
+    public final float[] normals;
+    /** Faces as p0,n0,t0,p1,n1,t1,p2,n2,t2 (texture index = point index, normal index = patch in mesh). */
     public final int[] faces;
+    /** Ints per face in {@link #faces}. */
+    public static final int FACE_STRIDE = 9;
     /** Patch index (into the study's patch list) of each face. */
     public final int[] faceToPatch;
-    private final int[] pointPatch;
-    private final float[] localUv;
 
-    private PatchMeshData(float[] points, float[] localUv, int[] pointPatch, int[] faces, int[] faceToPatch) {
+    private PatchMeshData(float[] points, float[] normals, float[] texCoords, int[] faces, int[] faceToPatch,
+                          PaletteAtlas atlas, int[] patches) {
         this.points = points;
-        this.localUv = localUv;
-        this.pointPatch = pointPatch;
+        this.normals = normals;
+        this.texCoords = texCoords;
         this.faces = faces;
         this.faceToPatch = faceToPatch;
-        this.texCoords = new float[localUv.length];
+        this.atlas = atlas;
+        this.patches = patches;
     }
 
     /** The patch a picked face belongs to, or -1 when the face index is out of range. */
@@ -41,13 +49,16 @@ public final class PatchMeshData {
 
     public int faceCount() { return faceToPatch.length; }
 
-    /** Rewrites the texture coordinates so each patch shows palette cell {@code cellOfPatch[patch]}. */
-    public void recolour(int[] cellOfPatch) {
-        for (int p = 0, n = pointPatch.length; p < n; p++) {
-            int c = cellOfPatch[pointPatch[p]];
-            texCoords[2 * p] = PaletteAtlas.u(c, localUv[2 * p]);
-            texCoords[2 * p + 1] = PaletteAtlas.v(c, localUv[2 * p + 1]);
-        }
+    /**
+     * Texels of this mesh's atlas for colours per study patch.
+     *
+     * @param rgbOfPatch 0xRRGGBB per study patch index
+     * @param out ARGB texels, {@code atlas.width * atlas.height} long
+     */
+    public void texels(int[] rgbOfPatch, int[] out) {
+        int[] rgb = new int[patches.length];
+        for (int i = 0; i < patches.length; i++) rgb[i] = rgbOfPatch[patches[i]];
+        atlas.fill(rgb, out);
     }
 
     /**
@@ -81,9 +92,11 @@ public final class PatchMeshData {
             nFaces += t.length / 3;
         }
         float[] pts = new float[3 * nPts];
-        float[] luv = new float[2 * nPts];
-        int[] ptPatch = new int[nPts];
-        int[] faces = new int[6 * nFaces];
+        float[] tex = new float[2 * nPts];
+        PaletteAtlas atlas = new PaletteAtlas(group.size());
+        int[] ids = new int[group.size()];
+        int[] faces = new int[FACE_STRIDE * nFaces];
+        float[] nrms = new float[3 * group.size()];
         int[] f2p = new int[nFaces];
         int pi = 0, fi = 0;
         for (int k = 0; k < group.size(); k++) {
@@ -92,25 +105,29 @@ public final class PatchMeshData {
             Vec3 nrm = p.normal();
             double[][] uv = uvs.get(k);
             int n = uv[0].length, base = pi;
+            ids[k] = p.index();
+            nrms[3 * k] = (float) nrm.x();
+            nrms[3 * k + 1] = (float) -nrm.z();
+            nrms[3 * k + 2] = (float) nrm.y();
             for (int c = 0; c < n; c++) {
                 pts[3 * pi] = frame.fx(o[3 * c] + nrm.x() * liftM);
                 pts[3 * pi + 1] = frame.fy(o[3 * c + 2] + nrm.z() * liftM);
                 pts[3 * pi + 2] = frame.fz(o[3 * c + 1] + nrm.y() * liftM);
-                luv[2 * pi] = (float) uv[0][c];
-                luv[2 * pi + 1] = (float) uv[1][c];
-                ptPatch[pi] = p.index();
+                tex[2 * pi] = atlas.u(k, (float) uv[0][c]);
+                tex[2 * pi + 1] = atlas.v(k, (float) uv[1][c]);
                 pi++;
             }
             int[] t = tris.get(k);
             for (int j = 0; j < t.length; j += 3) {
                 for (int c = 0; c < 3; c++) {
-                    faces[6 * fi + 2 * c] = base + t[j + c];
-                    faces[6 * fi + 2 * c + 1] = base + t[j + c];
+                    faces[FACE_STRIDE * fi + 3 * c] = base + t[j + c];
+                    faces[FACE_STRIDE * fi + 3 * c + 1] = k;
+                    faces[FACE_STRIDE * fi + 3 * c + 2] = base + t[j + c];
                 }
                 f2p[fi++] = p.index();
             }
         }
-        return new PatchMeshData(pts, luv, ptPatch, faces, f2p);
+        return new PatchMeshData(pts, nrms, tex, faces, f2p, atlas, ids);
     }
 
     /**

@@ -300,6 +300,9 @@ public final class ViewerWindow {
 
     void setStatus(String s) { status.setText(s); }
 
+    /** Colours the model by a column, as the selector would. */
+    public void controlsSelect(String column) { controls.select(column); }
+
     void rerun(RerunRequest req) {
         runBusy("Re-running the analysis\u2026", () -> actions.rerun(req, this::progress, cancelled::get), null);
     }

@@ -62,14 +62,4 @@ class ColourScaleTest {
         assertEquals(s.index(700), c[2]);
         assertEquals(ColourScale.NAN_INDEX, c[3]);
     }
-
-    @Test
-    void atlasCellsCarryThePaletteColourInsideAndADarkerBorder() {
-        int[] px = PaletteAtlas.pixels(s);
-        int cell = 37, x0 = (cell % PaletteAtlas.COLS) * PaletteAtlas.CELL, y0 = (cell / PaletteAtlas.COLS) * PaletteAtlas.CELL;
-        int mid = px[(y0 + PaletteAtlas.CELL / 2) * PaletteAtlas.WIDTH + x0 + PaletteAtlas.CELL / 2] & 0xFFFFFF;
-        int edge = px[y0 * PaletteAtlas.WIDTH + x0 + 5] & 0xFFFFFF;
-        assertEquals(s.rgbOfIndex(cell), mid);
-        assertEquals(true, ColourRamp.lightness(edge) < ColourRamp.lightness(mid));
-    }
 }

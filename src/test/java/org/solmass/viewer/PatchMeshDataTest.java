@@ -27,7 +27,7 @@ class PatchMeshDataTest {
             for (int f = 0; f < m.faceCount(); f++) {
                 Patch p = data.patches().get(m.patchOfFace(f));
                 Vec3 c = Vec3.ZERO;
-                for (int k = 0; k < 3; k++) c = c.plus(model(m.points, m.faces[6 * f + 2 * k]).times(1 / 3.0));
+                for (int k = 0; k < 3; k++) c = c.plus(model(m.points, m.faces[PatchMeshData.FACE_STRIDE * f + 3 * k]).times(1 / 3.0));
                 assertEquals(0.05, c.minus(p.centroid()).dot(p.normal()), 1e-4, "face " + f + " off its patch plane");
                 double[] o = p.outline();
                 for (int ax = 0; ax < 3; ax++) {
@@ -50,7 +50,7 @@ class PatchMeshDataTest {
         double[] area = new double[data.patches().size()];
         for (PatchMeshData m : meshes) {
             for (int f = 0; f < m.faceCount(); f++) {
-                Vec3 a = model(m.points, m.faces[6 * f]), b = model(m.points, m.faces[6 * f + 2]), c = model(m.points, m.faces[6 * f + 4]);
+                Vec3 a = model(m.points, m.faces[9 * f]), b = model(m.points, m.faces[9 * f + 3]), c = model(m.points, m.faces[9 * f + 6]);
                 area[m.patchOfFace(f)] += 0.5 * b.minus(a).cross(c.minus(a)).length();
             }
         }
@@ -64,18 +64,37 @@ class PatchMeshDataTest {
     }
 
     @Test
-    void recolouringPointsEveryCornerIntoItsPatchesPaletteCell() {
-        int[] cells = new int[data.patches().size()];
-        for (int i = 0; i < cells.length; i++) cells[i] = (i * 37) % 258;
+    void everyCornerSamplesItsOwnPatchesTexelCell() {
         for (PatchMeshData m : meshes) {
-            m.recolour(cells);
             for (int f = 0; f < m.faceCount(); f++) {
                 for (int k = 0; k < 3; k++) {
-                    int t = m.faces[6 * f + 2 * k + 1];
-                    assertEquals(cells[m.patchOfFace(f)], PaletteAtlas.cellAt(m.texCoords[2 * t], m.texCoords[2 * t + 1]));
+                    int t = m.faces[PatchMeshData.FACE_STRIDE * f + 3 * k + 2];
+                    int cell = m.atlas.cellAt(m.texCoords[2 * t], m.texCoords[2 * t + 1]);
+                    assertEquals(m.patchOfFace(f), m.patches[cell]);
                 }
             }
         }
+    }
+
+    @Test
+    void texelsShowEachPatchesColourInsideADarkerBorder() {
+        int[] rgb = new int[data.patches().size()];
+        for (int i = 0; i < rgb.length; i++) rgb[i] = ColourRampColours.of(i);
+        PatchMeshData m = meshes.get(1);
+        int[] px = new int[m.atlas.width * m.atlas.height];
+        m.texels(rgb, px);
+        for (int c = 0; c < m.patches.length; c++) {
+            int x0 = (c % m.atlas.cols) * PaletteAtlas.CELL, y0 = (c / m.atlas.cols) * PaletteAtlas.CELL;
+            int mid = px[(y0 + PaletteAtlas.CELL / 2) * m.atlas.width + x0 + PaletteAtlas.CELL / 2] & 0xFFFFFF;
+            int edge = px[y0 * m.atlas.width + x0 + 2] & 0xFFFFFF;
+            assertEquals(rgb[m.patches[c]], mid);
+            assertEquals(PaletteAtlas.darken(rgb[m.patches[c]], PaletteAtlas.OUTLINE), edge);
+        }
+    }
+
+    /** Distinct test colours from the pipeline ramp. */
+    static final class ColourRampColours {
+        static int of(int i) { return org.solmass.output.ColourRamp.sequential((i % 97) / 96.0); }
     }
 
     @Test

@@ -10,6 +10,22 @@ public final class ViewerDemo {
     public static void main(String[] a) throws Exception {
         int n = a.length > 1 ? Integer.parseInt(a[1]) : 0;
         long t0 = System.nanoTime();
+        if (Boolean.getBoolean("demo.sample")) {
+            Thread w = new Thread(() -> {
+                while (true) {
+                    try { Thread.sleep(1500); } catch (InterruptedException e) { return; }
+                    Thread.getAllStackTraces().forEach((t, st) -> {
+                        if (t.getName().startsWith("QuantumRenderer") && st.length > 0) {
+                            StringBuilder b = new StringBuilder("sample " + t.getName() + ":");
+                            for (int i = 0; i < Math.min(6, st.length); i++) b.append("\n   ").append(st[i]);
+                            System.err.println(b);
+                        }
+                    });
+                }
+            });
+            w.setDaemon(true);
+            w.start();
+        }
         ViewerLoader loader = (p, c) -> n > 0 ? SyntheticViewerData.withAbout(n, true) : SyntheticViewerData.courtyard();
         if (a.length > 2) System.setProperty("solmass.viewer.view", a[2]);
         double s = SolmassViewer.snapshot(loader, ViewerActions.none(new RerunRequest(1, "synthetic", "perez")), Path.of(a[0]),
