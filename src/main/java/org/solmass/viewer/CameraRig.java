@@ -77,7 +77,7 @@ public final class CameraRig {
             case "W": setView(90, 10, fit(1.2)); break;
             case "sun":
                 target.setY(0);
-                setView(25, 28, 1.25 * radius * 1.3 / Math.sin(Math.toRadians(camera.getFieldOfView() / 2)));
+                setView(165, 24, 1.3 * radius * 1.3 / Math.sin(Math.toRadians(camera.getFieldOfView() / 2)));
                 break;
             default: setView(30, 38, fit(1.3)); break;
         }

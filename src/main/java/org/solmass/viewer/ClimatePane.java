@@ -12,7 +12,7 @@ import javafx.scene.layout.VBox;
 /** The study's climate input at a glance: month-hour maps of global and diffuse horizontal irradiance, monthly totals. */
 final class ClimatePane extends VBox {
     private final Label caption = new Label();
-    private final HeatMap ghi = new HeatMap(520, 230), dhi = new HeatMap(520, 230);
+    private final HeatMap ghi = new HeatMap(370, 230), dhi = new HeatMap(370, 230);
     private final BarChart<String, Number> totals;
 
     ClimatePane() {

@@ -133,7 +133,7 @@ public final class ModelView3D {
 
     private Node ground(ViewerData d) {
         double[] b = d.model().bounds();
-        double w = Math.max(b[3] - b[0], b[4] - b[1]) * 8 + 200, h = w;
+        double w = 30 * frame.radiusM(), h = w;
         Box g = new Box(w, 0.01, h);
         g.setTranslateY(frame.fy(b[2]) + 3 * liftM);
         PhongMaterial mat = new PhongMaterial(GROUND);

@@ -59,6 +59,7 @@ public final class ViewerWindow {
     private final ProgressBar bar = new ProgressBar(-1);
     private final Label busyText = new Label();
     private final AtomicBoolean cancelled = new AtomicBoolean();
+    private final TabPane tabs;
     private SubScene sub;
     private CameraRig rig;
     private ModelView3D view;
@@ -90,7 +91,7 @@ public final class ViewerWindow {
         StackPane.setMargin(north, new Insets(14));
         StackPane.setAlignment(hover, Pos.TOP_LEFT);
         viewStack.setMinSize(0, 0);
-        TabPane tabs = new TabPane(new Tab("Model", viewStack), new Tab("Climate at a glance", new ScrollPane(climate)));
+        tabs = new TabPane(new Tab("Model", viewStack), new Tab("Climate at a glance", new ScrollPane(climate)));
         tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         ScrollPane right = new ScrollPane(panel);
         right.setFitToWidth(true);
@@ -218,6 +219,8 @@ public final class ViewerWindow {
         String v = System.getProperty("solmass.viewer.view");
         if (v != null) rig.preset(v);
         if (v != null && v.startsWith("sun")) controls.setSunPath(true);
+        if ("climate".equals(v)) tabs.getSelectionModel().select(1);
+        if (v != null && v.startsWith("patch")) selectPatch(Math.min(d.patches().size() - 1, d.patches().size() / 3));
         shownAtNanos = System.nanoTime();
         if (Boolean.getBoolean("solmass.viewer.timing")) System.err.printf("viewer: data on show at %.2f%n", shownAtNanos / 1e9 % 1000);
     }
