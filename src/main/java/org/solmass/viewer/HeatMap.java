@@ -22,7 +22,7 @@ final class HeatMap extends Canvas {
         GraphicsContext g = getGraphicsContext2D();
         double w = getWidth(), h = getHeight();
         g.clearRect(0, 0, w, h);
-        double gw = w - LEFT - 4, gh = h - BOTTOM - TOP, cw = gw / 24, ch = gh / 12;
+        double gw = w - LEFT - 10, gh = h - BOTTOM - TOP, cw = gw / 24, ch = gh / 12;
         for (int m = 0; m < 12; m++) {
             for (int hr = 0; hr < 24; hr++) {
                 double x = v == null ? Double.NaN : v[m * 24 + hr];

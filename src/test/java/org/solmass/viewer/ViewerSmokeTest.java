@@ -95,6 +95,11 @@ class ViewerSmokeTest {
         String heading = onFx(() -> ((Label) w.panel().getChildren().get(0)).getText());
         assertEquals("Patch " + data.patches().get(shown).id(), heading);
 
+        // the PNG export renders the 3D view at a chosen scale
+        WritableImage twice = onFx(() -> w.snapshot3D(2));
+        assertEquals(2 * width, (int) twice.getWidth());
+        assertEquals(2 * height, (int) twice.getHeight());
+
         Path out = Path.of("target", "viewer-smoke.png");
         onFx(() -> {
             SolmassViewer.write(w.snapshotWindow(), out);
