@@ -152,6 +152,13 @@ final class ControlColumn extends VBox {
         refresh();
     }
 
+    /** Picks out the patches at or above a value (NaN: threshold off), as the controls would. */
+    void setThreshold(double v) {
+        thr.setText(Double.isFinite(v) ? LegendTicks.format(v, 1) : "");
+        thrOn.setSelected(Double.isFinite(v));
+        refresh();
+    }
+
     /** Selects a quantity by column name (for scripts and tests). */
     void select(String column) {
         for (Quantity q : quantity.getItems()) if (q.column().equals(column)) quantity.setValue(q);

@@ -164,10 +164,11 @@ public final class ModelView3D {
         }
     }
 
-    /** Patch index of a picked face of a node, -1 if the node is not a patch mesh. */
-    public int patchAt(Node n, int face) {
+    /** Patch index under a pick (node, face, texture coordinate), -1 if the node is not a patch mesh. */
+    public int patchAt(Node n, int face, javafx.geometry.Point2D tex) {
         int i = patchViews.indexOf(n);
-        return i < 0 ? -1 : patchData.get(i).patchOfFace(face);
+        if (i < 0) return -1;
+        return tex == null ? patchData.get(i).patchOfFace(face) : patchData.get(i).patchAt(face, tex.getX(), tex.getY());
     }
 
     /** Block id of a picked face of the grey massing, -1 if the node is not massing. */

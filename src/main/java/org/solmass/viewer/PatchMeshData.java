@@ -28,11 +28,15 @@ public final class PatchMeshData {
     public final int[] faces;
     /** Ints per face in {@link #faces}. */
     public static final int FACE_STRIDE = 9;
-    /** Patch index (into the study's patch list) of each face. */
+    /** Patch index (into the study's patch list) of each face; for a face over a strip, its first patch. */
     public final int[] faceToPatch;
+    /** First texel cell (patch of this mesh) and number of cells each face spans. */
+    private final int[] faceFirstCell, faceCells;
 
     private PatchMeshData(float[] points, float[] normals, float[] texCoords, int[] faces, int[] faceToPatch,
-                          PaletteAtlas atlas, int[] patches) {
+                          int[] faceFirstCell, int[] faceCells, PaletteAtlas atlas, int[] patches) {
+        this.faceFirstCell = faceFirstCell;
+        this.faceCells = faceCells;
         this.points = points;
         this.normals = normals;
         this.texCoords = texCoords;
@@ -42,10 +46,25 @@ public final class PatchMeshData {
         this.patches = patches;
     }
 
-    /** The patch a picked face belongs to, or -1 when the face index is out of range. */
+    /** The (first) patch a picked face belongs to, or -1 when the face index is out of range. */
     public int patchOfFace(int face) {
         return face >= 0 && face < faceToPatch.length ? faceToPatch[face] : -1;
     }
+
+    /**
+     * The patch under a pick: the face, then the texel cell at the picked texture coordinate,
+     * kept within the cells the face spans; -1 when the face index is out of range.
+     */
+    public int patchAt(int face, double u, double v) {
+        if (face < 0 || face >= faceToPatch.length) return -1;
+        int first = faceFirstCell[face], n = faceCells[face];
+        if (n == 1 || !Double.isFinite(u) || !Double.isFinite(v)) return patches[first];
+        int cell = atlas.cellAt((float) u, (float) v);
+        return patches[Math.max(first, Math.min(first + n - 1, cell))];
+    }
+
+    /** Number of patches face f covers (1, or the length of its strip). */
+    public int patchesOfFace(int f) { return faceCells[f]; }
 
     public int faceCount() { return faceToPatch.length; }
 
@@ -80,54 +99,138 @@ public final class PatchMeshData {
     }
 
     static PatchMeshData of(List<Patch> group, SceneFrame frame, double liftM) {
+        PaletteAtlas atlas = new PaletteAtlas(group.size());
+        List<int[]> strips = strips(group, atlas.cols);
         int nPts = 0, nFaces = 0;
-        List<int[]> tris = new ArrayList<>(group.size());
-        List<double[][]> uvs = new ArrayList<>(group.size());
-        for (Patch p : group) {
-            double[][] uv = localCoordinates(p);
-            int[] t = Triangulator.triangulate(uv[0], uv[1]);
-            tris.add(t);
-            uvs.add(uv);
-            nPts += uv[0].length;
-            nFaces += t.length / 3;
+        List<int[]> tris = new ArrayList<>();
+        List<double[][]> uvs = new ArrayList<>();
+        for (int[] st : strips) {
+            if (st[1] > 1) {
+                nPts += 4;
+                nFaces += 2;
+                tris.add(null);
+                uvs.add(null);
+            } else {
+                Patch p = group.get(st[0]);
+                double[][] uv = localCoordinates(p);
+                int[] t = Triangulator.triangulate(uv[0], uv[1]);
+                tris.add(t);
+                uvs.add(uv);
+                nPts += uv[0].length;
+                nFaces += t.length / 3;
+            }
         }
         float[] pts = new float[3 * nPts];
         float[] tex = new float[2 * nPts];
-        PaletteAtlas atlas = new PaletteAtlas(group.size());
         int[] ids = new int[group.size()];
         int[] faces = new int[FACE_STRIDE * nFaces];
         float[] nrms = new float[3 * group.size()];
-        int[] f2p = new int[nFaces];
-        int pi = 0, fi = 0;
+        int[] f2p = new int[nFaces], fFirst = new int[nFaces], fCount = new int[nFaces];
         for (int k = 0; k < group.size(); k++) {
             Patch p = group.get(k);
-            double[] o = p.outline();
-            Vec3 nrm = p.normal();
-            double[][] uv = uvs.get(k);
-            int n = uv[0].length, base = pi;
             ids[k] = p.index();
-            nrms[3 * k] = (float) nrm.x();
-            nrms[3 * k + 1] = (float) -nrm.z();
-            nrms[3 * k + 2] = (float) nrm.y();
-            for (int c = 0; c < n; c++) {
-                pts[3 * pi] = frame.fx(o[3 * c] + nrm.x() * liftM);
-                pts[3 * pi + 1] = frame.fy(o[3 * c + 2] + nrm.z() * liftM);
-                pts[3 * pi + 2] = frame.fz(o[3 * c + 1] + nrm.y() * liftM);
-                tex[2 * pi] = atlas.u(k, (float) uv[0][c]);
-                tex[2 * pi + 1] = atlas.v(k, (float) uv[1][c]);
-                pi++;
+            nrms[3 * k] = (float) p.normal().x();
+            nrms[3 * k + 1] = (float) -p.normal().z();
+            nrms[3 * k + 2] = (float) p.normal().y();
+        }
+        int pi = 0, fi = 0;
+        for (int si = 0; si < strips.size(); si++) {
+            int k0 = strips.get(si)[0], count = strips.get(si)[1];
+            Patch first = group.get(k0), last = group.get(k0 + count - 1);
+            Vec3 nrm = first.normal();
+            int base = pi;
+            int[] t;
+            if (count > 1) {
+                // one quad over the strip; its texture spans the strip's consecutive cells
+                double[][] corners = {corner(first, 0), corner(last, 1), corner(last, 2), corner(first, 3)};
+                int col = k0 % atlas.cols, row = k0 / atlas.cols;
+                float u0 = (float) col * PaletteAtlas.CELL / atlas.width, u1 = (float) (col + count) * PaletteAtlas.CELL / atlas.width;
+                float v0 = (float) row * PaletteAtlas.CELL / atlas.height, v1 = (float) (row + 1) * PaletteAtlas.CELL / atlas.height;
+                float[][] uv = {{u0, v0}, {u1, v0}, {u1, v1}, {u0, v1}};
+                for (int c = 0; c < 4; c++) {
+                    putPoint(pts, pi, corners[c], nrm, liftM, frame);
+                    tex[2 * pi] = uv[c][0];
+                    tex[2 * pi + 1] = uv[c][1];
+                    pi++;
+                }
+                t = new int[] {0, 1, 2, 0, 2, 3};
+            } else {
+                double[][] uv = uvs.get(si);
+                double[] o = first.outline();
+                for (int c = 0; c < uv[0].length; c++) {
+                    putPoint(pts, pi, new double[] {o[3 * c], o[3 * c + 1], o[3 * c + 2]}, nrm, liftM, frame);
+                    tex[2 * pi] = atlas.u(k0, (float) uv[0][c]);
+                    tex[2 * pi + 1] = atlas.v(k0, (float) uv[1][c]);
+                    pi++;
+                }
+                t = tris.get(si);
             }
-            int[] t = tris.get(k);
             for (int j = 0; j < t.length; j += 3) {
                 for (int c = 0; c < 3; c++) {
                     faces[FACE_STRIDE * fi + 3 * c] = base + t[j + c];
-                    faces[FACE_STRIDE * fi + 3 * c + 1] = k;
+                    faces[FACE_STRIDE * fi + 3 * c + 1] = k0;
                     faces[FACE_STRIDE * fi + 3 * c + 2] = base + t[j + c];
                 }
-                f2p[fi++] = p.index();
+                f2p[fi] = first.index();
+                fFirst[fi] = k0;
+                fCount[fi] = count;
+                fi++;
             }
         }
-        return new PatchMeshData(pts, nrms, tex, faces, f2p, atlas, ids);
+        return new PatchMeshData(pts, nrms, tex, faces, f2p, fFirst, fCount, atlas, ids);
+    }
+
+    private static double[] corner(Patch p, int c) {
+        double[] o = p.outline();
+        return new double[] {o[3 * c], o[3 * c + 1], o[3 * c + 2]};
+    }
+
+    private static void putPoint(float[] pts, int i, double[] c, Vec3 n, double lift, SceneFrame f) {
+        pts[3 * i] = f.fx(c[0] + n.x() * lift);
+        pts[3 * i + 1] = f.fy(c[2] + n.z() * lift);
+        pts[3 * i + 2] = f.fz(c[1] + n.y() * lift);
+    }
+
+    /**
+     * Runs of consecutive patches that can share one quad: rectangles of the same surface, each
+     * starting at the previous one's far edge (its corners 0 and 3 are the previous corners 1 and 2)
+     * with the same width, all within one row of texel cells. Returns {first, count} per run; a
+     * patch that joins no run is a run of one.
+     */
+    static List<int[]> strips(List<Patch> group, int cols) {
+        List<int[]> out = new ArrayList<>();
+        int k = 0, n = group.size();
+        while (k < n) {
+            int e = k;
+            if (isRectangle(group.get(k))) {
+                while (e + 1 < n && (e + 1) % cols != 0 && follows(group.get(e), group.get(e + 1))) e++;
+            }
+            out.add(new int[] {k, e - k + 1});
+            k = e + 1;
+        }
+        return out;
+    }
+
+    private static boolean isRectangle(Patch p) {
+        double[] o = p.outline();
+        if (o.length != 12) return false;
+        double tol = 1e-6 * Math.max(1, Math.sqrt(p.areaM2()));
+        double ux = o[3] - o[0], uy = o[4] - o[1], uz = o[5] - o[2], vx = o[9] - o[0], vy = o[10] - o[1], vz = o[11] - o[2];
+        double lu = Math.sqrt(ux * ux + uy * uy + uz * uz), lv = Math.sqrt(vx * vx + vy * vy + vz * vz);
+        if (lu < tol || lv < tol || Math.abs(ux * vx + uy * vy + uz * vz) > tol * (lu + lv)) return false;
+        return Math.abs(o[6] - (o[3] + vx)) < tol && Math.abs(o[7] - (o[4] + vy)) < tol && Math.abs(o[8] - (o[5] + vz)) < tol;
+    }
+
+    private static boolean follows(Patch a, Patch b) {
+        if (a.surface() != b.surface() || a.block() != b.block() || !isRectangle(b)) return false;
+        double[] p = a.outline(), q = b.outline();
+        double tol = 1e-6 * Math.max(1, Math.sqrt(a.areaM2()));
+        for (int i = 0; i < 3; i++) {
+            if (Math.abs(q[i] - p[3 + i]) > tol || Math.abs(q[9 + i] - p[6 + i]) > tol) return false;
+            // same width: b's far edge is as far from its near edge as a's
+            if (Math.abs((q[3 + i] - q[i]) - (p[3 + i] - p[i])) > tol) return false;
+        }
+        return true;
     }
 
     /**

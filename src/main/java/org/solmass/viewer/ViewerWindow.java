@@ -192,7 +192,9 @@ public final class ViewerWindow {
     public void show(ViewerData d, ModelView3D.Prepared prep) {
         this.data = d;
         stage.setTitle("Solmass \u2014 " + d.title());
+        long t0 = System.nanoTime();
         view = new ModelView3D(d, prep);
+        long t1 = System.nanoTime();
         rig = new CameraRig(prep.frame().radiusM(), prep.focus());
         javafx.scene.Group world = new javafx.scene.Group(view.node(), rig.node());
         view.sunPathGroup().getChildren().setAll(SunPathView.build(d.sunPath(), prep.frame().radiusM()));
@@ -211,11 +213,22 @@ public final class ViewerWindow {
         });
         sub.setOnMouseMoved(e -> hoverAt(e.getPickResult(), e.getX(), e.getY()));
         sub.setOnMouseExited(e -> hover.setVisible(false));
+        long t2 = System.nanoTime();
         panel.setData(d);
         climate.show(d);
+        long t3 = System.nanoTime();
         controls.setData(d);
+        long t4 = System.nanoTime();
+        if (Boolean.getBoolean("solmass.viewer.timing")) {
+            System.err.printf("viewer: meshes %.2f s, scene %.2f s, panels %.2f s, colours %.2f s%n",
+                    (t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9, (t4 - t3) / 1e9);
+        }
         view.sunPathGroup().setVisible(controls.sunPathOn());
         status.setText(statusLine(d));
+        String q = System.getProperty("solmass.viewer.quantity");
+        if (q != null) controls.select(q);
+        String thr = System.getProperty("solmass.viewer.threshold");
+        if (thr != null) controls.setThreshold(Double.parseDouble(thr));
         String v = System.getProperty("solmass.viewer.view");
         if (v != null) rig.preset(v);
         if (v != null && v.startsWith("sun")) controls.setSunPath(true);
@@ -266,7 +279,7 @@ public final class ViewerWindow {
 
     private int patchOf(PickResult r) {
         if (r == null || r.getIntersectedNode() == null || view == null) return -1;
-        return view.patchAt(r.getIntersectedNode(), r.getIntersectedFace());
+        return view.patchAt(r.getIntersectedNode(), r.getIntersectedFace(), r.getIntersectedTexCoord());
     }
 
     private void hoverAt(PickResult r, double x, double y) {
@@ -305,6 +318,9 @@ public final class ViewerWindow {
 
     /** Colours the model by a column, as the selector would. */
     public void controlsSelect(String column) { controls.select(column); }
+
+    /** Picks out the patches at or above a value in the current quantity's unit (NaN: off). */
+    public void setThreshold(double value) { controls.setThreshold(value); }
 
     void rerun(RerunRequest req) {
         runBusy("Re-running the analysis\u2026", () -> actions.rerun(req, this::progress, cancelled::get), null);

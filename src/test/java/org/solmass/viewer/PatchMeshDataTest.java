@@ -20,41 +20,66 @@ class PatchMeshDataTest {
     }
 
     @Test
-    void everyFaceMapsBackToThePatchItWasCutFrom() {
-        // a face's centroid lies on its patch's plane (lifted by 5 cm) and inside the patch's bounds
-        int faces = 0;
+    void aPickAnywhereOnAFaceFindsThePatchUnderIt() {
+        // property over random points of every face: the patch found from (face, texture coordinate)
+        // contains the picked point (within 6 cm: the 5 cm lift plus rounding) and lies on its plane
+        java.util.Random rnd = new java.util.Random(11);
+        int covered = 0;
         for (PatchMeshData m : meshes) {
             for (int f = 0; f < m.faceCount(); f++) {
-                Patch p = data.patches().get(m.patchOfFace(f));
-                Vec3 c = Vec3.ZERO;
-                for (int k = 0; k < 3; k++) c = c.plus(model(m.points, m.faces[PatchMeshData.FACE_STRIDE * f + 3 * k]).times(1 / 3.0));
-                assertEquals(0.05, c.minus(p.centroid()).dot(p.normal()), 1e-4, "face " + f + " off its patch plane");
-                double[] o = p.outline();
-                for (int ax = 0; ax < 3; ax++) {
-                    double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
-                    for (int i = ax; i < o.length; i += 3) {
-                        lo = Math.min(lo, o[i]);
-                        hi = Math.max(hi, o[i]);
+                covered += m.patchesOfFace(f);
+                for (int s = 0; s < 4; s++) {
+                    double r1 = rnd.nextDouble(), r2 = rnd.nextDouble();
+                    if (r1 + r2 > 1) { r1 = 1 - r1; r2 = 1 - r2; }
+                    double[] w = {1 - r1 - r2, r1, r2};
+                    Vec3 pos = Vec3.ZERO;
+                    double u = 0, v = 0;
+                    for (int k = 0; k < 3; k++) {
+                        int pt = m.faces[PatchMeshData.FACE_STRIDE * f + 3 * k], tx = m.faces[PatchMeshData.FACE_STRIDE * f + 3 * k + 2];
+                        pos = pos.plus(model(m.points, pt).times(w[k]));
+                        u += w[k] * m.texCoords[2 * tx];
+                        v += w[k] * m.texCoords[2 * tx + 1];
                     }
-                    double v = ax == 0 ? c.x() : ax == 1 ? c.y() : c.z();
-                    assertTrue(v >= lo - 0.06 && v <= hi + 0.06, "face " + f + " outside patch " + p.id());
+                    Patch p = data.patches().get(m.patchAt(f, u, v));
+                    assertEquals(0.05, pos.minus(p.centroid()).dot(p.normal()), 1e-4, "pick off the patch plane");
+                    double[] o = p.outline();
+                    for (int ax = 0; ax < 3; ax++) {
+                        double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
+                        for (int i = ax; i < o.length; i += 3) {
+                            lo = Math.min(lo, o[i]);
+                            hi = Math.max(hi, o[i]);
+                        }
+                        double x = ax == 0 ? pos.x() : ax == 1 ? pos.y() : pos.z();
+                        assertTrue(x >= lo - 0.06 && x <= hi + 0.06, "pick outside patch " + p.id());
+                    }
                 }
-                faces++;
             }
         }
-        assertEquals(2 * data.patches().size(), faces, "two triangles per rectangular patch");
+        assertEquals(2 * data.patches().size(), covered, "every patch is under two triangles");
     }
 
     @Test
-    void trianglesOfEachPatchAddUpToItsArea() {
-        double[] area = new double[data.patches().size()];
+    void rowsOfEqualPatchesShareQuadsAndPartialPatchesStandAlone() {
+        int faces = 0, single = 0;
+        for (PatchMeshData m : meshes) {
+            faces += m.faceCount();
+            for (int f = 0; f < m.faceCount(); f++) if (m.patchesOfFace(f) == 1) single++;
+        }
+        assertTrue(faces < data.patches().size() / 2, "strips merge rows: " + faces + " faces");
+        assertTrue(single > 0, "the narrower last patch of a row stays on its own");
+    }
+
+    @Test
+    void trianglesCoverTheTotalPatchArea() {
+        double tri = 0, patches = 0;
         for (PatchMeshData m : meshes) {
             for (int f = 0; f < m.faceCount(); f++) {
                 Vec3 a = model(m.points, m.faces[9 * f]), b = model(m.points, m.faces[9 * f + 3]), c = model(m.points, m.faces[9 * f + 6]);
-                area[m.patchOfFace(f)] += 0.5 * b.minus(a).cross(c.minus(a)).length();
+                tri += 0.5 * b.minus(a).cross(c.minus(a)).length();
             }
         }
-        for (Patch p : data.patches()) assertEquals(p.areaM2(), area[p.index()], 1e-4 * Math.max(1, p.areaM2()), p.id());
+        for (Patch p : data.patches()) patches += p.areaM2();
+        assertEquals(patches, tri, 1e-6 * patches);
     }
 
     @Test
@@ -64,9 +89,10 @@ class PatchMeshDataTest {
     }
 
     @Test
-    void everyCornerSamplesItsOwnPatchesTexelCell() {
+    void everyCornerOfAStandAlonePatchSamplesItsOwnTexelCell() {
         for (PatchMeshData m : meshes) {
             for (int f = 0; f < m.faceCount(); f++) {
+                if (m.patchesOfFace(f) != 1) continue;
                 for (int k = 0; k < 3; k++) {
                     int t = m.faces[PatchMeshData.FACE_STRIDE * f + 3 * k + 2];
                     int cell = m.atlas.cellAt(m.texCoords[2 * t], m.texCoords[2 * t + 1]);
@@ -103,10 +129,10 @@ class PatchMeshDataTest {
         List<PatchMeshData> ms = PatchMeshData.build(big.patches(), SceneFrame.of(big.model().bounds()), 0.05);
         int patches = 0;
         for (PatchMeshData m : ms) {
-            assertTrue(m.faceCount() <= 2 * PatchMeshData.MAX_PATCHES);
-            patches += m.faceCount() / 2;
+            assertTrue(m.patches.length <= PatchMeshData.MAX_PATCHES);
+            for (int f = 0; f < m.faceCount(); f++) patches += m.patchesOfFace(f);
         }
-        assertEquals(big.patches().size(), patches);
+        assertEquals(2 * big.patches().size(), patches);
         assertTrue(ms.size() > 4, "more meshes than blocks when a block exceeds the limit");
     }
 }
