@@ -22,6 +22,7 @@ public final class CameraRig {
     private final Rotate pitch = new Rotate(0, Rotate.X_AXIS);
     private final Translate back = new Translate();
     private final DoubleProperty heading = new SimpleDoubleProperty();
+    private final javafx.beans.property.IntegerProperty moves = new javafx.beans.property.SimpleIntegerProperty();
     private final double radius;
     private final double[] focus;
     private double lastX, lastY;
@@ -48,6 +49,9 @@ public final class CameraRig {
 
     public Group node() { return rig; }
 
+    /** Counts camera changes (for overlays that follow the view). */
+    public javafx.beans.property.ReadOnlyIntegerProperty movesProperty() { return moves; }
+
     /** Heading in degrees from north, clockwise (for the north arrow). */
     public DoubleProperty headingProperty() { return heading; }
 
@@ -62,6 +66,7 @@ public final class CameraRig {
         back.setZ(-distance);
         heading.set(headingDeg);
         clip();
+        moves.set(moves.get() + 1);
     }
 
     /** Fixed views: "top" or the side looked from, "N", "E", "S", "W". */
@@ -76,7 +81,7 @@ public final class CameraRig {
             case "S": setView(0, 10, fit(1.2)); break;
             case "W": setView(90, 10, fit(1.2)); break;
             case "sun":
-                target.setY(0);
+                target.setY(-0.3 * 1.3 * radius);
                 setView(165, 24, 1.3 * radius * 1.3 / Math.sin(Math.toRadians(camera.getFieldOfView() / 2)));
                 break;
             default: setView(30, 38, fit(1.3)); break;
@@ -127,5 +132,6 @@ public final class CameraRig {
         target.setX(target.getX() + rx * mx + ux * my);
         target.setY(target.getY() + uy * my);
         target.setZ(target.getZ() + rz * mx + uz * my);
+        moves.set(moves.get() + 1);
     }
 }

@@ -68,6 +68,8 @@ final class ControlColumn extends VBox {
         thrArea.setId("threshold-area");
         caution.setWrapText(true);
         caution.getStyleClass().add("caution");
+        caution.setVisible(false);
+        caution.setManaged(false);
         sunPath.selectedProperty().addListener((o, a, b) -> win.setSunPathVisible(b));
 
         GridPane views = new GridPane();

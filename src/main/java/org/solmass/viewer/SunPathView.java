@@ -26,8 +26,16 @@ final class SunPathView {
         return new Point3D(r * east, -r * up, r * north);
     }
 
-    static Group build(List<SunArc> arcs, double radius) {
+    /** The sun path and the hour beads of its highest arc, to be labelled with their hours. */
+    record Built(Group group, List<Sphere> labelBeads, List<String> labels) {}
+
+    static Built build(List<SunArc> arcs, double radius) {
         Group g = new Group();
+        List<Sphere> beads = new ArrayList<>();
+        List<String> labels = new ArrayList<>();
+        SunArc top = null;
+        double topEl = -1;
+        for (SunArc a : arcs) for (SunArc.Point p : a.points()) if (p.elevationDeg() > topEl) { topEl = p.elevationDeg(); top = a; }
         double r = radius * 1.3;
         PhongMaterial arcMat = new PhongMaterial(ARC);
         PhongMaterial hourMat = new PhongMaterial(HOUR);
@@ -56,6 +64,10 @@ final class SunPathView {
                     s.setMaterial(hourMat);
                     s.setMouseTransparent(true);
                     g.getChildren().add(s);
+                    if (arc == top) {
+                        beads.add(s);
+                        labels.add(Integer.toString(h));
+                    }
                 }
             }
         }
@@ -64,6 +76,6 @@ final class SunPathView {
             for (int m = 1; m <= 12; m++) if (hourPts[m][h] != null) line.add(hourPts[m][h]);
             for (int i = 0; i + 1 < line.size(); i++) g.getChildren().add(Shapes.rod(line.get(i), line.get(i + 1), r * 0.0015, lineMat));
         }
-        return g;
+        return new Built(g, beads, labels);
     }
 }

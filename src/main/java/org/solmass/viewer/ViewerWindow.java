@@ -2,6 +2,7 @@ package org.solmass.viewer;
 
 import javafx.application.Platform;
 import javafx.geometry.Insets;
+import javafx.geometry.Point2D;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.Scene;
@@ -48,6 +49,8 @@ public final class ViewerWindow {
     private final ViewerActions actions;
     private final BorderPane root = new BorderPane();
     private final Pane subHost = new Pane();
+    private final Pane hourLayer = new Pane();
+    private final java.util.List<javafx.scene.Node> hourAnchors = new java.util.ArrayList<>();
     private final StackPane viewStack = new StackPane();
     private final PatchPanel panel = new PatchPanel();
     private final ClimatePane climate = new ClimatePane();
@@ -86,7 +89,9 @@ public final class ViewerWindow {
         busy.setMaxSize(380, 130);
         busy.setVisible(false);
         subHost.setMinSize(0, 0);
-        viewStack.getChildren().addAll(subHost, north, hover, busy);
+        hourLayer.setMouseTransparent(true);
+        hourLayer.setPickOnBounds(false);
+        viewStack.getChildren().addAll(subHost, hourLayer, north, hover, busy);
         StackPane.setAlignment(north, Pos.TOP_RIGHT);
         StackPane.setMargin(north, new Insets(14));
         StackPane.setAlignment(hover, Pos.TOP_LEFT);
@@ -197,7 +202,16 @@ public final class ViewerWindow {
         long t1 = System.nanoTime();
         rig = new CameraRig(prep.frame().radiusM(), prep.focus());
         javafx.scene.Group world = new javafx.scene.Group(view.node(), rig.node());
-        view.sunPathGroup().getChildren().setAll(SunPathView.build(d.sunPath(), prep.frame().radiusM()));
+        SunPathView.Built sp = SunPathView.build(d.sunPath(), prep.frame().radiusM());
+        view.sunPathGroup().getChildren().setAll(sp.group());
+        hourAnchors.clear();
+        hourLayer.getChildren().clear();
+        for (int i = 0; i < sp.labelBeads().size(); i++) {
+            Label l = new Label(sp.labels().get(i));
+            l.getStyleClass().add("hour-label");
+            hourAnchors.add(sp.labelBeads().get(i));
+            hourLayer.getChildren().add(l);
+        }
         sub = new SubScene(world, 10, 10, true, javafx.application.Platform.isSupported(
                 javafx.application.ConditionalFeature.SCENE3D) ? SceneAntialiasing.BALANCED : SceneAntialiasing.DISABLED);
         sub.setFill(BACKDROP);
@@ -208,6 +222,9 @@ public final class ViewerWindow {
         rig.attach(sub);
         rig.headingProperty().addListener((o, a, b) -> north.setRotate(-b.doubleValue()));
         north.setRotate(-rig.headingDeg());
+        rig.movesProperty().addListener((o, a, b) -> placeHourLabels());
+        sub.widthProperty().addListener((o, a, b) -> placeHourLabels());
+        sub.heightProperty().addListener((o, a, b) -> placeHourLabels());
         sub.addEventHandler(javafx.scene.input.MouseEvent.MOUSE_CLICKED, e -> {
             if (e.isStillSincePress() && e.getButton() == javafx.scene.input.MouseButton.PRIMARY) pick(e.getPickResult());
         });
@@ -224,6 +241,7 @@ public final class ViewerWindow {
                     (t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9, (t4 - t3) / 1e9);
         }
         view.sunPathGroup().setVisible(controls.sunPathOn());
+        Platform.runLater(this::placeHourLabels);
         status.setText(statusLine(d));
         String q = System.getProperty("solmass.viewer.quantity");
         if (q != null) controls.select(q);
@@ -253,6 +271,22 @@ public final class ViewerWindow {
 
     void setSunPathVisible(boolean on) {
         if (view != null) view.sunPathGroup().setVisible(on);
+        placeHourLabels();
+    }
+
+    /** Puts the hour numbers next to the labelled beads as seen through the camera. */
+    private void placeHourLabels() {
+        boolean on = view != null && view.sunPathGroup().isVisible();
+        hourLayer.setVisible(on);
+        if (!on) return;
+        for (int i = 0; i < hourAnchors.size(); i++) {
+            Point2D s = hourAnchors.get(i).localToScreen(0, 0, 0);
+            Node l = hourLayer.getChildren().get(i);
+            Point2D p = s == null ? null : hourLayer.screenToLocal(s);
+            boolean ok = p != null && Double.isFinite(p.getX()) && Double.isFinite(p.getY());
+            l.setVisible(ok);
+            if (ok) l.relocate(p.getX() + 6, p.getY() - 18);
+        }
     }
 
     void preset(String v) {

@@ -26,7 +26,15 @@ public final class ViewerDemo {
             w.setDaemon(true);
             w.start();
         }
-        ViewerLoader loader = (p, c) -> n > 0 ? SyntheticViewerData.withAbout(n, true) : SyntheticViewerData.courtyard();
+        long slowMs = Long.getLong("demo.slowMs", 0);
+        ViewerLoader loader = (p, c) -> {
+            for (int i = 0; i < 20 && slowMs > 0; i++) {       // pretend analysis, for looking at the progress overlay
+                p.progress(i / 20.0, "Analysing (synthetic) \u2014 step " + (i + 1) + " of 20");
+                Thread.sleep(slowMs / 20);
+                if (c.getAsBoolean()) return null;
+            }
+            return n > 0 ? SyntheticViewerData.withAbout(n, true) : SyntheticViewerData.courtyard();
+        };
         if (a.length > 2) System.setProperty("solmass.viewer.view", a[2]);
         double s = SolmassViewer.snapshot(loader, ViewerActions.none(new RerunRequest(1, "synthetic", "perez")), Path.of(a[0]),
                 1440, 900);
