@@ -54,6 +54,8 @@ public final class SolmassViewer {
      * of the whole window to {@code png}, closes the window and stops the FX toolkit.
      *
      * @return seconds from the call to the first rendered frame with the data
+     * @throws IllegalStateException when the loader fails (its exception is the cause) or nothing renders
+     * @throws java.util.concurrent.CancellationException when the loader is cancelled
      */
     public static double snapshot(ViewerLoader loader, ViewerActions actions, Path png, int width, int height)
             throws InterruptedException {
@@ -70,6 +72,7 @@ public final class SolmassViewer {
         startToolkit();
         if (Boolean.getBoolean("solmass.viewer.timing")) System.err.printf("viewer: toolkit up after %.2f s (at %.2f)%n", (System.nanoTime() - t0) / 1e9, System.nanoTime() / 1e9 % 1000);
         AtomicReference<ViewerWindow> win = new AtomicReference<>();
+        AtomicReference<Throwable> failed = new AtomicReference<>();
         CountDownLatch rendered = new CountDownLatch(1);
         Platform.runLater(() -> {
             Stage st = new Stage();
@@ -78,11 +81,25 @@ public final class SolmassViewer {
             st.show();
             if (Boolean.getBoolean("solmass.viewer.timing")) System.err.printf("viewer: window shown at %.2f%n", System.nanoTime() / 1e9 % 1000);
             w.load(loader, x -> afterFrames(3, () -> {
-                write(x.snapshotWindow(), png);
+                try {
+                    write(x.snapshotWindow(), png);
+                } catch (RuntimeException e) {
+                    failed.set(e);
+                }
                 rendered.countDown();
-            }));
+            }), e -> {
+                failed.set(e);
+                rendered.countDown();
+            });
         });
-        if (!rendered.await(timeoutSeconds, TimeUnit.SECONDS)) throw new IllegalStateException("the viewer did not render within " + timeoutSeconds + " s");
+        boolean done = rendered.await(timeoutSeconds, TimeUnit.SECONDS);
+        if (failed.get() != null || !done) {
+            Platform.runLater(() -> { if (win.get() != null) win.get().stage().hide(); });
+            if (!done) throw new IllegalStateException("the viewer did not render within " + timeoutSeconds + " s");
+            Throwable e = failed.get();
+            if (e instanceof java.util.concurrent.CancellationException c) throw c;
+            throw new IllegalStateException("no snapshot: " + e.getMessage(), e);
+        }
         double s = (System.nanoTime() - t0) / 1e9;
         CountDownLatch hidden = new CountDownLatch(1);
         Platform.runLater(() -> {

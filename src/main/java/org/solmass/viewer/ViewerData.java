@@ -41,6 +41,11 @@ public record ViewerData(String title, MassingModel model, boolean[] blockAnalys
             throw new IllegalArgumentException("blockAnalysed has " + blockAnalysed.length + " entries for "
                     + model.blockNames().size() + " blocks");
         }
+        for (int i = 0; i < patches.size(); i++) {
+            if (patches.get(i).index() != i) {
+                throw new IllegalArgumentException("patch at position " + i + " has index " + patches.get(i).index());
+            }
+        }
         sunPath = sunPath == null ? List.of() : List.copyOf(sunPath);
         warnings = warnings == null ? List.of() : List.copyOf(warnings);
     }

@@ -146,12 +146,20 @@ public final class ViewerWindow {
 
     /** Runs a loader in the background with the progress overlay; hands the data to {@link #show}. */
     public void load(ViewerLoader loader, Consumer<ViewerWindow> whenShown) {
-        runBusy("Preparing\u2026", () -> loader.load(this::progress, cancelled::get), whenShown);
+        load(loader, whenShown, null);
+    }
+
+    /**
+     * As {@link #load(ViewerLoader, Consumer)}; {@code whenFailed} (FX thread, may be null) hears of a
+     * failed or cancelled load (a {@link CancellationException} when cancelled).
+     */
+    public void load(ViewerLoader loader, Consumer<ViewerWindow> whenShown, Consumer<Throwable> whenFailed) {
+        runBusy("Preparing\u2026", () -> loader.load(this::progress, cancelled::get), whenShown, whenFailed);
     }
 
     interface Job { ViewerData run() throws Exception; }
 
-    void runBusy(String what, Job job, Consumer<ViewerWindow> whenShown) {
+    void runBusy(String what, Job job, Consumer<ViewerWindow> whenShown, Consumer<Throwable> whenFailed) {
         cancelled.set(false);
         busyText.setText(what);
         bar.setProgress(-1);
@@ -174,11 +182,13 @@ public final class ViewerWindow {
                 Platform.runLater(() -> {
                     busy.setVisible(false);
                     status.setText(data == null ? "Cancelled: nothing to show." : "Cancelled: showing the previous results.");
+                    if (whenFailed != null) whenFailed.accept(e);
                 });
             } catch (Exception | OutOfMemoryError e) {
                 Platform.runLater(() -> {
                     busy.setVisible(false);
                     status.setText("Failed: " + e.getMessage());
+                    if (whenFailed != null) whenFailed.accept(e);
                 });
             }
         }, "solmass-viewer-job");
@@ -357,7 +367,7 @@ public final class ViewerWindow {
     public void setThreshold(double value) { controls.setThreshold(value); }
 
     void rerun(RerunRequest req) {
-        runBusy("Re-running the analysis\u2026", () -> actions.rerun(req, this::progress, cancelled::get), null);
+        runBusy("Re-running the analysis\u2026", () -> actions.rerun(req, this::progress, cancelled::get), null, null);
     }
 
     Node root() { return root; }
