@@ -246,8 +246,9 @@ public final class ViewerWindow {
             hourAnchors.add(sp.labelBeads().get(i));
             hourLayer.getChildren().add(l);
         }
-        sub = new SubScene(world, 10, 10, true, javafx.application.Platform.isSupported(
-                javafx.application.ConditionalFeature.SCENE3D) ? SceneAntialiasing.BALANCED : SceneAntialiasing.DISABLED);
+        boolean msaa = Platform.isSupported(javafx.application.ConditionalFeature.SCENE3D)
+                && !"false".equals(System.getProperty("solmass.viewer.msaa"));
+        sub = new SubScene(world, 10, 10, true, msaa ? SceneAntialiasing.BALANCED : SceneAntialiasing.DISABLED);
         sub.setFill(BACKDROP);
         sub.setCamera(rig.camera());
         sub.widthProperty().bind(subHost.widthProperty());
