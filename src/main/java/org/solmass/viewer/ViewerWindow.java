@@ -358,6 +358,10 @@ public final class ViewerWindow {
             return;
         }
         Quantity q = controls.quantity();
+        if (q == null) {
+            hover.setVisible(false);
+            return;
+        }
         double v = data.table().column(q.column())[p];
         hover.setText(PatchPanel.fmt(v, Math.abs(v) < 10 ? 2 : 0) + (q.unit().isEmpty() ? "" : " " + Quantity.pretty(q.unit()))
                 + "  \u00b7  " + data.patches().get(p).id());
