@@ -145,6 +145,10 @@ final class ControlColumn extends VBox {
 
     void setData(ViewerData d) {
         this.data = d;
+        RerunRequest opt = actions.currentOptions();     // after a re-run, the options it ran with
+        patchSize.getValueFactory().setValue(opt.patchSizeM());
+        climate.setValue(opt.climateSource());
+        sky.setValue(opt.skyModel());
         List<Quantity> qs = Quantity.available(d.table());
         Quantity keep = quantity.getValue();
         quantity.setItems(FXCollections.observableArrayList(qs));

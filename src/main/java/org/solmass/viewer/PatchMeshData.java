@@ -144,8 +144,8 @@ public final class PatchMeshData {
                 // one quad over the strip; its texture spans the strip's consecutive cells
                 double[][] corners = {corner(first, 0), corner(last, 1), corner(last, 2), corner(first, 3)};
                 int col = k0 % atlas.cols, row = k0 / atlas.cols;
-                float u0 = (float) col * PaletteAtlas.CELL / atlas.width, u1 = (float) (col + count) * PaletteAtlas.CELL / atlas.width;
-                float v0 = (float) row * PaletteAtlas.CELL / atlas.height, v1 = (float) (row + 1) * PaletteAtlas.CELL / atlas.height;
+                float u0 = (float) col * atlas.cell / atlas.width, u1 = (float) (col + count) * atlas.cell / atlas.width;
+                float v0 = (float) row * atlas.cell / atlas.height, v1 = (float) (row + 1) * atlas.cell / atlas.height;
                 float[][] uv = {{u0, v0}, {u1, v0}, {u1, v1}, {u0, v1}};
                 for (int c = 0; c < 4; c++) {
                     putPoint(pts, pi, corners[c], nrm, liftM, frame);

@@ -89,6 +89,7 @@ public final class ViewerWindow {
         busy.setMaxSize(380, 130);
         busy.setVisible(false);
         subHost.setMinSize(0, 0);
+        subHost.getChildren().add(warmUp());
         hourLayer.setMouseTransparent(true);
         hourLayer.setPickOnBounds(false);
         viewStack.getChildren().addAll(subHost, hourLayer, north, hover, busy);
@@ -116,6 +117,29 @@ public final class ViewerWindow {
         scene.getStylesheets().add(ViewerWindow.class.getResource("viewer.css").toExternalForm());
         stage.setScene(scene);
         stage.setTitle("Solmass viewer");
+    }
+
+    /**
+     * A tiny 3D sub-scene with the materials the model uses, shown while the data loads, so the
+     * pipeline compiles its 3D shaders before the model's first frame rather than during it.
+     */
+    private static Node warmUp() {
+        javafx.scene.image.WritableImage tex = new javafx.scene.image.WritableImage(2, 2);
+        javafx.scene.paint.PhongMaterial m = new javafx.scene.paint.PhongMaterial(Color.WHITE);
+        m.setDiffuseMap(tex);
+        m.setSpecularColor(Color.BLACK);
+        javafx.scene.shape.Box b = new javafx.scene.shape.Box(1, 1, 1);
+        b.setMaterial(m);
+        javafx.scene.shape.Box c = new javafx.scene.shape.Box(1, 1, 1);
+        c.setMaterial(new javafx.scene.paint.PhongMaterial(Color.GRAY));
+        javafx.scene.PerspectiveCamera cam = new javafx.scene.PerspectiveCamera(true);
+        cam.setTranslateZ(-4);
+        SubScene s = new SubScene(new javafx.scene.Group(b, c, new javafx.scene.AmbientLight(Color.WHITE)), 4, 4, true,
+                SceneAntialiasing.BALANCED);
+        s.setCamera(cam);
+        s.setOpacity(0.01);
+        s.setMouseTransparent(true);
+        return s;
     }
 
     private void buildNorthArrow() {
@@ -222,8 +246,9 @@ public final class ViewerWindow {
             hourAnchors.add(sp.labelBeads().get(i));
             hourLayer.getChildren().add(l);
         }
-        sub = new SubScene(world, 10, 10, true, javafx.application.Platform.isSupported(
-                javafx.application.ConditionalFeature.SCENE3D) ? SceneAntialiasing.BALANCED : SceneAntialiasing.DISABLED);
+        boolean msaa = Platform.isSupported(javafx.application.ConditionalFeature.SCENE3D)
+                && !"false".equals(System.getProperty("solmass.viewer.msaa"));
+        sub = new SubScene(world, 10, 10, true, msaa ? SceneAntialiasing.BALANCED : SceneAntialiasing.DISABLED);
         sub.setFill(BACKDROP);
         sub.setCamera(rig.camera());
         sub.widthProperty().bind(subHost.widthProperty());
@@ -333,6 +358,10 @@ public final class ViewerWindow {
             return;
         }
         Quantity q = controls.quantity();
+        if (q == null) {
+            hover.setVisible(false);
+            return;
+        }
         double v = data.table().column(q.column())[p];
         hover.setText(PatchPanel.fmt(v, Math.abs(v) < 10 ? 2 : 0) + (q.unit().isEmpty() ? "" : " " + Quantity.pretty(q.unit()))
                 + "  \u00b7  " + data.patches().get(p).id());

@@ -110,13 +110,15 @@ class PatchMeshDataTest {
         int[] px = new int[m.atlas.width * m.atlas.height];
         m.texels(rgb, px);
         for (int c = 0; c < m.patches.length; c++) {
-            int x0 = (c % m.atlas.cols) * PaletteAtlas.CELL, y0 = (c / m.atlas.cols) * PaletteAtlas.CELL;
-            int mid = px[(y0 + PaletteAtlas.CELL / 2) * m.atlas.width + x0 + PaletteAtlas.CELL / 2] & 0xFFFFFF;
+            int x0 = (c % m.atlas.cols) * atlasCell(m), y0 = (c / m.atlas.cols) * atlasCell(m);
+            int mid = px[(y0 + atlasCell(m) / 2) * m.atlas.width + x0 + atlasCell(m) / 2] & 0xFFFFFF;
             int edge = px[y0 * m.atlas.width + x0 + 2] & 0xFFFFFF;
             assertEquals(rgb[m.patches[c]], mid);
             assertEquals(PaletteAtlas.darken(rgb[m.patches[c]], PaletteAtlas.OUTLINE), edge);
         }
     }
+
+    private static int atlasCell(PatchMeshData m) { return m.atlas.cell; }
 
     /** Distinct test colours from the pipeline ramp. */
     static final class ColourRampColours {

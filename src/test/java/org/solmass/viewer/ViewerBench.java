@@ -62,6 +62,24 @@ public final class ViewerBench {
         });
         re.await(600, TimeUnit.SECONDS);
         long w4 = System.nanoTime(), c4 = os.getProcessCpuTime();
+        // orbit: 20 camera steps, each drawn (pulse-driven, so this is the achievable frame time)
+        CountDownLatch orbit = new CountDownLatch(1);
+        long o0 = System.nanoTime();
+        Platform.runLater(() -> new javafx.animation.AnimationTimer() {
+            int step;
+
+            @Override public void handle(long now) {
+                CameraRig r = win.get().rig();
+                r.setView(r.headingDeg() + 4, r.pitchDeg(), r.distance());
+                if (++step == 20) {
+                    stop();
+                    orbit.countDown();
+                }
+            }
+        }.start());
+        orbit.await(600, TimeUnit.SECONDS);
+        long o1 = System.nanoTime();
+        System.out.printf("orbit            %.0f ms per frame over 20 frames (pulse cap 60 fps = 17 ms)%n", (o1 - o0) / 1e6 / 20);
         System.out.printf("patches %,d in %d meshes%n", d.patches().size(), prep.patches().size());
         System.out.printf("prepare meshes   wall %.2f s  cpu %.2f s%n", (w1 - w0) / 1e9, (c1 - c0) / 1e9);
         System.out.printf("put on show      wall %.2f s  cpu %.2f s%n", (w2 - w1) / 1e9, (c2 - c1) / 1e9);

@@ -40,7 +40,7 @@ class ViewerSmokeTest {
         AtomicReference<ViewerWindow> win = new AtomicReference<>();
         onFx(() -> {
             Stage st = new Stage();
-            ViewerWindow w = new ViewerWindow(st, ViewerActions.none(new RerunRequest(1, "synthetic", "isotropic")), 1280, 800);
+            ViewerWindow w = new ViewerWindow(st, new RerunToCoarser(), 1280, 800);
             st.setX(0);
             st.setY(0);
             st.show();
@@ -100,12 +100,36 @@ class ViewerSmokeTest {
         assertEquals(2 * width, (int) twice.getWidth());
         assertEquals(2 * height, (int) twice.getHeight());
 
+        // re-run from the window: the actions get the request, the new data replaces the old
+        onFx(() -> {
+            w.rerun(new RerunRequest(2.0, "synthetic", "isotropic"));
+            return null;
+        });
+        long until = System.nanoTime() + 60_000_000_000L;
+        while (onFx(() -> w.data()) == data && System.nanoTime() < until) Thread.sleep(100);
+        ViewerData after = onFx(() -> w.data());
+        assertTrue(after != data, "re-run did not replace the data");
+        assertTrue(after.patches().size() < data.patches().size() / 3, "2 m patches are fewer than 1 m patches");
+        assertEquals(-1, (int) onFx(() -> w.panel().shownPatch()), "the side panel is cleared after a re-run");
+        frames(2);
+
         Path out = Path.of("target", "viewer-smoke.png");
         onFx(() -> {
             SolmassViewer.write(w.snapshotWindow(), out);
             w.stage().hide();
             return null;
         });
+    }
+
+    /** Actions whose re-run rebuilds the synthetic courtyard at the requested patch size. */
+    static final class RerunToCoarser implements ViewerActions {
+        @Override public RerunRequest currentOptions() { return new RerunRequest(1, "synthetic", "isotropic"); }
+        @Override public ViewerData rerun(RerunRequest r, ProgressSink p, java.util.function.BooleanSupplier c) {
+            p.progress(0.5, "rebuilding");
+            return SyntheticViewerData.build(r.patchSizeM(), true);
+        }
+        @Override public void exportCsv(Path file) { throw new UnsupportedOperationException(); }
+        @Override public void exportSummary(Path file) { throw new UnsupportedOperationException(); }
     }
 
     private static final boolean[] NEAR_RAMP = new boolean[1 << 24];
