@@ -30,6 +30,9 @@ final class PatchPanel extends VBox {
     private final ComboBox<String> month = new ComboBox<>(FXCollections.observableArrayList(MONTHS));
     private final LineChart<Number, Number> daily;
     private final Label caution = new Label(Quantity.CAUTION);
+    private final Label noHourly = new Label("The month-hour table is not in these results: analyse with "
+            + "--month-hour (study key outputs.month_hour_csv) to see the hourly map and the daily curve.");
+    private final HBox dailyHeading = new HBox(8);
     private final VBox details = new VBox(8);
     private ViewerData data;
     private int patch = -1;
@@ -64,9 +67,12 @@ final class PatchPanel extends VBox {
         month.valueProperty().addListener((o, a, b) -> drawDaily());
         caution.setWrapText(true);
         caution.getStyleClass().add("caution");
+        noHourly.setWrapText(true);
+        dailyHeading.getChildren().addAll(section("Daily irradiance, average day of"), month);
         details.getChildren().addAll(facts, section("Monthly irradiation"), monthly,
-                section("Mean irradiance by month and hour of day, local standard time (W/m\u00b2)"), heat,
-                new HBox(8, section("Daily irradiance, average day of"), month), daily, caution);
+                section("Mean irradiance by month and hour of day, local standard time (W/m\u00b2)"), heat, noHourly,
+                dailyHeading, daily, caution);
+        for (javafx.scene.Node n : new javafx.scene.Node[] {heat, noHourly, dailyHeading, daily}) n.managedProperty().bind(n.visibleProperty());
         details.setVisible(false);
         details.managedProperty().bind(details.visibleProperty());
         getChildren().addAll(heading, hint, details);
@@ -132,7 +138,12 @@ final class PatchPanel extends VBox {
             mh[(m - 1) * 24 + h] = v;
             if (Double.isFinite(v)) max = Math.max(max, v);
         }
-        heat.draw(data.monthHourWm2() == null ? null : mh, max > 0 ? max : 1, "W/m\u00b2");
+        boolean hourly = data.monthHourWm2() != null;
+        heat.setVisible(hourly);
+        dailyHeading.setVisible(hourly);
+        daily.setVisible(hourly);
+        noHourly.setVisible(!hourly);
+        heat.draw(hourly ? mh : null, max > 0 ? max : 1, "W/m\u00b2");
         drawDaily();
     }
 
