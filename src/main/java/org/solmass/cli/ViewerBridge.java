@@ -118,8 +118,14 @@ final class ViewerBridge implements ViewerActions {
                            WeatherSeries weather, List<String> warnings) {
         Study.Site s = study.site();
         Site site = new Site(s.latitudeDeg(), s.longitudeDeg(), s.elevationM(), Site.parseZone(s.zone(), "site.zone"));
+        ClimateGlance glance = glance(weather);
+        Path climateFile = study.climate().file();
+        if (climateFile != null && climateFile.getFileName() != null) {   // the file name reads better than its full path
+            glance = new ClimateGlance(glance.source().replace(climateFile.toString(), climateFile.getFileName().toString()),
+                    glance.ghiWm2(), glance.dhiWm2(), glance.ghiMonthKwhM2(), glance.dhiMonthKwhM2());
+        }
         return new ViewerData(study.name(), model, ps.analysedBlocks(), ps.patches(), table, monthHour,
-                glance(weather), sunPath(site), s.latitudeDeg(), s.longitudeDeg(), zoneLabel(site), warnings);
+                glance, sunPath(site), s.latitudeDeg(), s.longitudeDeg(), zoneLabel(site), warnings);
     }
 
     static String zoneLabel(Site site) {

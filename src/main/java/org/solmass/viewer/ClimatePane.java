@@ -26,6 +26,9 @@ final class ClimatePane extends VBox {
         totals = new BarChart<>(x, y);
         totals.setAnimated(false);
         totals.setPrefHeight(260);
+        totals.setPrefWidth(690);
+        totals.setMaxWidth(690);
+        caption.setMaxWidth(690);
         totals.setTitle("Monthly horizontal irradiation");
         VBox a = new VBox(4, new Label("Global horizontal, mean W/m\u00b2"), ghi);
         VBox b = new VBox(4, new Label("Diffuse horizontal, mean W/m\u00b2"), dhi);
