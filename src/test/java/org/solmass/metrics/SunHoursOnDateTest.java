@@ -139,4 +139,25 @@ class SunHoursOnDateTest {
         double[] dirs = SunHoursOnDate.sunDirections(CALC, YEAR, d, STEP, 5.0);
         assertEquals(dirs.length / 3 * STEP / 60.0, SunHoursOnDate.hours(scene, List.of(roof), dirs, STEP / 60.0)[0], 1e-12);
     }
+
+    /** Same hours whatever the worker count (each patch from the same sun positions into its own slot). */
+    @Test
+    void hoursDoNotDependOnTheThreadCount() throws Exception {
+        MassingModel m = new Obj().block("a").box(0, 0, 10, 30, 20).block("b").box(14, 0, 24, 30, 8).model();
+        Scene scene = Scene.build(m, true, 0);
+        List<Patch> pts = new ArrayList<>();
+        for (int i = 0; i < 200; i++) pts.add(patch(new Vec3(10.5 + (i % 7) * 0.5, i * 0.15, 0), new Vec3(0, 0, 1), SurfaceKind.GROUND));
+        double[] dirs = SunHoursOnDate.sunDirections(CALC, YEAR, MonthDay.of(3, 21), STEP, 5.0);
+        double[][] out = new double[2][];
+        int[] threads = {1, 3};
+        for (int k = 0; k < 2; k++) {
+            java.util.concurrent.ForkJoinPool pool = new java.util.concurrent.ForkJoinPool(threads[k]);
+            try {
+                out[k] = pool.submit(() -> SunHoursOnDate.hours(scene, pts, dirs, STEP / 60.0)).get();
+            } finally {
+                pool.shutdown();
+            }
+        }
+        org.junit.jupiter.api.Assertions.assertArrayEquals(out[0], out[1]);
+    }
 }
