@@ -61,6 +61,16 @@ class GltfWriterTest {
             assertTrue(bv.getByteOffset() % 4 == 0 && bv.getByteOffset() + bv.getByteLength() <= bufLen);
         }
         JsonNode json = new ObjectMapper().readTree(Files.readString(f));
+        // required properties (glTF 2.0 JSON schema: accessor.schema.json, bufferView.schema.json, buffer.schema.json)
+        for (JsonNode a : json.get("accessors")) for (String k : List.of("componentType", "count", "type")) assertTrue(a.has(k), k);
+        for (JsonNode v : json.get("bufferViews")) for (String k : List.of("buffer", "byteLength")) assertTrue(v.has(k), k);
+        for (JsonNode mesh : json.get("meshes")) assertTrue(mesh.get("primitives").get(0).get("attributes").has("POSITION"));
+        String uri = json.at("/buffers/0/uri").asText();
+        assertTrue(uri.startsWith("data:application/octet-stream;base64,"));
+        assertEquals(json.at("/buffers/0/byteLength").asInt(),
+                java.util.Base64.getDecoder().decode(uri.substring(uri.indexOf(',') + 1)).length);
+        assertTrue(json.get("scene").asInt() < json.get("scenes").size());
+        for (JsonNode c : json.at("/nodes/0/children")) assertTrue(c.asInt() > 0 && c.asInt() < json.get("nodes").size());
         double[] origin = new double[3];
         for (int a = 0; a < 3; a++) origin[a] = json.at("/nodes/0/translation/" + a).asDouble();
 
