@@ -149,6 +149,12 @@ public final class ResultsFolder {
             case "sunshine_h" -> "Annual sunshine hours seen";
             case "pv_suitability_pct" -> "PV suitability (share of the best plane)";
             default -> {
+                if (column.matches("sun_(hours|level)_\\d{4}")) {
+                    java.time.MonthDay d = java.time.MonthDay.of(Integer.parseInt(column.substring(column.length() - 4, column.length() - 2)),
+                            Integer.parseInt(column.substring(column.length() - 2)));
+                    String day = d.getDayOfMonth() + " " + d.getMonth().getDisplayName(java.time.format.TextStyle.FULL, java.util.Locale.ENGLISH);
+                    yield (column.startsWith("sun_hours") ? "Sun hours on " : "EN 17037 sunlight level on ") + day;
+                }
                 if (column.matches("m(0[1-9]|1[0-2])_kwh_m2")) {
                     int m = Integer.parseInt(column.substring(1, 3));
                     yield java.time.Month.of(m).getDisplayName(java.time.format.TextStyle.FULL, java.util.Locale.ENGLISH) + " irradiation";
