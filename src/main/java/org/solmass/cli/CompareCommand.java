@@ -32,9 +32,10 @@ import java.util.concurrent.Callable;
  * Writes delta.csv, delta-blocks.csv and delta-map.png (on B's geometry). See docs/metrics.md.
  */
 @Command(name = "compare", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Compares two results folders of massing variants of one site: patches matched by",
-                "position and orientation, differences B - A of annual irradiation, sun hours, sunshine hours",
-                "and sky view factor per patch and per block. Writes delta.csv, delta-blocks.csv and delta-map.png."})
+        description = {"Compares two results folders of massing variants of one site. Patches are matched by",
+                "position and orientation; differences B - A of annual irradiation, sun hours, sunshine",
+                "hours and sky view factor per patch and per block go to delta.csv and delta-blocks.csv,",
+                "and the change in annual irradiation to delta-map.png."})
 public final class CompareCommand implements Callable<Integer> {
     public static final String DELTA = "delta.csv", BLOCKS = "delta-blocks.csv", MAP = "delta-map.png";
     /** The quantities compared, when both folders have them; plus every sun_hours_MMDD column both have. */
@@ -61,6 +62,9 @@ public final class CompareCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (maxAngle != null && !(maxAngle >= 0 && maxAngle <= 90)) {
+            throw new InputException("--max-angle", "expected an angle from 0 to 90 degrees, got " + maxAngle);
+        }
         Path dir = out != null ? out : b.resolve("compare");
         RunRecord runA = RunRecord.read(a), runB = RunRecord.read(b);
         Comparison c = compare(a.resolve(ResultsFolder.PATCHES), b.resolve(ResultsFolder.PATCHES),
