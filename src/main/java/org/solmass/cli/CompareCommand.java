@@ -32,10 +32,11 @@ import java.util.concurrent.Callable;
  * Writes delta.csv, delta-blocks.csv and delta-map.png (on B's geometry). See docs/metrics.md.
  */
 @Command(name = "compare", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Compares two results folders of massing variants of one site. Patches are matched by",
-                "position and orientation; differences B - A of annual irradiation, sun hours, sunshine",
-                "hours and sky view factor per patch and per block go to delta.csv and delta-blocks.csv,",
-                "and the change in annual irradiation to delta-map.png."})
+        description = {"Compares two results folders of massing variants of one site.",
+                "Patches are matched by position and orientation; the differences B - A",
+                "of annual irradiation, sun hours, sunshine hours and sky view factor",
+                "per patch and per block go to delta.csv and delta-blocks.csv, the",
+                "change in annual irradiation to delta-map.png."})
 public final class CompareCommand implements Callable<Integer> {
     public static final String DELTA = "delta.csv", BLOCKS = "delta-blocks.csv", MAP = "delta-map.png";
     /** The quantities compared, when both folders have them; plus every sun_hours_MMDD column both have. */
