@@ -18,7 +18,8 @@ import java.util.concurrent.Callable;
         description = {"Shading-aware irradiation of every patch of a massing model: beam, sky diffuse and",
                 "reflected light with the obstruction of the neighbouring blocks, summed to months and the year.",
                 "Give a study file, or the model and site as flags; flags override the study file.",
-                "Writes patches.csv, zones.csv, summary.json, map.png, patches.gltf and run.json to the output folder."})
+                "Writes patches.csv, zones.csv, summary.json, map.png, patches.gltf and",
+                "run.json to the output folder."})
 public final class AnalyseCommand implements Callable<Integer> {
     @Parameters(arity = "0..1", paramLabel = "STUDY.json", description = "study file (docs/study-file.md)")
     Path studyFile;
