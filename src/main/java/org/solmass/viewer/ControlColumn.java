@@ -31,6 +31,7 @@ final class ControlColumn extends VBox {
     private final Label thrArea = new Label();
     private final Label caution = new Label(Quantity.CAUTION);
     private final CheckBox sunPath = new CheckBox("Sun path (monthly average days)");
+    private final CheckBox zones = new CheckBox("PV roof zones (indicative)");
     private final Spinner<Double> patchSize = new Spinner<>(0.25, 50, 1, 0.25);
     private final ComboBox<String> climate = new ComboBox<>();
     private final ComboBox<String> sky = new ComboBox<>();
@@ -71,6 +72,9 @@ final class ControlColumn extends VBox {
         caution.setVisible(false);
         caution.setManaged(false);
         sunPath.selectedProperty().addListener((o, a, b) -> win.setSunPathVisible(b));
+        zones.selectedProperty().addListener((o, a, b) -> win.setZonesVisible(b));
+        zones.setSelected(true);
+        zones.managedProperty().bind(zones.visibleProperty());
 
         GridPane views = new GridPane();
         views.setHgap(4);
@@ -104,7 +108,7 @@ final class ControlColumn extends VBox {
 
         getChildren().addAll(head("Colour by"), quantity, legend, caution, auto, ViewerWindow.row(min, new Label("to"), max),
                 head("Threshold"), thrOn, thr, thrArea,
-                head("View"), views, sunPath, hint(),
+                head("View"), views, sunPath, zones, hint(),
                 head("Re-run"), label("Patch size (m)"), patchSize, label("Climate"), climate, label("Sky model"), sky, run,
                 head("Export"), ViewerWindow.row(csv, summary), ViewerWindow.row(png, pngScale));
     }
@@ -136,6 +140,11 @@ final class ControlColumn extends VBox {
     }
 
     boolean sunPathOn() { return sunPath.isSelected(); }
+
+    boolean zonesOn() { return zones.isSelected(); }
+
+    /** Shows the zone toggle only when the results carry zones. */
+    void setZonesAvailable(boolean available) { zones.setVisible(available); }
 
     void setSunPath(boolean on) { sunPath.setSelected(on); }
 

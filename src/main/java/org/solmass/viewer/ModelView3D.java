@@ -29,6 +29,7 @@ public final class ModelView3D {
     static final Color GROUND = Color.rgb(0xBF, 0xBE, 0xB8);
 
     private final Group root = new Group();
+    private final Group zoneGroup = new Group();
     private final Group sunGroup = new Group();
     private final Group selection = new Group();
     private final List<PatchMeshData> patchData;
@@ -105,7 +106,9 @@ public final class ModelView3D {
 
         AmbientLight flat = new AmbientLight(Color.WHITE);   // the only light: shades are baked into textures
         sunGroup.setVisible(false);
-        root.getChildren().addAll(massing, patches, sunGroup, selection, flat);
+        zoneGroup.setVisible(false);
+        addZoneOutlines(data);
+        root.getChildren().addAll(massing, patches, sunGroup, zoneGroup, selection, flat);
     }
 
     private void addMassing(Group g, List<MassingMeshData> parts, Color c) {
@@ -148,6 +151,25 @@ public final class ModelView3D {
     public SceneFrame frame() { return frame; }
 
     public Group sunPathGroup() { return sunGroup; }
+
+    /** The PV roof zone outlines (empty when the results have no zones). */
+    public Group zoneGroup() { return zoneGroup; }
+
+    /** Whether the results carry PV roof zones. */
+    public boolean hasZones() { return !zoneGroup.getChildren().isEmpty(); }
+
+    private void addZoneOutlines(ViewerData d) {
+        PhongMaterial mat = new PhongMaterial(Color.rgb(0x0E, 0x6B, 0x5E));
+        for (double[] e : ZoneOutlines.edges(d.patches(), d.table())) {
+            org.solmass.surface.Patch p = d.patches().get((int) e[6]);
+            double r = Math.max(0.04, Math.sqrt(p.areaM2()) * 0.06), lift = 3 * liftM;
+            Point3D a = new Point3D(frame.fx(e[0] + p.normal().x() * lift), frame.fy(e[2] + p.normal().z() * lift),
+                    frame.fz(e[1] + p.normal().y() * lift));
+            Point3D b = new Point3D(frame.fx(e[3] + p.normal().x() * lift), frame.fy(e[5] + p.normal().z() * lift),
+                    frame.fz(e[4] + p.normal().y() * lift));
+            zoneGroup.getChildren().add(Shapes.rod(a, b, r, mat));
+        }
+    }
 
     /** Recolours the patches: palette entry per patch (0..257, see {@link ColourScale}) of {@code scale}. */
     public void recolour(ColourScale scale, int[] paletteOfPatch) {

@@ -276,6 +276,8 @@ public final class ViewerWindow {
                     (t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9, (t4 - t3) / 1e9);
         }
         view.sunPathGroup().setVisible(controls.sunPathOn());
+        controls.setZonesAvailable(view.hasZones());
+        view.zoneGroup().setVisible(view.hasZones() && controls.zonesOn());
         Platform.runLater(this::placeHourLabels);
         status.setText(statusLine(d));
         String q = System.getProperty("solmass.viewer.quantity");
@@ -302,6 +304,10 @@ public final class ViewerWindow {
     /** Recolours the patches (called by the controls). */
     void applyColours(ColourScale scale, int[] cells) {
         if (view != null) view.recolour(scale, cells);
+    }
+
+    void setZonesVisible(boolean on) {
+        if (view != null) view.zoneGroup().setVisible(on);
     }
 
     void setSunPathVisible(boolean on) {
