@@ -21,6 +21,7 @@ import java.util.concurrent.Callable;
                 "button) and writes the results folder; on a results folder it opens the finished results."})
 public final class ViewCommand implements Callable<Integer> {
     @Parameters(paramLabel = "STUDY.json|RESULTS-FOLDER") Path target;
+    @Option(names = "--against", paramLabel = "RESULTS-A", description = "with a results folder: also show the differences from this other variant (delta_* quantities, diverging ramp)") Path against;
     @Option(names = "--snapshot", paramLabel = "FILE.png", description = "render once, save a PNG of the window and exit (needs a display, e.g. xvfb-run)") Path snapshot;
     @Option(names = "--width", defaultValue = "1440", paramLabel = "PX", description = "window width (default ${DEFAULT-VALUE})") int width;
     @Option(names = "--height", defaultValue = "900", paramLabel = "PX", description = "window height (default ${DEFAULT-VALUE})") int height;
@@ -36,9 +37,11 @@ public final class ViewCommand implements Callable<Integer> {
             }
             ViewerBridge[] bridge = new ViewerBridge[1];
             ViewerData data = ViewerBridge.fromFolder(target, bridge);
+            if (against != null) data = ViewerBridge.withDifferences(data, against, target);
             loader = ViewerLoader.of(data);
             actions = bridge[0];
         } else {
+            if (against != null) throw new InputException("--against", "compares two results folders; give a results folder, not a study file");
             ViewerBridge bridge = new ViewerBridge(StudyReader.read(target));
             loader = bridge::analyse;
             actions = bridge;

@@ -106,6 +106,33 @@ final class ViewerBridge implements ViewerActions {
         return data(study, model, ps, table, monthHour, weather, warnings);
     }
 
+    /**
+     * The data of results folder B with, for every quantity both folders have, a column
+     * {@code delta_<quantity>} = B - A on B's matched patches (NaN where unmatched); see
+     * {@link CompareCommand} for the matching.
+     */
+    static ViewerData withDifferences(ViewerData b, Path folderA, Path folderB) {
+        RunRecord runA = RunRecord.read(folderA), runB = RunRecord.read(folderB);
+        CompareCommand.Comparison c = CompareCommand.compare(folderA.resolve(ResultsFolder.PATCHES),
+                folderB.resolve(ResultsFolder.PATCHES), 0.5 * Math.min(runA.study().patchM(), runB.study().patchM()),
+                org.solmass.metrics.PatchMatcher.DEFAULT_MAX_ANGLE_DEG);
+        ResultTable t = new ResultTable(b.patches());
+        for (String col : b.table().names()) t.put(col, b.table().unit(col), b.table().column(col));
+        int n = b.patches().size();
+        for (String q : c.quantities()) {
+            double[] byRow = c.delta(q), v = new double[n];
+            for (Patch p : b.patches()) {
+                int r = c.b().row(p.id());
+                v[p.index()] = r >= 0 ? byRow[r] : Double.NaN;
+            }
+            t.put("delta_" + q, unitOf(q), v);
+        }
+        List<String> warnings = new ArrayList<>(b.warnings());
+        warnings.add(c.matched() + " of " + n + " patches matched with " + folderA);
+        return new ViewerData(b.title() + " vs " + runA.study().name(), b.model(), b.blockAnalysed(), b.patches(), t,
+                b.monthHourWm2(), b.climate(), b.sunPath(), b.latitudeDeg(), b.longitudeDeg(), b.zone(), warnings);
+    }
+
     static String unitOf(String column) {
         if (column.endsWith("_kwh_m2")) return "kWh/m2";
         if (column.endsWith("_kwh")) return "kWh";

@@ -51,6 +51,7 @@ public record Quantity(String column, String label, String unit, boolean divergi
     }
 
     static String labelOf(String c) {
+        if (c.startsWith("delta_")) return "Change in " + labelOf(c.substring(6)).toLowerCase(Locale.ROOT) + " (this variant minus the other)";
         switch (c) {
             case "annual_kwh_m2": return "Annual irradiation";
             case "beam_kwh_m2": return "Annual beam (direct) irradiation";
