@@ -18,7 +18,8 @@ import java.util.concurrent.Callable;
         description = {"Shading-aware irradiation of every patch of a massing model: beam, sky diffuse and",
                 "reflected light with the obstruction of the neighbouring blocks, summed to months and the year.",
                 "Give a study file, or the model and site as flags; flags override the study file.",
-                "Writes patches.csv, summary.json, run.json and map.png to the output folder."})
+                "Writes patches.csv, zones.csv, summary.json, map.png, patches.gltf and",
+                "run.json to the output folder."})
 public final class AnalyseCommand implements Callable<Integer> {
     @Parameters(arity = "0..1", paramLabel = "STUDY.json", description = "study file (docs/study-file.md)")
     Path studyFile;
@@ -41,6 +42,8 @@ public final class AnalyseCommand implements Callable<Integer> {
     @Option(names = "--sky", paramLabel = "MODEL", description = "perez (default) or isotropic") String sky;
     @Option(names = "--albedo", paramLabel = "A", description = "ground albedo (default 0.2)") Double albedo;
     @Option(names = "--month-hour", description = "also write month-hour.csv (large)") Boolean monthHour;
+    @Option(names = "--sun-hours-date", paramLabel = "MM-DD", description = "date of the sun-hour metric, repeatable (default 03-21; replaces the study's sun_hours.dates)") List<String> sunHoursDates;
+    @Option(names = "--gltf", negatable = true, description = "write patches.gltf (glTF 2.0 mesh; default on)") Boolean gltf;
     @Option(names = "--threads", paramLabel = "N", description = "worker threads (default: all cores)") Integer threads;
     @Option(names = "--out", paramLabel = "DIR", description = "output folder") Path out;
     @Option(names = {"-q", "--quiet"}, description = "no progress on stderr") boolean quiet;
@@ -65,7 +68,7 @@ public final class AnalyseCommand implements Callable<Integer> {
                 .model(model).latitude(lat).longitude(lon).elevationM(elevation).zone(zone).up(up).unit(unit)
                 .northDeg(north).analyse(analyse).context(context).climate(climate).climateFormat(climateFormat)
                 .timeBase(timeBase).patchM(patch).rays(rays).sky(sky).albedo(albedo).monthHourCsv(monthHour)
-                .threads(threads).out(out);
+                .threads(threads).out(out).sunHoursDates(sunHoursDates).gltf(gltf);
         if (studyFile == null && model == null) {
             throw new InputException("analyse", "give a study file, or --model with --lat, --lon and --zone");
         }
@@ -88,8 +91,29 @@ public final class AnalyseCommand implements Callable<Integer> {
         }
         System.out.printf("  annual irradiation: area-weighted mean %.0f kWh/m2, min %.0f, max %.0f, total %.0f MWh on %.0f m2%n",
                 sum / area, min, max, sum / 1000, area);
+        printMetrics(o, area);
         System.out.printf("  time %.1f s (%s)%n", seconds, timings(o.timingsS()));
         for (Path f : files) System.out.println("  wrote " + f);
+    }
+
+    private static void printMetrics(AnalysisRun.Outcome o, double area) {
+        MetricsStep.Result m = o.metrics();
+        for (int d = 0; d < m.dates().size(); d++) {
+            double[] h = m.sunHours()[d];
+            double mean = 0, atLeast = 0;
+            for (int p = 0; p < h.length; p++) {
+                double ar = o.patches().patches().get(p).areaM2();
+                mean += h[p] * ar;
+                if (h[p] >= org.solmass.metrics.SunHoursOnDate.EN17037_MIN_H) atLeast += ar;
+            }
+            var day = m.dates().get(d);
+            System.out.printf("  sun hours on %02d-%02d: area-weighted mean %.1f h; %.0f %% of the area has at least 1.5 h%n",
+                    day.getMonthValue(), day.getDayOfMonth(), mean / area, 100 * atLeast / area);
+        }
+        var pv = m.pv();
+        System.out.printf("  PV roof zones: %d, %.0f m2, indicative yield %.1f MWh per year (best plane: tilt %.0f, azimuth %.0f, %.0f kWh/m2)%n",
+                pv.zones().size(), pv.totalAreaM2(), pv.totalYieldKwh() / 1000, pv.best().tiltDeg(), pv.best().azimuthDeg(),
+                pv.best().annualKwhM2());
     }
 
     private static String timings(Map<String, Double> t) {

@@ -54,7 +54,7 @@ public final class AnalysisRun {
     /** Everything an analysis produced. */
     public record Outcome(Study study, MassingModel model, PatchSet patches, WeatherSeries weather,
                           IrradiationResult result, ResultTable table, List<String> warnings,
-                          Map<String, Long> counts, Map<String, Double> timingsS) {}
+                          Map<String, Long> counts, Map<String, Double> timingsS, MetricsStep.Result metrics) {}
 
     /** The model read with the study's options, with the reader's warnings. */
     public static ObjReader.Result loadModel(Study study) {
@@ -188,6 +188,11 @@ public final class AnalysisRun {
         IrradiationResult r = ShadedIrradiation.run(scene, in, progress);
         t.put("irradiation", seconds(t3));
 
+        long t4 = System.nanoTime();
+        progress.begin("metrics", 0);
+        MetricsStep.Result metrics = MetricsStep.run(study, scene, patches, r, weather, skyModel(study));
+        t.put("metrics", seconds(t4));
+
         counts.put("blocks", (long) model.blockNames().size());
         counts.put("triangles", (long) model.triangleCount());
         counts.put("surfaces", (long) patches.surfaces().size());
@@ -196,7 +201,9 @@ public final class AnalysisRun {
         counts.put("steps", (long) weather.size());
         counts.put("sun_directions", (long) r.sunDirections());
         counts.put("rays_per_patch", (long) org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()));
-        return new Outcome(study, model, patches, weather, r, table(patches, r), warnings, counts, t);
+        ResultTable table = table(patches, r);
+        MetricsStep.addColumns(table, metrics);
+        return new Outcome(study, model, patches, weather, r, table, warnings, counts, t, metrics);
     }
 
     /**

@@ -8,6 +8,7 @@ final class Commands {
 
     static List<Object> all() {
         return List.of(new AnalyseCommand(), new SkyViewCommand(), new SunCommand(), new PlaneCommand(),
-                new MakeWeatherCommand(), new BenchCommand());
+                new MakeWeatherCommand(), new BenchCommand(), new BenchAnalysisCommand(), new ViewCommand(),
+                new CompareCommand());
     }
 }

@@ -18,11 +18,15 @@ public final class ResultFiles {
 
     private ResultFiles() {}
 
-    /** Writes patches.csv, month-hour.csv (when asked), summary.json, map.png and run.json; returns the paths. */
+    /**
+     * Writes patches.csv, month-hour.csv (when asked), zones.csv, summary.json, map.png, patches.gltf
+     * (when asked) and run.json; returns the paths.
+     */
     public static List<Path> write(AnalysisRun.Outcome o) {
         RunRecord run = RunRecord.of(Main.version(), o.study(), o.weather().timeBase().label(), o.counts(),
                 o.timingsS(), Instant.now());
         return ResultsFolder.write(new ResultsFolder.Results(o.study(), o.model(), o.table(),
-                o.result().monthHourWm2(), run, List.of(CAUTION)));
+                o.result().monthHourWm2(), run, List.of(CAUTION), o.metrics() == null ? null : o.metrics().pv(),
+                o.metrics() == null ? List.of() : MetricsStep.notes(o.metrics())));
     }
 }

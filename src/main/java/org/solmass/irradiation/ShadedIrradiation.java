@@ -56,7 +56,7 @@ public final class ShadedIrradiation {
     public static IrradiationResult run(org.solmass.scene.Scene scene, Inputs in, PhaseProgress progress) {
         Receivers rc = in.receivers();
         int n = rc.analysed, total = rc.count;
-        float[] firstPass = new float[total * SLOTS];
+        double[] firstPass = new double[total * SLOTS];
         double[] gvfAll = new double[total];
         double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
         double[][] beamM = new double[12][n], diffM = new double[12][n];
@@ -105,14 +105,15 @@ public final class ShadedIrradiation {
         IntStream.range(0, n).parallel().forEach(p -> {
             double[] refl = new double[SLOTS];
             double g = ghiAlbedo[p];
-            for (int k = 0; k < SLOTS; k++) refl[k] = g * st.ghiWh[k];
             int[] idx = refIdx[p];
             float[] wt = refW[p];
             for (int i = 0; i < idx.length; i++) {
                 int r = idx[i], base = r * SLOTS;
-                double wr = wt[i], groundTerm = ga * gvfAll[r];
-                for (int k = 0; k < SLOTS; k++) refl[k] += wr * (firstPass[base + k] + groundTerm * st.ghiWh[k]);
+                double wr = wt[i];
+                g += wr * ga * gvfAll[r]; // the reflector's own ground-reflected GHI, as a GHI weight
+                for (int k = 0; k < SLOTS; k++) refl[k] += wr * firstPass[base + k];
             }
+            for (int k = 0; k < SLOTS; k++) refl[k] += g * st.ghiWh[k];
             double[] reflMonth = new double[12];
             int base = p * SLOTS;
             for (int k = 0; k < SLOTS; k++) {
@@ -155,7 +156,7 @@ public final class ShadedIrradiation {
         final byte[] vis;
         final double[] beamSlot = new double[SLOTS], circSlot = new double[SLOTS];
         final double[] beamUSlot = new double[SLOTS], circUSlot = new double[SLOTS];
-        final float[] slotTotal = new float[SLOTS];
+        final double[] slotTotal = new double[SLOTS];
         final double[] beamMonth = new double[12], diffMonth = new double[12];
         final int[] refIdx;
         final float[] refW;
@@ -308,7 +309,7 @@ public final class ShadedIrradiation {
             double unshadedSum = 0, ga = in.groundAlbedo();
             for (int k = 0; k < SLOTS; k++) {
                 double diff = Math.max(0, circSlot[k] + svf * st.backgroundWh[k] + hz * st.horizonWh[k]);
-                slotTotal[k] = (float) (beamSlot[k] + diff);
+                slotTotal[k] = beamSlot[k] + diff;
                 if (analysed) {
                     beamMonth[k / 24] += beamSlot[k];
                     diffMonth[k / 24] += diff;

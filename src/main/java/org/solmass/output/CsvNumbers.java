@@ -45,7 +45,7 @@ public final class CsvNumbers {
 
     /**
      * Decimal places of a result column, from its unit: kWh/m2, kWh, %, h and deg 2; W/m2 1; m 3;
-     * ratios (no unit) and anything else 4. See docs/outputs.md.
+     * ids and levels ("id", "level") 0; ratios (no unit) and anything else 4. See docs/outputs.md.
      */
     public static int decimalsForUnit(String unit) {
         if (unit == null) return 4;
@@ -53,6 +53,7 @@ public final class CsvNumbers {
             case "kWh/m2", "kWh", "%", "h", "deg", "Wh/m2" -> 2;
             case "W/m2" -> 1;
             case "m" -> 3;
+            case "id", "level" -> 0;
             default -> 4;
         };
     }

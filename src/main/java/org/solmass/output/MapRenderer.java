@@ -53,10 +53,36 @@ public final class MapRenderer {
         }
     }
 
+    /**
+     * Optional additions to a map.
+     *
+     * @param diverging colour by {@link ColourRamp#diverging} (neutral at zero) for signed differences;
+     *                  the automatic range is then symmetric, +-(98th percentile of |value|)
+     * @param outlines closed polylines (x,y,z triples, metres, first corner not repeated) drawn over the
+     *                 patches, e.g. PV zone outlines; empty for none
+     * @param outlineLabel legend text of the outlines
+     */
+    public record Extras(boolean diverging, List<double[]> outlines, String outlineLabel) {
+        public static final Extras NONE = new Extras(false, List.of(), "");
+
+        public Extras {
+            outlines = List.copyOf(outlines);
+        }
+    }
+
+    /** Colour of overlay outlines: a dark teal that stands apart from both ramps. */
+    static final int OUTLINE = 0x00665E;
+
     /** Renders and writes the PNG atomically. */
     public static void write(Path file, MassingModel model, boolean[] analysedBlock, List<Patch> patches,
                              double[] values, String label, String unit, Options o) {
-        BufferedImage img = render(model, analysedBlock, patches, values, label, unit, o);
+        write(file, model, analysedBlock, patches, values, label, unit, o, Extras.NONE);
+    }
+
+    /** Renders with extras and writes the PNG atomically. */
+    public static void write(Path file, MassingModel model, boolean[] analysedBlock, List<Patch> patches,
+                             double[] values, String label, String unit, Options o, Extras x) {
+        BufferedImage img = render(model, analysedBlock, patches, values, label, unit, o, x);
         AtomicFiles.write(file, out -> {
             if (!ImageIO.write(img, "png", out)) throw new java.io.IOException("no PNG writer available");
         });
@@ -84,9 +110,15 @@ public final class MapRenderer {
     /** Renders the map into an image of the requested size. */
     public static BufferedImage render(MassingModel model, boolean[] analysedBlock, List<Patch> patches,
                                        double[] values, String label, String unit, Options o) {
+        return render(model, analysedBlock, patches, values, label, unit, o, Extras.NONE);
+    }
+
+    /** Renders the map with extras into an image of the requested size. */
+    public static BufferedImage render(MassingModel model, boolean[] analysedBlock, List<Patch> patches,
+                                       double[] values, String label, String unit, Options o, Extras x) {
         if (values.length != patches.size()) throw new IllegalArgumentException(values.length + " values for " + patches.size() + " patches");
         if (analysedBlock.length < model.blockNames().size()) throw new IllegalArgumentException("analysedBlock has fewer entries than the model has blocks");
-        double[] range = autoRange(values);
+        double[] range = x.diverging() ? symmetricRange(values) : autoRange(values);
         boolean auto = Double.isNaN(o.rangeLo()) || Double.isNaN(o.rangeHi());
         double lo = auto ? range[0] : o.rangeLo(), hi = auto ? range[1] : o.rangeHi();
 
@@ -103,7 +135,7 @@ public final class MapRenderer {
         Vec3 eye = Vec3.fromAzimuthElevation(o.viewAzimuthDeg(), o.viewElevationDeg());
         MapView axo = MapView.looking(eye);
         MapView plan = MapView.looking(Vec3.UP);
-        MapScene scene = new MapScene(model, analysedBlock, patches, values, lo, hi);
+        MapScene scene = new MapScene(model, analysedBlock, patches, values, lo, hi, x.diverging(), x.outlines());
         int captionH = 24, tileH = panelH - captionH;
         int[][] plPixels = new int[1][];
         Thread planThread = new Thread(() -> plPixels[0] = scene.draw(plan, planW * 2, tileH * 2), "solmass-map-plan");
@@ -122,9 +154,22 @@ public final class MapRenderer {
         panel(g, plPixels[0], plan, 2 * MARGIN + axoW, panelTop, planW, panelH, captionH, "Plan, north up");
 
         title(g, w, o.title(), label, unit);
-        legend(g, w, h - LEGEND_H, lo, hi, label, unit, auto, scene.hasMissing());
+        legend(g, w, h - LEGEND_H, lo, hi, label, unit, auto, scene.hasMissing(), x);
         g.dispose();
         return img;
+    }
+
+    /**
+     * The automatic range of a diverging map: +-(98th percentile of |value|, nearest rank), widened to
+     * the largest |value| when that is 0; {-1, 1} when every value is 0 or none is finite.
+     */
+    public static double[] symmetricRange(double[] values) {
+        double[] a = Arrays.stream(values).filter(Double::isFinite).map(Math::abs).sorted().toArray();
+        if (a.length == 0) return new double[] {-1, 1};
+        double r = a[rank(0.98, a.length)];
+        if (!(r > 0)) r = a[a.length - 1];
+        if (!(r > 0)) r = 1;
+        return new double[] {-r, r};
     }
 
     private static void panel(Graphics2D g, int[] pixels, MapView view, int x, int y, int pw, int ph, int captionH, String caption) {
@@ -180,13 +225,14 @@ public final class MapRenderer {
     }
 
     private static void legend(Graphics2D g, int w, int top, double lo, double hi, String label, String unit,
-                               boolean auto, boolean missing) {
+                               boolean auto, boolean missing, Extras x) {
         int barW = Math.min(900, (int) (w * 0.5)), barH = 20, bx = MARGIN + 4, by = top + 34;
         g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 15));
         g.setColor(new Color(0x222222));
         g.drawString(label + (unit.isEmpty() ? "" : ", " + display(unit)), bx, top + 24);
         for (int i = 0; i < barW; i++) {
-            g.setColor(new Color(ColourRamp.sequential(i / (barW - 1.0))));
+            double t = i / (barW - 1.0);
+            g.setColor(new Color(x.diverging() ? ColourRamp.diverging(2 * t - 1) : ColourRamp.sequential(t)));
             g.fillRect(bx + i, by, 1, barH);
         }
         g.setColor(new Color(0x666666));
@@ -204,7 +250,8 @@ public final class MapRenderer {
         }
         int nx = bx + barW + 40;
         g.setColor(new Color(0x444444));
-        g.drawString(auto ? "Range: 2nd to 98th percentile of the patch values" : "Range: set by the user", nx, by + 6);
+        g.drawString(!auto ? "Range: set by the user" : x.diverging() ? "Range: \u00b1 98th percentile of |difference|, grey at zero"
+                : "Range: 2nd to 98th percentile of the patch values", nx, by + 6);
         g.drawString("Values beyond the range take the end colours", nx, by + 24);
         int sy = by + 38;
         g.setColor(new Color(MapScene.contextGrey(0.6)));
@@ -217,6 +264,15 @@ public final class MapRenderer {
             g.fillRect(mx, sy, 16, 12);
             g.setColor(new Color(0x444444));
             g.drawString("No value", mx + 22, sy + 11);
+        }
+        if (!x.outlines().isEmpty()) {
+            int oy = sy + 20;
+            g.setColor(new Color(OUTLINE));
+            g.setStroke(new BasicStroke(3f));
+            g.drawRect(nx + 1, oy + 1, 14, 10);
+            g.setStroke(new BasicStroke(1f));
+            g.setColor(new Color(0x444444));
+            g.drawString(x.outlineLabel(), nx + 22, oy + 11);
         }
     }
 

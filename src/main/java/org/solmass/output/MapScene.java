@@ -30,9 +30,18 @@ final class MapScene {
     private final double meanPatchEdgeM;
     private final boolean missing;
 
+    /** Overlay polylines (closed, x,y,z triples) drawn over everything but hidden by nearer faces. */
+    private final List<double[]> overlay;
+
     MapScene(MassingModel model, boolean[] analysedBlock, List<Patch> patches, double[] values, double lo, double hi) {
+        this(model, analysedBlock, patches, values, lo, hi, false, List.of());
+    }
+
+    MapScene(MassingModel model, boolean[] analysedBlock, List<Patch> patches, double[] values, double lo, double hi,
+             boolean diverging, List<double[]> overlay) {
         this.model = model;
         this.patches = patches;
+        this.overlay = overlay;
         int nt = model.triangleCount();
         triColour = new int[nt];
         triNormal = new double[3 * nt];
@@ -50,7 +59,8 @@ final class MapScene {
         double edgeSum = 0;
         for (int p = 0; p < patchColour.length; p++) {
             miss |= !Double.isFinite(values[p]);
-            patchColour[p] = ColourRamp.sequential(Double.isFinite(values[p]) ? ColourRamp.normalise(values[p], lo, hi) : Double.NaN);
+            double t = Double.isFinite(values[p]) ? ColourRamp.normalise(values[p], lo, hi) : Double.NaN;
+            patchColour[p] = diverging ? ColourRamp.diverging(2 * t - 1) : ColourRamp.sequential(t);
             edgeSum += Math.sqrt(Math.max(0, patches.get(p).areaM2()));
         }
         missing = miss;
@@ -161,6 +171,20 @@ final class MapScene {
             double dx = steep ? 1 : 0, dy = steep ? 0 : 1;
             ras.line(x0, y0, z0, P.sx, P.sy, P.depth, MapRenderer.EDGE, 0.75, 3 * bias);
             ras.line(x0 + dx, y0 + dy, z0, P.sx + dx, P.sy + dy, P.depth, MapRenderer.EDGE, 0.75, 3 * bias);
+        }
+        for (double[] ring : overlay) {
+            int n = ring.length / 3;
+            for (int k = 0; k < n; k++) {
+                int k1 = (k + 1) % n;
+                P.project(ring[3 * k], ring[3 * k + 1], ring[3 * k + 2]);
+                double x0 = P.sx, y0 = P.sy, z0 = P.depth;
+                P.project(ring[3 * k1], ring[3 * k1 + 1], ring[3 * k1 + 2]);
+                for (int d = -2; d <= 2; d++) {   // about 2.5 px wide after downsampling
+                    boolean steep = Math.abs(P.sy - y0) > Math.abs(P.sx - x0);
+                    double ddx = steep ? d : 0, ddy = steep ? 0 : d;
+                    ras.line(x0 + ddx, y0 + ddy, z0, P.sx + ddx, P.sy + ddy, P.depth, MapRenderer.OUTLINE, 0.95, 4 * bias);
+                }
+            }
         }
         return ras.downsample2();
     }

@@ -28,10 +28,13 @@ import java.util.Map;
  * @param stepMinutes time step of the average days, minutes (divides 60)
  * @param outputs what to write and where
  * @param threads worker threads, 0 = all cores
+ * @param sunHours sun hours on given dates (key {@code sun_hours})
+ * @param pv PV roof zones (key {@code pv})
  */
 public record Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
                     GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
-                    TimeBase timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads) {
+                    TimeBase timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads,
+                    SunHours sunHours, Pv pv) {
 
     public static final double DEFAULT_PATCH_M = 1.0;
     public static final int DEFAULT_RAYS = 1024;
@@ -43,6 +46,51 @@ public record Study(String name, String description, Path source, Model model, S
         albedo = albedo == null ? Albedo.DEFAULTS : albedo;
         outputs = outputs == null ? Outputs.DEFAULTS : outputs;
         climate = climate == null ? Climate.CLEAR_SKY : climate;
+        sunHours = sunHours == null ? SunHours.DEFAULTS : sunHours;
+        pv = pv == null ? Pv.DEFAULTS : pv;
+    }
+
+    /** A study with the default sun-hour and PV settings. */
+    public Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
+                 GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
+                 TimeBase timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads) {
+        this(name, description, source, model, site, climate, albedo, groundIrradiance, patchM, rays, sky, timeBase,
+                sunBins, stepMinutes, outputs, threads, SunHours.DEFAULTS, Pv.DEFAULTS);
+    }
+
+    /**
+     * Hours of direct sun on given dates (docs/metrics.md).
+     *
+     * @param dates dates of the study's year (climate.year), each counted from 00:00 to 24:00 local standard time
+     * @param stepMinutes minutes between sun positions (divides 60)
+     * @param minElevationDeg the sun counts only above this apparent elevation, degrees
+     */
+    public record SunHours(List<java.time.MonthDay> dates, int stepMinutes, double minElevationDeg) {
+        public static final int DEFAULT_STEP_MINUTES = 5;
+        /** Our choice (docs/metrics.md): a sun lower than this is usually hidden by trees and terrain. */
+        public static final double DEFAULT_MIN_ELEVATION_DEG = 5.0;
+        public static final List<java.time.MonthDay> DEFAULT_DATES = List.of(java.time.MonthDay.of(3, 21));
+        public static final SunHours DEFAULTS = new SunHours(DEFAULT_DATES, DEFAULT_STEP_MINUTES, DEFAULT_MIN_ELEVATION_DEG);
+
+        public SunHours {
+            dates = List.copyOf(dates);
+        }
+    }
+
+    /**
+     * PV roof zones (docs/metrics.md).
+     *
+     * @param suitablePct a roof patch is suitable at or above this share of the best unobstructed plane's
+     *                    annual irradiation, percent
+     * @param minZoneM2 smallest zone kept, square metres
+     * @param moduleEfficiency module efficiency at standard test conditions, 0..1
+     * @param performanceRatio system performance ratio, 0..1
+     */
+    public record Pv(double suitablePct, double minZoneM2, double moduleEfficiency, double performanceRatio) {
+        public static final double DEFAULT_SUITABLE_PCT = 80, DEFAULT_MIN_ZONE_M2 = 10,
+                DEFAULT_MODULE_EFFICIENCY = 0.20, DEFAULT_PERFORMANCE_RATIO = 0.80;
+        public static final Pv DEFAULTS = new Pv(DEFAULT_SUITABLE_PCT, DEFAULT_MIN_ZONE_M2, DEFAULT_MODULE_EFFICIENCY,
+                DEFAULT_PERFORMANCE_RATIO);
     }
 
     /**
@@ -150,16 +198,24 @@ public record Study(String name, String description, Path source, Model model, S
      * @param mapHeightPx height of map.png, pixels
      * @param thresholdsKwhM2 annual irradiation thresholds for the "area at or above" figures of
      *                        summary.json, kWh/m2 per year, ascending
+     * @param gltf write patches.gltf (glTF 2.0 mesh of the patches)
      */
     public record Outputs(Path folder, boolean monthHourCsv, boolean map, int mapWidthPx, int mapHeightPx,
-                          List<Double> thresholdsKwhM2) {
+                          List<Double> thresholdsKwhM2, boolean gltf) {
         public static final List<Double> DEFAULT_THRESHOLDS = List.of(300.0, 600.0, 900.0, 1200.0);
         public static final int DEFAULT_MAP_WIDTH = 2000, DEFAULT_MAP_HEIGHT = 1100;
+        public static final boolean DEFAULT_GLTF = true;
         public static final Outputs DEFAULTS = new Outputs(Path.of("results").toAbsolutePath(), false, true,
-                DEFAULT_MAP_WIDTH, DEFAULT_MAP_HEIGHT, DEFAULT_THRESHOLDS);
+                DEFAULT_MAP_WIDTH, DEFAULT_MAP_HEIGHT, DEFAULT_THRESHOLDS, DEFAULT_GLTF);
 
         public Outputs {
             thresholdsKwhM2 = List.copyOf(thresholdsKwhM2);
+        }
+
+        /** Outputs with the default glTF setting. */
+        public Outputs(Path folder, boolean monthHourCsv, boolean map, int mapWidthPx, int mapHeightPx,
+                       List<Double> thresholdsKwhM2) {
+            this(folder, monthHourCsv, map, mapWidthPx, mapHeightPx, thresholdsKwhM2, DEFAULT_GLTF);
         }
     }
 

@@ -96,6 +96,9 @@ public final class StudyOverrides {
     public StudyOverrides out(Path folder) { return set("--out", "outputs.folder", folder); }
     public StudyOverrides monthHourCsv(Boolean on) { return set("--month-hour", "outputs.month_hour_csv", on); }
     public StudyOverrides threads(Integer n) { return set("--threads", "threads", n); }
+    /** Dates "MM-DD" of the sun-hour metric (replace the study file's list). */
+    public StudyOverrides sunHoursDates(List<String> dates) { return set("--sun-hours-date", "sun_hours.dates", dates); }
+    public StudyOverrides gltf(Boolean on) { return set("--gltf", "outputs.gltf", on); }
 
     /** The overrides as a JSON tree shaped like a study file. */
     ObjectNode tree() { return tree; }

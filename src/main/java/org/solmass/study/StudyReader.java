@@ -145,14 +145,58 @@ public final class StudyReader {
                 o.bool("month_hour_csv", false), o.bool("map", true),
                 o.integer("map_width_px", Outputs.DEFAULT_MAP_WIDTH, 400, 8000),
                 o.integer("map_height_px", Outputs.DEFAULT_MAP_HEIGHT, 300, 8000),
-                o.ascendingNumbers("thresholds_kwh_m2", Outputs.DEFAULT_THRESHOLDS, 0, 100_000, 32));
+                o.ascendingNumbers("thresholds_kwh_m2", Outputs.DEFAULT_THRESHOLDS, 0, 100_000, 32),
+                o.bool("gltf", Outputs.DEFAULT_GLTF));
         o.finish();
         int threads = c.integer("threads", 0, 0, 4096);
+        Study.SunHours sunHours = sunHours(c, climate.year());
+        Study.Pv pv = pv(c);
         c.finish();
 
         if (name == null || name.isBlank()) name = baseName(source != null ? source : modelFile);
         return new Study(name, description, source, model, site, climate, albedo, ground, patchM, rays, sky,
-                timeBase, sunBins, step, outputs, threads);
+                timeBase, sunBins, step, outputs, threads, sunHours, pv);
+    }
+
+    /** The {@code sun_hours} section: dates as "MM-DD" (valid in the study's year), step and minimum elevation. */
+    private static Study.SunHours sunHours(JsonCursor c, int year) {
+        JsonCursor k = c.object("sun_hours");
+        List<java.time.MonthDay> dates = new java.util.ArrayList<>();
+        if (k.raw("dates") == null) {
+            dates.addAll(Study.SunHours.DEFAULT_DATES);
+        } else {
+            List<String> texts = k.strings("dates");
+            if (texts.size() > 12) throw k.error("dates", "expected at most 12 dates, got " + texts.size());
+            for (int i = 0; i < texts.size(); i++) {
+                String t = texts.get(i).trim();
+                java.time.MonthDay d;
+                try {
+                    if (!t.matches("\\d\\d-\\d\\d")) throw new DateTimeException(t);
+                    d = java.time.MonthDay.parse("--" + t);
+                } catch (DateTimeException e) {
+                    throw k.error("dates[" + i + "]", "expected a date as \"MM-DD\" such as \"03-21\", got \"" + t + "\"");
+                }
+                if (!d.isValidYear(year)) throw k.error("dates[" + i + "]", t + " does not exist in " + year + " (climate.year)");
+                if (dates.contains(d)) throw k.error("dates[" + i + "]", t + " is listed twice");
+                dates.add(d);
+            }
+        }
+        int step = k.integer("step_minutes", Study.SunHours.DEFAULT_STEP_MINUTES, 1, 60);
+        if (60 % step != 0) throw k.error("step_minutes", "expected a whole number of minutes that divides 60 (1, 2, 3, 4, 5, 6, 10, 12, 15, 20, 30, 60), got " + step);
+        double minEl = k.number("min_elevation_deg", Study.SunHours.DEFAULT_MIN_ELEVATION_DEG, 0, 45);
+        k.finish();
+        return new Study.SunHours(dates, step, minEl);
+    }
+
+    /** The {@code pv} section. */
+    private static Study.Pv pv(JsonCursor c) {
+        JsonCursor k = c.object("pv");
+        Study.Pv pv = new Study.Pv(k.number("suitable_pct", Study.Pv.DEFAULT_SUITABLE_PCT, 0, 100),
+                k.number("min_zone_m2", Study.Pv.DEFAULT_MIN_ZONE_M2, 0, 1e6),
+                k.positive("module_efficiency", Study.Pv.DEFAULT_MODULE_EFFICIENCY, 0, 1),
+                k.positive("performance_ratio", Study.Pv.DEFAULT_PERFORMANCE_RATIO, 0, 1));
+        k.finish();
+        return pv;
     }
 
     private static Climate climate(JsonCursor c, Path base) {

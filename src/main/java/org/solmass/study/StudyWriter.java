@@ -81,7 +81,20 @@ public final class StudyWriter {
         o.put("map_height_px", s.outputs().mapHeightPx());
         ArrayNode t = o.putArray("thresholds_kwh_m2");
         for (double v : s.outputs().thresholdsKwhM2()) t.add(v);
+        o.put("gltf", s.outputs().gltf());
         root.put("threads", s.threads());
+
+        ObjectNode sh = root.putObject("sun_hours");
+        ArrayNode dates = sh.putArray("dates");
+        for (java.time.MonthDay d : s.sunHours().dates()) dates.add(String.format("%02d-%02d", d.getMonthValue(), d.getDayOfMonth()));
+        sh.put("step_minutes", s.sunHours().stepMinutes());
+        sh.put("min_elevation_deg", s.sunHours().minElevationDeg());
+
+        ObjectNode pv = root.putObject("pv");
+        pv.put("suitable_pct", s.pv().suitablePct());
+        pv.put("min_zone_m2", s.pv().minZoneM2());
+        pv.put("module_efficiency", s.pv().moduleEfficiency());
+        pv.put("performance_ratio", s.pv().performanceRatio());
         return root;
     }
 

@@ -37,7 +37,7 @@ class ResultsFolderTest {
         List<Path> files = ResultsFolder.write(new ResultsFolder.Results(study, s.model(), t, mh, run, List.of("invented scene")));
         Path out = dir.resolve("out");
         assertEquals(List.of(out.resolve("patches.csv"), out.resolve("month-hour.csv"), out.resolve("summary.json"),
-                out.resolve("map.png"), out.resolve("run.json")), files);
+                out.resolve("map.png"), out.resolve("patches.gltf"), out.resolve("run.json")), files);
         assertEquals(v.length, PatchCsvReader.read(out.resolve("patches.csv")).size());
         Map<String, float[]> back = MonthHourCsvReader.read(out.resolve("month-hour.csv"));
         assertEquals(v.length, back.size());

@@ -24,7 +24,7 @@ import static org.junit.jupiter.api.Assertions.*;
 /**
  * Every case of docs/bad-inputs.md, run through the command line in process: the exit code is 2 and
  * the first line on stderr is exactly the message the catalogue gives ({@code <dir>} stands for the
- * case's folder). The catalogue is the source of the expected text; the bad inputs are built here.
+ * case's folder; a message ending in "..." is matched by its start). The catalogue is the source of the expected text; the bad inputs are built here.
  */
 class BadInputCatalogueTest {
     static final Path CATALOGUE = Path.of("docs/bad-inputs.md");
@@ -65,7 +65,8 @@ class BadInputCatalogueTest {
         if (System.getProperty("solmass.printCatalogue") != null) System.out.println("CASE " + id + " " + code + " " + first);
         String expected = catalogue().get(id);
         assertNotNull(expected, "case " + id + " is not in " + CATALOGUE);
-        assertEquals(expected, first, id);
+        if (expected.endsWith("...")) assertTrue(first.startsWith(expected.substring(0, expected.length() - 3)), id + ": " + first);
+        else assertEquals(expected, first, id);
         assertEquals(Main.EXIT_INPUT, code, id);
     }
 

@@ -1,0 +1,224 @@
+package org.solmass.viewer;
+
+import javafx.scene.AmbientLight;
+import javafx.scene.Group;
+import javafx.scene.Node;
+import javafx.scene.image.Image;
+import javafx.scene.image.PixelFormat;
+import javafx.scene.image.WritableImage;
+import javafx.scene.paint.Color;
+import javafx.scene.paint.PhongMaterial;
+import javafx.scene.shape.Box;
+import javafx.scene.shape.CullFace;
+import javafx.scene.shape.MeshView;
+import javafx.scene.shape.TriangleMesh;
+import javafx.scene.shape.VertexFormat;
+import javafx.geometry.Point3D;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The 3D content: grey massing (lit), patch meshes coloured through the palette atlas (unlit, so
+ * their colours match the legend exactly), a ground plane, the sun path and the selection frame.
+ * Patches live in a few large meshes; a picked face maps to its patch through {@link PatchMeshData}.
+ */
+public final class ModelView3D {
+    static final Color CONTEXT_GREY = Color.rgb(0xE4, 0xE2, 0xDD);
+    static final Color ANALYSED_GREY = Color.rgb(0xC4, 0xC2, 0xBD);
+    static final Color GROUND = Color.rgb(0xBF, 0xBE, 0xB8);
+
+    private final Group root = new Group();
+    private final Group zoneGroup = new Group();
+    private final Group sunGroup = new Group();
+    private final Group selection = new Group();
+    private final List<PatchMeshData> patchData;
+    private final List<WritableImage> patchTextures = new ArrayList<>();
+    private final List<MeshView> patchViews = new ArrayList<>();
+    private final List<MeshView> massingViews = new ArrayList<>();
+    private final List<MassingMeshData> massingData = new ArrayList<>();
+    private final SceneFrame frame;
+    private final double liftM;
+
+    /** Geometry prepared off the FX thread. */
+    public record Prepared(SceneFrame frame, double liftM, double[] focus, List<PatchMeshData> patches,
+                           List<MassingMeshData> analysed, List<MassingMeshData> context) {
+        public static Prepared of(ViewerData d) {
+            SceneFrame f = SceneFrame.of(d.model().bounds());
+            double lift = Math.max(0.01, Math.min(0.15, f.radiusM() * 2e-4));
+            return new Prepared(f, lift, ModelView3D.focus(d, f), PatchMeshData.build(d.patches(), f, lift),
+                    MassingMeshData.build(d.model(), f, d.blockAnalysed(), true),
+                    MassingMeshData.build(d.model(), f, d.blockAnalysed(), false));
+        }
+    }
+
+    /**
+     * What the camera frames first: {x, y, z, radius} in the scene frame, the sphere around the
+     * analysed patches (the whole model when there are none).
+     */
+    static double[] focus(ViewerData d, SceneFrame f) {
+        double[] b = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY,
+                Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
+        for (org.solmass.surface.Patch p : d.patches()) {
+            double[] o = p.outline();
+            for (int i = 0; i < o.length; i += 3) {
+                for (int k = 0; k < 3; k++) {
+                    b[k] = Math.min(b[k], o[i + k]);
+                    b[k + 3] = Math.max(b[k + 3], o[i + k]);
+                }
+            }
+        }
+        if (d.patches().isEmpty()) b = d.model().bounds();
+        double dx = b[3] - b[0], dy = b[4] - b[1], dz = b[5] - b[2];
+        double r = Math.max(1, 0.5 * Math.sqrt(dx * dx + dy * dy + dz * dz));
+        return new double[] {f.fx((b[0] + b[3]) / 2), f.fy((b[2] + b[5]) / 2), f.fz((b[1] + b[4]) / 2), r};
+    }
+
+    public ModelView3D(ViewerData data, Prepared prep) {
+        this.frame = prep.frame();
+        this.liftM = prep.liftM();
+        this.patchData = prep.patches();
+
+        Group massing = new Group();
+        addMassing(massing, prep.analysed(), ANALYSED_GREY);
+        addMassing(massing, prep.context(), CONTEXT_GREY);
+        Node ground = ground(data);
+        massing.getChildren().add(ground);
+
+        Group patches = new Group();
+        for (PatchMeshData pd : patchData) {
+            TriangleMesh m = new TriangleMesh(VertexFormat.POINT_NORMAL_TEXCOORD);
+            m.getPoints().setAll(pd.points);
+            m.getNormals().setAll(pd.normals);
+            m.getTexCoords().setAll(pd.texCoords);
+            m.getFaces().setAll(pd.faces);
+            WritableImage tex = new WritableImage(pd.atlas.width, pd.atlas.height);
+            PhongMaterial mat = new PhongMaterial(Color.WHITE);
+            mat.setDiffuseMap(tex);
+            mat.setSpecularColor(Color.BLACK);
+            MeshView v = new MeshView(m);
+            v.setMaterial(mat);
+            v.setCullFace(CullFace.NONE);
+            patchTextures.add(tex);
+            patchViews.add(v);
+            patches.getChildren().add(v);
+        }
+
+        AmbientLight flat = new AmbientLight(Color.WHITE);   // the only light: shades are baked into textures
+        sunGroup.setVisible(false);
+        zoneGroup.setVisible(false);
+        addZoneOutlines(data);
+        root.getChildren().addAll(massing, patches, sunGroup, zoneGroup, selection, flat);
+    }
+
+    private void addMassing(Group g, List<MassingMeshData> parts, Color c) {
+        WritableImage tex = new WritableImage(MassingMeshData.LEVELS, 1);
+        int rgb = ((int) Math.round(c.getRed() * 255) << 16) | ((int) Math.round(c.getGreen() * 255) << 8) | (int) Math.round(c.getBlue() * 255);
+        tex.getPixelWriter().setPixels(0, 0, MassingMeshData.LEVELS, 1, PixelFormat.getIntArgbInstance(),
+                MassingMeshData.shadeTexture(rgb), 0, MassingMeshData.LEVELS);
+        PhongMaterial mat = new PhongMaterial(Color.WHITE);
+        mat.setDiffuseMap(tex);
+        mat.setSpecularColor(Color.BLACK);
+        for (MassingMeshData md : parts) {
+            TriangleMesh m = new TriangleMesh(VertexFormat.POINT_NORMAL_TEXCOORD);
+            m.getPoints().setAll(md.points);
+            m.getNormals().setAll(md.normals);
+            m.getTexCoords().setAll(MassingMeshData.TEX_COORDS);
+            m.getFaces().setAll(md.faces);
+            MeshView v = new MeshView(m);
+            v.setMaterial(mat);
+            v.setCullFace(CullFace.NONE);
+            massingViews.add(v);
+            massingData.add(md);
+            g.getChildren().add(v);
+        }
+    }
+
+    private Node ground(ViewerData d) {
+        double[] b = d.model().bounds();
+        double w = 30 * frame.radiusM(), h = w;
+        Box g = new Box(w, 0.01, h);
+        g.setTranslateY(frame.fy(b[2]) + 3 * liftM);
+        PhongMaterial mat = new PhongMaterial(GROUND);
+        mat.setSpecularColor(Color.BLACK);
+        g.setMaterial(mat);
+        g.setMouseTransparent(true);
+        return g;
+    }
+
+    public Group node() { return root; }
+
+    public SceneFrame frame() { return frame; }
+
+    public Group sunPathGroup() { return sunGroup; }
+
+    /** The PV roof zone outlines (empty when the results have no zones). */
+    public Group zoneGroup() { return zoneGroup; }
+
+    /** Whether the results carry PV roof zones. */
+    public boolean hasZones() { return !zoneGroup.getChildren().isEmpty(); }
+
+    private void addZoneOutlines(ViewerData d) {
+        PhongMaterial mat = new PhongMaterial(Color.rgb(0x0E, 0x6B, 0x5E));
+        for (double[] e : ZoneOutlines.edges(d.patches(), d.table())) {
+            org.solmass.surface.Patch p = d.patches().get((int) e[6]);
+            double r = Math.max(0.04, Math.sqrt(p.areaM2()) * 0.06), lift = 3 * liftM;
+            Point3D a = new Point3D(frame.fx(e[0] + p.normal().x() * lift), frame.fy(e[2] + p.normal().z() * lift),
+                    frame.fz(e[1] + p.normal().y() * lift));
+            Point3D b = new Point3D(frame.fx(e[3] + p.normal().x() * lift), frame.fy(e[5] + p.normal().z() * lift),
+                    frame.fz(e[4] + p.normal().y() * lift));
+            zoneGroup.getChildren().add(Shapes.rod(a, b, r, mat));
+        }
+    }
+
+    /** Recolours the patches: palette entry per patch (0..257, see {@link ColourScale}) of {@code scale}. */
+    public void recolour(ColourScale scale, int[] paletteOfPatch) {
+        int[] lut = new int[ColourScale.BELOW_INDEX + 1];
+        for (int i = 0; i < lut.length; i++) lut[i] = scale.rgbOfIndex(i);
+        int[] rgb = new int[paletteOfPatch.length];
+        for (int i = 0; i < rgb.length; i++) rgb[i] = lut[paletteOfPatch[i]];
+        for (int i = 0; i < patchData.size(); i++) {
+            PatchMeshData pd = patchData.get(i);
+            int[] px = new int[pd.atlas.width * pd.atlas.height];
+            pd.texels(rgb, px);
+            patchTextures.get(i).getPixelWriter().setPixels(0, 0, pd.atlas.width, pd.atlas.height,
+                    PixelFormat.getIntArgbInstance(), px, 0, pd.atlas.width);
+        }
+    }
+
+    /** Patch index under a pick (node, face, texture coordinate), -1 if the node is not a patch mesh. */
+    public int patchAt(Node n, int face, javafx.geometry.Point2D tex) {
+        int i = patchViews.indexOf(n);
+        if (i < 0) return -1;
+        return tex == null ? patchData.get(i).patchOfFace(face) : patchData.get(i).patchAt(face, tex.getX(), tex.getY());
+    }
+
+    /** Block id of a picked face of the grey massing, -1 if the node is not massing. */
+    public int blockAt(Node n, int face) {
+        int i = massingViews.indexOf(n);
+        if (i < 0) return -1;
+        int[] f = massingData.get(i).faceToBlock;
+        return face >= 0 && face < f.length ? f[face] : -1;
+    }
+
+    /** Frames the selected patch (or clears the frame when null). */
+    public void select(org.solmass.surface.Patch p) {
+        selection.getChildren().clear();
+        if (p == null) return;
+        double[] o = p.outline();
+        int n = o.length / 3;
+        double lift = 2 * liftM;
+        double r = Math.max(0.03, Math.sqrt(p.areaM2()) * 0.04);
+        PhongMaterial mat = new PhongMaterial(Color.rgb(20, 20, 24));
+        for (int i = 0; i < n; i++) {
+            int j = (i + 1) % n;
+            Point3D a = point(o, i, p, lift), b = point(o, j, p, lift);
+            selection.getChildren().add(Shapes.rod(a, b, r, mat));
+        }
+    }
+
+    private Point3D point(double[] o, int i, org.solmass.surface.Patch p, double lift) {
+        return new Point3D(frame.fx(o[3 * i] + p.normal().x() * lift), frame.fy(o[3 * i + 2] + p.normal().z() * lift),
+                frame.fz(o[3 * i + 1] + p.normal().y() * lift));
+    }
+}

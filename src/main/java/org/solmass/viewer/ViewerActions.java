@@ -1,0 +1,39 @@
+package org.solmass.viewer;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.function.BooleanSupplier;
+
+/** What the window asks the rest of Solmass to do; the CLI wires it. Methods run off the FX thread. */
+public interface ViewerActions {
+
+    /** The current re-run options, to fill the controls. */
+    RerunRequest currentOptions();
+
+    /** The climate sources offered in the re-run control (the user may also type one). */
+    default List<String> climateChoices() { return List.of(currentOptions().climateSource()); }
+
+    /** The sky model names offered in the re-run control. */
+    default List<String> skyModels() { return List.of(currentOptions().skyModel()); }
+
+    /** Re-runs the analysis with changed options; returns the new data, or null when cancelled. */
+    ViewerData rerun(RerunRequest request, ProgressSink progress, BooleanSupplier cancelled) throws Exception;
+
+    /** Writes the per-patch CSV of the data on show. */
+    void exportCsv(Path file) throws Exception;
+
+    /** Writes the study summary of the data on show. */
+    void exportSummary(Path file) throws Exception;
+
+    /** Actions for data that cannot be re-run or exported (e.g. opened from a results folder). */
+    static ViewerActions none(RerunRequest options) {
+        return new ViewerActions() {
+            @Override public RerunRequest currentOptions() { return options; }
+            @Override public ViewerData rerun(RerunRequest r, ProgressSink p, BooleanSupplier c) {
+                throw new UnsupportedOperationException("re-run is not available for this data");
+            }
+            @Override public void exportCsv(Path file) { throw new UnsupportedOperationException("CSV export is not available for this data"); }
+            @Override public void exportSummary(Path file) { throw new UnsupportedOperationException("summary export is not available for this data"); }
+        };
+    }
+}

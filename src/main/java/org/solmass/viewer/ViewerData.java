@@ -1,0 +1,58 @@
+package org.solmass.viewer;
+
+import org.solmass.model.MassingModel;
+import org.solmass.output.ResultTable;
+import org.solmass.surface.Patch;
+
+import java.util.List;
+
+/**
+ * Everything the viewer shows, filled by the pipeline; the viewer computes no physics from it.
+ *
+ * @param title window title, e.g. the study name
+ * @param model the massing model (metres, x east, y north, z up)
+ * @param blockAnalysed per block id, true when its surfaces were analysed; other blocks are context
+ *                      and drawn neutral grey
+ * @param patches the analysed patches, index = row of {@code table}
+ * @param table per-patch result columns (CSV names and units)
+ * @param monthHourWm2 mean irradiance per patch, month and local standard hour, W/m2, laid out as
+ *                     {@code [(patch * 12 + month0) * 24 + hour]}; may be null
+ * @param climate the input climate at a glance; may be null
+ * @param sunPath the sun's path on the monthly-average days; may be empty
+ * @param latitudeDeg site latitude, degrees north
+ * @param longitudeDeg site longitude, degrees east
+ * @param zone time zone label of the local standard time, e.g. "UTC+01:00"
+ * @param warnings messages for the status line (e.g. from import or climate checks)
+ */
+public record ViewerData(String title, MassingModel model, boolean[] blockAnalysed, List<Patch> patches,
+                         ResultTable table, float[] monthHourWm2, ClimateGlance climate,
+                         List<SunArc> sunPath, double latitudeDeg, double longitudeDeg, String zone,
+                         List<String> warnings) {
+
+    public ViewerData {
+        if (table.size() != patches.size()) {
+            throw new IllegalArgumentException("table has " + table.size() + " rows for " + patches.size() + " patches");
+        }
+        if (monthHourWm2 != null && monthHourWm2.length != patches.size() * 12 * 24) {
+            throw new IllegalArgumentException("monthHourWm2 has " + monthHourWm2.length
+                    + " values, expected patches x 12 x 24 = " + patches.size() * 288);
+        }
+        if (blockAnalysed.length != model.blockNames().size()) {
+            throw new IllegalArgumentException("blockAnalysed has " + blockAnalysed.length + " entries for "
+                    + model.blockNames().size() + " blocks");
+        }
+        for (int i = 0; i < patches.size(); i++) {
+            if (patches.get(i).index() != i) {
+                throw new IllegalArgumentException("patch at position " + i + " has index " + patches.get(i).index());
+            }
+        }
+        sunPath = sunPath == null ? List.of() : List.copyOf(sunPath);
+        warnings = warnings == null ? List.of() : List.copyOf(warnings);
+    }
+
+    /** Mean irradiance of a patch in a month (1..12) at local standard hour h (0..23), W/m2; NaN if absent. */
+    public double monthHour(int patch, int month, int hour) {
+        if (monthHourWm2 == null) return Double.NaN;
+        return monthHourWm2[(patch * 12 + month - 1) * 24 + hour];
+    }
+}

@@ -1,0 +1,416 @@
+package org.solmass.viewer;
+
+import javafx.application.Platform;
+import javafx.geometry.Insets;
+import javafx.geometry.Point2D;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.Scene;
+import javafx.scene.SceneAntialiasing;
+import javafx.scene.SubScene;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ProgressBar;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.Tab;
+import javafx.scene.control.TabPane;
+import javafx.scene.input.PickResult;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Pane;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.StackPane;
+import javafx.scene.layout.VBox;
+import javafx.scene.paint.Color;
+import javafx.scene.paint.CycleMethod;
+import javafx.scene.paint.LinearGradient;
+import javafx.scene.paint.Paint;
+import javafx.scene.paint.Stop;
+import javafx.scene.shape.Circle;
+import javafx.scene.shape.Polygon;
+import javafx.scene.text.Text;
+import javafx.stage.Stage;
+
+import java.util.Locale;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.function.Consumer;
+
+/**
+ * The main window: controls on the left, the 3D model (and the climate tab) in the middle, the
+ * picked patch on the right, site and warnings at the bottom. All methods run on the FX thread
+ * unless they say otherwise.
+ */
+public final class ViewerWindow {
+    static final Paint BACKDROP = new LinearGradient(0, 0, 0, 1, true, CycleMethod.NO_CYCLE,
+            new Stop(0, Color.rgb(0xF4, 0xF3, 0xF0)), new Stop(1, Color.rgb(0xDD, 0xDB, 0xD6)));
+
+    private final Stage stage;
+    private final ViewerActions actions;
+    private final BorderPane root = new BorderPane();
+    private final Pane subHost = new Pane();
+    private final Pane hourLayer = new Pane();
+    private final java.util.List<javafx.scene.Node> hourAnchors = new java.util.ArrayList<>();
+    private final StackPane viewStack = new StackPane();
+    private final PatchPanel panel = new PatchPanel();
+    private final ClimatePane climate = new ClimatePane();
+    private final ControlColumn controls;
+    private final Label hover = new Label();
+    private final Label status = new Label();
+    private final javafx.scene.Group north = new javafx.scene.Group();
+    private final VBox busy = new VBox(8);
+    private final ProgressBar bar = new ProgressBar(-1);
+    private final Label busyText = new Label();
+    private final AtomicBoolean cancelled = new AtomicBoolean();
+    private final TabPane tabs;
+    private SubScene sub;
+    private CameraRig rig;
+    private ModelView3D view;
+    private ViewerData data;
+    private long shownAtNanos;
+
+    public ViewerWindow(Stage stage, ViewerActions actions, double width, double height) {
+        this.stage = stage;
+        this.actions = actions;
+        this.controls = new ControlColumn(this, actions);
+        hover.getStyleClass().add("hover");
+        hover.setVisible(false);
+        hover.setMouseTransparent(true);
+        buildNorthArrow();
+        Button cancel = new Button("Cancel");
+        cancel.setOnAction(e -> {
+            cancelled.set(true);
+            busyText.setText("Cancelling\u2026");
+        });
+        bar.setPrefWidth(320);
+        busy.getChildren().addAll(busyText, bar, cancel);
+        busy.setAlignment(Pos.CENTER);
+        busy.getStyleClass().add("busy");
+        busy.setMaxSize(380, 130);
+        busy.setVisible(false);
+        subHost.setMinSize(0, 0);
+        subHost.getChildren().add(warmUp());
+        hourLayer.setMouseTransparent(true);
+        hourLayer.setPickOnBounds(false);
+        viewStack.getChildren().addAll(subHost, hourLayer, north, hover, busy);
+        StackPane.setAlignment(north, Pos.TOP_RIGHT);
+        StackPane.setMargin(north, new Insets(14));
+        StackPane.setAlignment(hover, Pos.TOP_LEFT);
+        viewStack.setMinSize(0, 0);
+        tabs = new TabPane(new Tab("Model", viewStack), new Tab("Climate at a glance", new ScrollPane(climate)));
+        tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        ScrollPane right = new ScrollPane(panel);
+        right.setFitToWidth(true);
+        right.setPrefWidth(350);
+        right.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+        ScrollPane left = new ScrollPane(controls);
+        left.setFitToWidth(true);
+        left.setPrefWidth(270);
+        left.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+        status.getStyleClass().add("status");
+        status.setMaxWidth(Double.MAX_VALUE);
+        root.setLeft(left);
+        root.setCenter(tabs);
+        root.setRight(right);
+        root.setBottom(status);
+        Scene scene = new Scene(root, width, height);
+        scene.getStylesheets().add(ViewerWindow.class.getResource("viewer.css").toExternalForm());
+        stage.setScene(scene);
+        stage.setTitle("Solmass viewer");
+    }
+
+    /**
+     * A tiny 3D sub-scene with the materials the model uses, shown while the data loads, so the
+     * pipeline compiles its 3D shaders before the model's first frame rather than during it.
+     */
+    private static Node warmUp() {
+        javafx.scene.image.WritableImage tex = new javafx.scene.image.WritableImage(2, 2);
+        javafx.scene.paint.PhongMaterial m = new javafx.scene.paint.PhongMaterial(Color.WHITE);
+        m.setDiffuseMap(tex);
+        m.setSpecularColor(Color.BLACK);
+        javafx.scene.shape.Box b = new javafx.scene.shape.Box(1, 1, 1);
+        b.setMaterial(m);
+        javafx.scene.shape.Box c = new javafx.scene.shape.Box(1, 1, 1);
+        c.setMaterial(new javafx.scene.paint.PhongMaterial(Color.GRAY));
+        javafx.scene.PerspectiveCamera cam = new javafx.scene.PerspectiveCamera(true);
+        cam.setTranslateZ(-4);
+        SubScene s = new SubScene(new javafx.scene.Group(b, c, new javafx.scene.AmbientLight(Color.WHITE)), 4, 4, true,
+                SceneAntialiasing.BALANCED);
+        s.setCamera(cam);
+        s.setOpacity(0.01);
+        s.setMouseTransparent(true);
+        return s;
+    }
+
+    private void buildNorthArrow() {
+        Circle ring = new Circle(28, Color.rgb(255, 255, 255, 0.85));
+        ring.setStroke(Color.rgb(70, 70, 70));
+        Polygon arrow = new Polygon(0, -8, 8, 20, 0, 14, -8, 20);
+        arrow.setFill(Color.rgb(40, 40, 40));
+        Text n = new Text("N");
+        n.setStyle("-fx-font-weight: bold; -fx-font-size: 13px;");
+        n.setFill(Color.rgb(40, 40, 40));
+        n.setX(-n.getLayoutBounds().getWidth() / 2);
+        n.setY(-12);
+        north.getChildren().addAll(ring, arrow, n);
+        north.setMouseTransparent(true);
+    }
+
+    public Stage stage() { return stage; }
+
+    public ViewerData data() { return data; }
+
+    PatchPanel panel() { return panel; }
+
+    ModelView3D view() { return view; }
+
+    SubScene subScene() { return sub; }
+
+    CameraRig rig() { return rig; }
+
+    /** Runs a loader in the background with the progress overlay; hands the data to {@link #show}. */
+    public void load(ViewerLoader loader, Consumer<ViewerWindow> whenShown) {
+        load(loader, whenShown, null);
+    }
+
+    /**
+     * As {@link #load(ViewerLoader, Consumer)}; {@code whenFailed} (FX thread, may be null) hears of a
+     * failed or cancelled load (a {@link CancellationException} when cancelled).
+     */
+    public void load(ViewerLoader loader, Consumer<ViewerWindow> whenShown, Consumer<Throwable> whenFailed) {
+        runBusy("Preparing\u2026", () -> loader.load(this::progress, cancelled::get), whenShown, whenFailed);
+    }
+
+    interface Job { ViewerData run() throws Exception; }
+
+    void runBusy(String what, Job job, Consumer<ViewerWindow> whenShown, Consumer<Throwable> whenFailed) {
+        cancelled.set(false);
+        busyText.setText(what);
+        bar.setProgress(-1);
+        busy.setVisible(true);
+        Thread t = new Thread(() -> {
+            try {
+                ViewerData d = job.run();
+                if (Boolean.getBoolean("solmass.viewer.timing")) System.err.printf("viewer: data loaded at %.2f%n", System.nanoTime() / 1e9 % 1000);
+                if (d == null || cancelled.get()) throw new CancellationException();
+                progress(-1, "Building the 3D view\u2026");
+                long t1 = System.nanoTime();
+                ModelView3D.Prepared prep = ModelView3D.Prepared.of(d);
+                if (Boolean.getBoolean("solmass.viewer.timing")) System.err.printf("viewer: meshes prepared in %.2f s%n", (System.nanoTime() - t1) / 1e9);
+                Platform.runLater(() -> {
+                    show(d, prep);
+                    busy.setVisible(false);
+                    if (whenShown != null) whenShown.accept(this);
+                });
+            } catch (CancellationException e) {
+                Platform.runLater(() -> {
+                    busy.setVisible(false);
+                    status.setText(data == null ? "Cancelled: nothing to show." : "Cancelled: showing the previous results.");
+                    if (whenFailed != null) whenFailed.accept(e);
+                });
+            } catch (Exception | OutOfMemoryError e) {
+                Platform.runLater(() -> {
+                    busy.setVisible(false);
+                    status.setText("Failed: " + e.getMessage());
+                    if (whenFailed != null) whenFailed.accept(e);
+                });
+            }
+        }, "solmass-viewer-job");
+        t.setDaemon(true);
+        t.start();
+    }
+
+    private void progress(double f, String msg) {
+        Platform.runLater(() -> {
+            bar.setProgress(f < 0 ? -1 : f);
+            if (msg != null) busyText.setText(msg);
+        });
+    }
+
+    /** Puts data on show (FX thread). */
+    public void show(ViewerData d, ModelView3D.Prepared prep) {
+        this.data = d;
+        stage.setTitle("Solmass \u2014 " + d.title());
+        long t0 = System.nanoTime();
+        view = new ModelView3D(d, prep);
+        long t1 = System.nanoTime();
+        rig = new CameraRig(prep.frame().radiusM(), prep.focus());
+        javafx.scene.Group world = new javafx.scene.Group(view.node(), rig.node());
+        SunPathView.Built sp = SunPathView.build(d.sunPath(), prep.frame().radiusM());
+        view.sunPathGroup().getChildren().setAll(sp.group());
+        hourAnchors.clear();
+        hourLayer.getChildren().clear();
+        for (int i = 0; i < sp.labelBeads().size(); i++) {
+            Label l = new Label(sp.labels().get(i));
+            l.getStyleClass().add("hour-label");
+            hourAnchors.add(sp.labelBeads().get(i));
+            hourLayer.getChildren().add(l);
+        }
+        boolean msaa = Platform.isSupported(javafx.application.ConditionalFeature.SCENE3D)
+                && !"false".equals(System.getProperty("solmass.viewer.msaa"));
+        sub = new SubScene(world, 10, 10, true, msaa ? SceneAntialiasing.BALANCED : SceneAntialiasing.DISABLED);
+        sub.setFill(BACKDROP);
+        sub.setCamera(rig.camera());
+        sub.widthProperty().bind(subHost.widthProperty());
+        sub.heightProperty().bind(subHost.heightProperty());
+        subHost.getChildren().setAll(sub);
+        rig.attach(sub);
+        rig.headingProperty().addListener((o, a, b) -> north.setRotate(-b.doubleValue()));
+        north.setRotate(-rig.headingDeg());
+        rig.movesProperty().addListener((o, a, b) -> placeHourLabels());
+        sub.widthProperty().addListener((o, a, b) -> placeHourLabels());
+        sub.heightProperty().addListener((o, a, b) -> placeHourLabels());
+        sub.addEventHandler(javafx.scene.input.MouseEvent.MOUSE_CLICKED, e -> {
+            if (e.isStillSincePress() && e.getButton() == javafx.scene.input.MouseButton.PRIMARY) pick(e.getPickResult());
+        });
+        sub.setOnMouseMoved(e -> hoverAt(e.getPickResult(), e.getX(), e.getY()));
+        sub.setOnMouseExited(e -> hover.setVisible(false));
+        long t2 = System.nanoTime();
+        panel.setData(d);
+        climate.show(d);
+        long t3 = System.nanoTime();
+        controls.setData(d);
+        long t4 = System.nanoTime();
+        if (Boolean.getBoolean("solmass.viewer.timing")) {
+            System.err.printf("viewer: meshes %.2f s, scene %.2f s, panels %.2f s, colours %.2f s%n",
+                    (t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9, (t4 - t3) / 1e9);
+        }
+        view.sunPathGroup().setVisible(controls.sunPathOn());
+        controls.setZonesAvailable(view.hasZones());
+        view.zoneGroup().setVisible(view.hasZones() && controls.zonesOn());
+        Platform.runLater(this::placeHourLabels);
+        status.setText(statusLine(d));
+        String q = System.getProperty("solmass.viewer.quantity");
+        if (q != null) controls.select(q);
+        String thr = System.getProperty("solmass.viewer.threshold");
+        if (thr != null) controls.setThreshold(Double.parseDouble(thr));
+        String v = System.getProperty("solmass.viewer.view");
+        if (v != null) rig.preset(v);
+        if (v != null && v.startsWith("sun")) controls.setSunPath(true);
+        if ("climate".equals(v)) tabs.getSelectionModel().select(1);
+        if (v != null && v.startsWith("patch")) selectPatch(Math.min(d.patches().size() - 1, d.patches().size() / 3));
+        shownAtNanos = System.nanoTime();
+        if (Boolean.getBoolean("solmass.viewer.timing")) System.err.printf("viewer: data on show at %.2f%n", shownAtNanos / 1e9 % 1000);
+    }
+
+    private String statusLine(ViewerData d) {
+        StringBuilder s = new StringBuilder(String.format(Locale.ROOT, "Site %.4f\u00b0 %s, %.4f\u00b0 %s \u00b7 %s \u00b7 %,d patches on %d blocks",
+                Math.abs(d.latitudeDeg()), d.latitudeDeg() >= 0 ? "N" : "S", Math.abs(d.longitudeDeg()),
+                d.longitudeDeg() >= 0 ? "E" : "W", d.zone(), d.patches().size(), d.model().blockNames().size()));
+        for (String w : d.warnings()) s.append("  \u26a0 ").append(w);
+        return s.toString();
+    }
+
+    /** Recolours the patches (called by the controls). */
+    void applyColours(ColourScale scale, int[] cells) {
+        if (view != null) view.recolour(scale, cells);
+    }
+
+    void setZonesVisible(boolean on) {
+        if (view != null) view.zoneGroup().setVisible(on);
+    }
+
+    void setSunPathVisible(boolean on) {
+        if (view != null) view.sunPathGroup().setVisible(on);
+        placeHourLabels();
+    }
+
+    /** Puts the hour numbers next to the labelled beads as seen through the camera. */
+    private void placeHourLabels() {
+        boolean on = view != null && view.sunPathGroup().isVisible();
+        hourLayer.setVisible(on);
+        if (!on) return;
+        for (int i = 0; i < hourAnchors.size(); i++) {
+            Point2D s = hourAnchors.get(i).localToScreen(0, 0, 0);
+            Node l = hourLayer.getChildren().get(i);
+            Point2D p = s == null ? null : hourLayer.screenToLocal(s);
+            boolean ok = p != null && Double.isFinite(p.getX()) && Double.isFinite(p.getY());
+            l.setVisible(ok);
+            if (ok) l.relocate(p.getX() + 6, p.getY() - 18);
+        }
+    }
+
+    void preset(String v) {
+        if (rig != null) rig.preset(v);
+    }
+
+    /** Handles a pick: a patch opens in the side panel; anything else clears it. */
+    void pick(PickResult r) {
+        int p = patchOf(r);
+        panel.show(p);
+        view.select(p >= 0 ? data.patches().get(p) : null);
+        if (p < 0 && r != null && r.getIntersectedNode() != null) {
+            int b = view.blockAt(r.getIntersectedNode(), r.getIntersectedFace());
+            if (b >= 0) status.setText("Block " + data.model().blockNames().get(b)
+                    + (data.blockAnalysed()[b] ? " (analysed)" : " (context, not analysed)"));
+        }
+    }
+
+    /** Selects a patch by index as a click would. */
+    public void selectPatch(int p) {
+        panel.show(p);
+        view.select(p >= 0 ? data.patches().get(p) : null);
+    }
+
+    private int patchOf(PickResult r) {
+        if (r == null || r.getIntersectedNode() == null || view == null) return -1;
+        return view.patchAt(r.getIntersectedNode(), r.getIntersectedFace(), r.getIntersectedTexCoord());
+    }
+
+    private void hoverAt(PickResult r, double x, double y) {
+        int p = patchOf(r);
+        if (p < 0) {
+            hover.setVisible(false);
+            return;
+        }
+        Quantity q = controls.quantity();
+        if (q == null) {
+            hover.setVisible(false);
+            return;
+        }
+        double v = data.table().column(q.column())[p];
+        hover.setText(PatchPanel.fmt(v, Math.abs(v) < 10 ? 2 : 0) + (q.unit().isEmpty() ? "" : " " + Quantity.pretty(q.unit()))
+                + "  \u00b7  " + data.patches().get(p).id());
+        hover.setTranslateX(x + 14);
+        hover.setTranslateY(y + 10);
+        hover.setVisible(true);
+    }
+
+    /** The 3D view rendered at {@code scale} times its on-screen size. */
+    public javafx.scene.image.WritableImage snapshot3D(double scale) {
+        javafx.scene.SnapshotParameters sp = new javafx.scene.SnapshotParameters();
+        sp.setDepthBuffer(true);
+        sp.setFill(BACKDROP);
+        sp.setTransform(javafx.scene.transform.Transform.scale(scale, scale));
+        return sub.snapshot(sp, null);
+    }
+
+    /** The whole window as on screen. */
+    public javafx.scene.image.WritableImage snapshotWindow() {
+        return stage.getScene().snapshot(null);
+    }
+
+    /** Nanotime when the last data set was put on show. */
+    long shownAtNanos() { return shownAtNanos; }
+
+    void setStatus(String s) { status.setText(s); }
+
+    /** Colours the model by a column, as the selector would. */
+    public void controlsSelect(String column) { controls.select(column); }
+
+    /** Picks out the patches at or above a value in the current quantity's unit (NaN: off). */
+    public void setThreshold(double value) { controls.setThreshold(value); }
+
+    void rerun(RerunRequest req) {
+        runBusy("Re-running the analysis\u2026", () -> actions.rerun(req, this::progress, cancelled::get), null, null);
+    }
+
+    Node root() { return root; }
+
+    static HBox row(Node... n) {
+        HBox h = new HBox(6, n);
+        h.setAlignment(Pos.CENTER_LEFT);
+        for (Node x : n) if (x instanceof javafx.scene.control.Control) HBox.setHgrow(x, Priority.SOMETIMES);
+        return h;
+    }
+}

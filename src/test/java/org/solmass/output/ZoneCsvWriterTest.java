@@ -1,0 +1,48 @@
+package org.solmass.output;
+
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.solmass.metrics.BestPlane;
+import org.solmass.metrics.PvZones;
+import org.solmass.study.Study;
+import org.solmass.study.StudyReader;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** zones.csv carries the caution in its '#' lines and reads back as a plain table. */
+class ZoneCsvWriterTest {
+    @TempDir Path dir;
+
+    @Test
+    void zonesCsvStartsWithTheCautionAndReadsBack() throws Exception {
+        Path sf = dir.resolve("s.json");
+        Files.writeString(sf, "{\"model\": {\"file\": \"m.obj\"}, \"site\": {\"latitude\": 51, \"longitude\": 10, \"zone\": \"+01:00\"}}");
+        Study study = StudyReader.read(sf);
+        PvZones.Zone z = new PvZones.Zone(1, 0, "Block, north", 3, "B0-S3", new int[] {0, 1}, 12.5, 1000.0, 12500.0, 4.25,
+                2000.0, 30, 180, List.of());
+        PvZones.Result r = new PvZones.Result(new BestPlane(36, 182, 1327.4), new double[2], new int[] {1, 1}, List.of(z));
+        Path f = dir.resolve("zones.csv");
+        ZoneCsvWriter.write(f, r.zones(), ResultsFolder.zoneComments(study, r, List.of()));
+        List<String> lines = Files.readAllLines(f);
+        assertTrue(lines.get(0).startsWith("# "));
+        String head = String.join("\n", lines.subList(0, 4));
+        assertTrue(head.contains("Indicative only") && head.contains("fire setbacks") && head.contains("licensed practice"), head);
+        try (CSVParser p = CSVFormat.RFC4180.builder().setCommentMarker('#').setHeader().setSkipHeaderRecord(true).get()
+                .parse(Files.newBufferedReader(f))) {
+            assertEquals(ZoneCsvWriter.COLUMNS, p.getHeaderNames());
+            List<CSVRecord> rows = p.getRecords();
+            assertEquals(1, rows.size());
+            assertEquals("Block, north", rows.get(0).get("block"));
+            assertEquals("12.50", rows.get(0).get("area_m2"));
+            assertEquals("2000.0", rows.get(0).get("yield_kwh"));
+        }
+    }
+}

@@ -1,0 +1,46 @@
+package org.solmass.viewer;
+
+import javafx.geometry.Point3D;
+import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+/** The model-to-scene conventions (x east, y north, z up; azimuth from north clockwise: common practice). */
+class SceneFrameTest {
+    private static final double E = 1e-12;
+
+    @Test
+    void sunDirectionsLandOnTheCompassAxesOfTheScene() {
+        assertPoint(new Point3D(0, 0, 2), SunPathView.onDome(2, 0, 0));     // north -> +z
+        assertPoint(new Point3D(2, 0, 0), SunPathView.onDome(2, 90, 0));    // east -> +x
+        assertPoint(new Point3D(0, 0, -2), SunPathView.onDome(2, 180, 0));  // south -> -z
+        assertPoint(new Point3D(0, -2, 0), SunPathView.onDome(2, 123, 90)); // zenith -> -y (JavaFX y points down)
+    }
+
+    @Test
+    void modelPointsMapOntoTheSameAxesAsSunDirections() {
+        SceneFrame f = SceneFrame.of(new double[] {500_000, 5_300_000, 20, 500_100, 5_300_080, 50});
+        // centre of a map-coordinate site goes to the origin, ground level to y = 0, precision kept
+        assertEquals(0, f.fx(500_050), 0);
+        assertEquals(0, f.fz(5_300_040), 0);
+        assertEquals(0, f.fy(20), 0);
+        assertEquals(0.01f, f.fx(500_050.01), 1e-4);
+        // 10 m north, 10 m east, 10 m up
+        assertEquals(10, f.fz(5_300_050), 1e-6);
+        assertEquals(10, f.fx(500_060), 1e-6);
+        assertEquals(-10, f.fy(30), 1e-6);
+    }
+
+    @Test
+    void theSceneMappingIsARotationNotAMirror() {
+        // east x north = up in the model; the images (+x) x (+z) must equal the image of up (-y)
+        Point3D east = new Point3D(1, 0, 0), north = new Point3D(0, 0, 1);
+        assertPoint(new Point3D(0, -1, 0), east.crossProduct(north));
+    }
+
+    private static void assertPoint(Point3D expected, Point3D actual) {
+        assertEquals(expected.getX(), actual.getX(), E);
+        assertEquals(expected.getY(), actual.getY(), E);
+        assertEquals(expected.getZ(), actual.getZ(), E);
+    }
+}
