@@ -25,8 +25,9 @@ public final class ResultFiles {
     public static List<Path> write(AnalysisRun.Outcome o) {
         RunRecord run = RunRecord.of(Main.version(), o.study(), o.weather().timeBase().label(), o.counts(),
                 o.timingsS(), Instant.now());
+        List<String> notes = new java.util.ArrayList<>(o.metrics() == null ? List.of() : MetricsStep.notes(o.metrics()));
+        for (String w : o.warnings()) notes.add("warning: " + w); // the warnings analyse printed, kept with the results
         return ResultsFolder.write(new ResultsFolder.Results(o.study(), o.model(), o.table(),
-                o.result().monthHourWm2(), run, List.of(CAUTION), o.metrics() == null ? null : o.metrics().pv(),
-                o.metrics() == null ? List.of() : MetricsStep.notes(o.metrics())));
+                o.result().monthHourWm2(), run, List.of(CAUTION), o.metrics() == null ? null : o.metrics().pv(), notes));
     }
 }

@@ -127,5 +127,10 @@ class RunRobustnessTest {
         String err = Files.readString(log);
         assertTrue(err.contains("solmass: warning: the longitude 51.0000 is 36 degrees from the standard meridian 15.0 of the zone Europe/Berlin"), err);
         assertTrue(err.contains("[site-lat-lon-swapped]"), err);
+        // and summary.json keeps it beside the cautions
+        JsonNode texts = new ObjectMapper().readTree(dir.resolve("w").resolve("summary.json").toFile()).get("cautions");
+        boolean kept = false;
+        for (JsonNode t : texts) kept |= t.asText().startsWith("warning: the longitude 51.0000") && t.asText().endsWith("[site-lat-lon-swapped]");
+        assertTrue(kept, texts.toString());
     }
 }
