@@ -15,8 +15,9 @@ import java.util.concurrent.Callable;
 
 /** {@code solmass analyse}: the main job, shading-aware irradiation of every patch of a model. */
 @Command(name = "analyse", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Shading-aware irradiation of every patch of a massing model: beam, sky diffuse and",
-                "reflected light with the obstruction of the neighbouring blocks, summed to months and the year.",
+        description = {"The main job: shading-aware irradiation of every patch of a massing model.",
+                "Beam, sky diffuse and reflected light with the obstruction of the neighbouring blocks,",
+                "summed to months and the year.",
                 "Give a study file, or the model and site as flags; flags override the study file.",
                 "Writes patches.csv, zones.csv, summary.json, map.png, patches.gltf and",
                 "run.json to the output folder."})

@@ -24,8 +24,9 @@ import java.util.concurrent.Callable;
  * districts of growing size, to measure how time and memory grow with the patch count.
  */
 @Command(name = "bench-analysis", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Times the whole analysis on seeded synthetic districts (invented geometry) of growing",
-                "size: load, patches, scene, visibility and irradiation, and the peak heap. Nothing is written."})
+        description = {"Times the whole analysis on synthetic districts of growing size.",
+                "Seeded invented geometry; reports load, patches, scene and irradiation times and the peak heap.",
+                "Nothing is written."})
 public final class BenchAnalysisCommand implements Callable<Integer> {
     @Option(names = "--patches", split = ",", defaultValue = "25000,50000,100000", paramLabel = "N",
             description = "target patch counts (default ${DEFAULT-VALUE})") int[] targets;

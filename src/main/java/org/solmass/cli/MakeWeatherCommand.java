@@ -12,8 +12,8 @@ import java.util.concurrent.Callable;
 
 /** {@code solmass make-weather}: an invented demo weather year (and its month-hour table) for a site. */
 @Command(name = "make-weather", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Writes an INVENTED weather year for demonstrations: the site's clear sky dimmed by a",
-                "seeded random cloud cover. Not measured data: never use it for a real design."})
+        description = {"Writes an INVENTED demo weather year (never for a real design).",
+                "The site's clear sky dimmed by a seeded random cloud cover; not measured data."})
 public final class MakeWeatherCommand implements Callable<Integer> {
     @Option(names = "--lat", required = true, paramLabel = "DEG", description = "latitude, degrees north") double lat;
     @Option(names = "--lon", required = true, paramLabel = "DEG", description = "longitude, degrees east") double lon;

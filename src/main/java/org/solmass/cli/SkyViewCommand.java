@@ -33,8 +33,8 @@ import java.util.concurrent.ForkJoinPool;
 
 /** {@code solmass sky-view}: sky and ground view factors of every patch of a model. */
 @Command(name = "sky-view", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Sky, ground and obstruction view factors of every patch of a massing model,",
-                "by cosine-weighted stratified hemisphere ray casting. Writes DIR/patches.csv."})
+        description = {"Sky, ground and obstruction view factors of every patch of a massing model.",
+                "Cosine-weighted stratified hemisphere ray casting; writes DIR/patches.csv."})
 public final class SkyViewCommand implements Callable<Integer> {
     @Parameters(paramLabel = "MODEL.obj", description = "massing model (OBJ)") Path model;
     @Option(names = "--up", paramLabel = "y|z", defaultValue = "z", description = "model up axis (default ${DEFAULT-VALUE})") String up;

@@ -17,8 +17,9 @@ import java.util.concurrent.Callable;
 
 /** {@code solmass view}: the 3D viewer on a study (analysed first) or on a finished results folder. */
 @Command(name = "view", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Opens the 3D viewer. On a study file it analyses first (with a progress bar and a cancel",
-                "button) and writes the results folder; on a results folder it opens the finished results."})
+        description = {"Opens the 3D viewer on a study or a results folder.",
+                "On a study file it analyses first (with a progress bar and a cancel button) and writes the",
+                "results folder; on a results folder it opens the finished results."})
 public final class ViewCommand implements Callable<Integer> {
     @Parameters(paramLabel = "STUDY.json|RESULTS-FOLDER") Path target;
     @Option(names = "--against", paramLabel = "RESULTS-A", description = "with a results folder: also show the differences from this other variant (delta_* quantities, diverging ramp)") Path against;
