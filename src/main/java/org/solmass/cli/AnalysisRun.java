@@ -161,6 +161,11 @@ public final class AnalysisRun {
         Set<String> analysed = analysedBlocks(study, model);
         requireMemoryForPatches(study, model, analysed);
         PatchSet patches = Patcher.build(model, new PatchOptions(study.patchM(), analysed, false));
+        double hidden = patches.hiddenAreaM2();
+        if (hidden > 0.5) {
+            warnings.add(String.format(java.util.Locale.ROOT, "%.0f m2 of analysed faces lie against a touching block "
+                    + "(coincident faces with opposite normals) and were left out: they face solid mass", hidden));
+        }
         Set<String> context = new LinkedHashSet<>(model.blockNames());
         context.removeAll(analysed);
         List<org.solmass.surface.Patch> contextPatches = context.isEmpty() ? List.of()

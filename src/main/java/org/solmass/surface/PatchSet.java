@@ -32,6 +32,20 @@ public record PatchSet(MassingModel model, PatchOptions options, List<Surface> s
         return m;
     }
 
+    /**
+     * Area of the analysed surfaces left unpatched because it faces a touching block
+     * ({@link HiddenFaces}), square metres (undersides, unless patched, are not counted).
+     */
+    public double hiddenAreaM2() {
+        double all = 0;
+        for (Surface s : surfaces) {
+            if (!analysedBlocks[s.block()]) continue;
+            if (s.kind() == SurfaceKind.UNDERSIDE && !options.includeUndersides()) continue;
+            all += s.areaM2();
+        }
+        return Math.max(0, all - totalPatchAreaM2());
+    }
+
     /** Sum of the patch areas, square metres. */
     public double totalPatchAreaM2() {
         double s = 0;

@@ -55,14 +55,20 @@ public final class Patcher {
         boolean[] analysed = selectBlocks(model, options.analysedBlocks());
         double s = options.patchSizeM();
         for (Surface sf : surfaces) if (analysed[sf.block()]) checkGridSize(model, sf, s); // first offender reported
+        // Faces hidden against a touching block are not patched (HiddenFaces).
+        Geometry[] exposed = HiddenFaces.exposed(surfaces);
         // Per surface in parallel: cut, merge slivers, build patches with surface-local indices.
         List<List<Patch>> perSurface = IntStream.range(0, surfaces.size()).parallel().mapToObj(i -> {
             Surface sf = surfaces.get(i);
             if (!analysed[sf.block()]) return List.<Patch>of();
             if (sf.kind() == SurfaceKind.UNDERSIDE && !options.includeUndersides()) return List.<Patch>of();
-            List<Piece> pieces = mergeSlivers(cut(sf.polygon(), s), SLIVER_FRACTION * s * s);
-            List<Patch> ps = new ArrayList<>(pieces.size());
-            for (Piece p : pieces) if (p.alive) ps.add(toPatch(ps.size(), model, sf, p, s));
+            List<Patch> ps = new ArrayList<>();
+            Geometry g = exposed[i];
+            for (int k = 0; k < g.getNumGeometries(); k++) {
+                if (!(g.getGeometryN(k) instanceof Polygon part) || part.isEmpty()) continue;
+                List<Piece> pieces = mergeSlivers(cut(part, s), SLIVER_FRACTION * s * s);
+                for (Piece p : pieces) if (p.alive) ps.add(toPatch(ps.size(), model, sf, p, s));
+            }
             return ps;
         }).toList();
         List<Patch> patches = new ArrayList<>();
