@@ -206,7 +206,7 @@ public final class AnalysisRun {
         counts.put("steps", (long) weather.size());
         counts.put("sun_directions", (long) r.sunDirections());
         counts.put("rays_per_patch", (long) org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()));
-        ResultTable table = table(patches, r);
+        ResultTable table = table(patches, r, weather.timeBase() == TimeBase.HOURLY_YEAR);
         MetricsStep.addColumns(table, metrics);
         return new Outcome(study, model, patches, weather, r, table, warnings, counts, t, metrics);
     }
@@ -251,7 +251,7 @@ public final class AnalysisRun {
     }
 
     /** Per-patch result columns in the order of docs/outputs.md. */
-    static ResultTable table(PatchSet patches, IrradiationResult r) {
+    static ResultTable table(PatchSet patches, IrradiationResult r, boolean hourlyYear) {
         ResultTable tb = new ResultTable(patches.patches());
         int n = r.size();
         tb.put("sky_view_factor", "", r.skyViewFactor());
@@ -270,10 +270,12 @@ public final class AnalysisRun {
         tb.put("shading_loss_pct", "%", loss);
         tb.put("annual_kwh", "kWh", kwh);
         for (int m = 0; m < 12; m++) tb.put(String.format("m%02d_kwh_m2", m + 1), "kWh/m2", r.monthly()[m]);
-        double[] share = new double[n];
-        for (int p = 0; p < n; p++) share[p] = r.siteSunshineHours() > 0 ? 100 * r.sunshineHours()[p] / r.siteSunshineHours() : 0;
-        tb.put("sunshine_h", "h", r.sunshineHours());
-        tb.put("sunshine_share_pct", "%", share);
+        if (hourlyYear) { // sunshine duration needs real hours: an average day's mean DNI says nothing about it
+            double[] share = new double[n];
+            for (int p = 0; p < n; p++) share[p] = r.siteSunshineHours() > 0 ? 100 * r.sunshineHours()[p] / r.siteSunshineHours() : 0;
+            tb.put("sunshine_h", "h", r.sunshineHours());
+            tb.put("sunshine_share_pct", "%", share);
+        }
         return tb;
     }
 

@@ -35,7 +35,7 @@ class CompareCommandTest {
         System.setOut(new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8));
         try {
             assertEquals(0, Main.execute("analyse", "--model", model.toString(), "--lat", "51", "--lon", "10", "--zone", "+01:00",
-                    "--rays", "64", "--patch", "2", "--no-gltf", "--threads", "2", "--out", out.toString(), "-q"));
+                    "--rays", "64", "--patch", "2", "--time-base", "hourly-year", "--no-gltf", "--threads", "2", "--out", out.toString(), "-q"));
         } finally {
             System.setOut(old);
         }
