@@ -39,13 +39,15 @@ public final class MapRenderer {
      * @param title first part of the title line (the study name)
      * @param rangeLo low end of the colour range; NaN for automatic (2nd percentile)
      * @param rangeHi high end of the colour range; NaN for automatic (98th percentile)
-     * @param viewAzimuthDeg azimuth the axonometric view looks from, degrees from north clockwise
+     * @param viewAzimuthDeg azimuth the axonometric view looks from, degrees from north clockwise; NaN
+     *                       for automatic: the diagonal view (from NE, SE, SW or NW) that shows the most
+     *                       analysed patch area ({@link #bestViewAzimuth})
      * @param viewElevationDeg elevation of the axonometric view above the horizon, degrees
      */
     public record Options(int widthPx, int heightPx, String title, double rangeLo, double rangeHi,
                           double viewAzimuthDeg, double viewElevationDeg) {
         public static Options of(int widthPx, int heightPx, String title) {
-            return new Options(widthPx, heightPx, title, Double.NaN, Double.NaN, 225, 30);
+            return new Options(widthPx, heightPx, title, Double.NaN, Double.NaN, Double.NaN, 30);
         }
 
         public Options withRange(double lo, double hi) {
@@ -132,10 +134,11 @@ public final class MapRenderer {
 
         int panelTop = TITLE_H, panelH = Math.max(40, h - TITLE_H - LEGEND_H);
         int axoW = (int) Math.round((w - 3 * MARGIN) * 0.56), planW = w - 3 * MARGIN - axoW;
-        Vec3 eye = Vec3.fromAzimuthElevation(o.viewAzimuthDeg(), o.viewElevationDeg());
+        MapScene scene = new MapScene(model, analysedBlock, patches, values, lo, hi, x.diverging(), x.outlines());
+        double az = Double.isNaN(o.viewAzimuthDeg()) ? bestViewAzimuth(scene, o.viewElevationDeg()) : o.viewAzimuthDeg();
+        Vec3 eye = Vec3.fromAzimuthElevation(az, o.viewElevationDeg());
         MapView axo = MapView.looking(eye);
         MapView plan = MapView.looking(Vec3.UP);
-        MapScene scene = new MapScene(model, analysedBlock, patches, values, lo, hi, x.diverging(), x.outlines());
         int captionH = 24, tileH = panelH - captionH;
         int[][] plPixels = new int[1][];
         Thread planThread = new Thread(() -> plPixels[0] = scene.draw(plan, planW * 2, tileH * 2), "solmass-map-plan");
@@ -150,13 +153,38 @@ public final class MapRenderer {
         if (plPixels[0] == null) throw new IllegalStateException("the plan panel failed to render");
         panel(g, axoPixels, axo, MARGIN, panelTop, axoW, panelH, captionH,
                 String.format(java.util.Locale.ROOT, "View from the %s, %.0f\u00b0 above the horizon",
-                        compass(o.viewAzimuthDeg()), o.viewElevationDeg()));
+                        compass(az), o.viewElevationDeg()));
         panel(g, plPixels[0], plan, 2 * MARGIN + axoW, panelTop, planW, panelH, captionH, "Plan, north up");
 
         title(g, w, o.title(), label, unit);
         legend(g, w, h - LEGEND_H, lo, hi, label, unit, auto, scene.hasMissing(), x);
         g.dispose();
         return img;
+    }
+
+    /** Diagonal view azimuths tried by {@link #bestViewAzimuth}, in order of preference on ties. */
+    static final double[] VIEW_AZIMUTHS = {225, 135, 315, 45};
+
+    /**
+     * The diagonal view that shows the most analysed patches: each of {@link #VIEW_AZIMUTHS} is drawn
+     * small (320 x 240) and the pixels in patch colours (not neutral grey, not background) counted.
+     */
+    static double bestViewAzimuth(MapScene scene, double elevationDeg) {
+        double best = VIEW_AZIMUTHS[0];
+        long bestCount = -1;
+        for (double az : VIEW_AZIMUTHS) {
+            int[] px = scene.draw(MapView.looking(Vec3.fromAzimuthElevation(az, elevationDeg)), 320, 240);
+            long n = 0;
+            for (int p : px) {
+                int r = (p >> 16) & 255, g = (p >> 8) & 255, b = p & 255;
+                if (Math.max(r, Math.max(g, b)) - Math.min(r, Math.min(g, b)) > 12 && (p & 0xFFFFFF) != GROUND) n++;
+            }
+            if (n > bestCount) {
+                bestCount = n;
+                best = az;
+            }
+        }
+        return best;
     }
 
     /**
