@@ -1,9 +1,5 @@
 package org.solmass.irradiation;
 
-import org.solmass.surface.Patch;
-
-import java.util.List;
-
 /**
  * Every point the pipeline computes first-pass irradiance for, in one flat layout: the analysed
  * patches first (index = patch index), then the coarse patches of context blocks (reflectors only),
@@ -69,9 +65,5 @@ final class Receivers {
         Receivers build() {
             return new Receivers(n, analysed, origin, normal, seed, surface);
         }
-    }
-
-    static int countOf(List<Patch> a, List<Patch> b, int probes) {
-        return a.size() + b.size() + probes;
     }
 }

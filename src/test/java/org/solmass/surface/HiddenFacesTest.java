@@ -1,6 +1,7 @@
 package org.solmass.surface;
 
 import org.junit.jupiter.api.Test;
+import org.solmass.testkit.ObjBoxes;
 import org.solmass.model.ModelOptions;
 import org.solmass.model.ObjReader;
 
@@ -14,19 +15,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
  * box's east wall is covered from 0 to 6 m. Geometry: the exposed areas are exact rectangles.
  */
 class HiddenFacesTest {
-    static String box(double x0, double x1, double h, int base) {
-        StringBuilder b = new StringBuilder();
-        double[][] v = {{x0, 0, 0}, {x1, 0, 0}, {x1, 8, 0}, {x0, 8, 0}, {x0, 0, h}, {x1, 0, h}, {x1, 8, h}, {x0, 8, h}};
-        for (double[] p : v) b.append("v ").append(p[0]).append(' ').append(p[1]).append(' ').append(p[2]).append('\n');
-        int[][] f = {{5, 6, 7, 8}, {1, 2, 6, 5}, {2, 3, 7, 6}, {3, 4, 8, 7}, {4, 1, 5, 8}};
-        for (int[] q : f) b.append("f ").append(q[0] + base).append(' ').append(q[1] + base).append(' ')
-                .append(q[2] + base).append(' ').append(q[3] + base).append('\n');
-        return b.toString();
-    }
-
     @Test
     void facesAgainstATouchingBlockAreNotPatchedAndExposedPartsAreExact() {
-        String obj = "o tall\n" + box(0, 10, 10, 0) + "o low\n" + box(10, 20, 6, 8);
+        String obj = "o tall\n" + ObjBoxes.box(0, 0, 10, 8, 10, 0) + "o low\n" + ObjBoxes.box(10, 0, 20, 8, 6, 8);
         var m = ObjReader.parse(obj, "touching.obj", ModelOptions.defaults()).model();
         PatchSet ps = Patcher.build(m, new PatchOptions(1.0, Set.of(), false));
         double tallEast = 0, lowWest = 0;
@@ -42,7 +33,7 @@ class HiddenFacesTest {
 
     @Test
     void boxesThatDoNotTouchKeepEveryFace() {
-        String obj = "o a\n" + box(0, 10, 10, 0) + "o b\n" + box(10.5, 20, 6, 8);
+        String obj = "o a\n" + ObjBoxes.box(0, 0, 10, 8, 10, 0) + "o b\n" + ObjBoxes.box(10.5, 0, 20, 8, 6, 8);
         var m = ObjReader.parse(obj, "apart.obj", ModelOptions.defaults()).model();
         PatchSet ps = Patcher.build(m, new PatchOptions(1.0, Set.of(), false));
         assertEquals(0, ps.hiddenAreaM2(), 1e-9);
