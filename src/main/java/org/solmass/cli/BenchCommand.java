@@ -3,6 +3,7 @@ package org.solmass.cli;
 import org.solmass.InputException;
 import org.solmass.bench.SyntheticDistrict;
 import org.solmass.model.MassingModel;
+import org.solmass.scene.BundleTracer;
 import org.solmass.scene.HemisphereSampler;
 import org.solmass.scene.Scene;
 import org.solmass.scene.SkyViewCalculator;
@@ -21,8 +22,9 @@ import java.util.ArrayList;
 
 /**
  * {@code solmass bench}: times the ray-casting core on an invented, seeded district
- * ({@link SyntheticDistrict}): BVH build, occlusion and closest-hit rays per second on one thread and
- * on all threads, and a full sky-view-factor pass. Prints a table to stdout.
+ * ({@link SyntheticDistrict}): BVH build, occlusion rays per second one at a time and in bundles that
+ * share a patch origin (as the sky-view and irradiation passes trace them), closest-hit rays, on one
+ * thread and on all threads, and a full sky-view-factor pass. Prints a table to stdout.
  */
 @Command(name = "bench", mixinStandardHelpOptions = true,
         description = "Time BVH build, ray queries and sky view factors on a synthetic (invented) district.")
@@ -65,25 +67,34 @@ public final class BenchCommand implements Runnable {
         }
         Scene scene = built;
         double[] r = SyntheticDistrict.rays(m, Math.max(1, rays / 64), 64, scene.epsilon(), seed);
-        int n = r.length / 6;
+        double[] r1024 = SyntheticDistrict.rays(m, Math.max(1, rays / 1024), 1024, scene.epsilon(), seed);
+        int n = r.length / 6, n1024 = r1024.length / 6;
 
         System.err.println("solmass bench: warming up ...");
-        for (int i = 0; i < 3; i++) { runPass(scene, r, 0, n, true); runPass(scene, r, 0, n, false); }
-        double occ1 = best(() -> time(scene, r, 1, true)), occT = best(() -> time(scene, r, threads, true));
-        double cl1 = best(() -> time(scene, r, 1, false)), clT = best(() -> time(scene, r, threads, false));
-        long hits = runPass(scene, r, 0, n, true);
+        for (int i = 0; i < 3; i++) {
+            for (Kind k : Kind.values()) runPass(scene, k == Kind.BUNDLES_1024 ? r1024 : r, k, 0, k == Kind.BUNDLES_1024 ? n1024 : n);
+        }
+        double occ1 = best(() -> time(scene, r, 1, Kind.SINGLE)), occT = best(() -> time(scene, r, threads, Kind.SINGLE));
+        double b64 = best(() -> time(scene, r, 1, Kind.BUNDLES_64)), b64T = best(() -> time(scene, r, threads, Kind.BUNDLES_64));
+        double b1k = best(() -> time(scene, r1024, 1, Kind.BUNDLES_1024)), b1kT = best(() -> time(scene, r1024, threads, Kind.BUNDLES_1024));
+        double cl1 = best(() -> time(scene, r, 1, Kind.CLOSEST)), clT = best(() -> time(scene, r, threads, Kind.CLOSEST));
+        long hits = runPass(scene, r, Kind.SINGLE, 0, n);
+        long hits1k = runPass(scene, r1024, Kind.BUNDLES_1024, 0, n1024);
 
         PrintTable t = new PrintTable();
         t.row("district", blocks + " blocks, seed " + seed + " (invented)");
         t.row("triangles", String.format(Locale.ROOT, "%,d", scene.triangleCount()));
         t.row("BVH nodes / depth", String.format(Locale.ROOT, "%,d / %d", scene.nodeCount(), scene.maxDepth()));
         t.row("BVH build", String.format(Locale.ROOT, "%.1f ms CPU time (best of 5, 1 thread)", bestBuild));
-        t.row("timing rays", String.format(Locale.ROOT, "%,d (64 cosine-weighted per roof/facade point, %.1f%% occluded)",
+        t.row("timing rays", String.format(Locale.ROOT, "%,d as 64 cosine-weighted rays per roof/facade point (%.1f%% occluded);",
                 n, 100.0 * hits / n));
-        t.row("occlusion, 1 thread", mrays(n / occ1) + " (per CPU-second)");
-        t.row("occlusion, " + threads + " threads", mrays(n / occT) + " wall clock" + String.format(Locale.ROOT, "  (%.2f per thread)", n / occT / threads / 1e6));
-        t.row("closest hit, 1 thread", mrays(n / cl1) + " (per CPU-second)");
-        t.row("closest hit, " + threads + " threads", mrays(n / clT) + " wall clock");
+        t.row("", String.format(Locale.ROOT, "%,d as 1,024 per point, as sky-view and analyse cast them (%.1f%% occluded)",
+                n1024, 100.0 * hits1k / n1024));
+        String kernel = scene.bundleTracer().simd() ? "SIMD packets" : "scalar stream, no vector module";
+        t.row("occlusion, one ray at a time", mrays(n / occ1) + " 1 thread (per CPU-second), " + perThread(n, occT, threads));
+        t.row("occlusion, bundles of 64", mrays(n / b64) + " 1 thread (per CPU-second), " + perThread(n, b64T, threads) + ", " + kernel);
+        t.row("occlusion, bundles of 1,024", mrays(n1024 / b1k) + " 1 thread (per CPU-second), " + perThread(n1024, b1kT, threads) + ", " + kernel);
+        t.row("closest hit, one ray at a time", mrays(n / cl1) + " 1 thread (per CPU-second), " + perThread(n, clT, threads));
         if (patches > 0) {
             List<Patch> ps = SyntheticDistrict.samplePatches(m, patches, seed + 1);
             SkyViewCalculator.compute(scene, ps.subList(0, Math.min(ps.size(), 500)), raysPerPatch, seed, null, null);
@@ -115,20 +126,33 @@ public final class BenchCommand implements Runnable {
         return b;
     }
 
-    /** Seconds to trace all rays split over {@code threads} threads. */
-    private static double time(Scene scene, double[] r, int threads, boolean occlusion) throws Exception {
-        int n = r.length / 6;
+    private static String perThread(int n, double seconds, int threads) {
+        return String.format(Locale.ROOT, "%s on %d threads wall clock (%.2f per thread)", mrays(n / seconds), threads, n / seconds / threads / 1e6);
+    }
+
+    /** What a timing pass traces: rays one by one (any hit or closest hit), or per point as a bundle. */
+    enum Kind {
+        SINGLE(1), CLOSEST(1), BUNDLES_64(64), BUNDLES_1024(1024);
+
+        final int perPoint;
+
+        Kind(int perPoint) { this.perPoint = perPoint; }
+    }
+
+    /** Seconds to trace all rays split over {@code threads} threads (whole points per thread). */
+    private static double time(Scene scene, double[] r, int threads, Kind kind) throws Exception {
+        int points = r.length / 6 / kind.perPoint;
         if (threads == 1) { // CPU time of this thread: robust when other work shares the cores
             long t0 = CPU.getCurrentThreadCpuTime();
-            runPass(scene, r, 0, n, occlusion);
+            runPass(scene, r, kind, 0, points * kind.perPoint);
             return (CPU.getCurrentThreadCpuTime() - t0) / 1e9;
         }
         ExecutorService ex = Executors.newFixedThreadPool(threads);
         try {
             List<Callable<Long>> jobs = new ArrayList<>();
             for (int i = 0; i < threads; i++) {
-                int a = (int) ((long) n * i / threads), b = (int) ((long) n * (i + 1) / threads);
-                jobs.add(() -> runPass(scene, r, a, b, occlusion));
+                int a = (int) ((long) points * i / threads) * kind.perPoint, b = (int) ((long) points * (i + 1) / threads) * kind.perPoint;
+                jobs.add(() -> runPass(scene, r, kind, a, b));
             }
             long t0 = System.nanoTime();
             for (Future<Long> f : ex.invokeAll(jobs)) f.get();
@@ -138,17 +162,29 @@ public final class BenchCommand implements Runnable {
         }
     }
 
-    /** Traces rays [a, b); returns how many hit something. */
-    static long runPass(Scene scene, double[] r, int a, int b, boolean occlusion) {
-        Tracer t = scene.tracer();
+    /** Traces rays [a, b) (whole points for bundles); returns how many hit something. */
+    static long runPass(Scene scene, double[] r, Kind kind, int a, int b) {
         long hits = 0;
-        for (int i = a; i < b; i++) {
-            int j = 6 * i;
-            if (occlusion) {
-                if (t.occluded(r[j], r[j + 1], r[j + 2], r[j + 3], r[j + 4], r[j + 5], Double.POSITIVE_INFINITY)) hits++;
-            } else if (t.closestHit(r[j], r[j + 1], r[j + 2], r[j + 3], r[j + 4], r[j + 5], Double.POSITIVE_INFINITY) != Tracer.MISS) {
-                hits++;
+        if (kind == Kind.SINGLE || kind == Kind.CLOSEST) {
+            Tracer t = scene.tracer();
+            for (int i = a; i < b; i++) {
+                int j = 6 * i;
+                if (kind == Kind.SINGLE) {
+                    if (t.occluded(r[j], r[j + 1], r[j + 2], r[j + 3], r[j + 4], r[j + 5], Double.POSITIVE_INFINITY)) hits++;
+                } else if (t.closestHit(r[j], r[j + 1], r[j + 2], r[j + 3], r[j + 4], r[j + 5], Double.POSITIVE_INFINITY) != Tracer.MISS) {
+                    hits++;
+                }
             }
+            return hits;
+        }
+        BundleTracer bt = scene.bundleTracer();
+        int per = kind.perPoint;
+        double[] dir = new double[3 * per];
+        boolean[] out = new boolean[per];
+        for (int i = a; i + per <= b; i += per) { // the rays of one point share its origin
+            for (int s = 0; s < per; s++) System.arraycopy(r, 6 * (i + s) + 3, dir, 3 * s, 3);
+            bt.occluded(r[6 * i], r[6 * i + 1], r[6 * i + 2], dir, null, per, out);
+            for (int s = 0; s < per; s++) if (out[s]) hits++;
         }
         return hits;
     }

@@ -150,6 +150,11 @@ public final class ShadedIrradiation {
         final Inputs in;
         final HemisphereSampler sampler, reflectorSampler;
         final Tracer tracer;
+        final org.solmass.scene.BundleTracer bundle;
+        /** Directions, weights and sun indices of the rays traced as one bundle (horizon band or sun). */
+        final double[] bundleDir, bundleW;
+        final int[] sunIndex;
+        final boolean[] blocked;
         final double[] dir;
         final int[] cls, tri;
         final double[] dist;
@@ -173,6 +178,12 @@ public final class ShadedIrradiation {
             sampler = new HemisphereSampler(scene, in.raysPerPatch());
             reflectorSampler = new HemisphereSampler(scene, in.reflectorRays());
             tracer = scene.tracer();
+            bundle = scene.bundleTracer();
+            int bundleMax = Math.max(in.sun().count(), HORIZON_ELEVATIONS * HORIZON_AZIMUTHS);
+            bundleDir = new double[3 * bundleMax];
+            bundleW = new double[bundleMax];
+            sunIndex = new int[bundleMax];
+            blocked = new boolean[bundleMax];
             int maxRays = Math.max(sampler.rayCount(), reflectorSampler.rayCount());
             dir = new double[3 * maxRays];
             cls = new int[maxRays];
@@ -256,28 +267,39 @@ public final class ShadedIrradiation {
         }
 
         private double horizonVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {
-            double seen = 0, all = 0;
-            for (int h = 0; h < horizonCosElev.length; h++) {
+            double all = 0;
+            int m = 0;
+            for (int h = 0; h < horizonCosElev.length; h++) { // the band rays in front of the patch, together
                 double dx = horizonDir[3 * h], dy = horizonDir[3 * h + 1], dz = horizonDir[3 * h + 2];
                 double c = nx * dx + ny * dy + nz * dz;
                 if (c <= 0) continue;
                 double w = c * horizonCosElev[h];
                 all += w;
-                if (!tracer.occluded(ox, oy, oz, dx, dy, dz, Double.POSITIVE_INFINITY)) seen += w;
+                bundleDir[3 * m] = dx;
+                bundleDir[3 * m + 1] = dy;
+                bundleDir[3 * m + 2] = dz;
+                bundleW[m++] = w;
             }
+            bundle.occluded(ox, oy, oz, bundleDir, null, m, blocked);
+            double seen = 0;
+            for (int i = 0; i < m; i++) if (!blocked[i]) seen += bundleW[i];
             return all > 0 ? seen / all : 0;
         }
 
         private void sunVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {
             float[] d = in.sun().directions;
-            for (int i = 0; i < vis.length; i++) {
+            int m = 0;
+            for (int i = 0; i < vis.length; i++) { // the sun directions in front of the patch, together
                 double dx = d[3 * i], dy = d[3 * i + 1], dz = d[3 * i + 2];
-                if (nx * dx + ny * dy + nz * dz <= 0) {
-                    vis[i] = 0;
-                    continue;
-                }
-                vis[i] = tracer.occluded(ox, oy, oz, dx, dy, dz, Double.POSITIVE_INFINITY) ? (byte) 0 : (byte) 1;
+                vis[i] = 0;
+                if (nx * dx + ny * dy + nz * dz <= 0) continue;
+                bundleDir[3 * m] = dx;
+                bundleDir[3 * m + 1] = dy;
+                bundleDir[3 * m + 2] = dz;
+                sunIndex[m++] = i;
             }
+            bundle.occluded(ox, oy, oz, bundleDir, null, m, blocked);
+            for (int k = 0; k < m; k++) if (!blocked[k]) vis[sunIndex[k]] = 1;
         }
 
         private void accumulate(double nx, double ny, double nz, double cosTilt, double sinTilt, boolean analysed) {

@@ -1,7 +1,7 @@
 package org.solmass.metrics;
 
 import org.solmass.scene.Scene;
-import org.solmass.scene.Tracer;
+import org.solmass.scene.BundleTracer;
 import org.solmass.sun.SolarCalculator;
 import org.solmass.sun.SunPosition;
 import org.solmass.surface.Patch;
@@ -79,19 +79,27 @@ public final class SunHoursOnDate {
     public static double[] hours(Scene scene, List<Patch> patches, double[] sunDirs, double stepHours) {
         double[] out = new double[patches.size()];
         int m = sunDirs.length / 3;
-        ThreadLocal<Tracer> tracers = ThreadLocal.withInitial(scene::tracer);
+        ThreadLocal<BundleTracer> tracers = ThreadLocal.withInitial(scene::bundleTracer);
         IntStream.range(0, patches.size()).parallel().forEach(p -> {
-            Tracer tr = tracers.get();
+            BundleTracer tr = tracers.get();
             Patch q = patches.get(p);
             double[] o = new double[3];
             scene.rayOrigin(q, o);
             double nx = q.normal().x(), ny = q.normal().y(), nz = q.normal().z();
-            int lit = 0;
-            for (int i = 0; i < m; i++) {
+            double[] front = new double[3 * m];
+            int k = 0;
+            for (int i = 0; i < m; i++) { // the sun directions in front of the patch, traced together
                 double dx = sunDirs[3 * i], dy = sunDirs[3 * i + 1], dz = sunDirs[3 * i + 2];
                 if (nx * dx + ny * dy + nz * dz <= 0) continue;
-                if (!tr.occluded(o[0], o[1], o[2], dx, dy, dz, Double.POSITIVE_INFINITY)) lit++;
+                front[3 * k] = dx;
+                front[3 * k + 1] = dy;
+                front[3 * k + 2] = dz;
+                k++;
             }
+            boolean[] blocked = new boolean[k];
+            tr.occluded(o[0], o[1], o[2], front, null, k, blocked);
+            int lit = 0;
+            for (int i = 0; i < k; i++) if (!blocked[i]) lit++;
             out[p] = lit * stepHours;
         });
         return out;

@@ -17,7 +17,7 @@ package org.solmass.scene;
  */
 final class BvhBuilder {
     static final int BINS = 16;
-    /** Words per node of the binary build tree: bounds(6), second child / first triangle, count/axis. */
+    /** Words per node of the binary build tree: bounds(6), second child / first triangle, count << 2 | split axis. */
     private static final int BIN_WORDS = 8;
     static final int MAX_LEAF = 4;
     /** Leaves never hold more than this (coincident centroids are split by index). */
@@ -119,6 +119,7 @@ final class BvhBuilder {
         int second = Float.floatToRawIntBits(nodes[node * BIN_WORDS + 6]);
         writeChild(w * Scene.NODE_WORDS, 0, node + 1);
         writeChild(w * Scene.NODE_WORDS, 1, second);
+        wide[w * Scene.NODE_WORDS + 14] = Float.intBitsToFloat(Float.floatToRawIntBits(nodes[node * BIN_WORDS + 7]) & 3);
         return w;
     }
 
@@ -153,7 +154,7 @@ final class BvhBuilder {
         nodes[b + 3] = bx1 + pad; nodes[b + 4] = by1 + pad; nodes[b + 5] = bz1 + pad;
         int count = end - start;
         if (count == 1) return leaf(b, start, count, node);
-        if (count > MAX_LEAF_HARD && allSameCentroid(start, end)) return split(b, node, start, (start + end) >>> 1, end, depth);
+        if (count > MAX_LEAF_HARD && allSameCentroid(start, end)) return split(b, node, start, (start + end) >>> 1, end, depth, 0);
         float[] cmin = {cx0, cy0, cz0}, cext = {cx1 - cx0, cy1 - cy0, cz1 - cz0};
         float parentArea = Math.max(area(bx1 - bx0, by1 - by0, bz1 - bz0), Float.MIN_NORMAL);
         float bestCost = Float.POSITIVE_INFINITY;
@@ -214,14 +215,15 @@ final class BvhBuilder {
         }
         int mid = i;
         if (mid == start || mid == end) mid = (start + end) >>> 1; // cannot happen with a valid split
-        return split(b, node, start, mid, end, depth);
+        return split(b, node, start, mid, end, depth, bestAxis);
     }
 
-    private int split(int b, int node, int start, int mid, int end, int depth) {
+    /** Interior node: children [start, mid) (the lower side along {@code axis}) and [mid, end). */
+    private int split(int b, int node, int start, int mid, int end, int depth, int axis) {
         buildNode(start, mid, depth + 1);
         int second = buildNode(mid, end, depth + 1);
         nodes[b + 6] = Float.intBitsToFloat(second);
-        nodes[b + 7] = Float.intBitsToFloat(0);
+        nodes[b + 7] = Float.intBitsToFloat(axis); // count 0 (interior), low bits: split axis
         return node;
     }
 

@@ -5,7 +5,8 @@ import org.solmass.surface.Patch;
 /**
  * Cosine-weighted, stratified hemisphere rays about a patch normal, traced through a {@link Scene}
  * and classified as {@link #SKY}, {@link #GROUND} or {@link #BLOCK}. Reusable per thread: it owns
- * one {@link Tracer} and allocates nothing per ray or per patch; results go into caller arrays.
+ * one {@link Tracer} and one {@link BundleTracer} and allocates nothing per ray or per patch; results
+ * go into caller arrays.
  *
  * <p>Sampling: the unit square is cut into a k x k grid of equal cells, one jittered point per cell
  * (stratified sampling, Cochran, Sampling Techniques, 3rd ed., 1977, ch. 5), mapped to the unit disk
@@ -37,9 +38,12 @@ public final class HemisphereSampler {
     public static final int DEFAULT_RAYS = 1024;
 
     private final Tracer tracer;
+    private final BundleTracer bundle;
     private final Scene scene;
     private final int side, count;
     private final double[] origin = new double[3];
+    private final double[] groundT;
+    private final boolean[] blocked;
 
     /** @param requestedRays rays per patch, positive; rounded to a square grid (see class doc) */
     public HemisphereSampler(Scene scene, int requestedRays) {
@@ -47,6 +51,9 @@ public final class HemisphereSampler {
         this.tracer = scene.tracer();
         this.side = gridSide(requestedRays);
         this.count = side * side;
+        this.bundle = scene.bundleTracer();
+        this.groundT = new double[count];
+        this.blocked = new boolean[count];
     }
 
     /** Side k of the k x k stratification grid used for a request of {@code requestedRays}. */
@@ -164,26 +171,33 @@ public final class HemisphereSampler {
      * Classes only (no distances), for view factors. Without ground-flagged triangles this needs
      * only any-hit queries: a ray is BLOCK if a triangle lies before the ground plane (or anywhere,
      * when it never meets the plane), GROUND if it then meets the plane, otherwise SKY or GROUND by
-     * the sign of dz as in the class doc. Gives the same classes as {@link #sample}.
+     * the sign of dz as in the class doc. Gives the same classes as {@link #sample}. The rays of the
+     * patch go through the tree together ({@link BundleTracer}).
      */
     public void classify(Patch patch, long runSeed, boolean[] triangleIsGround, double[] dir, int[] cls) {
         scene.rayOrigin(patch, origin);
         double ox = origin[0], oy = origin[1], oz = origin[2];
         directions(patch.normal().x(), patch.normal().y(), patch.normal().z(), patchSeed(patch.id(), runSeed), dir);
-        for (int s = 0; s < count; s++) {
-            double dx = dir[3 * s], dy = dir[3 * s + 1], dz = dir[3 * s + 2];
-            if (triangleIsGround != null) {
-                cls[s] = classOf(tracer.closestHit(ox, oy, oz, dx, dy, dz, Double.POSITIVE_INFINITY), dz, triangleIsGround);
-                continue;
+        if (triangleIsGround != null) {
+            for (int s = 0; s < count; s++) {
+                cls[s] = classOf(tracer.closestHit(ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2],
+                        Double.POSITIVE_INFINITY), dir[3 * s + 2], triangleIsGround);
             }
-            double tg = Double.POSITIVE_INFINITY; // ray parameter of the ground plane, from either side
+            return;
+        }
+        for (int s = 0; s < count; s++) { // ray parameter of the ground plane, from either side
+            double dz = dir[3 * s + 2], tg = Double.POSITIVE_INFINITY;
             if (scene.hasGroundPlane() && dz != 0) {
                 double t = (scene.groundZ() - oz) / dz;
                 if (t > 0) tg = t;
             }
-            if (tracer.occluded(ox, oy, oz, dx, dy, dz, tg)) cls[s] = BLOCK; // a triangle before the plane
-            else if (tg < Double.POSITIVE_INFINITY) cls[s] = GROUND;
-            else cls[s] = dz < 0 ? GROUND : SKY;
+            groundT[s] = tg;
+        }
+        bundle.occluded(ox, oy, oz, dir, groundT, count, blocked); // a triangle before the plane?
+        for (int s = 0; s < count; s++) {
+            if (blocked[s]) cls[s] = BLOCK;
+            else if (groundT[s] < Double.POSITIVE_INFINITY) cls[s] = GROUND;
+            else cls[s] = dir[3 * s + 2] < 0 ? GROUND : SKY;
         }
     }
 }

@@ -26,7 +26,8 @@ import org.solmass.surface.Patch;
 public final class Scene {
     /**
      * Words per BVH node in {@link #nodes} (64 bytes, one cache line): child A min x,y,z, max x,y,z;
-     * child B min x,y,z, max x,y,z; child A reference; child B reference; 2 unused. A reference is the
+     * child B min x,y,z, max x,y,z; child A reference; child B reference; split axis (int bits,
+     * 0..2: child A holds the lower side along it); 1 unused. A reference is the
      * int bit pattern of {@code node << 1} for an interior child, or of
      * {@code (firstTriangle << 3 | (count - 1)) << 1 | 1} for a leaf of 1..8 triangles; both are
      * non-negative ints below 2^31 - 2^23, never a NaN pattern, so they survive float storage.
@@ -110,6 +111,11 @@ public final class Scene {
     /** A new query object for the calling thread (owns its traversal stack; not thread-safe). */
     public Tracer tracer() {
         return new Tracer(this);
+    }
+
+    /** A new bundle query object (rays sharing an origin) for the calling thread (not thread-safe). */
+    public BundleTracer bundleTracer() {
+        return new BundleTracer(this);
     }
 
     public int triangleCount() { return triangleCount; }

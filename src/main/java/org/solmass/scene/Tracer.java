@@ -105,27 +105,27 @@ public final class Tracer {
         int loX = ix < 0 ? 3 : 0, hiX = 3 - loX;
         int loY = iy < 0 ? 4 : 1, hiY = 5 - loY;
         int loZ = iz < 0 ? 5 : 2, hiZ = 7 - loZ;
-        float oix = ox * ix, oiy = oy * iy, oiz = oz * iz;
         int sp = 0, ref = 0;
         while (true) {
             if ((ref & 1) == 0) {
                 int b = (ref >>> 1) << 4;
-                float a0 = n[b + loX] * ix - oix, a1 = n[b + hiX] * ix - oix;
-                float ay0 = n[b + loY] * iy - oiy, ay1 = n[b + hiY] * iy - oiy;
-                float az0 = n[b + loZ] * iz - oiz, az1 = n[b + hiZ] * iz - oiz;
-                float b0 = n[b + 6 + loX] * ix - oix, b1 = n[b + 6 + hiX] * ix - oix;
-                float by0 = n[b + 6 + loY] * iy - oiy, by1 = n[b + 6 + hiY] * iy - oiy;
-                float bz0 = n[b + 6 + loZ] * iz - oiz, bz1 = n[b + 6 + hiZ] * iz - oiz;
-                a0 = Math.max(Math.max(a0, ay0), Math.max(az0, 0f)); // branch-free (intrinsic)
-                a1 = Math.min(Math.min(a1, ay1), Math.min(az1, tMax));
-                b0 = Math.max(Math.max(b0, by0), Math.max(bz0, 0f));
-                b1 = Math.min(Math.min(b1, by1), Math.min(bz1, tMax));
-                boolean hitA = a0 <= a1, hitB = b0 <= b1;
+                float a0 = (n[b + loX] - ox) * ix, a1 = (n[b + hiX] - ox) * ix;
+                float ay0 = (n[b + loY] - oy) * iy, ay1 = (n[b + hiY] - oy) * iy;
+                float az0 = (n[b + loZ] - oz) * iz, az1 = (n[b + hiZ] - oz) * iz;
+                float b0 = (n[b + 6 + loX] - ox) * ix, b1 = (n[b + 6 + hiX] - ox) * ix;
+                float by0 = (n[b + 6 + loY] - oy) * iy, by1 = (n[b + 6 + hiY] - oy) * iy;
+                float bz0 = (n[b + 6 + loZ] - oz) * iz, bz1 = (n[b + 6 + hiZ] - oz) * iz;
+                int lb = Float.floatToRawIntBits(tMax);
+                int an = Math.max(Math.max(bits(a0), bits(ay0)), Math.max(bits(az0), 0));
+                int af = Math.min(Math.min(bits(a1), bits(ay1)), Math.min(bits(az1), lb));
+                int bn = Math.max(Math.max(bits(b0), bits(by0)), Math.max(bits(bz0), 0));
+                int bf = Math.min(Math.min(bits(b1), bits(by1)), Math.min(bits(bz1), lb));
+                boolean hitA = an <= af, hitB = bn <= bf;
                 if (hitA) {
                     int ra = Float.floatToRawIntBits(n[b + 12]);
                     if (hitB) {
                         int rb = Float.floatToRawIntBits(n[b + 13]);
-                        if (b0 < a0) { st[sp++] = ra; ref = rb; } else { st[sp++] = rb; ref = ra; }
+                        if (bn < an) { st[sp++] = ra; ref = rb; } else { st[sp++] = rb; ref = ra; }
                     } else {
                         ref = ra;
                     }
@@ -153,28 +153,28 @@ public final class Tracer {
         int loX = ix < 0 ? 3 : 0, hiX = 3 - loX;
         int loY = iy < 0 ? 4 : 1, hiY = 5 - loY;
         int loZ = iz < 0 ? 5 : 2, hiZ = 7 - loZ;
-        float oix = ox * ix, oiy = oy * iy, oiz = oz * iz;
         int sp = 0, ref = 0, best = -1;
         float bestT = tMax;
         while (true) {
             if ((ref & 1) == 0) {
                 int b = (ref >>> 1) << 4;
-                float a0 = n[b + loX] * ix - oix, a1 = n[b + hiX] * ix - oix;
-                float ay0 = n[b + loY] * iy - oiy, ay1 = n[b + hiY] * iy - oiy;
-                float az0 = n[b + loZ] * iz - oiz, az1 = n[b + hiZ] * iz - oiz;
-                float b0 = n[b + 6 + loX] * ix - oix, b1 = n[b + 6 + hiX] * ix - oix;
-                float by0 = n[b + 6 + loY] * iy - oiy, by1 = n[b + 6 + hiY] * iy - oiy;
-                float bz0 = n[b + 6 + loZ] * iz - oiz, bz1 = n[b + 6 + hiZ] * iz - oiz;
-                a0 = Math.max(Math.max(a0, ay0), Math.max(az0, 0f)); // branch-free (intrinsic)
-                a1 = Math.min(Math.min(a1, ay1), Math.min(az1, bestT));
-                b0 = Math.max(Math.max(b0, by0), Math.max(bz0, 0f));
-                b1 = Math.min(Math.min(b1, by1), Math.min(bz1, bestT));
-                boolean hitA = a0 <= a1, hitB = b0 <= b1;
+                float a0 = (n[b + loX] - ox) * ix, a1 = (n[b + hiX] - ox) * ix;
+                float ay0 = (n[b + loY] - oy) * iy, ay1 = (n[b + hiY] - oy) * iy;
+                float az0 = (n[b + loZ] - oz) * iz, az1 = (n[b + hiZ] - oz) * iz;
+                float b0 = (n[b + 6 + loX] - ox) * ix, b1 = (n[b + 6 + hiX] - ox) * ix;
+                float by0 = (n[b + 6 + loY] - oy) * iy, by1 = (n[b + 6 + hiY] - oy) * iy;
+                float bz0 = (n[b + 6 + loZ] - oz) * iz, bz1 = (n[b + 6 + hiZ] - oz) * iz;
+                int lb = Float.floatToRawIntBits(bestT);
+                int an = Math.max(Math.max(bits(a0), bits(ay0)), Math.max(bits(az0), 0));
+                int af = Math.min(Math.min(bits(a1), bits(ay1)), Math.min(bits(az1), lb));
+                int bn = Math.max(Math.max(bits(b0), bits(by0)), Math.max(bits(bz0), 0));
+                int bf = Math.min(Math.min(bits(b1), bits(by1)), Math.min(bits(bz1), lb));
+                boolean hitA = an <= af, hitB = bn <= bf;
                 if (hitA) {
                     int ra = Float.floatToRawIntBits(n[b + 12]);
                     if (hitB) {
                         int rb = Float.floatToRawIntBits(n[b + 13]);
-                        if (b0 < a0) { stT[sp] = a0; st[sp++] = ra; ref = rb; } else { stT[sp] = b0; st[sp++] = rb; ref = ra; }
+                        if (bn < an) { stT[sp] = Float.intBitsToFloat(an); st[sp++] = ra; ref = rb; } else { stT[sp] = Float.intBitsToFloat(bn); st[sp++] = rb; ref = ra; }
                     } else {
                         ref = ra;
                     }
@@ -194,6 +194,9 @@ public final class Tracer {
             } while (stT[sp] > bestT);
         }
     }
+
+    /** IEEE bit pattern as an int: orders like the float for values >= +0, negative for values < 0 or -0. */
+    static int bits(float f) { return Float.floatToRawIntBits(f); }
 
     /**
      * Moller-Trumbore test of leaf-order triangle {@code i}: t in (0, tMax) or -1. With

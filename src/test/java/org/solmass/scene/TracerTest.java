@@ -9,7 +9,7 @@ import static org.junit.jupiter.api.Assertions.*;
 class TracerTest {
 
     /** Random triangles of random size in a 100 m cube, plus a few boxes (shared edges, ties). */
-    private static float[] randomSoup(long seed, int count) {
+    static float[] randomSoup(long seed, int count) {
         SplittableRandom r = new SplittableRandom(seed);
         SceneFixtures f = new SceneFixtures();
         for (int b = 0; b < 5; b++) {

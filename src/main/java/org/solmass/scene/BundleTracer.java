@@ -1,0 +1,279 @@
+package org.solmass.scene;
+
+/**
+ * Any-hit (occlusion) queries for a bundle of rays that share one origin: the hemisphere rays, horizon
+ * rays and sun rays of one patch. Gives exactly the answers of {@link Tracer#occluded} ray by ray
+ * (same float arithmetic, tested), several times faster, because the bundle walks the tree together.
+ *
+ * <p>Method: ray-stream traversal (Wald, Gribble, Boulos and Kensler, 2007, "SIMD ray stream tracing",
+ * SCI Institute technical report UUSCI-2007-012; Barringer and Akenine-Moller, 2014, "Dynamic ray
+ * stream traversal", ACM Transactions on Graphics 33(4)): each BVH node is visited at most once per
+ * bundle, with the list of the bundle's rays that reach it; one tight, branch-free loop over that list
+ * splits it into the lists of rays that hit the first and the second child box. A node is fetched
+ * once for all its rays instead of once per ray, and the per-ray work has no unpredictable branches.
+ * The child on the near side of the node's split plane (by the sign of the octant's direction along
+ * the split axis, as in Pharr, Jakob and Humphreys, Physically Based Rendering, 3rd ed., 2016,
+ * section 4.3.5) is entered first so that hits are found early; a ray that hits is retired (its limit
+ * set below zero) and drops out of every list after that.
+ *
+ * <p>Rays are split by direction octant first, so that within one stream the near and far slab of
+ * every axis is known per node (Williams, Barrus, Morley and Shirley, 2005, "An efficient and robust
+ * ray-box intersection algorithm", Journal of Graphics Tools 10(1)). Because the origin is shared,
+ * the slab offsets {@code box - origin} and the triangle terms of the Moller-Trumbore test that
+ * depend on the origin only ({@code s = o - v0}, {@code q = s x e1}, {@code e2 . q}) are computed once
+ * per node or triangle for the whole stream.
+ *
+ * <p>Per-thread and reusable; allocates only when a bundle is larger than any before it.
+ */
+public final class BundleTracer {
+    private static final float TINY_DIR = 1e-20f;
+    private static final float RETIRED = -1f;
+
+    /**
+     * Whether the SIMD kernel can run: the JVM was started with {@code --add-modules
+     * jdk.incubator.vector} (the {@code solmass} launcher and the build do this) and the system
+     * property {@code solmass.simd} is not {@code false}.
+     */
+    public static final boolean SIMD_AVAILABLE = ModuleLayer.boot().findModule("jdk.incubator.vector").isPresent()
+            && !"false".equals(System.getProperty("solmass.simd"));
+
+    private final Scene scene;
+    private final float[] nodes, tris;
+    private final int[] stRef, stStart, stLen;
+    private float[] dx = new float[0], dy = dx, dz = dx, ix = dx, iy = dx, iz = dx, lim = dx;
+    private int[] list = new int[0];
+    private final int[] octantCount = new int[8], octantStart = new int[8], bucketCount = new int[8 * CELLS * CELLS];
+    private int[] key = new int[0];
+
+    private final VectorOcclusion simd;
+
+    BundleTracer(Scene scene) {
+        this(scene, SIMD_AVAILABLE);
+    }
+
+    /** @param simd whether to use the SIMD packet kernel ({@link #SIMD_AVAILABLE} must hold) */
+    BundleTracer(Scene scene, boolean simd) {
+        if (simd && !SIMD_AVAILABLE) throw new IllegalStateException("the jdk.incubator.vector module is not loaded");
+        this.simd = simd ? new VectorOcclusion(scene) : null;
+        this.scene = scene;
+        this.nodes = scene.nodes;
+        this.tris = scene.tris;
+        int depth = scene.maxDepth + 2;
+        stRef = new int[depth];
+        stStart = new int[depth];
+        stLen = new int[depth];
+    }
+
+    public Scene scene() { return scene; }
+
+    /** Whether this tracer runs the SIMD packet kernel (else the scalar ray-stream loop). */
+    public boolean simd() { return simd != null; }
+
+    /**
+     * For rays {@code s < count} from the common origin o (world coordinates, metres) along unit
+     * directions {@code dir[3s..3s+2]}: {@code out[s]} = whether anything (a triangle from either side,
+     * or the ground plane) lies on the ray at {@code 0 < t < tMax[s]}; {@code tMax == null} means
+     * +infinity for every ray. Equal to {@link Tracer#occluded} for each ray.
+     */
+    public void occluded(double ox, double oy, double oz, double[] dir, double[] tMax, int count, boolean[] out) {
+        ensure(count);
+        int queued = 0;
+        for (int s = 0; s < count; s++) {
+            double ddx = dir[3 * s], ddy = dir[3 * s + 1], ddz = dir[3 * s + 2];
+            queued += load(s, ox, oy, oz, ddx, ddy, ddz, tMax == null ? Double.POSITIVE_INFINITY : tMax[s], out);
+        }
+        trace(ox, oy, oz, count, queued, out);
+    }
+
+    /** As {@link #occluded(double, double, double, double[], double[], int, boolean[])} with float directions. */
+    public void occluded(double ox, double oy, double oz, float[] dir, double[] tMax, int count, boolean[] out) {
+        ensure(count);
+        int queued = 0;
+        for (int s = 0; s < count; s++) {
+            queued += load(s, ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2],
+                    tMax == null ? Double.POSITIVE_INFINITY : tMax[s], out);
+        }
+        trace(ox, oy, oz, count, queued, out);
+    }
+
+    /** Stores ray s; returns 1 if it needs the tree, 0 if the ground plane (or nothing) decided it. */
+    private int load(int s, double ox, double oy, double oz, double ddx, double ddy, double ddz, double tMax, boolean[] out) {
+        if (scene.groundPlane && ddz != 0) { // as Tracer.groundT
+            double t = (scene.groundZ - oz) / ddz;
+            if (t > 0 && t < tMax) {
+                out[s] = true;
+                lim[s] = RETIRED;
+                return 0;
+            }
+        }
+        out[s] = false;
+        float fx = (float) ddx, fy = (float) ddy, fz = (float) ddz;
+        dx[s] = fx;
+        dy[s] = fy;
+        dz[s] = fz;
+        ix[s] = 1f / (Math.abs(fx) < TINY_DIR ? Math.copySign(TINY_DIR, fx) : fx);
+        iy[s] = 1f / (Math.abs(fy) < TINY_DIR ? Math.copySign(TINY_DIR, fy) : fy);
+        iz[s] = 1f / (Math.abs(fz) < TINY_DIR ? Math.copySign(TINY_DIR, fz) : fz);
+        if (scene.nodeCount == 0) {
+            lim[s] = RETIRED;
+            return 0;
+        }
+        lim[s] = (float) Math.min(tMax, Float.MAX_VALUE);
+        return 1;
+    }
+
+    private void ensure(int count) {
+        if (dx.length >= count) return;
+        dx = new float[count];
+        dy = new float[count];
+        dz = new float[count];
+        ix = new float[count];
+        iy = new float[count];
+        iz = new float[count];
+        lim = new float[count];
+        key = new int[count];
+        list = new int[count + 2 * count * (scene.maxDepth + 2)];
+    }
+
+    private static int octant(float ix, float iy, float iz) {
+        return (ix < 0 ? 1 : 0) | (iy < 0 ? 2 : 0) | (iz < 0 ? 4 : 0);
+    }
+
+    /**
+     * Direction cells per axis within an octant for the ray order: rays are sorted (counting sort) by
+     * octant, then by a CELLS x CELLS grid on (|dx|, |dy|), so that neighbouring rays in a stream or
+     * packet point alike (Wald et al., 2001, coherent packets).
+     */
+    private static final int CELLS = 4;
+
+    private static int cell(float dx, float dy) {
+        int cx = Math.min(CELLS - 1, (int) (Math.abs(dx) * CELLS)), cy = Math.min(CELLS - 1, (int) (Math.abs(dy) * CELLS));
+        return cx * CELLS + cy;
+    }
+
+    private void trace(double wox, double woy, double woz, int count, int queued, boolean[] out) {
+        if (queued == 0) return;
+        final int[] cnt = bucketCount, key = this.key;
+        java.util.Arrays.fill(cnt, 0);
+        for (int s = 0; s < count; s++) {
+            if (lim[s] < 0) { key[s] = -1; continue; }
+            int k = octant(ix[s], iy[s], iz[s]) * CELLS * CELLS + cell(dx[s], dy[s]);
+            key[s] = k;
+            cnt[k]++;
+        }
+        int at = 0;
+        for (int k = 0; k < cnt.length; k++) {
+            int c = cnt[k];
+            cnt[k] = at;
+            at += c;
+        }
+        for (int o = 0; o < 8; o++) {
+            octantStart[o] = cnt[o * CELLS * CELLS];
+            octantCount[o] = (o == 7 ? at : cnt[(o + 1) * CELLS * CELLS]) - octantStart[o];
+        }
+        for (int s = 0; s < count; s++) if (key[s] >= 0) list[cnt[key[s]]++] = s;
+        float ox = (float) (wox - scene.shiftX), oy = (float) (woy - scene.shiftY), oz = (float) (woz - scene.shiftZ);
+        for (int o = 0; o < 8; o++) {
+            if (octantCount[o] == 0) continue;
+            if (simd != null) simd.trace(o, list, octantStart[o], octantCount[o], ox, oy, oz, dx, dy, dz, ix, iy, iz, lim, out);
+            else stream(o, octantStart[o], octantCount[o], queued, ox, oy, oz, out);
+        }
+    }
+
+    /** Traverses the tree with the rays list[start, start+len) of one direction octant. */
+    private void stream(int octant, int start, int len, int top, float ox, float oy, float oz, boolean[] out) {
+        final float[] n = nodes, t = tris;
+        final float[] ix = this.ix, iy = this.iy, iz = this.iz, lim = this.lim;
+        final int[] l = list;
+        int loX = (octant & 1) != 0 ? 3 : 0, hiX = 3 - loX;
+        int loY = (octant & 2) != 0 ? 4 : 1, hiY = 5 - loY;
+        int loZ = (octant & 4) != 0 ? 5 : 2, hiZ = 7 - loZ;
+        int sp = 0, ref = 0;
+        while (true) {
+            if ((ref & 1) == 0) {
+                int b = (ref >>> 1) << 4;
+                float ax0 = n[b + loX] - ox, ax1 = n[b + hiX] - ox;
+                float ay0 = n[b + loY] - oy, ay1 = n[b + hiY] - oy;
+                float az0 = n[b + loZ] - oz, az1 = n[b + hiZ] - oz;
+                float bx0 = n[b + 6 + loX] - ox, bx1 = n[b + 6 + hiX] - ox;
+                float by0 = n[b + 6 + loY] - oy, by1 = n[b + 6 + hiY] - oy;
+                float bz0 = n[b + 6 + loZ] - oz, bz1 = n[b + 6 + hiZ] - oz;
+                int aStart = top, bStart = top + len, na = 0, nb = 0;
+                for (int k = start, end = start + len; k < end; k++) {
+                    int i = l[k];
+                    float rx = ix[i], ry = iy[i], rz = iz[i], m = lim[i];
+                    int mi = Float.floatToRawIntBits(m);
+                    int an = Math.max(Math.max(bits(ax0 * rx), bits(ay0 * ry)), Math.max(bits(az0 * rz), 0));
+                    int af = Math.min(Math.min(bits(ax1 * rx), bits(ay1 * ry)), Math.min(bits(az1 * rz), mi));
+                    int bn = Math.max(Math.max(bits(bx0 * rx), bits(by0 * ry)), Math.max(bits(bz0 * rz), 0));
+                    int bf = Math.min(Math.min(bits(bx1 * rx), bits(by1 * ry)), Math.min(bits(bz1 * rz), mi));
+                    l[aStart + na] = i;
+                    na += an <= af ? 1 : 0;
+                    l[bStart + nb] = i;
+                    nb += bn <= bf ? 1 : 0;
+                }
+                int ra = Float.floatToRawIntBits(n[b + 12]), rb = Float.floatToRawIntBits(n[b + 13]);
+                top = bStart + nb;
+                if (na > 0 && nb > 0) {
+                    if ((octant >>> Float.floatToRawIntBits(n[b + 14]) & 1) == 0) { // A (lower side) first
+                        stRef[sp] = rb; stStart[sp] = bStart; stLen[sp++] = nb;
+                        ref = ra; start = aStart; len = na;
+                    } else {
+                        stRef[sp] = ra; stStart[sp] = aStart; stLen[sp++] = na;
+                        ref = rb; start = bStart; len = nb;
+                    }
+                    continue;
+                }
+                if (na > 0) { ref = ra; start = aStart; len = na; continue; }
+                if (nb > 0) { ref = rb; start = bStart; len = nb; continue; }
+            } else {
+                leaf(t, ref, start, len, ox, oy, oz, out);
+            }
+            if (sp == 0) return;
+            ref = stRef[--sp];
+            start = stStart[sp];
+            len = stLen[sp];
+            top = start + len;
+        }
+    }
+
+    private static int bits(float f) { return Float.floatToRawIntBits(f); }
+
+    /**
+     * Moller-Trumbore tests of one leaf's triangles against the live rays of the list, with the terms
+     * that depend only on the shared origin hoisted; the arithmetic is that of {@code Tracer.intersect}
+     * operation for operation, so the answers are identical.
+     */
+    private void leaf(float[] t, int ref, int start, int len, float ox, float oy, float oz, boolean[] out) {
+        final float[] dx = this.dx, dy = this.dy, dz = this.dz, lim = this.lim;
+        final int[] l = list;
+        int first = ref >>> 4, last = first + ((ref >>> 1) & 7);
+        for (int tri = first; tri <= last; tri++) {
+            int k = tri * Scene.TRI_WORDS;
+            float e1x = t[k + 3], e1y = t[k + 4], e1z = t[k + 5];
+            float e2x = t[k + 6], e2y = t[k + 7], e2z = t[k + 8];
+            float sx = ox - t[k], sy = oy - t[k + 1], sz = oz - t[k + 2];
+            float qx = sy * e1z - sz * e1y, qy = sz * e1x - sx * e1z, qz = sx * e1y - sy * e1x;
+            float tq = e2x * qx + e2y * qy + e2z * qz;
+            for (int j = start, end = start + len; j < end; j++) {
+                int i = l[j];
+                float m = lim[i];
+                if (m < 0f) continue; // retired by an earlier hit
+                float rx = dx[i], ry = dy[i], rz = dz[i];
+                float px = ry * e2z - rz * e2y, py = rz * e2x - rx * e2z, pz = rx * e2y - ry * e2x;
+                float det = e1x * px + e1y * py + e1z * pz;
+                if (det == 0f) continue;
+                float inv = 1f / det;
+                float u = (sx * px + sy * py + sz * pz) * inv;
+                if (u < 0f || u > 1f) continue;
+                float v = (rx * qx + ry * qy + rz * qz) * inv;
+                if (v < 0f || u + v > 1f) continue;
+                float h = tq * inv;
+                if (h > 0f && h < m) {
+                    out[i] = true;
+                    lim[i] = RETIRED;
+                }
+            }
+        }
+    }
+}
