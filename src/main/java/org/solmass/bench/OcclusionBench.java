@@ -15,6 +15,7 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 import org.openjdk.jmh.infra.Blackhole;
 import org.solmass.model.MassingModel;
+import org.solmass.scene.BundleTracer;
 import org.solmass.scene.Scene;
 import org.solmass.scene.Tracer;
 
@@ -22,8 +23,10 @@ import java.util.concurrent.TimeUnit;
 
 /**
  * JMH benchmark of the traversal kernel on the invented {@link SyntheticDistrict}: any-hit
- * (occlusion) and closest-hit rays, 64 cosine-weighted rays per roof/facade point. Scores are rays
- * per microsecond per thread (x 1e6 = rays per second). Run after {@code mvn -B -q -DskipTests package}:
+ * (occlusion) and closest-hit rays one at a time, 64 cosine-weighted rays per roof/facade point, and
+ * occlusion in bundles of 64 and 1,024 rays per point ({@link BundleTracer}). Scores are rays per
+ * microsecond per thread (x 1e6 = rays per second). The forked JVM gets the vector module. Run after
+ * {@code mvn -B -q -DskipTests package}:
  * <pre>
  *   java -cp target/solmass.jar org.openjdk.jmh.Main OcclusionBench            # 1 thread
  *   java -cp target/solmass.jar org.openjdk.jmh.Main OcclusionBench -t 2       # 2 threads
@@ -35,7 +38,7 @@ import java.util.concurrent.TimeUnit;
 @OutputTimeUnit(TimeUnit.MICROSECONDS)
 @Warmup(iterations = 3, time = 2)
 @Measurement(iterations = 5, time = 2)
-@Fork(1)
+@Fork(value = 1, jvmArgsAppend = {"--add-modules", "jdk.incubator.vector"})
 public class OcclusionBench {
     static final int RAYS = 1 << 16;
 
@@ -43,7 +46,10 @@ public class OcclusionBench {
     public int blocks;
 
     private Tracer tracer;
-    private double[] rays;
+    private BundleTracer bundles;
+    private double[] rays, rays1024;
+    private final double[] dir = new double[3 * 1024];
+    private final boolean[] out = new boolean[1024];
 
     @Setup(Level.Trial)
     public void setUp() {
@@ -51,6 +57,32 @@ public class OcclusionBench {
         Scene scene = Scene.build(m, true, 0.0);
         tracer = scene.tracer();
         rays = SyntheticDistrict.rays(m, RAYS / 64, 64, scene.epsilon(), 1);
+        rays1024 = SyntheticDistrict.rays(m, RAYS / 1024, 1024, scene.epsilon(), 1);
+        bundles = scene.bundleTracer();
+    }
+
+    /** Occlusion of the same 64-per-point rays, each point's rays traced as one bundle. */
+    @Benchmark
+    @OperationsPerInvocation(RAYS)
+    public void occludedBundles64(Blackhole bh) {
+        bh.consume(traceBundles(rays, 64));
+    }
+
+    /** Occlusion of 1,024 rays per point (the default of sky-view and analyse), one bundle per point. */
+    @Benchmark
+    @OperationsPerInvocation(RAYS)
+    public void occludedBundles1024(Blackhole bh) {
+        bh.consume(traceBundles(rays1024, 1024));
+    }
+
+    private int traceBundles(double[] r, int per) {
+        int hits = 0;
+        for (int i = 0; i < r.length / 6; i += per) {
+            for (int s = 0; s < per; s++) System.arraycopy(r, 6 * (i + s) + 3, dir, 3 * s, 3);
+            bundles.occluded(r[6 * i], r[6 * i + 1], r[6 * i + 2], dir, null, per, out);
+            for (int s = 0; s < per; s++) if (out[s]) hits++;
+        }
+        return hits;
     }
 
     @Benchmark

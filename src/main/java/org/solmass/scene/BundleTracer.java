@@ -173,10 +173,12 @@ public final class BundleTracer {
         }
         for (int s = 0; s < count; s++) if (key[s] >= 0) list[cnt[key[s]]++] = s;
         float ox = (float) (wox - scene.shiftX), oy = (float) (woy - scene.shiftY), oz = (float) (woz - scene.shiftZ);
+        if (simd != null) {
+            simd.trace(list, octantStart, octantCount, ox, oy, oz, dx, dy, dz, ix, iy, iz, lim, out);
+            return;
+        }
         for (int o = 0; o < 8; o++) {
-            if (octantCount[o] == 0) continue;
-            if (simd != null) simd.trace(o, list, octantStart[o], octantCount[o], ox, oy, oz, dx, dy, dz, ix, iy, iz, lim, out);
-            else stream(o, octantStart[o], octantCount[o], queued, ox, oy, oz, out);
+            if (octantCount[o] > 0) stream(o, octantStart[o], octantCount[o], queued, ox, oy, oz, out);
         }
     }
 

@@ -7,19 +7,27 @@ import jdk.incubator.vector.VectorOperators;
 import jdk.incubator.vector.VectorSpecies;
 
 /**
- * SIMD packet kernel behind {@link BundleTracer}: rays of one direction octant that share an origin
- * go through the tree in packets of one vector's width (16 lanes with AVX-512, 8 with AVX2), after
- * Wald, Slusallek, Benthin and Wagner, 2001, "Interactive rendering with coherent ray tracing",
- * Computer Graphics Forum 20(3): a node is entered when any lane hits its box, the lanes that hit a
- * leaf's box are tested against its triangles together. Uses the incubating Vector API of the JDK
- * (JEP 414); {@link BundleTracer} uses it only when the module {@code jdk.incubator.vector} is
- * present and falls back to its scalar ray-stream loop otherwise.
+ * SIMD kernel behind {@link BundleTracer}: the rays of a bundle (one origin) are cut into packets of
+ * one vector's width (16 lanes with AVX-512, 8 with AVX2), each packet from one direction octant
+ * (Wald, Slusallek, Benthin and Wagner, 2001, "Interactive rendering with coherent ray tracing",
+ * Computer Graphics Forum 20(3)); the packets then walk the tree together as a stream of packets
+ * (the ray-stream traversal of Wald, Gribble, Boulos and Kensler, 2007, SCI Institute technical
+ * report UUSCI-2007-012, with packets in place of rays): each node is visited once per bundle with
+ * the list of packets that reach it, so the node's fetch, branches and stack work are paid once for
+ * all of them, and each packet pays one vector slab test of both child boxes. A leaf is tested
+ * lane-wise against the lanes that hit its box. Uses the incubating Vector API of the JDK (JEP 414);
+ * {@link BundleTracer} uses it only when the module {@code jdk.incubator.vector} is present and falls
+ * back to its scalar ray-stream loop otherwise.
  *
  * <p>Lane arithmetic is the arithmetic of {@code Tracer} operation for operation (IEEE single
- * precision, no fused multiply-add), so every lane gives the single-ray answer. No lane mask is needed
- * at interior nodes: a child box lies inside its parent's, and the slab values are monotone in the
- * box bounds, so a lane that misses a parent misses every box below it. Leaves are entered with the
- * mask of the lanes that hit the leaf's box.
+ * precision, no fused multiply-add, the int-domain slab test), so every lane gives the single-ray
+ * answer. No lane mask is needed at interior nodes: a child box lies inside its parent's, and the
+ * slab values are monotone in the box bounds, so a lane that misses a parent misses every box below
+ * it. At a leaf the lanes that miss the leaf's own box are masked out.
+ *
+ * <p>Vector values never outlive one small method (they are loaded from the packet arrays each
+ * time): C2 then keeps them in registers, where vectors carried across loop iterations, returned
+ * from methods it does not inline, or held in methods past its inlining budget are boxed on the heap.
  */
 final class VectorOcclusion {
     static final VectorSpecies<Float> F = FloatVector.SPECIES_PREFERRED;
@@ -29,13 +37,13 @@ final class VectorOcclusion {
     private static final int RETIRED_BITS = Float.floatToRawIntBits(RETIRED);
 
     private final float[] nodes, tris;
-    private final int[] stRef;
-    private final int[] stBox;
+    private final int[] stRef, stBox, stStart, stLen;
     private float[] px = new float[0], py = px, pz = px, pix = px, piy = px, piz = px, plim = px;
     private int[] pray = new int[0];
     private int[] preach = new int[0];
-    /** Word offsets (in a box) of the near and far bound per axis for the current octant. */
-    private int loX, hiX, loY, hiY, loZ, hiZ, octant;
+    private int[] pOctant = new int[0], plist = new int[0];
+    /** Slab offsets box - origin of the node being visited: child A lo x,y,z, hi x,y,z, then child B. */
+    private final float[] delta = new float[12];
 
     VectorOcclusion(Scene scene) {
         this.nodes = scene.nodes;
@@ -43,49 +51,53 @@ final class VectorOcclusion {
         int depth = scene.maxDepth + 2;
         stRef = new int[depth];
         stBox = new int[depth];
+        stStart = new int[depth];
+        stLen = new int[depth];
     }
-
-    /** Rays per packet: a few vectors, so that one node fetch and one branch serve many rays. */
-    static final int PACKET = LANES;
 
     /**
-     * Traces the rays {@code list[start, start + len)} (indices into the per-ray arrays, all of one
-     * direction octant) from the shifted origin o; sets
-     * {@code out[ray]} for every ray that is blocked.
+     * Traces the rays of a bundle from the shifted origin o and sets {@code out[ray]} for every ray
+     * that is blocked. {@code list} holds the ray indices sorted by direction octant, octant o's run
+     * at {@code [octStart[o], octStart[o] + octCount[o])}. Each run is cut into packets of LANES rays
+     * (the last one padded with retired lanes), so that a packet's lanes share their direction signs.
      */
-    void trace(int octant, int[] list, int start, int len, float ox, float oy, float oz,
+    void trace(int[] list, int[] octStart, int[] octCount, float ox, float oy, float oz,
                float[] dx, float[] dy, float[] dz, float[] ix, float[] iy, float[] iz, float[] lim, boolean[] out) {
-        this.octant = octant;
-        loX = (octant & 1) != 0 ? 3 : 0;
-        loY = (octant & 2) != 0 ? 4 : 1;
-        loZ = (octant & 4) != 0 ? 5 : 2;
-        hiX = 3 - loX;
-        hiY = 5 - loY;
-        hiZ = 7 - loZ;
-        int padded = (len + LANES - 1) / LANES * LANES;
-        ensure(padded);
-        for (int k = 0; k < padded; k++) { // packet-contiguous copies; padding lanes are retired
-            if (k < len) {
-                int i = list[start + k];
-                px[k] = dx[i]; py[k] = dy[i]; pz[k] = dz[i];
-                pix[k] = ix[i]; piy[k] = iy[i]; piz[k] = iz[i];
-                plim[k] = lim[i];
-                pray[k] = i;
-            } else {
-                px[k] = 1; py[k] = 0; pz[k] = 0;
-                pix[k] = 1; piy[k] = 1; piz[k] = 1;
-                plim[k] = RETIRED;
-                pray[k] = -1;
+        int packets = 0;
+        for (int o = 0; o < 8; o++) packets += (octCount[o] + LANES - 1) / LANES;
+        ensure(packets);
+        int k = 0, pk = 0;
+        for (int o = 0; o < 8; o++) {
+            int c = octCount[o];
+            if (c == 0) continue;
+            int padded = (c + LANES - 1) / LANES * LANES;
+            for (int j = 0; j < padded; j++, k++) { // packet-contiguous copies; padding lanes are retired
+                if (j < c) {
+                    int i = list[octStart[o] + j];
+                    px[k] = dx[i]; py[k] = dy[i]; pz[k] = dz[i];
+                    pix[k] = ix[i]; piy[k] = iy[i]; piz[k] = iz[i];
+                    plim[k] = lim[i];
+                    pray[k] = i;
+                } else {
+                    px[k] = 1; py[k] = 0; pz[k] = 0;
+                    pix[k] = 1; piy[k] = 1; piz[k] = 1;
+                    plim[k] = RETIRED;
+                    pray[k] = -1;
+                }
             }
+            for (int j = 0; j < padded / LANES; j++) pOctant[pk++] = o;
         }
-        for (int p = 0; p < padded; p += PACKET) {
-            int end = Math.min(padded, p + PACKET);
-            packet(p, end, ox, oy, oz);
-            for (int k = p; k < end; k++) if (pray[k] >= 0 && plim[k] < 0) out[pray[k]] = true;
-        }
+        for (int j = 0; j < packets; j++) plist[j] = j;
+        stream(packets, ox, oy, oz);
+        for (int j = 0; j < k; j++) if (pray[j] >= 0 && plim[j] < 0) out[pray[j]] = true;
     }
 
-    private void ensure(int n) {
+    private void ensure(int packets) {
+        int n = packets * LANES;
+        if (pOctant.length < packets) {
+            pOctant = new int[packets];
+            plist = new int[packets + 2 * packets * (stRef.length)];
+        }
         if (px.length >= n) return;
         px = new float[n]; py = new float[n]; pz = new float[n];
         pix = new float[n]; piy = new float[n]; piz = new float[n];
@@ -95,85 +107,100 @@ final class VectorOcclusion {
     }
 
     /**
-     * The packet of lanes [p, end); on return plim is negative for the lanes that are blocked.
-     * Vector values never outlive one small method (they are loaded from the packet arrays each
-     * time): C2 then keeps them in registers, where values carried across loop iterations or large
-     * methods would be boxed on the heap.
+     * All packets walk the tree together, as rays do in the scalar stream of {@link BundleTracer}:
+     * each node is visited once, with the list of packets that reach it, and one loop sorts them
+     * into the lists of the two children (list regions are allocated above {@code top} and freed in
+     * stack order).
      */
-    private void packet(int p, int end, float ox, float oy, float oz) {
+    private void stream(int packets, float ox, float oy, float oz) {
         final float[] n = nodes;
-        final int octant = this.octant;
-        if (allBlocked(p, end)) return;
-        int sp = 0, ref = 0, box = -1;
+        final int[] l = plist, oct = pOctant;
+        int sp = 0, ref = 0, box = -1, start = 0, len = packets, top = packets;
         while (true) {
             if ((ref & 1) == 0) {
                 int b = (ref >>> 1) << 4;
-                int hit = 0;
-                for (int q = p; q < end && hit != 3; q += LANES) hit |= children(b, q, ox, oy, oz);
+                int aStart = top, bStart = top + len, na = 0, nb = 0;
                 int ra = Float.floatToRawIntBits(n[b + 12]), rb = Float.floatToRawIntBits(n[b + 13]);
-                if (hit == 3) {
-                    if ((octant >>> Float.floatToRawIntBits(n[b + 14]) & 1) == 0) { // A (lower side) first
-                        stRef[sp] = rb; stBox[sp++] = b + 6; ref = ra; box = b;
+                final float[] d = delta; // box - origin, once per node
+                d[0] = n[b] - ox; d[1] = n[b + 1] - oy; d[2] = n[b + 2] - oz;
+                d[3] = n[b + 3] - ox; d[4] = n[b + 4] - oy; d[5] = n[b + 5] - oz;
+                d[6] = n[b + 6] - ox; d[7] = n[b + 7] - oy; d[8] = n[b + 8] - oz;
+                d[9] = n[b + 9] - ox; d[10] = n[b + 10] - oy; d[11] = n[b + 11] - oz;
+                for (int k = start, end = start + len; k < end; k++) {
+                    int pk = l[k];
+                    int hit = children(pk * LANES, oct[pk]);
+                    l[aStart + na] = pk;
+                    na += hit & 1;
+                    l[bStart + nb] = pk;
+                    nb += hit >>> 1;
+                }
+                top = bStart + nb;
+                if (na > 0 && nb > 0) {
+                    // near side of the split first, by the direction signs of the first packet
+                    if ((oct[l[aStart]] >>> Float.floatToRawIntBits(n[b + 14]) & 1) == 0) {
+                        stRef[sp] = rb; stBox[sp] = b + 6; stStart[sp] = bStart; stLen[sp++] = nb;
+                        ref = ra; box = b; start = aStart; len = na;
                     } else {
-                        stRef[sp] = ra; stBox[sp++] = b; ref = rb; box = b + 6;
+                        stRef[sp] = ra; stBox[sp] = b; stStart[sp] = aStart; stLen[sp++] = na;
+                        ref = rb; box = b + 6; start = bStart; len = nb;
                     }
                     continue;
                 }
-                if (hit == 1) { ref = ra; box = b; continue; }
-                if (hit == 2) { ref = rb; box = b + 6; continue; }
-            } else if (leaf(ref, box, p, end, ox, oy, oz)) {
-                return; // every lane blocked
+                if (na > 0) { ref = ra; box = b; start = aStart; len = na; continue; }
+                if (nb > 0) { ref = rb; box = b + 6; start = bStart; len = nb; continue; }
+            } else {
+                for (int k = start, end = start + len; k < end; k++) {
+                    int pk = l[k];
+                    leaf(ref, box, pk * LANES, oct[pk], ox, oy, oz);
+                }
             }
             if (sp == 0) return;
             ref = stRef[--sp];
             box = stBox[sp];
+            start = stStart[sp];
+            len = stLen[sp];
+            top = start + len;
         }
     }
 
     /**
      * Int-domain slab test (as in {@code Tracer}) of both child boxes of the node at nodes[b..] for
      * the lanes [q, q + LANES); the near and far bound of each axis are those of the packet's octant.
+     * A packet whose lanes are all retired hits nothing.
      * Returns bit 0 set if any lane hits child A, bit 1 if any lane hits child B. Kept as one method
      * above C2's inlining size, so that the JIT compiles it the same way every run.
      */
-    private int children(int b, int q, float ox, float oy, float oz) {
-        final float[] n = nodes;
+    private int children(int q, int octant) {
+        final float[] d = delta;
+        int loX = (octant & 1) != 0 ? 3 : 0, hiX = 3 - loX;
+        int loY = (octant & 2) != 0 ? 4 : 1, hiY = 5 - loY;
+        int loZ = (octant & 4) != 0 ? 5 : 2, hiZ = 7 - loZ;
         FloatVector vix = FloatVector.fromArray(F, pix, q), viy = FloatVector.fromArray(F, piy, q),
                 viz = FloatVector.fromArray(F, piz, q);
         IntVector limBits = bits(FloatVector.fromArray(F, plim, q));
-        IntVector an = bits(vix.mul(n[b + loX] - ox)).max(bits(viy.mul(n[b + loY] - oy)))
-                .max(bits(viz.mul(n[b + loZ] - oz)).max(0));
-        IntVector af = bits(vix.mul(n[b + hiX] - ox)).min(bits(viy.mul(n[b + hiY] - oy)))
-                .min(bits(viz.mul(n[b + hiZ] - oz)).min(limBits));
-        IntVector bn = bits(vix.mul(n[b + 6 + loX] - ox)).max(bits(viy.mul(n[b + 6 + loY] - oy)))
-                .max(bits(viz.mul(n[b + 6 + loZ] - oz)).max(0));
-        IntVector bf = bits(vix.mul(n[b + 6 + hiX] - ox)).min(bits(viy.mul(n[b + 6 + hiY] - oy)))
-                .min(bits(viz.mul(n[b + 6 + hiZ] - oz)).min(limBits));
+        IntVector an = bits(vix.mul(d[loX])).max(bits(viy.mul(d[loY]))).max(bits(viz.mul(d[loZ])).max(0));
+        IntVector af = bits(vix.mul(d[hiX])).min(bits(viy.mul(d[hiY]))).min(bits(viz.mul(d[hiZ])).min(limBits));
+        IntVector bn = bits(vix.mul(d[6 + loX])).max(bits(viy.mul(d[6 + loY]))).max(bits(viz.mul(d[6 + loZ])).max(0));
+        IntVector bf = bits(vix.mul(d[6 + hiX])).min(bits(viy.mul(d[6 + hiY]))).min(bits(viz.mul(d[6 + hiZ])).min(limBits));
         return (an.compare(VectorOperators.LE, af).anyTrue() ? 1 : 0) | (bn.compare(VectorOperators.LE, bf).anyTrue() ? 2 : 0);
     }
 
-    /** The leaf {@code ref} (box at nodes[box..]) for the lanes [p, end); returns whether every lane is now blocked. */
-    private boolean leaf(int ref, int box, int p, int end, float ox, float oy, float oz) {
+    /** The leaf {@code ref} (box at nodes[box..]) for the packet at lane q. */
+    private void leaf(int ref, int box, int q, int octant, float ox, float oy, float oz) {
+        if (!reach(box, q, octant, ox, oy, oz)) return;
         int first = ref >>> 4, last = first + ((ref >>> 1) & 7);
-        for (int q = p; q < end; q += LANES) {
-            if (!reach(box, q, ox, oy, oz)) continue;
-            for (int tri = first; tri <= last; tri++) triangle(tri * Scene.TRI_WORDS, q, ox, oy, oz);
-        }
-        return allBlocked(p, end);
-    }
-
-    private boolean allBlocked(int p, int end) {
-        boolean live = false;
-        for (int q = p; q < end; q += LANES) live |= FloatVector.fromArray(F, plim, q).compare(VectorOperators.GE, 0f).anyTrue();
-        return !live;
+        for (int tri = first; tri <= last; tri++) triangle(tri * Scene.TRI_WORDS, q, ox, oy, oz);
     }
 
     /**
      * Writes preach[q..q+LANES): the limit of each lane that hits the leaf box at nodes[box..] (the
      * test of {@link #children}), RETIRED for the others; returns whether any lane reaches the leaf.
      */
-    private boolean reach(int box, int q, float ox, float oy, float oz) {
+    private boolean reach(int box, int q, int octant, float ox, float oy, float oz) {
         final float[] n = nodes;
+        int loX = (octant & 1) != 0 ? 3 : 0, hiX = 3 - loX;
+        int loY = (octant & 2) != 0 ? 4 : 1, hiY = 5 - loY;
+        int loZ = (octant & 4) != 0 ? 5 : 2, hiZ = 7 - loZ;
         FloatVector vix = FloatVector.fromArray(F, pix, q), viy = FloatVector.fromArray(F, piy, q),
                 viz = FloatVector.fromArray(F, piz, q);
         IntVector limBits = bits(FloatVector.fromArray(F, plim, q));
