@@ -126,9 +126,28 @@ final class VectorOcclusion {
                 d[3] = n[b + 3] - ox; d[4] = n[b + 4] - oy; d[5] = n[b + 5] - oz;
                 d[6] = n[b + 6] - ox; d[7] = n[b + 7] - oy; d[8] = n[b + 8] - oz;
                 d[9] = n[b + 9] - ox; d[10] = n[b + 10] - oy; d[11] = n[b + 11] - oz;
+                // int-domain slab test (as in Tracer) of both child boxes for each packet, with the
+                // near and far bound of each axis picked by the packet's octant; a packet whose
+                // lanes are all retired hits nothing
+                int curOct = -1;
+                float nax = 0, nay = 0, naz = 0, fax = 0, fay = 0, faz = 0, nbx = 0, nby = 0, nbz = 0, fbx = 0, fby = 0, fbz = 0;
                 for (int k = start, end = start + len; k < end; k++) {
-                    int pk = l[k];
-                    int hit = children(pk * LANES, oct[pk]);
+                    int pk = l[k], o = oct[pk];
+                    if (o != curOct) { // lists keep octant order, so this changes at most 7 times
+                        curOct = o;
+                        int lx = (o & 1) != 0 ? 3 : 0, ly = (o & 2) != 0 ? 4 : 1, lz = (o & 4) != 0 ? 5 : 2;
+                        nax = d[lx]; nay = d[ly]; naz = d[lz]; fax = d[3 - lx]; fay = d[5 - ly]; faz = d[7 - lz];
+                        nbx = d[6 + lx]; nby = d[6 + ly]; nbz = d[6 + lz]; fbx = d[9 - lx]; fby = d[11 - ly]; fbz = d[13 - lz];
+                    }
+                    int q = pk * LANES;
+                    FloatVector vix = FloatVector.fromArray(F, pix, q), viy = FloatVector.fromArray(F, piy, q),
+                            viz = FloatVector.fromArray(F, piz, q);
+                    IntVector limBits = bits(FloatVector.fromArray(F, plim, q));
+                    IntVector an = bits(vix.mul(nax)).max(bits(viy.mul(nay))).max(bits(viz.mul(naz)).max(0));
+                    IntVector af = bits(vix.mul(fax)).min(bits(viy.mul(fay))).min(bits(viz.mul(faz)).min(limBits));
+                    IntVector bn = bits(vix.mul(nbx)).max(bits(viy.mul(nby))).max(bits(viz.mul(nbz)).max(0));
+                    IntVector bf = bits(vix.mul(fbx)).min(bits(viy.mul(fby))).min(bits(viz.mul(fbz)).min(limBits));
+                    int hit = (an.compare(VectorOperators.LE, af).anyTrue() ? 1 : 0) | (bn.compare(VectorOperators.LE, bf).anyTrue() ? 2 : 0);
                     l[aStart + na] = pk;
                     na += hit & 1;
                     l[bStart + nb] = pk;
@@ -163,28 +182,6 @@ final class VectorOcclusion {
         }
     }
 
-    /**
-     * Int-domain slab test (as in {@code Tracer}) of both child boxes of the node at nodes[b..] for
-     * the lanes [q, q + LANES); the near and far bound of each axis are those of the packet's octant.
-     * A packet whose lanes are all retired hits nothing.
-     * Returns bit 0 set if any lane hits child A, bit 1 if any lane hits child B. Kept as one method
-     * above C2's inlining size, so that the JIT compiles it the same way every run.
-     */
-    private int children(int q, int octant) {
-        final float[] d = delta;
-        int loX = (octant & 1) != 0 ? 3 : 0, hiX = 3 - loX;
-        int loY = (octant & 2) != 0 ? 4 : 1, hiY = 5 - loY;
-        int loZ = (octant & 4) != 0 ? 5 : 2, hiZ = 7 - loZ;
-        FloatVector vix = FloatVector.fromArray(F, pix, q), viy = FloatVector.fromArray(F, piy, q),
-                viz = FloatVector.fromArray(F, piz, q);
-        IntVector limBits = bits(FloatVector.fromArray(F, plim, q));
-        IntVector an = bits(vix.mul(d[loX])).max(bits(viy.mul(d[loY]))).max(bits(viz.mul(d[loZ])).max(0));
-        IntVector af = bits(vix.mul(d[hiX])).min(bits(viy.mul(d[hiY]))).min(bits(viz.mul(d[hiZ])).min(limBits));
-        IntVector bn = bits(vix.mul(d[6 + loX])).max(bits(viy.mul(d[6 + loY]))).max(bits(viz.mul(d[6 + loZ])).max(0));
-        IntVector bf = bits(vix.mul(d[6 + hiX])).min(bits(viy.mul(d[6 + hiY]))).min(bits(viz.mul(d[6 + hiZ])).min(limBits));
-        return (an.compare(VectorOperators.LE, af).anyTrue() ? 1 : 0) | (bn.compare(VectorOperators.LE, bf).anyTrue() ? 2 : 0);
-    }
-
     /** The leaf {@code ref} (box at nodes[box..]) for the packet at lane q. */
     private void leaf(int ref, int box, int q, int octant, float ox, float oy, float oz) {
         if (!reach(box, q, octant, ox, oy, oz)) return;
@@ -194,7 +191,7 @@ final class VectorOcclusion {
 
     /**
      * Writes preach[q..q+LANES): the limit of each lane that hits the leaf box at nodes[box..] (the
-     * test of {@link #children}), RETIRED for the others; returns whether any lane reaches the leaf.
+     * test of the stream loop), RETIRED for the others; returns whether any lane reaches the leaf.
      */
     private boolean reach(int box, int q, int octant, float ox, float oy, float oz) {
         final float[] n = nodes;
