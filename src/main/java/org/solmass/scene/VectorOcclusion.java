@@ -154,19 +154,21 @@ final class VectorOcclusion {
                     nb += hit >>> 1;
                 }
                 top = bStart + nb;
-                if (na > 0 && nb > 0) {
-                    // near side of the split first, by the direction signs of the first packet
-                    if ((oct[l[aStart]] >>> Float.floatToRawIntBits(n[b + 14]) & 1) == 0) {
-                        stRef[sp] = rb; stBox[sp] = b + 6; stStart[sp] = bStart; stLen[sp++] = nb;
-                        ref = ra; box = b; start = aStart; len = na;
-                    } else {
-                        stRef[sp] = ra; stBox[sp] = b; stStart[sp] = aStart; stLen[sp++] = na;
-                        ref = rb; box = b + 6; start = bStart; len = nb;
-                    }
-                    continue;
-                }
-                if (na > 0) { ref = ra; box = b; start = aStart; len = na; continue; }
-                if (nb > 0) { ref = rb; box = b + 6; start = bStart; len = nb; continue; }
+                // branch-free choice of the next node (few mispredictions): with both children hit,
+                // the near side of the split first (direction signs of the first packet), the other
+                // pushed; with one hit, that one; with none, pop
+                boolean both = na > 0 && nb > 0;
+                boolean aFirst = both ? (oct[l[aStart]] >>> Float.floatToRawIntBits(n[b + 14]) & 1) == 0 : na > 0;
+                stRef[sp] = aFirst ? rb : ra;
+                stBox[sp] = aFirst ? b + 6 : b;
+                stStart[sp] = aFirst ? bStart : aStart;
+                stLen[sp] = aFirst ? nb : na;
+                sp += both ? 1 : 0;
+                ref = aFirst ? ra : rb;
+                box = aFirst ? b : b + 6;
+                start = aFirst ? aStart : bStart;
+                len = aFirst ? na : nb;
+                if (len > 0) continue;
             } else {
                 for (int k = start, end = start + len; k < end; k++) {
                     int pk = l[k];
