@@ -26,7 +26,7 @@ package org.solmass.scene;
  * <p>Per-thread and reusable; allocates only when a bundle is larger than any before it.
  */
 public final class BundleTracer {
-    private static final float TINY_DIR = 1e-20f;
+    static final float TINY_DIR = 1e-20f;
     private static final float RETIRED = -1f;
 
     /**
@@ -98,8 +98,9 @@ public final class BundleTracer {
 
     /** Stores ray s; returns 1 if it needs the tree, 0 if the ground plane (or nothing) decided it. */
     private int load(int s, double ox, double oy, double oz, double ddx, double ddy, double ddz, double tMax, boolean[] out) {
-        if (scene.groundPlane && ddz != 0) { // as Tracer.groundT
-            double t = (scene.groundZ - oz) / ddz;
+        double rise = scene.groundZ - oz; // as Tracer.groundT; t > 0 needs rise and ddz of one sign
+        if (scene.groundPlane && (rise > 0 ? ddz > 0 : rise < 0 && ddz < 0)) {
+            double t = rise / ddz;
             if (t > 0 && t < tMax) {
                 out[s] = true;
                 lim[s] = RETIRED;
@@ -111,9 +112,11 @@ public final class BundleTracer {
         dx[s] = fx;
         dy[s] = fy;
         dz[s] = fz;
-        ix[s] = 1f / (Math.abs(fx) < TINY_DIR ? Math.copySign(TINY_DIR, fx) : fx);
-        iy[s] = 1f / (Math.abs(fy) < TINY_DIR ? Math.copySign(TINY_DIR, fy) : fy);
-        iz[s] = 1f / (Math.abs(fz) < TINY_DIR ? Math.copySign(TINY_DIR, fz) : fz);
+        if (simd == null) { // the SIMD kernel takes the inverses itself, 16 at a time
+            ix[s] = 1f / (Math.abs(fx) < TINY_DIR ? Math.copySign(TINY_DIR, fx) : fx);
+            iy[s] = 1f / (Math.abs(fy) < TINY_DIR ? Math.copySign(TINY_DIR, fy) : fy);
+            iz[s] = 1f / (Math.abs(fz) < TINY_DIR ? Math.copySign(TINY_DIR, fz) : fz);
+        }
         if (scene.nodeCount == 0) {
             lim[s] = RETIRED;
             return 0;
@@ -135,8 +138,14 @@ public final class BundleTracer {
         list = new int[count + 2 * count * (scene.maxDepth + 2)];
     }
 
-    private static int octant(float ix, float iy, float iz) {
-        return (ix < 0 ? 1 : 0) | (iy < 0 ? 2 : 0) | (iz < 0 ? 4 : 0);
+    /**
+     * Direction octant from the sign bits: bit 0 for x, 1 for y, 2 for z set when negative. The sign
+     * bit is the sign of the inverse direction too (the tiny-component clamp keeps it, and -0 gives a
+     * negative inverse), which picks the near and far slab of each axis.
+     */
+    static int octant(float dx, float dy, float dz) {
+        return (Float.floatToRawIntBits(dx) >>> 31) | (Float.floatToRawIntBits(dy) >>> 31) << 1
+                | (Float.floatToRawIntBits(dz) >>> 31) << 2;
     }
 
     /**
@@ -157,7 +166,7 @@ public final class BundleTracer {
         java.util.Arrays.fill(cnt, 0);
         for (int s = 0; s < count; s++) {
             if (lim[s] < 0) { key[s] = -1; continue; }
-            int k = octant(ix[s], iy[s], iz[s]) * CELLS * CELLS + cell(dx[s], dy[s]);
+            int k = octant(dx[s], dy[s], dz[s]) * CELLS * CELLS + cell(dx[s], dy[s]);
             key[s] = k;
             cnt[k]++;
         }

@@ -75,21 +75,38 @@ final class VectorOcclusion {
                 if (j < c) {
                     int i = list[octStart[o] + j];
                     px[k] = dx[i]; py[k] = dy[i]; pz[k] = dz[i];
-                    pix[k] = ix[i]; piy[k] = iy[i]; piz[k] = iz[i];
                     plim[k] = lim[i];
                     pray[k] = i;
                 } else {
-                    px[k] = 1; py[k] = 0; pz[k] = 0;
-                    pix[k] = 1; piy[k] = 1; piz[k] = 1;
+                    px[k] = 1; py[k] = 1; pz[k] = 1;
                     plim[k] = RETIRED;
                     pray[k] = -1;
                 }
             }
             for (int j = 0; j < padded / LANES; j++) pOctant[pk++] = o;
         }
+        for (int q = 0; q < k; q += LANES) { // inverse directions, as the single-ray tracer takes them
+            inverse(px, pix, q);
+            inverse(py, piy, q);
+            inverse(pz, piz, q);
+        }
         for (int j = 0; j < packets; j++) plist[j] = j;
         stream(packets, ox, oy, oz);
         for (int j = 0; j < k; j++) if (pray[j] >= 0 && plim[j] < 0) out[pray[j]] = true;
+    }
+
+    private static final int SIGN = 0x80000000, TINY_BITS = Float.floatToRawIntBits(BundleTracer.TINY_DIR);
+
+    /**
+     * {@code inv[q..] = 1 / (|d| < TINY ? copySign(TINY, d) : d)} lane by lane: the single-ray
+     * formula, so the values are the same bit for bit.
+     */
+    private static void inverse(float[] d, float[] inv, int q) {
+        FloatVector v = FloatVector.fromArray(F, d, q);
+        IntVector b = v.reinterpretAsInts();
+        FloatVector tiny = b.and(SIGN).or(TINY_BITS).reinterpretAsFloats();
+        v.blend(tiny, v.abs().compare(VectorOperators.LT, BundleTracer.TINY_DIR)).intoArray(inv, q);
+        FloatVector.broadcast(F, 1f).div(FloatVector.fromArray(F, inv, q)).intoArray(inv, q);
     }
 
     private void ensure(int packets) {
@@ -142,11 +159,11 @@ final class VectorOcclusion {
                     int q = pk * LANES;
                     FloatVector vix = FloatVector.fromArray(F, pix, q), viy = FloatVector.fromArray(F, piy, q),
                             viz = FloatVector.fromArray(F, piz, q);
-                    IntVector limBits = bits(FloatVector.fromArray(F, plim, q));
-                    IntVector an = bits(vix.mul(nax)).max(bits(viy.mul(nay))).max(bits(viz.mul(naz)).max(0));
-                    IntVector af = bits(vix.mul(fax)).min(bits(viy.mul(fay))).min(bits(viz.mul(faz)).min(limBits));
-                    IntVector bn = bits(vix.mul(nbx)).max(bits(viy.mul(nby))).max(bits(viz.mul(nbz)).max(0));
-                    IntVector bf = bits(vix.mul(fbx)).min(bits(viy.mul(fby))).min(bits(viz.mul(fbz)).min(limBits));
+                    IntVector limBits = FloatVector.fromArray(F, plim, q).reinterpretAsInts();
+                    IntVector an = vix.mul(nax).reinterpretAsInts().max(viy.mul(nay).reinterpretAsInts()).max(viz.mul(naz).reinterpretAsInts().max(0));
+                    IntVector af = vix.mul(fax).reinterpretAsInts().min(viy.mul(fay).reinterpretAsInts()).min(viz.mul(faz).reinterpretAsInts().min(limBits));
+                    IntVector bn = vix.mul(nbx).reinterpretAsInts().max(viy.mul(nby).reinterpretAsInts()).max(viz.mul(nbz).reinterpretAsInts().max(0));
+                    IntVector bf = vix.mul(fbx).reinterpretAsInts().min(viy.mul(fby).reinterpretAsInts()).min(viz.mul(fbz).reinterpretAsInts().min(limBits));
                     int hit = (an.compare(VectorOperators.LE, af).anyTrue() ? 1 : 0) | (bn.compare(VectorOperators.LE, bf).anyTrue() ? 2 : 0);
                     l[aStart + na] = pk;
                     na += hit & 1;
@@ -202,18 +219,14 @@ final class VectorOcclusion {
         int loZ = (octant & 4) != 0 ? 5 : 2, hiZ = 7 - loZ;
         FloatVector vix = FloatVector.fromArray(F, pix, q), viy = FloatVector.fromArray(F, piy, q),
                 viz = FloatVector.fromArray(F, piz, q);
-        IntVector limBits = bits(FloatVector.fromArray(F, plim, q));
-        IntVector near = bits(vix.mul(n[box + loX] - ox)).max(bits(viy.mul(n[box + loY] - oy)))
-                .max(bits(viz.mul(n[box + loZ] - oz)).max(0));
-        IntVector far = bits(vix.mul(n[box + hiX] - ox)).min(bits(viy.mul(n[box + hiY] - oy)))
-                .min(bits(viz.mul(n[box + hiZ] - oz)).min(limBits));
+        IntVector limBits = FloatVector.fromArray(F, plim, q).reinterpretAsInts();
+        IntVector near = vix.mul(n[box + loX] - ox).reinterpretAsInts().max(viy.mul(n[box + loY] - oy).reinterpretAsInts())
+                .max(viz.mul(n[box + loZ] - oz).reinterpretAsInts().max(0));
+        IntVector far = vix.mul(n[box + hiX] - ox).reinterpretAsInts().min(viy.mul(n[box + hiY] - oy).reinterpretAsInts())
+                .min(viz.mul(n[box + hiZ] - oz).reinterpretAsInts().min(limBits));
         VectorMask<Integer> miss = near.compare(VectorOperators.GT, far);
         limBits.blend(RETIRED_BITS, miss).intoArray(preach, q);
         return !miss.allTrue();
-    }
-
-    private static IntVector bits(FloatVector v) {
-        return v.reinterpretAsInts();
     }
 
     /**
