@@ -50,6 +50,8 @@ public class OcclusionBench {
     private double[] rays, rays1024;
     private final double[] dir = new double[3 * 1024];
     private final boolean[] out = new boolean[1024];
+    private final int[] tri = new int[1024];
+    private final double[] dist = new double[1024];
 
     @Setup(Level.Trial)
     public void setUp() {
@@ -73,6 +75,20 @@ public class OcclusionBench {
     @OperationsPerInvocation(RAYS)
     public void occludedBundles1024(Blackhole bh) {
         bh.consume(traceBundles(rays1024, 1024));
+    }
+
+    /** Closest hit of 1,024 rays per point, one bundle per point (the hemisphere rays of analyse). */
+    @Benchmark
+    @OperationsPerInvocation(RAYS)
+    public void closestHitBundles1024(Blackhole bh) {
+        int sum = 0;
+        double[] r = rays1024;
+        for (int i = 0; i < r.length / 6; i += 1024) {
+            for (int s = 0; s < 1024; s++) System.arraycopy(r, 6 * (i + s) + 3, dir, 3 * s, 3);
+            bundles.closestHit(r[6 * i], r[6 * i + 1], r[6 * i + 2], dir, 1024, tri, dist);
+            for (int s = 0; s < 1024; s++) sum += tri[s];
+        }
+        bh.consume(sum);
     }
 
     private int traceBundles(double[] r, int per) {

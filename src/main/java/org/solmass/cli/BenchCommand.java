@@ -72,12 +72,13 @@ public final class BenchCommand implements Runnable {
 
         System.err.println("solmass bench: warming up ...");
         for (int i = 0; i < 3; i++) {
-            for (Kind k : Kind.values()) runPass(scene, k == Kind.BUNDLES_1024 ? r1024 : r, k, 0, k == Kind.BUNDLES_1024 ? n1024 : n);
+            for (Kind k : Kind.values()) runPass(scene, k.perPoint == 1024 ? r1024 : r, k, 0, k.perPoint == 1024 ? n1024 : n);
         }
         double occ1 = best(() -> time(scene, r, 1, Kind.SINGLE)), occT = best(() -> time(scene, r, threads, Kind.SINGLE));
         double b64 = best(() -> time(scene, r, 1, Kind.BUNDLES_64)), b64T = best(() -> time(scene, r, threads, Kind.BUNDLES_64));
         double b1k = best(() -> time(scene, r1024, 1, Kind.BUNDLES_1024)), b1kT = best(() -> time(scene, r1024, threads, Kind.BUNDLES_1024));
         double cl1 = best(() -> time(scene, r, 1, Kind.CLOSEST)), clT = best(() -> time(scene, r, threads, Kind.CLOSEST));
+        double c1k = best(() -> time(scene, r1024, 1, Kind.CLOSEST_1024)), c1kT = best(() -> time(scene, r1024, threads, Kind.CLOSEST_1024));
         long hits = runPass(scene, r, Kind.SINGLE, 0, n);
         long hits1k = runPass(scene, r1024, Kind.BUNDLES_1024, 0, n1024);
 
@@ -95,6 +96,8 @@ public final class BenchCommand implements Runnable {
         t.row("occlusion, bundles of 64", mrays(n / b64) + " 1 thread (per CPU-second), " + perThread(n, b64T, threads) + ", " + kernel);
         t.row("occlusion, bundles of 1,024", mrays(n1024 / b1k) + " 1 thread (per CPU-second), " + perThread(n1024, b1kT, threads) + ", " + kernel);
         t.row("closest hit, one ray at a time", mrays(n / cl1) + " 1 thread (per CPU-second), " + perThread(n, clT, threads));
+        t.row("closest hit, bundles of 1,024", mrays(n1024 / c1k) + " 1 thread (per CPU-second), " + perThread(n1024, c1kT, threads)
+                + (scene.bundleTracer().simd() ? ", SIMD packets" : ", one at a time (no vector module)"));
         if (patches > 0) {
             List<Patch> ps = SyntheticDistrict.samplePatches(m, patches, seed + 1);
             SkyViewCalculator.compute(scene, ps.subList(0, Math.min(ps.size(), 500)), raysPerPatch, seed, null, null);
@@ -132,7 +135,7 @@ public final class BenchCommand implements Runnable {
 
     /** What a timing pass traces: rays one by one (any hit or closest hit), or per point as a bundle. */
     enum Kind {
-        SINGLE(1), CLOSEST(1), BUNDLES_64(64), BUNDLES_1024(1024);
+        SINGLE(1), CLOSEST(1), BUNDLES_64(64), BUNDLES_1024(1024), CLOSEST_1024(1024);
 
         final int perPoint;
 
@@ -179,12 +182,18 @@ public final class BenchCommand implements Runnable {
         }
         BundleTracer bt = scene.bundleTracer();
         int per = kind.perPoint;
-        double[] dir = new double[3 * per];
+        double[] dir = new double[3 * per], dist = new double[per];
         boolean[] out = new boolean[per];
+        int[] tri = new int[per];
         for (int i = a; i + per <= b; i += per) { // the rays of one point share its origin
             for (int s = 0; s < per; s++) System.arraycopy(r, 6 * (i + s) + 3, dir, 3 * s, 3);
-            bt.occluded(r[6 * i], r[6 * i + 1], r[6 * i + 2], dir, null, per, out);
-            for (int s = 0; s < per; s++) if (out[s]) hits++;
+            if (kind == Kind.CLOSEST_1024) {
+                bt.closestHit(r[6 * i], r[6 * i + 1], r[6 * i + 2], dir, per, tri, dist);
+                for (int s = 0; s < per; s++) if (tri[s] != Tracer.MISS) hits++;
+            } else {
+                bt.occluded(r[6 * i], r[6 * i + 1], r[6 * i + 2], dir, null, per, out);
+                for (int s = 0; s < per; s++) if (out[s]) hits++;
+            }
         }
         return hits;
     }

@@ -44,6 +44,10 @@ public final class BundleTracer {
     private int[] list = new int[0];
     private final int[] octantCount = new int[8], octantStart = new int[8], bucketCount = new int[8 * CELLS * CELLS];
     private int[] key = new int[0];
+    private double[] groundT = new double[0];
+    private int[] leafTri = new int[0];
+    private float[] hitT = new float[0];
+    private Tracer single;
 
     private final VectorOcclusion simd;
 
@@ -162,6 +166,19 @@ public final class BundleTracer {
 
     private void trace(double wox, double woy, double woz, int count, int queued, boolean[] out) {
         if (queued == 0) return;
+        sort(count);
+        float ox = (float) (wox - scene.shiftX), oy = (float) (woy - scene.shiftY), oz = (float) (woz - scene.shiftZ);
+        if (simd != null) {
+            simd.trace(list, octantStart, octantCount, ox, oy, oz, dx, dy, dz, ix, iy, iz, lim, out);
+            return;
+        }
+        for (int o = 0; o < 8; o++) {
+            if (octantCount[o] > 0) stream(o, octantStart[o], octantCount[o], queued, ox, oy, oz, out);
+        }
+    }
+
+    /** Counting sort of the live rays (lim >= 0) into {@code list} by octant and cell; fills the octant runs. */
+    private void sort(int count) {
         final int[] cnt = bucketCount, key = this.key;
         java.util.Arrays.fill(cnt, 0);
         for (int s = 0; s < count; s++) {
@@ -181,13 +198,57 @@ public final class BundleTracer {
             octantCount[o] = (o == 7 ? at : cnt[(o + 1) * CELLS * CELLS]) - octantStart[o];
         }
         for (int s = 0; s < count; s++) if (key[s] >= 0) list[cnt[key[s]]++] = s;
-        float ox = (float) (wox - scene.shiftX), oy = (float) (woy - scene.shiftY), oz = (float) (woz - scene.shiftZ);
-        if (simd != null) {
-            simd.trace(list, octantStart, octantCount, ox, oy, oz, dx, dy, dz, ix, iy, iz, lim, out);
+    }
+
+    /**
+     * Closest hit of rays {@code s < count} from the common origin o along unit directions
+     * {@code dir[3s..3s+2]}, with no distance limit: {@code tri[s]} = as {@link Tracer#closestHit}
+     * (original triangle index, {@link Tracer#GROUND} or {@link Tracer#MISS}) and {@code dist[s]} =
+     * its {@link Tracer#t()}. The same distance as one ray at a time; when two triangles meet the ray
+     * at exactly the same distance (a shared edge) either may be reported, as for the single ray.
+     * With the SIMD kernel the rays go through the tree together; otherwise one at a time.
+     */
+    public void closestHit(double ox, double oy, double oz, double[] dir, int count, int[] tri, double[] dist) {
+        if (simd == null || scene.nodeCount == 0) {
+            if (single == null) single = scene.tracer();
+            for (int s = 0; s < count; s++) {
+                tri[s] = single.closestHit(ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2], Double.POSITIVE_INFINITY);
+                dist[s] = single.t();
+            }
             return;
         }
-        for (int o = 0; o < 8; o++) {
-            if (octantCount[o] > 0) stream(o, octantStart[o], octantCount[o], queued, ox, oy, oz, out);
+        ensure(count);
+        if (groundT.length < count) {
+            groundT = new double[count];
+            leafTri = new int[count];
+            hitT = new float[count];
+        }
+        for (int s = 0; s < count; s++) {
+            double ddz = dir[3 * s + 2], tg = Double.POSITIVE_INFINITY;
+            if (scene.groundPlane && ddz != 0) { // as Tracer.groundT
+                double t = (scene.groundZ - oz) / ddz;
+                if (t > 0) tg = t;
+            }
+            groundT[s] = tg;
+            dx[s] = (float) dir[3 * s];
+            dy[s] = (float) dir[3 * s + 1];
+            dz[s] = (float) ddz;
+            lim[s] = (float) Math.min(tg, Float.MAX_VALUE);
+        }
+        sort(count);
+        float fox = (float) (ox - scene.shiftX), foy = (float) (oy - scene.shiftY), foz = (float) (oz - scene.shiftZ);
+        simd.closest(list, octantStart, octantCount, fox, foy, foz, dx, dy, dz, lim, leafTri, hitT);
+        for (int s = 0; s < count; s++) {
+            if (leafTri[s] >= 0) {
+                tri[s] = scene.triOriginal[leafTri[s]];
+                dist[s] = hitT[s];
+            } else if (groundT[s] < Double.POSITIVE_INFINITY) {
+                tri[s] = Tracer.GROUND;
+                dist[s] = groundT[s];
+            } else {
+                tri[s] = Tracer.MISS;
+                dist[s] = Double.POSITIVE_INFINITY;
+            }
         }
     }
 

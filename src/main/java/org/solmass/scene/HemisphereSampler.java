@@ -151,13 +151,8 @@ public final class HemisphereSampler {
     public void sample(double ox, double oy, double oz, double nx, double ny, double nz, long streamSeed,
                        boolean[] triangleIsGround, double[] dir, int[] cls, int[] tri, double[] dist) {
         directions(nx, ny, nz, streamSeed, dir);
-        for (int s = 0; s < count; s++) {
-            double dx = dir[3 * s], dy = dir[3 * s + 1], dz = dir[3 * s + 2];
-            int h = tracer.closestHit(ox, oy, oz, dx, dy, dz, Double.POSITIVE_INFINITY);
-            tri[s] = h;
-            dist[s] = tracer.t();
-            cls[s] = classOf(h, dz, triangleIsGround);
-        }
+        bundle.closestHit(ox, oy, oz, dir, count, tri, dist); // the patch's rays go through the tree together
+        for (int s = 0; s < count; s++) cls[s] = classOf(tri[s], dir[3 * s + 2], triangleIsGround);
     }
 
     /** Class of a ray from its {@link Tracer#closestHit} result and vertical direction component. */

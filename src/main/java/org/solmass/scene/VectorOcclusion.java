@@ -40,6 +40,10 @@ final class VectorOcclusion {
     private final int[] stRef, stBox, stStart, stLen;
     private float[] px = new float[0], py = px, pz = px, pix = px, piy = px, piz = px, plim = px;
     private int[] pray = new int[0];
+    /** Closest-hit mode: per lane the leaf-order index of the best triangle so far, as float bits. */
+    private float[] pbest = new float[0];
+    private boolean closestMode;
+    private static final float NONE = Float.intBitsToFloat(-1);
     private int[] preach = new int[0];
     private int[] pOctant = new int[0], plist = new int[0];
     /** Slab offsets box - origin of the node being visited: child A lo x,y,z, hi x,y,z, then child B. */
@@ -63,6 +67,23 @@ final class VectorOcclusion {
      */
     void trace(int[] list, int[] octStart, int[] octCount, float ox, float oy, float oz,
                float[] dx, float[] dy, float[] dz, float[] ix, float[] iy, float[] iz, float[] lim, boolean[] out) {
+        run(list, octStart, octCount, ox, oy, oz, dx, dy, dz, lim, out, null, null);
+    }
+
+    /**
+     * Closest hit instead of any hit for the same bundle layout: {@code leafTri[ray]} = leaf-order
+     * index of the nearest triangle with 0 &lt; t &lt; lim[ray], or -1; {@code hitT[ray]} its t (the
+     * float of {@code Tracer}'s Moller-Trumbore). Lanes keep their best t as their limit, so boxes
+     * beyond it are culled, as in the single-ray closest-hit traversal.
+     */
+    void closest(int[] list, int[] octStart, int[] octCount, float ox, float oy, float oz,
+                 float[] dx, float[] dy, float[] dz, float[] lim, int[] leafTri, float[] hitT) {
+        run(list, octStart, octCount, ox, oy, oz, dx, dy, dz, lim, null, leafTri, hitT);
+    }
+
+    private void run(int[] list, int[] octStart, int[] octCount, float ox, float oy, float oz,
+                     float[] dx, float[] dy, float[] dz, float[] lim, boolean[] out, int[] leafTri, float[] hitT) {
+        closestMode = leafTri != null;
         int packets = 0;
         for (int o = 0; o < 8; o++) packets += (octCount[o] + LANES - 1) / LANES;
         ensure(packets);
@@ -91,8 +112,17 @@ final class VectorOcclusion {
             inverse(pz, piz, q);
         }
         for (int j = 0; j < packets; j++) plist[j] = j;
+        if (closestMode) java.util.Arrays.fill(pbest, 0, k, NONE);
         stream(packets, ox, oy, oz);
-        for (int j = 0; j < k; j++) if (pray[j] >= 0 && plim[j] < 0) out[pray[j]] = true;
+        if (closestMode) {
+            for (int j = 0; j < k; j++) {
+                if (pray[j] < 0) continue;
+                leafTri[pray[j]] = Float.floatToRawIntBits(pbest[j]);
+                hitT[pray[j]] = plim[j];
+            }
+        } else {
+            for (int j = 0; j < k; j++) if (pray[j] >= 0 && plim[j] < 0) out[pray[j]] = true;
+        }
     }
 
     private static final int SIGN = 0x80000000, TINY_BITS = Float.floatToRawIntBits(BundleTracer.TINY_DIR);
@@ -121,6 +151,7 @@ final class VectorOcclusion {
         plim = new float[n];
         pray = new int[n];
         preach = new int[n];
+        pbest = new float[n];
     }
 
     /**
@@ -231,7 +262,8 @@ final class VectorOcclusion {
 
     /**
      * Moller-Trumbore of the triangle at tris[k..k+8] on the lanes [q, q + LANES), with the limits
-     * of preach (lanes that missed the leaf box cannot hit); retires the lanes that are blocked.
+     * of preach (lanes that missed the leaf box cannot hit); retires the lanes that are blocked, or
+     * in closest-hit mode keeps the nearer hit per lane (float bits move through blend unchanged).
      */
     private void triangle(int k, int q, float ox, float oy, float oz) {
         final float[] t = tris;
@@ -252,8 +284,17 @@ final class VectorOcclusion {
         VectorMask<Float> reject = det.compare(VectorOperators.EQ, 0f)
                 .or(u.compare(VectorOperators.LT, 0f)).or(u.compare(VectorOperators.GT, 1f))
                 .or(v.compare(VectorOperators.LT, 0f)).or(u.add(v).compare(VectorOperators.GT, 1f));
+        FloatVector reach = IntVector.fromArray(I, preach, q).reinterpretAsFloats();
+        if (closestMode) { // nearer than the lane's best so far, and the lane reached this leaf
+            FloatVector best = FloatVector.fromArray(F, plim, q);
+            VectorMask<Float> hit = reject.not().and(h.compare(VectorOperators.GT, 0f))
+                    .and(h.compare(VectorOperators.LT, best)).and(reach.compare(VectorOperators.GE, 0f));
+            best.blend(h, hit).intoArray(plim, q);
+            FloatVector.fromArray(F, pbest, q).blend(Float.intBitsToFloat(k / Scene.TRI_WORDS), hit).intoArray(pbest, q);
+            return;
+        }
         VectorMask<Float> hit = reject.not().and(h.compare(VectorOperators.GT, 0f))
-                .and(h.compare(VectorOperators.LT, IntVector.fromArray(I, preach, q).reinterpretAsFloats()));
+                .and(h.compare(VectorOperators.LT, reach));
         FloatVector.fromArray(F, plim, q).blend(RETIRED, hit).intoArray(plim, q);
     }
 }

@@ -23,7 +23,7 @@ class BenchCommandTest {
         }
         assertEquals(Main.EXIT_OK, code);
         String out = buf.toString(StandardCharsets.UTF_8);
-        for (String row : new String[] {"triangles", "BVH build", "occlusion, one ray at a time", "occlusion, bundles of 64", "occlusion, bundles of 1,024", "closest hit", "sky view factors"}) {
+        for (String row : new String[] {"triangles", "BVH build", "occlusion, one ray at a time", "occlusion, bundles of 64", "occlusion, bundles of 1,024", "closest hit", "closest hit, bundles of 1,024", "sky view factors"}) {
             assertTrue(out.contains(row), "missing row " + row + " in\n" + out);
         }
         assertEquals(Main.EXIT_INPUT, Main.execute("bench", "--blocks", "0"));

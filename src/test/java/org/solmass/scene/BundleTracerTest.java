@@ -77,6 +77,48 @@ class BundleTracerTest {
         }
     }
 
+    /**
+     * Property (common practice): the closest hit of a bundle is the single-ray closest hit, ray by
+     * ray: the same distance bit for bit, and the same triangle unless two triangles meet the ray at
+     * exactly that distance (a shared edge), where either is right.
+     */
+    @Test
+    void bundleClosestHitsEqualSingleRayClosestHits() {
+        int[] sizes = {1, 60, 900, 4000};
+        int[] bundleSizes = {0, 1, 7, 16, 17, 64, 333, 1024};
+        for (int sc = 0; sc < sizes.length; sc++) {
+            Scene scene = Scene.build(TracerTest.randomSoup(700 + sc, sizes[sc]), sc % 2 == 0, 0.0);
+            Tracer single = scene.tracer();
+            BundleTracer bundle = scene.bundleTracer();
+            SplittableRandom r = new SplittableRandom(41 + sc);
+            int hits = 0, ties = 0;
+            for (int b = 0; b < 60; b++) {
+                int n = bundleSizes[b % bundleSizes.length];
+                double ox = r.nextDouble(-20, 120), oy = r.nextDouble(-20, 120), oz = r.nextDouble(0.5, 120);
+                double[] dir = new double[3 * n], dist = new double[n];
+                int[] tri = new int[n];
+                for (int s = 0; s < n; s++) {
+                    double dx = r.nextGaussian(), dy = r.nextGaussian(), dz = r.nextGaussian();
+                    if (s % 11 == 0) dx = 0;
+                    double l = Math.sqrt(dx * dx + dy * dy + dz * dz);
+                    dir[3 * s] = dx / l; dir[3 * s + 1] = dy / l; dir[3 * s + 2] = dz / l;
+                }
+                bundle.closestHit(ox, oy, oz, dir, n, tri, dist);
+                for (int s = 0; s < n; s++) {
+                    int want = single.closestHit(ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2], Double.POSITIVE_INFINITY);
+                    assertEquals(single.t(), dist[s], 0.0, "distance, scene " + sc + " bundle " + b + " ray " + s);
+                    if (want != tri[s]) {
+                        assertTrue(want >= 0 && tri[s] >= 0, "scene " + sc + " bundle " + b + " ray " + s + ": " + want + " vs " + tri[s]);
+                        ties++;
+                    }
+                    if (want >= 0) hits++;
+                }
+            }
+            assertTrue(hits > 100 || sizes[sc] < 100, "scene " + sc + ": the rays must hit triangles, " + hits);
+            assertTrue(ties <= hits / 100 + 1, "ties are rare: " + ties + " of " + hits);
+        }
+    }
+
     @Test
     void reusedBundleTracerForgetsEarlierBundles() {
         // a larger bundle, then a smaller one: no state may leak from the first into the second
