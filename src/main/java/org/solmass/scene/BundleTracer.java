@@ -1,11 +1,14 @@
 package org.solmass.scene;
 
 /**
- * Any-hit (occlusion) queries for a bundle of rays that share one origin: the hemisphere rays, horizon
- * rays and sun rays of one patch. Gives exactly the answers of {@link Tracer#occluded} ray by ray
- * (same float arithmetic, tested), several times faster, because the bundle walks the tree together.
+ * Queries for a bundle of rays that share one origin: the hemisphere rays, horizon rays and sun rays
+ * of one patch. Any hit ({@link #occluded}) gives exactly the answers of {@link Tracer#occluded} ray
+ * by ray, closest hit ({@link #closestHit}) the distances of {@link Tracer#closestHit} (same float
+ * arithmetic, tested), several times faster, because the bundle walks the tree together. With the
+ * vector module loaded the SIMD kernel {@link VectorOcclusion} does the walking (packets of rays,
+ * streamed); otherwise the scalar loop below does any hit and closest hit goes one ray at a time.
  *
- * <p>Method: ray-stream traversal (Wald, Gribble, Boulos and Kensler, 2007, "SIMD ray stream tracing",
+ * <p>Scalar method: ray-stream traversal (Wald, Gribble, Boulos and Kensler, 2007, "SIMD ray stream tracing",
  * SCI Institute technical report UUSCI-2007-012; Barringer and Akenine-Moller, 2014, "Dynamic ray
  * stream traversal", ACM Transactions on Graphics 33(4)): each BVH node is visited at most once per
  * bundle, with the list of the bundle's rays that reach it; one tight, branch-free loop over that list
