@@ -149,7 +149,6 @@ public final class ShadedIrradiation {
         final org.solmass.scene.Scene scene;
         final Inputs in;
         final HemisphereSampler sampler, reflectorSampler;
-        final Tracer tracer;
         final org.solmass.scene.BundleTracer bundle;
         /** Directions, weights and sun indices of the rays traced as one bundle (horizon band or sun). */
         final double[] bundleDir, bundleW;
@@ -177,7 +176,6 @@ public final class ShadedIrradiation {
             this.in = in;
             sampler = new HemisphereSampler(scene, in.raysPerPatch());
             reflectorSampler = new HemisphereSampler(scene, in.reflectorRays());
-            tracer = scene.tracer();
             bundle = scene.bundleTracer();
             int bundleMax = Math.max(in.sun().count(), HORIZON_ELEVATIONS * HORIZON_AZIMUTHS);
             bundleDir = new double[3 * bundleMax];

@@ -5,8 +5,8 @@ import org.solmass.surface.Patch;
 /**
  * Cosine-weighted, stratified hemisphere rays about a patch normal, traced through a {@link Scene}
  * and classified as {@link #SKY}, {@link #GROUND} or {@link #BLOCK}. Reusable per thread: it owns
- * one {@link Tracer} and one {@link BundleTracer} and allocates nothing per ray or per patch; results
- * go into caller arrays.
+ * one {@link BundleTracer} (the rays of a patch go through the tree together) and allocates nothing
+ * per ray or per patch; results go into caller arrays.
  *
  * <p>Sampling: the unit square is cut into a k x k grid of equal cells, one jittered point per cell
  * (stratified sampling, Cochran, Sampling Techniques, 3rd ed., 1977, ch. 5), mapped to the unit disk
@@ -37,23 +37,24 @@ public final class HemisphereSampler {
     /** Default rays per patch: 32 x 32 strata. */
     public static final int DEFAULT_RAYS = 1024;
 
-    private final Tracer tracer;
     private final BundleTracer bundle;
     private final Scene scene;
     private final int side, count;
     private final double[] origin = new double[3];
-    private final double[] groundT;
+    private final double[] groundT, hitDist;
     private final boolean[] blocked;
+    private final int[] hitTri;
 
     /** @param requestedRays rays per patch, positive; rounded to a square grid (see class doc) */
     public HemisphereSampler(Scene scene, int requestedRays) {
         this.scene = scene;
-        this.tracer = scene.tracer();
         this.side = gridSide(requestedRays);
         this.count = side * side;
         this.bundle = scene.bundleTracer();
         this.groundT = new double[count];
         this.blocked = new boolean[count];
+        this.hitTri = new int[count];
+        this.hitDist = new double[count];
     }
 
     /** Side k of the k x k stratification grid used for a request of {@code requestedRays}. */
@@ -71,8 +72,6 @@ public final class HemisphereSampler {
     public int rayCount() { return count; }
 
     public int gridSide() { return side; }
-
-    public Tracer tracer() { return tracer; }
 
     /**
      * 64-bit seed of a patch's ray stream: FNV-1a (Fowler, Noll, Vo) hash of the id's UTF-16 chars,
@@ -173,11 +172,9 @@ public final class HemisphereSampler {
         scene.rayOrigin(patch, origin);
         double ox = origin[0], oy = origin[1], oz = origin[2];
         directions(patch.normal().x(), patch.normal().y(), patch.normal().z(), patchSeed(patch.id(), runSeed), dir);
-        if (triangleIsGround != null) {
-            for (int s = 0; s < count; s++) {
-                cls[s] = classOf(tracer.closestHit(ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2],
-                        Double.POSITIVE_INFINITY), dir[3 * s + 2], triangleIsGround);
-            }
+        if (triangleIsGround != null) { // ground-flagged triangles: the first hit decides
+            bundle.closestHit(ox, oy, oz, dir, count, hitTri, hitDist);
+            for (int s = 0; s < count; s++) cls[s] = classOf(hitTri[s], dir[3 * s + 2], triangleIsGround);
             return;
         }
         for (int s = 0; s < count; s++) { // ray parameter of the ground plane, from either side
