@@ -42,6 +42,8 @@ final class VectorOcclusion {
     private int[] pray = new int[0];
     /** Closest-hit mode: per lane the leaf-order index of the best triangle so far, as float bits. */
     private float[] pbest = new float[0];
+    /** Per lane the distance of its hit of the triangle being tested, or -1. */
+    private float[] phit = new float[0];
     private boolean closestMode;
     private static final float NONE = Float.intBitsToFloat(-1);
     private int[] preach = new int[0];
@@ -152,6 +154,7 @@ final class VectorOcclusion {
         pray = new int[n];
         preach = new int[n];
         pbest = new float[n];
+        phit = new float[n];
     }
 
     /**
@@ -264,8 +267,17 @@ final class VectorOcclusion {
      * Moller-Trumbore of the triangle at tris[k..k+8] on the lanes [q, q + LANES), with the limits
      * of preach (lanes that missed the leaf box cannot hit); retires the lanes that are blocked, or
      * in closest-hit mode keeps the nearer hit per lane (float bits move through blend unchanged).
+     * Three small methods rather than one: a large one can run past C2's inlining budget, and a
+     * Vector API call that is not inlined runs the API's allocating Java code.
      */
     private void triangle(int k, int q, float ox, float oy, float oz) {
+        distances(k, q, ox, oy, oz);
+        if (closestMode) keepNearest(k, q);
+        else retireBlocked(q);
+    }
+
+    /** phit[q..q+LANES) = t of each lane's hit of the triangle at tris[k..] with t > 0, else -1. */
+    private void distances(int k, int q, float ox, float oy, float oz) {
         final float[] t = tris;
         float e1x = t[k + 3], e1y = t[k + 4], e1z = t[k + 5];
         float e2x = t[k + 6], e2y = t[k + 7], e2z = t[k + 8];
@@ -281,20 +293,29 @@ final class VectorOcclusion {
         FloatVector u = ppx.mul(sx).add(ppy.mul(sy)).add(ppz.mul(sz)).mul(inv);
         FloatVector v = vdx.mul(qx).add(vdy.mul(qy)).add(vdz.mul(qz)).mul(inv);
         FloatVector h = inv.mul(tq);
-        VectorMask<Float> reject = det.compare(VectorOperators.EQ, 0f)
+        VectorMask<Float> miss = det.compare(VectorOperators.EQ, 0f)
                 .or(u.compare(VectorOperators.LT, 0f)).or(u.compare(VectorOperators.GT, 1f))
-                .or(v.compare(VectorOperators.LT, 0f)).or(u.add(v).compare(VectorOperators.GT, 1f));
+                .or(v.compare(VectorOperators.LT, 0f)).or(u.add(v).compare(VectorOperators.GT, 1f))
+                .or(h.compare(VectorOperators.GT, 0f).not()); // also NaN
+        h.blend(-1f, miss).intoArray(phit, q);
+    }
+
+    /** Any hit: lanes whose hit lies before their limit (and that reached the leaf) are retired. */
+    private void retireBlocked(int q) {
+        FloatVector h = FloatVector.fromArray(F, phit, q);
         FloatVector reach = IntVector.fromArray(I, preach, q).reinterpretAsFloats();
-        if (closestMode) { // nearer than the lane's best so far, and the lane reached this leaf
-            FloatVector best = FloatVector.fromArray(F, plim, q);
-            VectorMask<Float> hit = reject.not().and(h.compare(VectorOperators.GT, 0f))
-                    .and(h.compare(VectorOperators.LT, best)).and(reach.compare(VectorOperators.GE, 0f));
-            best.blend(h, hit).intoArray(plim, q);
-            FloatVector.fromArray(F, pbest, q).blend(Float.intBitsToFloat(k / Scene.TRI_WORDS), hit).intoArray(pbest, q);
-            return;
-        }
-        VectorMask<Float> hit = reject.not().and(h.compare(VectorOperators.GT, 0f))
-                .and(h.compare(VectorOperators.LT, reach));
+        VectorMask<Float> hit = h.compare(VectorOperators.GT, 0f).and(h.compare(VectorOperators.LT, reach));
         FloatVector.fromArray(F, plim, q).blend(RETIRED, hit).intoArray(plim, q);
+    }
+
+    /** Closest hit: lanes that reached the leaf keep the triangle at tris[k..] if it is nearer than their best. */
+    private void keepNearest(int k, int q) {
+        FloatVector h = FloatVector.fromArray(F, phit, q);
+        FloatVector best = FloatVector.fromArray(F, plim, q);
+        FloatVector reach = IntVector.fromArray(I, preach, q).reinterpretAsFloats();
+        VectorMask<Float> hit = h.compare(VectorOperators.GT, 0f).and(h.compare(VectorOperators.LT, best))
+                .and(reach.compare(VectorOperators.GE, 0f));
+        best.blend(h, hit).intoArray(plim, q);
+        FloatVector.fromArray(F, pbest, q).blend(Float.intBitsToFloat(k / Scene.TRI_WORDS), hit).intoArray(pbest, q);
     }
 }
