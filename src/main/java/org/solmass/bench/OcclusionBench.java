@@ -48,10 +48,6 @@ public class OcclusionBench {
     private Tracer tracer;
     private BundleTracer bundles;
     private double[] rays, rays1024;
-    private final double[] dir = new double[3 * 1024];
-    private final boolean[] out = new boolean[1024];
-    private final int[] tri = new int[1024];
-    private final double[] dist = new double[1024];
 
     @Setup(Level.Trial)
     public void setUp() {
@@ -67,38 +63,25 @@ public class OcclusionBench {
     @Benchmark
     @OperationsPerInvocation(RAYS)
     public void occludedBundles64(Blackhole bh) {
-        bh.consume(traceBundles(rays, 64));
+        bh.consume(traceBundles(rays, 64, false));
     }
 
     /** Occlusion of 1,024 rays per point (the default of sky-view and analyse), one bundle per point. */
     @Benchmark
     @OperationsPerInvocation(RAYS)
     public void occludedBundles1024(Blackhole bh) {
-        bh.consume(traceBundles(rays1024, 1024));
+        bh.consume(traceBundles(rays1024, 1024, false));
     }
 
     /** Closest hit of 1,024 rays per point, one bundle per point (the hemisphere rays of analyse). */
     @Benchmark
     @OperationsPerInvocation(RAYS)
     public void closestHitBundles1024(Blackhole bh) {
-        int sum = 0;
-        double[] r = rays1024;
-        for (int i = 0; i < r.length / 6; i += 1024) {
-            for (int s = 0; s < 1024; s++) System.arraycopy(r, 6 * (i + s) + 3, dir, 3 * s, 3);
-            bundles.closestHit(r[6 * i], r[6 * i + 1], r[6 * i + 2], dir, 1024, tri, dist);
-            for (int s = 0; s < 1024; s++) sum += tri[s];
-        }
-        bh.consume(sum);
+        bh.consume(traceBundles(rays1024, 1024, true));
     }
 
-    private int traceBundles(double[] r, int per) {
-        int hits = 0;
-        for (int i = 0; i < r.length / 6; i += per) {
-            for (int s = 0; s < per; s++) System.arraycopy(r, 6 * (i + s) + 3, dir, 3 * s, 3);
-            bundles.occluded(r[6 * i], r[6 * i + 1], r[6 * i + 2], dir, null, per, out);
-            for (int s = 0; s < per; s++) if (out[s]) hits++;
-        }
-        return hits;
+    private long traceBundles(double[] r, int per, boolean closest) {
+        return BundleRuns.trace(bundles, r, 0, r.length / 6, per, closest);
     }
 
     @Benchmark

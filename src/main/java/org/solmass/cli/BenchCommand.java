@@ -1,9 +1,9 @@
 package org.solmass.cli;
 
 import org.solmass.InputException;
+import org.solmass.bench.BundleRuns;
 import org.solmass.bench.SyntheticDistrict;
 import org.solmass.model.MassingModel;
-import org.solmass.scene.BundleTracer;
 import org.solmass.scene.HemisphereSampler;
 import org.solmass.scene.Scene;
 import org.solmass.scene.SkyViewCalculator;
@@ -180,22 +180,7 @@ public final class BenchCommand implements Runnable {
             }
             return hits;
         }
-        BundleTracer bt = scene.bundleTracer();
-        int per = kind.perPoint;
-        double[] dir = new double[3 * per], dist = new double[per];
-        boolean[] out = new boolean[per];
-        int[] tri = new int[per];
-        for (int i = a; i + per <= b; i += per) { // the rays of one point share its origin
-            for (int s = 0; s < per; s++) System.arraycopy(r, 6 * (i + s) + 3, dir, 3 * s, 3);
-            if (kind == Kind.CLOSEST_1024) {
-                bt.closestHit(r[6 * i], r[6 * i + 1], r[6 * i + 2], dir, per, tri, dist);
-                for (int s = 0; s < per; s++) if (tri[s] != Tracer.MISS) hits++;
-            } else {
-                bt.occluded(r[6 * i], r[6 * i + 1], r[6 * i + 2], dir, null, per, out);
-                for (int s = 0; s < per; s++) if (out[s]) hits++;
-            }
-        }
-        return hits;
+        return BundleRuns.trace(scene.bundleTracer(), r, a, b, kind.perPoint, kind == Kind.CLOSEST_1024);
     }
 
     /** Two-column aligned table. */

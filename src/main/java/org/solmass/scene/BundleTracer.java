@@ -142,7 +142,8 @@ public final class BundleTracer {
         iz = new float[count];
         lim = new float[count];
         key = new int[count];
-        list = new int[count + 2 * count * (scene.maxDepth + 2)];
+        // the scalar stream keeps the child lists of the current path above the sorted rays
+        list = new int[simd != null ? count : count + 2 * count * (scene.maxDepth + 2)];
     }
 
     /**
@@ -172,7 +173,7 @@ public final class BundleTracer {
         sort(count);
         float ox = (float) (wox - scene.shiftX), oy = (float) (woy - scene.shiftY), oz = (float) (woz - scene.shiftZ);
         if (simd != null) {
-            simd.trace(list, octantStart, octantCount, ox, oy, oz, dx, dy, dz, ix, iy, iz, lim, out);
+            simd.trace(list, octantStart, octantCount, ox, oy, oz, dx, dy, dz, lim, out);
             return;
         }
         for (int o = 0; o < 8; o++) {

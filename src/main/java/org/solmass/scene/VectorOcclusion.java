@@ -68,7 +68,7 @@ final class VectorOcclusion {
      * (the last one padded with retired lanes), so that a packet's lanes share their direction signs.
      */
     void trace(int[] list, int[] octStart, int[] octCount, float ox, float oy, float oz,
-               float[] dx, float[] dy, float[] dz, float[] ix, float[] iy, float[] iz, float[] lim, boolean[] out) {
+               float[] dx, float[] dy, float[] dz, float[] lim, boolean[] out) {
         run(list, octStart, octCount, ox, oy, oz, dx, dy, dz, lim, out, null, null);
     }
 
