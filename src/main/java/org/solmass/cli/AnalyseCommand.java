@@ -92,29 +92,14 @@ public final class AnalyseCommand implements Callable<Integer> {
         }
         System.out.printf("  annual irradiation: area-weighted mean %.0f kWh/m2, min %.0f, max %.0f, total %.0f MWh on %.0f m2%n",
                 sum / area, min, max, sum / 1000, area);
-        printMetrics(o, area);
+        printMetrics(o);
+        System.out.println("  " + org.solmass.Cautions.RESULTS);
         System.out.printf("  time %.1f s (%s)%n", seconds, timings(o.timingsS()));
         for (Path f : files) System.out.println("  wrote " + f);
     }
 
-    private static void printMetrics(AnalysisRun.Outcome o, double area) {
-        MetricsStep.Result m = o.metrics();
-        for (int d = 0; d < m.dates().size(); d++) {
-            double[] h = m.sunHours()[d];
-            double mean = 0, atLeast = 0;
-            for (int p = 0; p < h.length; p++) {
-                double ar = o.patches().patches().get(p).areaM2();
-                mean += h[p] * ar;
-                if (h[p] >= org.solmass.metrics.SunHoursOnDate.EN17037_MIN_H) atLeast += ar;
-            }
-            var day = m.dates().get(d);
-            System.out.printf("  sun hours on %02d-%02d: area-weighted mean %.1f h; %.0f %% of the area has at least 1.5 h%n",
-                    day.getMonthValue(), day.getDayOfMonth(), mean / area, 100 * atLeast / area);
-        }
-        var pv = m.pv();
-        System.out.printf("  PV roof zones: %d, %.0f m2, indicative yield %.1f MWh per year (best plane: tilt %.0f, azimuth %.0f, %.0f kWh/m2)%n",
-                pv.zones().size(), pv.totalAreaM2(), pv.totalYieldKwh() / 1000, pv.best().tiltDeg(), pv.best().azimuthDeg(),
-                pv.best().annualKwhM2());
+    private static void printMetrics(AnalysisRun.Outcome o) {
+        for (String line : o.metrics().summaryLines()) System.out.println("  " + line);
     }
 
     private static String timings(Map<String, Double> t) {

@@ -7,17 +7,20 @@ import org.solmass.climate.ClimateSource;
 import org.solmass.climate.ClimateSpec;
 import org.solmass.climate.TimeBase;
 import org.solmass.climate.WeatherSeries;
+import org.solmass.irradiation.IrradiationColumns;
 import org.solmass.irradiation.IrradiationResult;
 import org.solmass.irradiation.IrradiationSetup;
 import org.solmass.irradiation.MemoryEstimate;
 import org.solmass.irradiation.PhaseProgress;
 import org.solmass.irradiation.ShadedIrradiation;
+import org.solmass.metrics.MetricContext;
+import org.solmass.metrics.Metrics;
+import org.solmass.metrics.PvZones;
 import org.solmass.model.LengthUnit;
 import org.solmass.model.MassingModel;
 import org.solmass.model.ModelOptions;
 import org.solmass.model.ObjReader;
 import org.solmass.model.UpAxis;
-import org.solmass.output.ResultTable;
 import org.solmass.scene.Scene;
 import org.solmass.sky.Isotropic;
 import org.solmass.sky.Perez;
@@ -29,6 +32,7 @@ import org.solmass.surface.PatchSet;
 import org.solmass.surface.Patcher;
 import org.solmass.surface.Surface;
 import org.solmass.surface.SurfaceKind;
+import org.solmass.table.ResultTable;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -54,7 +58,7 @@ public final class AnalysisRun {
     /** Everything an analysis produced. */
     public record Outcome(Study study, MassingModel model, PatchSet patches, WeatherSeries weather,
                           IrradiationResult result, ResultTable table, List<String> warnings,
-                          Map<String, Long> counts, Map<String, Double> timingsS, MetricsStep.Result metrics) {}
+                          Map<String, Long> counts, Map<String, Double> timingsS, Metrics.Outcome metrics) {}
 
     /** The model read with the study's options, with the reader's warnings. */
     public static ObjReader.Result loadModel(Study study) {
@@ -195,7 +199,9 @@ public final class AnalysisRun {
 
         long t4 = System.nanoTime();
         progress.begin("metrics", 0);
-        MetricsStep.Result metrics = MetricsStep.run(study, scene, patches, r, weather, skyModel(study));
+        ResultTable table = new ResultTable(patches.patches());
+        IrradiationColumns.addTo(table, r, weather.timeBase() == TimeBase.HOURLY_YEAR);
+        Metrics.Outcome metrics = Metrics.run(metricContext(study, scene, patches, r, weather), table);
         t.put("metrics", seconds(t4));
 
         counts.put("blocks", (long) model.blockNames().size());
@@ -206,8 +212,6 @@ public final class AnalysisRun {
         counts.put("steps", (long) weather.size());
         counts.put("sun_directions", (long) r.sunDirections());
         counts.put("rays_per_patch", (long) org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()));
-        ResultTable table = table(patches, r, weather.timeBase() == TimeBase.HOURLY_YEAR);
-        MetricsStep.addColumns(table, metrics);
         return new Outcome(study, model, patches, weather, r, table, warnings, counts, t, metrics);
     }
 
@@ -250,33 +254,14 @@ public final class AnalysisRun {
                 study.source() == null ? "--patch" : study.source() + ": patch_m");
     }
 
-    /** Per-patch result columns in the order of docs/outputs.md. */
-    static ResultTable table(PatchSet patches, IrradiationResult r, boolean hourlyYear) {
-        ResultTable tb = new ResultTable(patches.patches());
-        int n = r.size();
-        tb.put("sky_view_factor", "", r.skyViewFactor());
-        tb.put("ground_view_factor", "", r.groundViewFactor());
-        tb.put("svf_std_error", "", r.skyViewStdError());
-        tb.put("annual_kwh_m2", "kWh/m2", r.annual());
-        tb.put("beam_kwh_m2", "kWh/m2", r.beam());
-        tb.put("diffuse_kwh_m2", "kWh/m2", r.diffuse());
-        tb.put("reflected_kwh_m2", "kWh/m2", r.reflected());
-        tb.put("unshaded_kwh_m2", "kWh/m2", r.unshaded());
-        double[] loss = new double[n], kwh = new double[n];
-        for (int p = 0; p < n; p++) {
-            loss[p] = r.shadingLossPct(p);
-            kwh[p] = r.annual()[p] * patches.patches().get(p).areaM2();
-        }
-        tb.put("shading_loss_pct", "%", loss);
-        tb.put("annual_kwh", "kWh", kwh);
-        for (int m = 0; m < 12; m++) tb.put(String.format("m%02d_kwh_m2", m + 1), "kWh/m2", r.monthly()[m]);
-        if (hourlyYear) { // sunshine duration needs real hours: an average day's mean DNI says nothing about it
-            double[] share = new double[n];
-            for (int p = 0; p < n; p++) share[p] = r.siteSunshineHours() > 0 ? 100 * r.sunshineHours()[p] / r.siteSunshineHours() : 0;
-            tb.put("sunshine_h", "h", r.sunshineHours());
-            tb.put("sunshine_share_pct", "%", share);
-        }
-        return tb;
+    /** What the metrics read: the finished stages and the study's sun-hour and PV settings (the one mapping point). */
+    static MetricContext metricContext(Study study, Scene scene, PatchSet patches, IrradiationResult r, WeatherSeries weather) {
+        Study.SunHours sh = study.sunHours();
+        Study.Pv pv = study.pv();
+        MetricContext.Settings settings = new MetricContext.Settings(sh.dates(), sh.stepMinutes(), sh.minElevationDeg(),
+                new PvZones.Settings(pv.suitablePct(), pv.minZoneM2(), pv.moduleEfficiency(), pv.performanceRatio()));
+        return new MetricContext(scene, patches, r, weather, skyModel(study), site(study), study.climate().year(),
+                study.albedo().ground(), study.patchM(), settings);
     }
 
     /**

@@ -1,5 +1,6 @@
 package org.solmass.cli;
 
+import org.solmass.Cautions;
 import org.solmass.output.ResultsFolder;
 import org.solmass.output.RunRecord;
 
@@ -12,10 +13,6 @@ import java.util.List;
  * temporary file and moved into place, so a failed or killed run leaves the previous results whole.
  */
 public final class ResultFiles {
-    /** The caution carried by every results file a roof or PV decision could be taken from. */
-    public static final String CAUTION = "Indicative only: a planning aid for early design. Roof work, PV "
-            + "electrical and structural design, fire setbacks and grid connection follow local codes and licensed practice.";
-
     private ResultFiles() {}
 
     /**
@@ -25,9 +22,9 @@ public final class ResultFiles {
     public static List<Path> write(AnalysisRun.Outcome o) {
         RunRecord run = RunRecord.of(Main.version(), o.study(), o.weather().timeBase().label(), o.counts(),
                 o.timingsS(), Instant.now());
-        List<String> notes = new java.util.ArrayList<>(o.metrics() == null ? List.of() : MetricsStep.notes(o.metrics()));
+        List<String> notes = new java.util.ArrayList<>();
         for (String w : o.warnings()) notes.add("warning: " + w); // the warnings analyse printed, kept with the results
         return ResultsFolder.write(new ResultsFolder.Results(o.study(), o.model(), o.table(),
-                o.result().monthHourWm2(), run, List.of(CAUTION), o.metrics() == null ? null : o.metrics().pv(), notes));
+                o.result().monthHourWm2(), run, List.of(Cautions.RESULTS), o.metrics(), notes));
     }
 }

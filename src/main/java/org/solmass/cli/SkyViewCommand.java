@@ -7,7 +7,8 @@ import org.solmass.model.ModelOptions;
 import org.solmass.model.ObjReader;
 import org.solmass.model.UpAxis;
 import org.solmass.output.PatchCsvWriter;
-import org.solmass.output.ResultTable;
+import org.solmass.irradiation.IrradiationColumns;
+import org.solmass.table.ResultTable;
 import org.solmass.scene.HemisphereSampler;
 import org.solmass.scene.Scene;
 import org.solmass.scene.SkyViewCalculator;
@@ -34,8 +35,11 @@ import java.util.concurrent.ForkJoinPool;
 /** {@code solmass sky-view}: sky and ground view factors of every patch of a model. */
 @Command(name = "sky-view", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Sky, ground and obstruction view factors of every patch of a massing model.",
-                "Cosine-weighted stratified hemisphere ray casting; writes DIR/patches.csv."})
+                "Cosine-weighted stratified hemisphere ray casting; writes DIR/sky-view.csv."})
 public final class SkyViewCommand implements Callable<Integer> {
+    /** The table this command writes: patch columns and the four view-factor columns (not analyse's patches.csv). */
+    public static final String FILE_NAME = "sky-view.csv";
+
     @Parameters(paramLabel = "MODEL.obj", description = "massing model (OBJ)") Path model;
     @Option(names = "--up", paramLabel = "y|z", defaultValue = "z", description = "model up axis (default ${DEFAULT-VALUE})") String up;
     @Option(names = "--unit", paramLabel = "UNIT", defaultValue = "m", description = "model unit: m, cm, mm, ft (default ${DEFAULT-VALUE})") String unit;
@@ -77,23 +81,15 @@ public final class SkyViewCommand implements Callable<Integer> {
         }
         double tRays = AnalysisRun.seconds(t1);
         ResultTable table = new ResultTable(ps.patches());
-        double[] sky = new double[n], gr = new double[n], ob = new double[n], se = new double[n];
-        for (int i = 0; i < n; i++) {
-            sky[i] = vf[i].sky();
-            gr[i] = vf[i].ground();
-            ob[i] = vf[i].obstruction();
-            se[i] = vf[i].skyStdError();
-        }
-        table.put("sky_view_factor", "", sky).put("ground_view_factor", "", gr)
-                .put("obstruction_view_factor", "", ob).put("svf_std_error", "", se);
+        IrradiationColumns.addViewFactors(table, vf);
+        double[] sky = table.column(IrradiationColumns.SKY_VIEW_FACTOR.name());
         try {
             Files.createDirectories(out);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot create " + out + ": " + e.getMessage(), e);
         }
-        Path csv = out.resolve("patches.csv");
-        PatchCsvWriter.write(csv, table, List.of("Solmass " + Main.version() + " sky view factors of " + model.getFileName(),
-                "x,y,z centroid in metres (x east, y north, z up); azimuth from north clockwise"));
+        Path csv = out.resolve(FILE_NAME);
+        PatchCsvWriter.write(csv, table);
         long totalRays = (long) n * HemisphereSampler.roundedRayCount(rays);
         double mean = 0, area = 0;
         for (int i = 0; i < n; i++) {

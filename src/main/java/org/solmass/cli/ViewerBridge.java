@@ -1,6 +1,10 @@
 package org.solmass.cli;
 
+import org.solmass.Cautions;
 import org.solmass.InputException;
+import org.solmass.metrics.PatchComparison;
+import org.solmass.table.Column;
+import org.solmass.table.ResultTable;
 import org.solmass.climate.Step;
 import org.solmass.climate.WeatherSeries;
 import org.solmass.irradiation.PhaseProgress;
@@ -8,7 +12,7 @@ import org.solmass.model.MassingModel;
 import org.solmass.output.MonthHourCsvReader;
 import org.solmass.output.PatchCsvReader;
 import org.solmass.output.PatchCsvWriter;
-import org.solmass.output.ResultTable;
+import org.solmass.output.ComparedResults;
 import org.solmass.output.ResultsFolder;
 import org.solmass.output.RunRecord;
 import org.solmass.output.SummaryWriter;
@@ -86,7 +90,7 @@ final class ViewerBridge implements ViewerActions {
         for (String col : csv.resultColumns()) {
             double[] src = csv.column(col), v = new double[n];
             for (int i = 0; i < n; i++) v[i] = row[i] >= 0 ? src[row[i]] : Double.NaN;
-            table.put(col, unitOf(col), v);
+            table.put(csv.def(col), v);
         }
         float[] monthHour = null;
         Path mh = folder.resolve(ResultsFolder.MONTH_HOUR);
@@ -107,38 +111,27 @@ final class ViewerBridge implements ViewerActions {
     }
 
     /**
-     * The data of results folder B with, for every quantity both folders have, a column
-     * {@code delta_<quantity>} = B - A on B's matched patches (NaN where unmatched); see
-     * {@link CompareCommand} for the matching.
+     * The data of results folder B with, for every quantity both folders have, a difference column
+     * ({@link PatchComparison#delta(Column)}, B - A) on B's matched patches (NaN where unmatched); the
+     * matching is {@code compare}'s.
      */
     static ViewerData withDifferences(ViewerData b, Path folderA, Path folderB) {
         RunRecord runA = RunRecord.read(folderA), runB = RunRecord.read(folderB);
-        CompareCommand.Comparison c = CompareCommand.compare(folderA.resolve(ResultsFolder.PATCHES),
-                folderB.resolve(ResultsFolder.PATCHES), 0.5 * Math.min(runA.study().patchM(), runB.study().patchM()),
-                org.solmass.metrics.PatchMatcher.DEFAULT_MAX_ANGLE_DEG);
-        ResultTable t = new ResultTable(b.patches());
-        for (String col : b.table().names()) t.put(col, b.table().unit(col), b.table().column(col));
+        ComparedResults c = CompareCommand.read(folderA, folderB, runA, runB, org.solmass.metrics.PatchMatcher.DEFAULT_MAX_ANGLE_DEG);
+        ResultTable t = b.table().copy();
         int n = b.patches().size();
-        for (String q : c.quantities()) {
+        for (Column q : c.comparison().quantities()) {
             double[] byRow = c.delta(q), v = new double[n];
             for (Patch p : b.patches()) {
                 int r = c.b().row(p.id());
                 v[p.index()] = r >= 0 ? byRow[r] : Double.NaN;
             }
-            t.put("delta_" + q, unitOf(q), v);
+            t.put(PatchComparison.delta(q), v);
         }
         List<String> warnings = new ArrayList<>(b.warnings());
         warnings.add(c.matched() + " of " + n + " patches matched with " + folderA);
         return new ViewerData(b.title() + " vs " + runA.study().name(), b.model(), b.blockAnalysed(), b.patches(), t,
                 b.monthHourWm2(), b.climate(), b.sunPath(), b.latitudeDeg(), b.longitudeDeg(), b.zone(), warnings);
-    }
-
-    static String unitOf(String column) {
-        if (column.endsWith("_kwh_m2")) return "kWh/m2";
-        if (column.endsWith("_kwh")) return "kWh";
-        if (column.endsWith("_pct")) return "%";
-        if (column.endsWith("_h") || column.startsWith("sun_hours")) return "h";
-        return "";
     }
 
     static ViewerData data(Study study, MassingModel model, PatchSet ps, ResultTable table, float[] monthHour,
@@ -239,10 +232,10 @@ final class ViewerBridge implements ViewerActions {
             RunRecord run = RunRecord.of(Main.version(), last.study(), last.weather().timeBase().label(), last.counts(),
                     last.timingsS(), java.time.Instant.now());
             SummaryWriter.write(file, shown, SummaryWriter.Spec.standard(study.outputs().thresholdsKwhM2()), run,
-                    List.of(ResultFiles.CAUTION));
+                    List.of(Cautions.RESULTS));
         } else {
             SummaryWriter.write(file, shown, SummaryWriter.Spec.standard(study.outputs().thresholdsKwhM2()), null,
-                    List.of(ResultFiles.CAUTION));
+                    List.of(Cautions.RESULTS));
         }
     }
 

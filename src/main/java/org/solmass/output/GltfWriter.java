@@ -7,7 +7,11 @@ import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.triangulate.polygon.PolygonTriangulator;
+import org.solmass.irradiation.IrradiationColumns;
 import org.solmass.surface.Patch;
+import org.solmass.table.Column;
+import org.solmass.table.Numbers;
+import org.solmass.table.ResultTable;
 
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
@@ -78,7 +82,11 @@ public final class GltfWriter {
         sx.put("colour_range_high", range[1]);
         sx.put("axes", "metres, glTF y up: the Solmass point (x east, y north, z up) is the glTF point (x, z, -y)");
         ObjectNode units = sx.putObject("units");
-        for (String c : valueColumns(table)) units.put(c, table.unit(c));
+        ObjectNode labels = sx.putObject("labels");
+        for (String c : valueColumns(table)) {
+            units.put(c, table.def(c).unit().symbol());
+            labels.put(c, table.def(c).label());
+        }
         ArrayNode cn = sx.putArray("cautions");
         for (String c : cautions) cn.add(c);
 
@@ -155,9 +163,9 @@ public final class GltfWriter {
             for (String c : valueColumns(table)) {
                 ArrayNode arr = vals.putArray(c);
                 double[] col = table.column(c);
-                int dec = CsvNumbers.decimalsForUnit(table.unit(c));
+                Column def = table.def(c);
                 for (int p : members) {
-                    if (Double.isFinite(col[p])) arr.add(new java.math.BigDecimal(CsvNumbers.format(col[p], dec))); else arr.addNull();
+                    if (Double.isFinite(col[p])) arr.add(new java.math.BigDecimal(def.format(col[p]))); else arr.addNull();
                 }
             }
         }
@@ -180,7 +188,8 @@ public final class GltfWriter {
     static List<String> valueColumns(ResultTable table) {
         List<String> out = new ArrayList<>();
         for (String c : table.names()) {
-            if (c.matches("m\\d\\d_kwh_m2") || c.equals("annual_kwh") || c.equals("svf_std_error")) continue;
+            if (IrradiationColumns.MONTHLY.match(c).isPresent() || c.equals(IrradiationColumns.ANNUAL_KWH.name())
+                    || c.equals(IrradiationColumns.SVF_STD_ERROR.name())) continue;
             out.add(c);
         }
         return out;

@@ -245,7 +245,7 @@ public final class MapRenderer {
     private static void title(Graphics2D g, int w, String study, String label, String unit) {
         g.setColor(new Color(0x1E1E1E));
         g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 24));
-        String t = (study == null || study.isBlank() ? "" : study + " \u2014 ") + label + (unit.isEmpty() ? "" : " (" + display(unit) + ")");
+        String t = (study == null || study.isBlank() ? "" : study + " \u2014 ") + label + (display(unit).isEmpty() ? "" : " (" + display(unit) + ")");
         g.drawString(t, MARGIN, 36);
         g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 14));
         g.setColor(new Color(0x555555));
@@ -257,7 +257,7 @@ public final class MapRenderer {
         int barW = Math.min(900, (int) (w * 0.5)), barH = 20, bx = MARGIN + 4, by = top + 34;
         g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 15));
         g.setColor(new Color(0x222222));
-        g.drawString(label + (unit.isEmpty() ? "" : ", " + display(unit)), bx, top + 24);
+        g.drawString(label + (display(unit).isEmpty() ? "" : ", " + display(unit)), bx, top + 24);
         for (int i = 0; i < barW; i++) {
             double t = i / (barW - 1.0);
             g.setColor(new Color(x.diverging() ? ColourRamp.diverging(2 * t - 1) : ColourRamp.sequential(t)));
@@ -304,9 +304,10 @@ public final class MapRenderer {
         }
     }
 
-    /** "m2" as "m\u00b2" for display. */
+    /** A unit symbol as shown on screen ({@link org.solmass.table.Unit#display()}); unknown symbols as they are. */
     static String display(String unit) {
-        return unit.replace("m2", "m\u00b2");
+        org.solmass.table.Unit u = org.solmass.table.Unit.ofSymbol(unit);
+        return u.symbol().equals(unit) ? u.display() : unit;
     }
 
     private static String compass(double az) {

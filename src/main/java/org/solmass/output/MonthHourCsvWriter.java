@@ -48,7 +48,7 @@ public final class MonthHourCsvWriter {
                     int base = p * CELLS + m * HOURS;
                     for (int h = 0; h < HOURS; h++) {
                         sb.append(',');
-                        CsvNumbers.append(sb, wm2[base + h], DECIMALS);
+                        org.solmass.table.Numbers.append(sb, wm2[base + h], DECIMALS);
                     }
                     sb.append('\n');
                     w.write(sb.toString());

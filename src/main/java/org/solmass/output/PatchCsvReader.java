@@ -4,6 +4,8 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.solmass.InputException;
+import org.solmass.metrics.ColumnCatalogue;
+import org.solmass.table.Column;
 import org.solmass.surface.SurfaceKind;
 
 import java.io.IOException;
@@ -21,7 +23,8 @@ import java.util.Map;
 
 /**
  * Reads a patches.csv written by {@link PatchCsvWriter} (or edited in a spreadsheet) back into values
- * keyed by patch id: for the viewer and for comparing two runs. Leading '#' comment lines are skipped;
+ * keyed by patch id: for the viewer and for comparing two runs. Leading '#' comment lines (added by hand)
+ * are skipped;
  * empty numeric cells read as NaN. Errors name file:line and the column.
  */
 public final class PatchCsvReader {
@@ -66,6 +69,9 @@ public final class PatchCsvReader {
 
         /** The result columns (after the patch columns), in file order. */
         public List<String> resultColumns() { return Collections.unmodifiableList(resultColumns); }
+
+        /** The definition of a result column ({@link ColumnCatalogue}; a generic one for a name no stage declares). */
+        public Column def(String column) { return ColumnCatalogue.of(column); }
 
         /** Comment lines of the file head, without the leading "# ". */
         public List<String> comments() { return Collections.unmodifiableList(comments); }

@@ -1,6 +1,9 @@
 package org.solmass.output;
 
 import org.solmass.surface.Patch;
+import org.solmass.table.Column;
+import org.solmass.table.Numbers;
+import org.solmass.table.ResultTable;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -10,8 +13,9 @@ import java.nio.file.Path;
  * Writes patches.csv: one row per patch, first the patch's own columns ({@link #PATCH_COLUMNS}), then
  * every column of the {@link ResultTable} in its order. UTF-8 without byte-order mark, LF line ends,
  * comma separated, text quoted only where it holds a comma, quote or line break (RFC 4180 quoting),
- * fixed decimals per column ({@link CsvNumbers}); optional leading comment lines starting with '#'.
- * Layout and decimals: docs/outputs.md.
+ * each column's own decimals ({@link Column#decimals()}, {@link Numbers}); the header row first and no
+ * comment lines, so a spreadsheet or a data-frame library opens the file as it is. Layout:
+ * docs/outputs.md.
  */
 public final class PatchCsvWriter {
     /** The patch columns, in order. */
@@ -23,18 +27,8 @@ public final class PatchCsvWriter {
 
     private PatchCsvWriter() {}
 
-    /** Writes the table with no comment lines. */
+    /** Writes the table atomically. */
     public static void write(Path file, ResultTable table) {
-        write(file, table, List.of());
-    }
-
-    /**
-     * Writes the table atomically.
-     *
-     * @param comments lines written first, each prefixed with "# " (cautions, provenance); spreadsheets
-     *                 show them as ordinary rows, so Solmass's own commands pass none by default
-     */
-    public static void write(Path file, ResultTable table, List<String> comments) {
         List<String> names = table.names();
         for (String n : names) {
             if (PATCH_COLUMNS.contains(n)) throw new IllegalArgumentException("result column " + n + " clashes with a patch column");
@@ -44,14 +38,11 @@ public final class PatchCsvWriter {
         int[] decimals = new int[cols];
         for (int c = 0; c < cols; c++) {
             values[c] = table.column(names.get(c));
-            decimals[c] = CsvNumbers.decimalsForUnit(table.unit(names.get(c)));
+            decimals[c] = table.def(names.get(c)).decimals();
         }
         List<Patch> patches = table.patches();
         AtomicFiles.writeText(file, w -> {
             StringBuilder sb = new StringBuilder(512);
-            for (String line : comments) {
-                for (String part : line.split("\n", -1)) w.write("# " + part + "\n");
-            }
             List<String> header = new ArrayList<>(PATCH_COLUMNS);
             header.addAll(names);
             for (int i = 0; i < header.size(); i++) {
@@ -85,7 +76,7 @@ public final class PatchCsvWriter {
 
     private static void num(StringBuilder sb, double v, int decimals) {
         sb.append(',');
-        CsvNumbers.append(sb, v, decimals);
+        Numbers.append(sb, v, decimals);
     }
 
     /** RFC 4180 quoting: only where needed. */

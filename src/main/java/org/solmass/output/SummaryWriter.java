@@ -3,9 +3,14 @@ package org.solmass.output;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.solmass.irradiation.IrradiationColumns;
 import org.solmass.study.StudyWriter;
 import org.solmass.surface.Patch;
 import org.solmass.surface.SurfaceKind;
+import org.solmass.table.Column;
+import org.solmass.table.Numbers;
+import org.solmass.table.ResultTable;
+import org.solmass.table.Unit;
 
 import java.math.BigDecimal;
 import java.nio.file.Path;
@@ -40,10 +45,22 @@ public final class SummaryWriter {
             thresholds = List.copyOf(thresholds);
         }
 
-        /** annual_kwh_m2 and its components, shading loss and sky view factor; the given thresholds on annual_kwh_m2. */
+        /**
+         * annual_kwh_m2 and its components, shading loss, sky view factor and (hourly year) sunshine
+         * hours; the given thresholds on annual_kwh_m2.
+         */
         public static Spec standard(List<Double> thresholds) {
-            return new Spec(List.of("annual_kwh_m2", "beam_kwh_m2", "diffuse_kwh_m2", "reflected_kwh_m2",
-                    "unshaded_kwh_m2", "shading_loss_pct", "sky_view_factor"), "annual_kwh_m2", thresholds);
+            return new Spec(java.util.stream.Stream.of(IrradiationColumns.ANNUAL, IrradiationColumns.BEAM,
+                    IrradiationColumns.DIFFUSE, IrradiationColumns.REFLECTED, IrradiationColumns.UNSHADED,
+                    IrradiationColumns.SHADING_LOSS, IrradiationColumns.SKY_VIEW_FACTOR, IrradiationColumns.SUNSHINE_H)
+                    .map(Column::name).toList(), IrradiationColumns.ANNUAL.name(), thresholds);
+        }
+
+        /** The same with further columns (a metric's) after the standard ones. */
+        public Spec with(List<String> more) {
+            List<String> all = new java.util.ArrayList<>(columns);
+            for (String c : more) if (!all.contains(c)) all.add(c);
+            return new Spec(all, thresholdColumn, thresholds);
         }
     }
 
@@ -91,11 +108,11 @@ public final class SummaryWriter {
             root.put("solmass_version", run.solmassVersion());
         }
         ObjectNode colInfo = root.putObject("columns");
-        for (String c : cols) colInfo.putObject(c).put("unit", table.unit(c));
+        for (String c : cols) colInfo.putObject(c).put("unit", table.def(c).unit().symbol()).put("label", table.def(c).label());
         if (thrCol != null) {
             ObjectNode t = root.putObject("thresholds");
             t.put("column", thrCol);
-            t.put("unit", table.unit(thrCol));
+            t.put("unit", table.def(thrCol).unit().symbol());
             ArrayNode a = t.putArray("values");
             for (double v : thr) a.add(v);
         }
@@ -160,14 +177,14 @@ public final class SummaryWriter {
             o.put("patches", g.patches);
             o.put("area_m2", round(g.area, 2));
             for (int c = 0; c < cols.size(); c++) {
-                String unit = table.unit(cols.get(c));
-                int d = CsvNumbers.decimalsForUnit(unit);
+                Column def = table.def(cols.get(c));
+                int d = def.decimals();
                 ObjectNode s = o.putObject(cols.get(c));
                 if (g.valueArea[c] > 0) {
                     s.put("mean", round(g.sumVA[c] / g.valueArea[c], d));
                     s.put("min", round(g.min[c], d));
                     s.put("max", round(g.max[c], d));
-                    if ("kWh/m2".equals(unit)) s.put("total_kwh", round(g.sumVA[c], 1));
+                    if (def.unit() == Unit.KWH_M2) s.put("total_kwh", round(g.sumVA[c], 1));
                 } else {
                     s.putNull("mean");
                     s.putNull("min");
@@ -189,7 +206,7 @@ public final class SummaryWriter {
     }
 
     static BigDecimal round(double v, int decimals) {
-        return new BigDecimal(CsvNumbers.format(v, decimals));
+        return new BigDecimal(Numbers.format(v, decimals));
     }
 
     /** A threshold as a key: "300", "450.5". */

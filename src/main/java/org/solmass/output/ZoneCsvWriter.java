@@ -6,9 +6,9 @@ import java.nio.file.Path;
 import java.util.List;
 
 /**
- * Writes zones.csv: one row per PV roof zone ({@link PvZones}), after '#' comment lines with the
- * caution, the best plane and the settings. Same conventions as patches.csv (UTF-8, LF, RFC 4180
- * quoting, fixed decimals). Columns: docs/outputs.md.
+ * Writes zones.csv: one row per PV roof zone ({@link PvZones}). Same conventions as patches.csv (UTF-8,
+ * LF, header row first, no comment lines, RFC 4180 quoting, fixed decimals); the caution, the best plane
+ * and the settings go to summary.json. Columns: docs/outputs.md.
  */
 public final class ZoneCsvWriter {
     public static final String FILE_NAME = "zones.csv";
@@ -17,12 +17,8 @@ public final class ZoneCsvWriter {
 
     private ZoneCsvWriter() {}
 
-    /**
-     * @param comments lines written first, each prefixed with "# "
-     */
-    public static void write(Path file, List<PvZones.Zone> zones, List<String> comments) {
+    public static void write(Path file, List<PvZones.Zone> zones) {
         AtomicFiles.writeText(file, w -> {
-            for (String line : comments) for (String part : line.split("\n", -1)) w.write("# " + part + "\n");
             w.write(String.join(",", COLUMNS) + "\n");
             StringBuilder sb = new StringBuilder(256);
             for (PvZones.Zone z : zones) {
@@ -45,6 +41,6 @@ public final class ZoneCsvWriter {
 
     private static void num(StringBuilder sb, double v, int decimals) {
         sb.append(',');
-        CsvNumbers.append(sb, v, decimals);
+        org.solmass.table.Numbers.append(sb, v, decimals);
     }
 }

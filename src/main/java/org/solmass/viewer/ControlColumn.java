@@ -1,5 +1,7 @@
 package org.solmass.viewer;
 
+import org.solmass.output.LegendTicks;
+
 import javafx.collections.FXCollections;
 import javafx.geometry.Insets;
 import javafx.scene.control.Button;
@@ -29,7 +31,7 @@ final class ControlColumn extends VBox {
     private final CheckBox thrOn = new CheckBox("Pick out patches at or above");
     private final TextField thr = new TextField();
     private final Label thrArea = new Label();
-    private final Label caution = new Label(Quantity.CAUTION);
+    private final Label caution = new Label(org.solmass.Cautions.RESULTS);
     private final CheckBox sunPath = new CheckBox("Sun path (monthly average days)");
     private final CheckBox zones = new CheckBox("PV roof zones (indicative)");
     private final Spinner<Double> patchSize = new Spinner<>(0.25, 50, 1, 0.25);
@@ -169,7 +171,7 @@ final class ControlColumn extends VBox {
 
     /** Picks out the patches at or above a value (NaN: threshold off), as the controls would. */
     void setThreshold(double v) {
-        thr.setText(Double.isFinite(v) ? LegendTicks.format(v, 1) : "");
+        thr.setText(Double.isFinite(v) ? LegendTicks.label(v, 1) : "");
         thrOn.setSelected(Double.isFinite(v));
         refresh();
     }
@@ -186,9 +188,9 @@ final class ControlColumn extends VBox {
         ColourScale a = ColourScale.auto(v, q.diverging());
         if (auto.isSelected()) {
             scale = a;
-            double st = LegendTicks.step(a.min(), a.max(), 5);
-            min.setText(LegendTicks.format(a.min(), st / 10));
-            max.setText(LegendTicks.format(a.max(), st / 10));
+            double st = LegendTicks.step(a.min(), a.max(), LegendBar.MAX_TICKS);
+            min.setText(LegendTicks.label(a.min(), st / 10));
+            max.setText(LegendTicks.label(a.max(), st / 10));
         } else {
             scale = new ColourScale(parse(min.getText(), a.min()), parse(max.getText(), a.max()), q.diverging());
         }
@@ -196,7 +198,7 @@ final class ControlColumn extends VBox {
         if (Double.isFinite(t)) {
             Threshold th = Threshold.of(data.patches(), v, t);
             thrArea.setText(String.format(Locale.ROOT, "%,d patches, %,.0f m\u00b2 (%.0f %% of the analysed area) at or above %s %s",
-                    th.count(), th.areaM2(), 100 * th.share(), thr.getText().trim(), Quantity.pretty(q.unit())));
+                    th.count(), th.areaM2(), 100 * th.share(), thr.getText().trim(), q.unit()));
         } else {
             thrArea.setText(thrOn.isSelected() ? "Type a value and press Enter." : "");
         }

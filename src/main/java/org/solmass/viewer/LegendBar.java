@@ -1,5 +1,7 @@
 package org.solmass.viewer;
 
+import org.solmass.output.LegendTicks;
+
 import javafx.geometry.VPos;
 import javafx.scene.canvas.Canvas;
 import javafx.scene.canvas.GraphicsContext;
@@ -11,6 +13,8 @@ import javafx.scene.text.TextAlignment;
 
 /** The colour legend: quantity and unit, the ramp with round ticks, and the threshold mark. */
 final class LegendBar extends VBox {
+    /** At most this many ticks under the bar. */
+    static final int MAX_TICKS = 6;
     private final Label title = new Label();
     private final Canvas bar = new Canvas(236, 44);
 
@@ -33,8 +37,12 @@ final class LegendBar extends VBox {
         g.setStroke(Color.rgb(90, 90, 90));
         g.setLineWidth(0.6);
         g.strokeRect(x0, 2, bw, bh);
-        double[] ticks = LegendTicks.ticks(s.min(), s.max(), 5);
-        double step = ticks.length > 1 ? ticks[1] - ticks[0] : LegendTicks.step(s.min() - 1, s.max() + 1, 5);
+        double[] ticks = LegendTicks.ticks(s.min(), s.max(), MAX_TICKS);
+        double step = ticks.length > 1 ? ticks[1] - ticks[0] : LegendTicks.step(s.min() - 1, s.max() + 1, MAX_TICKS);
+        if (q.def().kind().whole()) {   // levels and zone numbers: whole ticks only
+            ticks = java.util.Arrays.stream(ticks).filter(t -> t == Math.rint(t)).toArray();
+            step = Math.max(1, step);
+        }
         g.setFill(Color.rgb(40, 40, 40));
         g.setFont(Font.font(11));
         g.setTextAlign(TextAlignment.CENTER);
@@ -42,7 +50,7 @@ final class LegendBar extends VBox {
         for (double t : ticks) {
             double x = x0 + bw * (s.max() > s.min() ? (t - s.min()) / (s.max() - s.min()) : 0.5);
             g.strokeLine(x, 2 + bh, x, 2 + bh + 4);
-            g.fillText(LegendTicks.format(t, step), x, 2 + bh + 6);
+            g.fillText(LegendTicks.label(t, step), x, 2 + bh + 6);
         }
         if (Double.isFinite(threshold) && s.max() > s.min()) {
             double x = x0 + bw * Math.max(0, Math.min(1, (threshold - s.min()) / (s.max() - s.min())));

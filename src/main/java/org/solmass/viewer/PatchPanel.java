@@ -11,7 +11,9 @@ import javafx.scene.control.Label;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.VBox;
-import org.solmass.output.ResultTable;
+import org.solmass.irradiation.IrradiationColumns;
+import org.solmass.table.Column;
+import org.solmass.table.ResultTable;
 import org.solmass.surface.Patch;
 
 import java.util.Locale;
@@ -22,6 +24,12 @@ import java.util.Locale;
  */
 final class PatchPanel extends VBox {
     static final String[] MONTHS = {"Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"};
+    /** Columns the panel shows above (fixed rows) or not at all (monthly ones are in the chart). */
+    private static final java.util.Set<String> PANEL_SKIPS = java.util.stream.Stream.of(IrradiationColumns.SKY_VIEW_FACTOR,
+            IrradiationColumns.ANNUAL, IrradiationColumns.BEAM, IrradiationColumns.DIFFUSE, IrradiationColumns.REFLECTED,
+            IrradiationColumns.UNSHADED, IrradiationColumns.SHADING_LOSS, IrradiationColumns.SVF_STD_ERROR,
+            IrradiationColumns.GROUND_VIEW_FACTOR, IrradiationColumns.ANNUAL_KWH, IrradiationColumns.OBSTRUCTION_VIEW_FACTOR)
+            .map(Column::name).collect(java.util.stream.Collectors.toUnmodifiableSet());
     private final Label heading = new Label("No patch selected");
     private final Label hint = new Label("Click a coloured patch in the model to see its values here.");
     private final GridPane facts = new GridPane();
@@ -29,7 +37,7 @@ final class PatchPanel extends VBox {
     private final HeatMap heat = new HeatMap(318, 210);
     private final ComboBox<String> month = new ComboBox<>(FXCollections.observableArrayList(MONTHS));
     private final LineChart<Number, Number> daily;
-    private final Label caution = new Label(Quantity.CAUTION);
+    private final Label caution = new Label(org.solmass.Cautions.RESULTS);
     private final Label noHourly = new Label("The month-hour table is not in these results: analyse with "
             + "--month-hour (study key outputs.month_hour_csv) to see the hourly map and the daily curve.");
     private final HBox dailyHeading = new HBox(8);
@@ -113,21 +121,25 @@ final class PatchPanel extends VBox {
         r = row(r, "Tilt", fmt(pt.tiltDeg(), 0) + "\u00b0");
         r = row(r, "Azimuth", pt.tiltDeg() < 1 ? "(horizontal)" : fmt(pt.azimuthDeg(), 0) + "\u00b0 " + compass(pt.azimuthDeg()));
         r = row(r, "Area", fmt(pt.areaM2(), 2) + " m\u00b2");
-        r = value(r, t, p, "sky_view_factor", "Sky view factor", 2);
-        r = value(r, t, p, "annual_kwh_m2", "Annual irradiation", 0);
-        r = value(r, t, p, "beam_kwh_m2", "  beam", 0);
-        r = value(r, t, p, "diffuse_kwh_m2", "  diffuse", 0);
-        r = value(r, t, p, "reflected_kwh_m2", "  reflected", 0);
-        r = value(r, t, p, "unshaded_kwh_m2", "Without obstructions", 0);
-        r = value(r, t, p, "shading_loss_pct", "Shading loss", 1);
-        for (String n : t.names()) if (n.startsWith("sun_hours_") || n.startsWith("pv_")) r = value(r, t, p, n, Quantity.labelOf(n), 1);
-        boolean pv = t.names().stream().anyMatch(n -> n.startsWith("pv_")) || pt.kind().label().equals("roof");
-        caution.setVisible(pv);
-        caution.setManaged(pv);
+        r = value(r, t, p, IrradiationColumns.SKY_VIEW_FACTOR, null, 2);
+        r = value(r, t, p, IrradiationColumns.ANNUAL, null, 0);
+        r = value(r, t, p, IrradiationColumns.BEAM, "  beam", 0);
+        r = value(r, t, p, IrradiationColumns.DIFFUSE, "  diffuse", 0);
+        r = value(r, t, p, IrradiationColumns.REFLECTED, "  reflected", 0);
+        r = value(r, t, p, IrradiationColumns.UNSHADED, null, 0);
+        r = value(r, t, p, IrradiationColumns.SHADING_LOSS, null, 1);
+        boolean cautioned = pt.kind() == org.solmass.surface.SurfaceKind.ROOF;
+        for (Column c : t.columns()) {   // the metrics' columns, sunshine hours and differences, by their own labels
+            if (PANEL_SKIPS.contains(c.name()) || IrradiationColumns.MONTHLY.match(c.name()).isPresent()) continue;
+            r = value(r, t, p, c, null, 1);
+            cautioned |= c.cautioned();
+        }
+        caution.setVisible(cautioned);
+        caution.setManaged(cautioned);
 
         XYChart.Series<String, Number> s = new XYChart.Series<>();
         for (int m = 1; m <= 12; m++) {
-            String c = String.format(Locale.ROOT, "m%02d_kwh_m2", m);
+            String c = IrradiationColumns.month(m).name();
             if (t.has(c)) s.getData().add(new XYChart.Data<>(MONTHS[m - 1], t.column(c)[p]));
         }
         monthly.getData().setAll(FXCollections.singletonObservableList(s));
@@ -166,10 +178,12 @@ final class PatchPanel extends VBox {
         return r + 1;
     }
 
-    private int value(int r, ResultTable t, int p, String col, String label, int dec) {
-        if (!t.has(col)) return r;
-        String u = t.unit(col);
-        return row(r, label, fmt(t.column(col)[p], dec) + (u.isEmpty() ? "" : " " + Quantity.pretty(u)));
+    /** A row of a column's value: its own label unless given, whole numbers for integer and categorical columns. */
+    private int value(int r, ResultTable t, int p, Column col, String label, int dec) {
+        if (!t.has(col.name())) return r;
+        Column c = t.def(col.name());
+        String u = c.unit().display();
+        return row(r, label != null ? label : c.label(), fmt(t.column(c.name())[p], c.kind().whole() ? 0 : dec) + (u.isEmpty() ? "" : " " + u));
     }
 
     static String fmt(double v, int dec) {

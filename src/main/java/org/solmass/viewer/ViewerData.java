@@ -1,7 +1,7 @@
 package org.solmass.viewer;
 
 import org.solmass.model.MassingModel;
-import org.solmass.output.ResultTable;
+import org.solmass.table.ResultTable;
 import org.solmass.surface.Patch;
 
 import java.util.List;

@@ -369,8 +369,7 @@ public final class ViewerWindow {
             return;
         }
         double v = data.table().column(q.column())[p];
-        hover.setText(PatchPanel.fmt(v, Math.abs(v) < 10 ? 2 : 0) + (q.unit().isEmpty() ? "" : " " + Quantity.pretty(q.unit()))
-                + "  \u00b7  " + data.patches().get(p).id());
+        hover.setText(q.format(v) + "  \u00b7  " + data.patches().get(p).id());
         hover.setTranslateX(x + 14);
         hover.setTranslateY(y + 10);
         hover.setVisible(true);

@@ -1,6 +1,6 @@
 package org.solmass.viewer;
 
-import org.solmass.output.ResultTable;
+import org.solmass.table.ResultTable;
 import org.solmass.surface.Patch;
 
 import java.util.ArrayList;
@@ -15,7 +15,7 @@ import java.util.Map;
  */
 final class ZoneOutlines {
     /** The zone column of the results. */
-    static final String COLUMN = "pv_zone";
+    static final String COLUMN = org.solmass.metrics.PvZonesMetric.ZONE.name();
 
     private ZoneOutlines() {}
 

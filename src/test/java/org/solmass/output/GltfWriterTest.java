@@ -1,5 +1,7 @@
 package org.solmass.output;
 
+import org.solmass.table.Numbers;
+import org.solmass.table.ResultTable;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import de.javagl.jgltf.model.AccessorFloatData;
@@ -35,10 +37,10 @@ class GltfWriterTest {
 
     private static ResultTable table(SyntheticScene s) {
         ResultTable t = new ResultTable(s.patches);
-        t.put("annual_kwh_m2", "kWh/m2", s.values());
+        t.put(org.solmass.metrics.ColumnCatalogue.of("annual_kwh_m2"), s.values());
         double[] svf = new double[s.patches.size()];
         for (int i = 0; i < svf.length; i++) svf[i] = i % 7 == 0 ? Double.NaN : 0.5;
-        t.put("sky_view_factor", "", svf);
+        t.put(org.solmass.metrics.ColumnCatalogue.of("sky_view_factor"), svf);
         return t;
     }
 
@@ -130,7 +132,7 @@ class GltfWriterTest {
                 }
                 assertEquals(q.areaM2(), area, 1e-3 * q.areaM2());
                 double want = t.column("annual_kwh_m2")[q.index()];
-                assertEquals(Double.parseDouble(CsvNumbers.format(want, 2)), ex.get("values").get("annual_kwh_m2").get(i).asDouble(), 0);
+                assertEquals(Double.parseDouble(Numbers.format(want, 2)), ex.get("values").get("annual_kwh_m2").get(i).asDouble(), 0);
                 JsonNode svf = ex.get("values").get("sky_view_factor").get(i);
                 assertEquals(Double.isNaN(t.column("sky_view_factor")[q.index()]), svf.isNull());
                 patchesSeen++;

@@ -1,5 +1,6 @@
 package org.solmass.output;
 
+import org.solmass.table.ResultTable;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import org.junit.jupiter.api.Test;
@@ -29,8 +30,8 @@ class ResultsFolderTest {
                 .context(List.of("Neighbour east", "Neighbour south")).out(dir.resolve("out")).monthHourCsv(true));
         ResultTable t = new ResultTable(s.patches);
         double[] v = s.values();
-        t.put("sky_view_factor", "", new double[v.length]);
-        t.put("annual_kwh_m2", "kWh/m2", v);
+        t.put(org.solmass.metrics.ColumnCatalogue.of("sky_view_factor"), new double[v.length]);
+        t.put(org.solmass.metrics.ColumnCatalogue.of("annual_kwh_m2"), v);
         float[] mh = new float[s.patches.size() * 288];
         for (int i = 0; i < mh.length; i++) mh[i] = (i % 24) * 10.5f;
         RunRecord run = RunRecord.of("test", study, "average-days", Map.of("patches", (long) v.length), Map.of(), Instant.EPOCH);
@@ -61,8 +62,8 @@ class ResultsFolderTest {
 
     @Test
     void columnLabelsAreReadable() {
-        assertEquals("Annual irradiation", ResultsFolder.labelOf("annual_kwh_m2"));
-        assertEquals("March irradiation", ResultsFolder.labelOf("m03_kwh_m2"));
-        assertEquals("sun hours", ResultsFolder.labelOf("sun_hours"));
+        assertEquals("Annual irradiation", org.solmass.metrics.ColumnCatalogue.of("annual_kwh_m2").label());
+        assertEquals("March irradiation", org.solmass.metrics.ColumnCatalogue.of("m03_kwh_m2").label());
+        assertEquals("sun hours", org.solmass.metrics.ColumnCatalogue.of("sun_hours").label());   // declared by no stage
     }
 }

@@ -1,5 +1,6 @@
 package org.solmass.output;
 
+import org.solmass.table.ResultTable;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import org.junit.jupiter.api.Test;
@@ -25,8 +26,8 @@ class SummaryWriterTest {
                 patch(1, "A-1", 0, "A", SurfaceKind.FACADE, 1),
                 patch(2, "B-0", 1, "B", SurfaceKind.ROOF, 3),
                 patch(3, "B-1", 1, "B", SurfaceKind.GROUND, 4)));
-        t.put("annual_kwh_m2", "kWh/m2", new double[] {1000, 400, 700, 200});
-        t.put("sky_view_factor", "", new double[] {1, 0.5, Double.NaN, 0.25});
+        t.put(org.solmass.metrics.ColumnCatalogue.of("annual_kwh_m2"), new double[] {1000, 400, 700, 200});
+        t.put(org.solmass.metrics.ColumnCatalogue.of("sky_view_factor"), new double[] {1, 0.5, Double.NaN, 0.25});
         return t;
     }
 

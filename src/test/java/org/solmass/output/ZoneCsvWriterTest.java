@@ -17,12 +17,12 @@ import java.util.List;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-/** zones.csv carries the caution in its '#' lines and reads back as a plain table. */
+/** zones.csv is a plain table: the header row first, no comment lines (the caution is in summary.json). */
 class ZoneCsvWriterTest {
     @TempDir Path dir;
 
     @Test
-    void zonesCsvStartsWithTheCautionAndReadsBack() throws Exception {
+    void zonesCsvStartsWithItsHeaderAndReadsBackAsAPlainTable() throws Exception {
         Path sf = dir.resolve("s.json");
         Files.writeString(sf, "{\"model\": {\"file\": \"m.obj\"}, \"site\": {\"latitude\": 51, \"longitude\": 10, \"zone\": \"+01:00\"}}");
         Study study = StudyReader.read(sf);
@@ -30,12 +30,10 @@ class ZoneCsvWriterTest {
                 2000.0, 30, 180, List.of());
         PvZones.Result r = new PvZones.Result(new BestPlane(36, 182, 1327.4), new double[2], new int[] {1, 1}, List.of(z));
         Path f = dir.resolve("zones.csv");
-        ZoneCsvWriter.write(f, r.zones(), ResultsFolder.zoneComments(study, r, List.of()));
+        ZoneCsvWriter.write(f, r.zones());
         List<String> lines = Files.readAllLines(f);
-        assertTrue(lines.get(0).startsWith("# "));
-        String head = String.join("\n", lines.subList(0, 4));
-        assertTrue(head.contains("Indicative only") && head.contains("fire setbacks") && head.contains("licensed practice"), head);
-        try (CSVParser p = CSVFormat.RFC4180.builder().setCommentMarker('#').setHeader().setSkipHeaderRecord(true).get()
+        assertEquals(String.join(",", ZoneCsvWriter.COLUMNS), lines.get(0));
+        try (CSVParser p = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
                 .parse(Files.newBufferedReader(f))) {
             assertEquals(ZoneCsvWriter.COLUMNS, p.getHeaderNames());
             List<CSVRecord> rows = p.getRecords();

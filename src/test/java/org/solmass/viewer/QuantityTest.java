@@ -1,7 +1,8 @@
 package org.solmass.viewer;
 
 import org.junit.jupiter.api.Test;
-import org.solmass.output.ResultTable;
+import org.solmass.metrics.ColumnCatalogue;
+import org.solmass.table.ResultTable;
 
 import java.util.List;
 
@@ -28,18 +29,40 @@ class QuantityTest {
     }
 
     @Test
-    void pvAndSunHourColumnsAppearWithTheirUnitsAndPvCarriesTheCaution() {
+    void metricColumnsTheAnalysisWritesAppearWithTheirLabelsUnitsAndCaution() {
+        // the names analyse writes for a sun-hour date and the PV metric (docs/outputs.md)
         ViewerData d = SyntheticViewerData.courtyard();
         ResultTable t = d.table();
         double[] z = new double[t.size()];
-        t.put("sun_hours_mar21", "h", z).put("pv_yield_kwh", "kWh", z);
+        for (String n : List.of("sun_hours_0321", "sun_level_0321", "pv_suitability_pct", "pv_zone")) {
+            t.put(ColumnCatalogue.of(n), z);
+        }
         List<Quantity> q = Quantity.available(t);
-        Quantity sun = q.stream().filter(x -> x.column().equals("sun_hours_mar21")).findFirst().orElseThrow();
-        Quantity pv = q.stream().filter(x -> x.column().equals("pv_yield_kwh")).findFirst().orElseThrow();
+        Quantity sun = find(q, "sun_hours_0321"), level = find(q, "sun_level_0321");
+        Quantity suit = find(q, "pv_suitability_pct"), zone = find(q, "pv_zone");
+        assertEquals("Sun hours on 21 March", sun.label());
         assertEquals("h", sun.unit());
         assertFalse(sun.pvOrRoof());
-        assertTrue(pv.pvOrRoof());
-        assertEquals("kWh", pv.unit());
+        assertEquals("EN 17037 sunlight level on 21 March", level.label());
+        assertEquals("1", level.format(1.0), "a level prints as a whole number");
+        assertEquals("PV suitability (share of the best plane) (%)", suit.title());
+        assertTrue(suit.pvOrRoof() && zone.pvOrRoof(), "PV quantities are shown with the caution");
+        assertEquals("3", zone.format(3.0));
+        assertEquals("no value", zone.format(Double.NaN));
+        for (Quantity x : q) assertFalse(x.label().contains("_"), "raw column name shown: " + x.label());
+    }
+
+    @Test
+    void differencesAreDivergingAndNamedAsAChange() {
+        ResultTable t = SyntheticViewerData.courtyard().table();
+        t.put(ColumnCatalogue.of("delta_annual_kwh_m2"), new double[t.size()]);
+        Quantity d = find(Quantity.available(t), "delta_annual_kwh_m2");
+        assertTrue(d.diverging());
+        assertEquals("Change in annual irradiation (B - A) (kWh/m\u00b2)", d.title());
+    }
+
+    private static Quantity find(List<Quantity> q, String column) {
+        return q.stream().filter(x -> x.column().equals(column)).findFirst().orElseThrow();
     }
 
     @Test

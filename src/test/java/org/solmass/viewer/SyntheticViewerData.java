@@ -2,7 +2,7 @@ package org.solmass.viewer;
 
 import org.solmass.model.MassingModel;
 import org.solmass.model.Vec3;
-import org.solmass.output.ResultTable;
+import org.solmass.table.ResultTable;
 import org.solmass.surface.Patch;
 import org.solmass.surface.SurfaceKind;
 
@@ -145,11 +145,11 @@ final class SyntheticViewerData {
             for (int m = 0; m < 12; m++) mon[m][i] = ann[i] * w[m];
         }
         ResultTable t = new ResultTable(ps);
-        t.put("sky_view_factor", "", svf).put("ground_view_factor", "", gvf).put("annual_kwh_m2", "kWh/m2", ann)
-                .put("beam_kwh_m2", "kWh/m2", beam).put("diffuse_kwh_m2", "kWh/m2", dif)
-                .put("reflected_kwh_m2", "kWh/m2", ref).put("unshaded_kwh_m2", "kWh/m2", uns)
-                .put("shading_loss_pct", "%", loss).put("annual_kwh", "kWh", kwh);
-        for (int m = 0; m < 12; m++) t.put(String.format(Locale.ROOT, "m%02d_kwh_m2", m + 1), "kWh/m2", mon[m]);
+        t.put(org.solmass.metrics.ColumnCatalogue.of("sky_view_factor"), svf).put(org.solmass.metrics.ColumnCatalogue.of("ground_view_factor"), gvf).put(org.solmass.metrics.ColumnCatalogue.of("annual_kwh_m2"), ann)
+                .put(org.solmass.metrics.ColumnCatalogue.of("beam_kwh_m2"), beam).put(org.solmass.metrics.ColumnCatalogue.of("diffuse_kwh_m2"), dif)
+                .put(org.solmass.metrics.ColumnCatalogue.of("reflected_kwh_m2"), ref).put(org.solmass.metrics.ColumnCatalogue.of("unshaded_kwh_m2"), uns)
+                .put(org.solmass.metrics.ColumnCatalogue.of("shading_loss_pct"), loss).put(org.solmass.metrics.ColumnCatalogue.of("annual_kwh"), kwh);
+        for (int m = 0; m < 12; m++) t.put(org.solmass.irradiation.IrradiationColumns.month(m + 1), mon[m]);
         return t;
     }
 

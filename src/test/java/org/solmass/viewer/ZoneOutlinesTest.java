@@ -2,7 +2,7 @@ package org.solmass.viewer;
 
 import org.junit.jupiter.api.Test;
 import org.solmass.model.Vec3;
-import org.solmass.output.ResultTable;
+import org.solmass.table.ResultTable;
 import org.solmass.surface.Patch;
 import org.solmass.surface.SurfaceKind;
 
@@ -23,7 +23,7 @@ class ZoneOutlinesTest {
         List<Patch> ps = new ArrayList<>();
         for (int j = 0; j < 2; j++) for (int i = 0; i < 2; i++) ps.add(square(ps.size(), i, j));
         ps.add(square(4, 2, 0)); // a neighbour in no zone: its shared edge stays a zone boundary
-        ResultTable t = new ResultTable(ps).put(ZoneOutlines.COLUMN, "id", new double[] {1, 1, 1, 1, Double.NaN});
+        ResultTable t = new ResultTable(ps).put(org.solmass.metrics.PvZonesMetric.ZONE, new double[] {1, 1, 1, 1, Double.NaN});
         List<double[]> e = ZoneOutlines.edges(ps, t);
         assertEquals(8, e.size());
         double length = 0;

@@ -1,18 +1,18 @@
-package org.solmass.output;
+package org.solmass.table;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 
 /**
- * Locale-independent fixed-decimal number text for Solmass's CSV files: '.' as decimal separator, no
+ * Locale-independent fixed-decimal number text for every file Solmass writes (CSV, summary.json, glTF extras): '.' as decimal separator, no
  * grouping, no exponent, "-0.00" written as "0.00", non-finite values as an empty cell. The same
  * double always gives the same text, so files are byte-identical across runs and machines.
  */
-public final class CsvNumbers {
+public final class Numbers {
     private static final long[] POW10 = {1, 10, 100, 1000, 10_000, 100_000, 1_000_000, 10_000_000, 100_000_000};
     private static final double FAST_LIMIT = 1e15;
 
-    private CsvNumbers() {}
+    private Numbers() {}
 
     /** Appends {@code v} rounded half away from zero to {@code decimals} (0..8) places. */
     public static void append(StringBuilder sb, double v, int decimals) {
@@ -41,20 +41,5 @@ public final class CsvNumbers {
         StringBuilder sb = new StringBuilder(24);
         append(sb, v, decimals);
         return sb.toString();
-    }
-
-    /**
-     * Decimal places of a result column, from its unit: kWh/m2, kWh, %, h and deg 2; W/m2 1; m 3;
-     * ids and levels ("id", "level") 0; ratios (no unit) and anything else 4. See docs/outputs.md.
-     */
-    public static int decimalsForUnit(String unit) {
-        if (unit == null) return 4;
-        return switch (unit) {
-            case "kWh/m2", "kWh", "%", "h", "deg", "Wh/m2" -> 2;
-            case "W/m2" -> 1;
-            case "m" -> 3;
-            case "id", "level" -> 0;
-            default -> 4;
-        };
     }
 }
