@@ -77,7 +77,8 @@ public final class CompareCommand implements Callable<Integer> {
             double[] d = c.delta(q);
             double s = 0, ar = 0;
             for (int r = 0; r < d.length; r++) if (Double.isFinite(d[r])) { s += d[r] * areaB[r]; ar += areaB[r]; }
-            System.out.printf("  %s: area-weighted mean change %s%n", q.label(), ar > 0 ? q.display(s / ar) : "no matched patch");
+            System.out.printf("  %s: area-weighted mean change %s%n", q.label(),
+                    ar > 0 ? (q.format(s / ar) + " " + q.unit().symbol()).trim() : "no matched patch");
         }
         for (Path f : written) System.out.println("  wrote " + f);
         return Main.EXIT_OK;
