@@ -2,6 +2,7 @@ package org.solmass.cli;
 
 import org.solmass.InputException;
 import org.solmass.study.Study;
+import org.solmass.table.AreaStats;
 import org.solmass.study.StudyOverrides;
 import org.solmass.study.StudyReader;
 import picocli.CommandLine.Command;
@@ -81,17 +82,9 @@ public final class AnalyseCommand implements Callable<Integer> {
         System.out.printf("solmass analyse: %s%n", o.study().name());
         System.out.printf("  %d patches on %d blocks (%d triangles), %s, %s sky%n", c.get("patches"),
                 c.get("blocks"), c.get("triangles"), o.weather().timeBase().label(), o.study().sky().label());
-        double[] a = o.result().annual();
-        double area = 0, sum = 0, min = Double.POSITIVE_INFINITY, max = Double.NEGATIVE_INFINITY;
-        for (int p = 0; p < a.length; p++) {
-            double ar = o.patches().patches().get(p).areaM2();
-            area += ar;
-            sum += a[p] * ar;
-            min = Math.min(min, a[p]);
-            max = Math.max(max, a[p]);
-        }
+        AreaStats a = AreaStats.of(o.patches().patches(), o.result().annual());
         System.out.printf("  annual irradiation: area-weighted mean %.0f kWh/m2, min %.0f, max %.0f, total %.0f MWh on %.0f m2%n",
-                sum / area, min, max, sum / 1000, area);
+                a.mean(), a.min(), a.max(), a.valueTimesAreaSum() / 1000, a.areaM2());
         printMetrics(o);
         System.out.println("  " + org.solmass.Cautions.RESULTS);
         System.out.printf("  time %.1f s (%s)%n", seconds, timings(o.timingsS()));

@@ -2,6 +2,7 @@ package org.solmass.metrics;
 
 import org.solmass.sun.SolarCalculator;
 import org.solmass.surface.Patch;
+import org.solmass.table.AreaStats;
 import org.solmass.table.Column;
 import org.solmass.table.ColumnFamily;
 import org.solmass.table.ColumnKind;
@@ -84,15 +85,11 @@ public final class SunHoursMetric implements Metric {
                 for (int p = 0; p < h.length; p++) lvl[p] = SunHoursOnDate.en17037Level(h[p]);
                 table.put(levelColumn(day), lvl);
             }
-            double area = 0, mean = 0, atLeast = 0;
-            for (int p = 0; p < h.length; p++) {
-                double ar = patches.get(p).areaM2();
-                area += ar;
-                mean += h[p] * ar;
-                if (h[p] >= SunHoursOnDate.EN17037_MIN_H) atLeast += ar;
-            }
+            AreaStats st = AreaStats.of(patches, h);
+            double atLeast = AreaStats.areaAtLeast(patches, h, SunHoursOnDate.EN17037_MIN_H);
             lines.add(String.format(Locale.ROOT, "sun hours on %02d-%02d: area-weighted mean %.1f h; %.0f %% of the area has at least 1.5 h",
-                    day.getMonthValue(), day.getDayOfMonth(), area > 0 ? mean / area : 0, area > 0 ? 100 * atLeast / area : 0));
+                    day.getMonthValue(), day.getDayOfMonth(), st.areaM2() > 0 ? st.mean() : 0,
+                    st.areaM2() > 0 ? 100 * atLeast / st.areaM2() : 0));
         }
         return new Found(List.copyOf(lines), List.copyOf(cols));
     }
