@@ -162,37 +162,17 @@ final class ViewerBridge implements ViewerActions {
 
     /** Mean GHI and DHI per month and hour of the input, and monthly totals. */
     static ClimateGlance glance(WeatherSeries w) {
-        double[] g = new double[288], d = new double[288], h = new double[288], gm = new double[12], dm = new double[12];
-        for (Step st : w.steps()) {
-            int slot = (st.month() - 1) * 24 + Math.min(23, (int) Math.floor(st.localStandardHour()));
-            double wh = st.weightedHours();
-            g[slot] += st.ghiWm2() * wh;
-            d[slot] += st.dhiWm2() * wh;
-            h[slot] += wh;
-            gm[st.month() - 1] += st.ghiWm2() * wh / 1000;
-            dm[st.month() - 1] += st.dhiWm2() * wh / 1000;
-        }
-        for (int k = 0; k < 288; k++) {
-            g[k] = h[k] > 0 ? g[k] / h[k] : 0;
-            d[k] = h[k] > 0 ? d[k] / h[k] : 0;
-        }
-        return new ClimateGlance(w.source(), g, d, gm, dm);
+        org.solmass.climate.MonthHourMeans m = org.solmass.climate.MonthHourMeans.of(w);
+        return new ClimateGlance(w.source(), m.ghiWm2(), m.dhiWm2(), m.ghiMonthKwhM2(), m.dhiMonthKwhM2());
     }
 
     /** The sun over each monthly-average day (Klein's days), every 20 minutes while it is up. */
     static List<SunArc> sunPath(Site site) {
-        SolarCalculator calc = new SolarCalculator(site);
-        ZoneOffset off = site.standardOffset(SunPath.AVERAGE_DAY_YEAR);
         List<SunArc> arcs = new ArrayList<>();
-        for (int m = 1; m <= 12; m++) {
+        for (SunPath.Arc a : SunPath.averageDayArcs(site, 20)) {
             List<SunArc.Point> pts = new ArrayList<>();
-            for (SunPath.Sample s : SunPath.averageDay(calc, m, 20)) {
-                if (s.sunUpFraction() <= 0 || s.sun().elevationDeg() <= 0) continue;
-                LocalDateTime t = LocalDateTime.ofInstant(s.start(), off);
-                double hour = t.getHour() + t.getMinute() / 60.0 + s.durationH() / 2;
-                pts.add(new SunArc.Point(hour, s.sun().azimuthDeg(), s.sun().elevationDeg()));
-            }
-            arcs.add(new SunArc(m, pts));
+            for (SunPath.ArcPoint p : a.points()) pts.add(new SunArc.Point(p.localHour(), p.azimuthDeg(), p.elevationDeg()));
+            arcs.add(new SunArc(a.month(), pts));
         }
         return arcs;
     }

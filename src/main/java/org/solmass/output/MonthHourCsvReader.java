@@ -53,7 +53,7 @@ public final class MonthHourCsvReader {
                 for (int h = 0; h < MonthHourCsvWriter.HOURS; h++) {
                     String c = cells[h + 1];
                     try {
-                        t[(month - 1) * 24 + h] = c.isEmpty() ? Float.NaN : Float.parseFloat(c);
+                        t[org.solmass.climate.MonthHour.index(month, h)] = c.isEmpty() ? Float.NaN : Float.parseFloat(c);
                     } catch (NumberFormatException e) {
                         throw new InputException(where, String.format("h%02d: expected a number, got \"%s\"", h, c));
                     }
