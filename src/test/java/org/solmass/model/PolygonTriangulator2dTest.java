@@ -18,16 +18,6 @@ class PolygonTriangulator2dTest {
         return a;
     }
 
-    /** Shoelace area (Gauss's area formula; elementary), positive for a counter-clockwise polygon. */
-    private static double shoelace(double[] u, double[] v) {
-        double a = 0;
-        for (int i = 0; i < u.length; i++) {
-            int j = (i + 1) % u.length;
-            a += u[i] * v[j] - u[j] * v[i];
-        }
-        return a / 2;
-    }
-
     @Test
     void concaveLShapeSplitsIntoNMinusTwoTrianglesOfTheSameArea() {
         // L of a 2x2 square minus its top-right 1x1 quarter: shoelace area 3
@@ -67,6 +57,6 @@ class PolygonTriangulator2dTest {
         }
         int[] t = PolygonTriangulator.triangulate(u, v);
         assertEquals(3 * (n - 2), t.length);
-        assertEquals(shoelace(u, v), area(u, v, t), 1e-9);
+        assertEquals(PolygonTriangulatorTest.shoelace(u, v), area(u, v, t), 1e-9);
     }
 }
