@@ -13,7 +13,7 @@ import java.util.Map;
 
 /**
  * Reads a month-hour.csv written by {@link MonthHourCsvWriter} back into one 12 x 24 table per patch
- * (index {@code month0 * 24 + hour}, W/m2), for the viewer's heat map. Errors name file:line.
+ * (index {@code MonthHour.index(month, hour)}, W/m2), for the viewer's heat map. Errors name file:line.
  */
 public final class MonthHourCsvReader {
     private MonthHourCsvReader() {}
