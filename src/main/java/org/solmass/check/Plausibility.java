@@ -4,6 +4,7 @@ import org.solmass.climate.Step;
 import org.solmass.climate.TimeBase;
 import org.solmass.climate.WeatherSeries;
 import org.solmass.model.MassingModel;
+import org.solmass.model.TriangleGeometry;
 import org.solmass.sun.SolarGeometry;
 import org.solmass.sun.Site;
 
@@ -97,12 +98,11 @@ public final class Plausibility {
         double[] v = m.vertices();
         int[] t = m.triangles();
         double[] out = new double[4];
+        double[] cr = new double[3];
         for (int i = 0; i < t.length; i += 3) {
-            int a = 3 * t[i], b = 3 * t[i + 1], c = 3 * t[i + 2];
-            double ux = v[b] - v[a], uy = v[b + 1] - v[a + 1], uz = v[b + 2] - v[a + 2];
-            double wx = v[c] - v[a], wy = v[c + 1] - v[a + 1], wz = v[c + 2] - v[a + 2];
-            double nx = uy * wz - uz * wy, ny = uz * wx - ux * wz, nz = ux * wy - uy * wx;
-            double len = Math.sqrt(nx * nx + ny * ny + nz * nz);
+            TriangleGeometry.cross(v, t, i / 3, cr);
+            double ny = cr[1], nz = cr[2];
+            double len = TriangleGeometry.length(cr);
             if (len == 0) continue;
             double ar = len / 2;
             if (Math.abs(nz / len) < 0.3) out[0] += ar;

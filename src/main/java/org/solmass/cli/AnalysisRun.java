@@ -31,7 +31,6 @@ import org.solmass.surface.PatchOptions;
 import org.solmass.surface.PatchSet;
 import org.solmass.surface.Patcher;
 import org.solmass.surface.Surface;
-import org.solmass.surface.SurfaceKind;
 import org.solmass.table.ResultTable;
 
 import java.util.ArrayList;
@@ -236,12 +235,10 @@ public final class AnalysisRun {
         double[] v = model.vertices();
         int[] tr = model.triangles();
         double inA = 0, ctxA = 0;
+        double[] cr = new double[3];
         for (int t = 0; t < model.triangleCount(); t++) {
-            int a = 3 * tr[3 * t], b = 3 * tr[3 * t + 1], c = 3 * tr[3 * t + 2];
-            double ux = v[b] - v[a], uy = v[b + 1] - v[a + 1], uz = v[b + 2] - v[a + 2];
-            double wx = v[c] - v[a], wy = v[c + 1] - v[a + 1], wz = v[c + 2] - v[a + 2];
-            double cx = uy * wz - uz * wy, cy = uz * wx - ux * wz, cz = ux * wy - uy * wx;
-            double len = Math.sqrt(cx * cx + cy * cy + cz * cz), area = 0.5 * len;
+            org.solmass.model.TriangleGeometry.cross(v, tr, t, cr);
+            double cz = cr[2], len = org.solmass.model.TriangleGeometry.length(cr), area = 0.5 * len;
             if (cz < -0.9 * len) continue; // undersides are not patched
             if (analysed.contains(model.blockNames().get(model.triangleBlock()[t]))) inA += area; else ctxA += area;
         }
@@ -270,8 +267,7 @@ public final class AnalysisRun {
      */
     static float[] triangleAlbedo(Study study, MassingModel model, List<Surface> surfaces) {
         Study.Albedo a = study.albedo();
-        boolean[] ground = new boolean[model.triangleCount()];
-        for (Surface s : surfaces) if (s.kind() == SurfaceKind.GROUND) for (int tr : s.triangles()) ground[tr] = true;
+        boolean[] ground = Surface.groundTriangles(surfaces, model.triangleCount());
         float[] out = new float[model.triangleCount()];
         for (int tr = 0; tr < out.length; tr++) {
             String block = model.blockNames().get(model.triangleBlock()[tr]);

@@ -18,7 +18,6 @@ import org.solmass.surface.PatchOptions;
 import org.solmass.surface.PatchSet;
 import org.solmass.surface.Patcher;
 import org.solmass.surface.Surface;
-import org.solmass.surface.SurfaceKind;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -63,7 +62,7 @@ public final class SkyViewCommand implements Callable<Integer> {
         MassingModel m = read.model();
         PatchSet ps = Patcher.build(m, new PatchOptions(patch, analyse == null ? java.util.Set.of() : new LinkedHashSet<>(analyse), false));
         Scene scene = Scene.build(m, !ps.hasGroundFaces(), ps.groundLevelZ());
-        boolean[] ground = groundTriangles(m, ps.surfaces());
+        boolean[] ground = Surface.groundTriangles(ps.surfaces(), m.triangleCount());
         double tSetup = AnalysisRun.seconds(t0);
         long t1 = System.nanoTime();
         ViewFactors[] vf;
@@ -105,11 +104,5 @@ public final class SkyViewCommand implements Callable<Integer> {
                 AnalysisRun.seconds(t0), tSetup, tRays, totalRays / tRays / 1e6);
         System.out.println("  wrote " + csv);
         return Main.EXIT_OK;
-    }
-
-    static boolean[] groundTriangles(MassingModel m, List<Surface> surfaces) {
-        boolean[] g = new boolean[m.triangleCount()];
-        for (Surface s : surfaces) if (s.kind() == SurfaceKind.GROUND) for (int t : s.triangles()) g[t] = true;
-        return g;
     }
 }

@@ -5,7 +5,7 @@ import org.solmass.InputException;
 import org.solmass.metrics.PatchComparison;
 import org.solmass.table.Column;
 import org.solmass.table.ResultTable;
-import org.solmass.climate.Step;
+import org.solmass.climate.MonthHour;
 import org.solmass.climate.WeatherSeries;
 import org.solmass.irradiation.PhaseProgress;
 import org.solmass.model.MassingModel;
@@ -18,7 +18,6 @@ import org.solmass.output.RunRecord;
 import org.solmass.output.SummaryWriter;
 import org.solmass.study.Study;
 import org.solmass.sun.Site;
-import org.solmass.sun.SolarCalculator;
 import org.solmass.sun.SunPath;
 import org.solmass.surface.Patch;
 import org.solmass.surface.PatchOptions;
@@ -33,7 +32,6 @@ import org.solmass.viewer.ViewerData;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.LocalDateTime;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.List;
@@ -96,11 +94,11 @@ final class ViewerBridge implements ViewerActions {
         Path mh = folder.resolve(ResultsFolder.MONTH_HOUR);
         if (Files.exists(mh)) {
             Map<String, float[]> byId = MonthHourCsvReader.read(mh);
-            monthHour = new float[n * 288];
+            monthHour = new float[n * MonthHour.SLOTS];
             java.util.Arrays.fill(monthHour, Float.NaN);
             for (Patch p : ps.patches()) {
                 float[] v = byId.get(p.id());
-                if (v != null) System.arraycopy(v, 0, monthHour, p.index() * 288, 288);
+                if (v != null) System.arraycopy(v, 0, monthHour, p.index() * MonthHour.SLOTS, MonthHour.SLOTS);
             }
         }
         WeatherSeries weather = AnalysisRun.loadWeather(study);
@@ -155,37 +153,17 @@ final class ViewerBridge implements ViewerActions {
 
     /** Mean GHI and DHI per month and hour of the input, and monthly totals. */
     static ClimateGlance glance(WeatherSeries w) {
-        double[] g = new double[288], d = new double[288], h = new double[288], gm = new double[12], dm = new double[12];
-        for (Step st : w.steps()) {
-            int slot = (st.month() - 1) * 24 + Math.min(23, (int) Math.floor(st.localStandardHour()));
-            double wh = st.weightedHours();
-            g[slot] += st.ghiWm2() * wh;
-            d[slot] += st.dhiWm2() * wh;
-            h[slot] += wh;
-            gm[st.month() - 1] += st.ghiWm2() * wh / 1000;
-            dm[st.month() - 1] += st.dhiWm2() * wh / 1000;
-        }
-        for (int k = 0; k < 288; k++) {
-            g[k] = h[k] > 0 ? g[k] / h[k] : 0;
-            d[k] = h[k] > 0 ? d[k] / h[k] : 0;
-        }
-        return new ClimateGlance(w.source(), g, d, gm, dm);
+        org.solmass.climate.MonthHourMeans m = org.solmass.climate.MonthHourMeans.of(w);
+        return new ClimateGlance(w.source(), m.ghiWm2(), m.dhiWm2(), m.ghiMonthKwhM2(), m.dhiMonthKwhM2());
     }
 
     /** The sun over each monthly-average day (Klein's days), every 20 minutes while it is up. */
     static List<SunArc> sunPath(Site site) {
-        SolarCalculator calc = new SolarCalculator(site);
-        ZoneOffset off = site.standardOffset(SunPath.AVERAGE_DAY_YEAR);
         List<SunArc> arcs = new ArrayList<>();
-        for (int m = 1; m <= 12; m++) {
+        for (SunPath.Arc a : SunPath.averageDayArcs(site, 20)) {
             List<SunArc.Point> pts = new ArrayList<>();
-            for (SunPath.Sample s : SunPath.averageDay(calc, m, 20)) {
-                if (s.sunUpFraction() <= 0 || s.sun().elevationDeg() <= 0) continue;
-                LocalDateTime t = LocalDateTime.ofInstant(s.start(), off);
-                double hour = t.getHour() + t.getMinute() / 60.0 + s.durationH() / 2;
-                pts.add(new SunArc.Point(hour, s.sun().azimuthDeg(), s.sun().elevationDeg()));
-            }
-            arcs.add(new SunArc(m, pts));
+            for (SunPath.ArcPoint p : a.points()) pts.add(new SunArc.Point(p.localHour(), p.azimuthDeg(), p.elevationDeg()));
+            arcs.add(new SunArc(a.month(), pts));
         }
         return arcs;
     }

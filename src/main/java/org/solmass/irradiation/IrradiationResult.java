@@ -16,7 +16,7 @@ package org.solmass.irradiation;
  * @param unshaded total irradiation of the same plane with no obstruction
  * @param monthly total irradiation per month: [month 0..11][patch]
  * @param monthHourWm2 mean total irradiance per patch, month and hour of the day
- *                     (patch * 288 + month * 24 + hour); null unless asked for
+ *                     {@code patch * MonthHour.SLOTS + MonthHour.index(month, hour)}; null unless asked for
  * @param sunshineHours hours per year with DNI at or above 120 W/m2 (WMO) while the patch sees the sun
  * @param siteSunshineHours the site's sunshine hours over the same period (unobstructed)
  * @param sunDirections number of sun directions rays were cast to per patch

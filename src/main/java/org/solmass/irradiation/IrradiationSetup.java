@@ -8,7 +8,6 @@ import org.solmass.sky.SkyModel;
 import org.solmass.surface.Patch;
 import org.solmass.surface.Surface;
 import org.solmass.surface.SurfaceFrame;
-import org.solmass.surface.SurfaceKind;
 
 import java.util.List;
 
@@ -55,14 +54,11 @@ public final class IrradiationSetup {
         int nt = model.triangleCount();
         int[] triangleSurface = new int[nt];
         java.util.Arrays.fill(triangleSurface, -1);
-        boolean[] isGround = new boolean[nt];
+        boolean[] isGround = Surface.groundTriangles(surfaces, nt);
         SurfaceFrame[] frames = new SurfaceFrame[surfaces.size()];
         for (Surface s : surfaces) {
             frames[s.id()] = s.frame();
-            for (int t : s.triangles()) {
-                triangleSurface[t] = s.id();
-                isGround[t] = s.kind() == SurfaceKind.GROUND;
-            }
+            for (int t : s.triangles()) triangleSurface[t] = s.id();
         }
         double[] probeGrid = null;
         int probes = 0;

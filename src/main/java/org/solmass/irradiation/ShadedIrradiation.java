@@ -1,5 +1,6 @@
 package org.solmass.irradiation;
 
+import org.solmass.climate.MonthHour;
 import org.solmass.scene.HemisphereSampler;
 import org.solmass.scene.SkyViewCalculator;
 import org.solmass.scene.Tracer;
@@ -30,7 +31,7 @@ import java.util.stream.IntStream;
  * ground-reflected GHI).</li>
  * </ul>
  * Because every term is linear in the step weights, it is enough to keep per receiver the sums per
- * month-hour slot (288 values), and reflection becomes a sparse weighted sum of other receivers' slot
+ * month-hour slot ({@link MonthHour}, 288 values), and reflection becomes a sparse weighted sum of other receivers' slot
  * sums, computed after all first passes are known.
  *
  * <p>The sky diffuse of a slot is kept at or above zero (the Perez horizon term may be negative);
@@ -117,7 +118,7 @@ public final class ShadedIrradiation {
             double[] reflMonth = new double[12];
             int base = p * SLOTS;
             for (int k = 0; k < SLOTS; k++) {
-                reflMonth[k / 24] += refl[k];
+                reflMonth[MonthHour.month(k) - 1] += refl[k];
                 if (monthHour != null) {
                     double t = firstPass[base + k] + refl[k]; // first pass of p: its beam + sky diffuse
                     monthHour[base + k] = st.hours[k] > 0 ? (float) (t / st.hours[k]) : 0f;
@@ -331,8 +332,8 @@ public final class ShadedIrradiation {
                 double diff = Math.max(0, circSlot[k] + svf * st.backgroundWh[k] + hz * st.horizonWh[k]);
                 slotTotal[k] = beamSlot[k] + diff;
                 if (analysed) {
-                    beamMonth[k / 24] += beamSlot[k];
-                    diffMonth[k / 24] += diff;
+                    beamMonth[MonthHour.month(k) - 1] += beamSlot[k];
+                    diffMonth[MonthHour.month(k) - 1] += diff;
                     double diffU = Math.max(0, circUSlot[k] + svfU * st.backgroundWh[k] + sinTilt * st.horizonWh[k]);
                     unshadedSum += beamUSlot[k] + diffU + ga * gvfU * st.ghiWh[k];
                 }

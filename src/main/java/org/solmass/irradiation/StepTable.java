@@ -1,5 +1,6 @@
 package org.solmass.irradiation;
 
+import org.solmass.climate.MonthHour;
 import org.solmass.climate.Step;
 import org.solmass.climate.WeatherSeries;
 import org.solmass.sky.SkyModel;
@@ -11,10 +12,10 @@ import org.solmass.sky.SkyModel;
  *
  * <p>Every weight is irradiance x step duration x the days the step stands for, so that summing
  * {@code weight x geometry factor} over steps gives irradiation in Wh/m2 (see {@link Step}).
- * A month-hour slot is {@code (month - 1) * 24 + floor(local standard hour)}: 288 slots.
+ * Steps are summed into the 288 month-hour slots of {@link MonthHour}.
  */
 final class StepTable {
-    static final int SLOTS = 288;
+    static final int SLOTS = MonthHour.SLOTS;
 
     final int count;
     final float[] sx, sy, sz;
@@ -64,7 +65,7 @@ final class StepTable {
         int k = 0;
         for (int s = 0; s < series.size(); s++) {
             Step st = series.step(s);
-            int sl = slotOf(st);
+            int sl = MonthHour.slotOf(st);
             double wh = st.weightedHours();
             hours[sl] += wh;
             ghiWh[sl] += st.ghiWm2() * wh;
@@ -99,10 +100,5 @@ final class StepTable {
     /** Whether a step's DNI counts as sunshine (at or above the WMO threshold). */
     static boolean isSunshine(double dniWm2) {
         return dniWm2 >= SUNSHINE_DNI_WM2;
-    }
-
-    static int slotOf(Step st) {
-        int h = Math.min(23, Math.max(0, (int) Math.floor(st.localStandardHour())));
-        return (st.month() - 1) * 24 + h;
     }
 }

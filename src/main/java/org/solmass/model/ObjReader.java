@@ -338,12 +338,13 @@ public final class ObjReader {
      * squared (a zero-area or needle triangle).
      */
     static boolean isDegenerate(double[] v, int a, int b, int c) {
+        double[] cr = new double[3];
+        TriangleGeometry.cross(v, a, b, c, cr);
+        double twiceArea = TriangleGeometry.length(cr);
         a *= 3; b *= 3; c *= 3;
         double ux = v[b] - v[a], uy = v[b + 1] - v[a + 1], uz = v[b + 2] - v[a + 2];
         double wx = v[c] - v[a], wy = v[c + 1] - v[a + 1], wz = v[c + 2] - v[a + 2];
         double zx = v[c] - v[b], zy = v[c + 1] - v[b + 1], zz = v[c + 2] - v[b + 2];
-        double cx = uy * wz - uz * wy, cy = uz * wx - ux * wz, cz = ux * wy - uy * wx;
-        double twiceArea = Math.sqrt(cx * cx + cy * cy + cz * cz);
         double l2 = Math.max(ux * ux + uy * uy + uz * uz, Math.max(wx * wx + wy * wy + wz * wz,
                 zx * zx + zy * zy + zz * zz));
         return l2 == 0 || twiceArea <= DEGENERATE_REL * l2;

@@ -1,17 +1,23 @@
 package org.solmass.model;
 
 /**
- * Triangulates one planar (possibly concave) polygon face by ear clipping in the polygon's plane.
+ * The one polygon triangulator of Solmass: ear clipping of a planar, possibly concave, simple
+ * polygon. The OBJ reader uses it for n-gon faces ({@link #triangulate(int[], int, double[], IntList)}),
+ * and every patch mesh (glTF, viewer, PNG map) through {@code surface.Patch.triangles()}, which calls
+ * {@link #triangulate(double[], double[])} on the outline in the patch's plane.
  * Method: ear clipping (Meisters, G. H., 1975, "Polygons have ears", American Mathematical Monthly
  * 82(6):648-651; every simple polygon with more than 3 vertices has two non-overlapping ears).
  * Valid for simple polygons (no self-intersection); collinear and repeated vertices are allowed.
- * The plane is taken from the Newell normal (Newell's method, see Sutherland, Sproull and
- * Schumacker, 1974, "A characterization of ten hidden-surface algorithms", ACM Computing Surveys
+ * For a 3D face the plane is taken from the Newell normal (Newell's method, see Sutherland, Sproull
+ * and Schumacker, 1974, "A characterization of ten hidden-surface algorithms", ACM Computing Surveys
  * 6(1)), and the polygon is projected by dropping the normal's dominant axis.
- * Output triangles keep the face's winding, so their normals agree with the face normal.
- * Not thread-safe: one instance per reader.
+ * Output triangles keep the polygon's winding, so their normals agree with the face normal.
+ *
+ * <p>Clipping tries corners in order from a first corner: 0 for OBJ faces, 1 for 2D outlines. From
+ * corner 1 a strictly convex polygon comes out as the fan from corner 0, (0,1,2), (0,2,3), ...
+ * Not thread-safe: one instance per reader (the static 2D method makes its own).
  */
-final class PolygonTriangulator {
+public final class PolygonTriangulator {
     /** Relative tolerance for the convexity test: |cross| below this times the squared size is collinear. */
     static final double COLLINEAR_REL = 1e-12;
 
@@ -52,8 +58,6 @@ final class PolygonTriangulator {
         if (ax + ay + az == 0) return 0;
         int drop = az >= ax && az >= ay ? 2 : (ay >= ax ? 1 : 0);
         double sign = drop == 2 ? Math.signum(nz) : drop == 1 ? Math.signum(ny) : Math.signum(nx);
-        double minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY;
-        double minY = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
         for (int i = 0; i < k; i++) {
             int a = idx[i] * 3;
             // Right-handed projection so that the polygon is counter-clockwise in 2D when sign > 0.
@@ -63,13 +67,59 @@ final class PolygonTriangulator {
             else { x = v[a + 1]; y = v[a + 2]; }
             if (sign < 0) y = -y;
             px[i] = x; py[i] = y;
-            minX = Math.min(minX, x); maxX = Math.max(maxX, x);
-            minY = Math.min(minY, y); maxY = Math.max(maxY, y);
+        }
+        return clip(k, 0, out);
+    }
+
+    /**
+     * Triangles of a simple 2D polygon (either orientation; not closed: the last corner is not a
+     * repeat of the first), as corner indices, three per triangle, in the polygon's own
+     * orientation. A corner at the same position as the one before it is skipped. A strictly convex
+     * polygon gives the fan from corner 0; a simple polygon with n distinct corners and no straight
+     * ones gives n - 2 triangles.
+     */
+    public static int[] triangulate(double[] x, double[] y) {
+        int n = Math.min(x.length, y.length);
+        PolygonTriangulator t = new PolygonTriangulator();
+        t.ensure(n);
+        int k = 0;
+        for (int i = 0; i < n; i++) {
+            if (k > 0 && x[i] == t.px[k - 1] && y[i] == t.py[k - 1]) continue;
+            t.px[k] = x[i]; t.py[k] = y[i]; t.idx[k] = i;
+            k++;
+        }
+        while (k > 1 && t.px[k - 1] == t.px[0] && t.py[k - 1] == t.py[0]) k--;
+        if (k < 3) return new int[0];
+        double area2 = 0;
+        for (int i = 0; i < k; i++) {
+            int j = (i + 1) % k;
+            area2 += t.px[i] * t.py[j] - t.px[j] * t.py[i];
+        }
+        if (area2 < 0) for (int i = 0; i < k; i++) t.py[i] = -t.py[i]; // clockwise: mirror to counter-clockwise
+        IntList out = new IntList();
+        if (k == 3) {
+            out.add(t.idx[0]); out.add(t.idx[1]); out.add(t.idx[2]);
+        } else {
+            t.clip(k, 1, out);
+        }
+        return out.toArray();
+    }
+
+    /**
+     * Ear clipping of the counter-clockwise polygon {@code px, py} of k (at least 4) corners, trying
+     * corners from {@code first}; writes {@code idx} of the corners, three per triangle.
+     */
+    private int clip(int k, int first, IntList out) {
+        double minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY;
+        double minY = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < k; i++) {
+            minX = Math.min(minX, px[i]); maxX = Math.max(maxX, px[i]);
+            minY = Math.min(minY, py[i]); maxY = Math.max(maxY, py[i]);
         }
         double size = Math.max(maxX - minX, maxY - minY);
         double eps = COLLINEAR_REL * size * size;
         for (int i = 0; i < k; i++) { prev[i] = (i + k - 1) % k; next[i] = (i + 1) % k; }
-        int remaining = k, written = 0, cur = 0, sinceEar = 0;
+        int remaining = k, written = 0, cur = first, sinceEar = 0;
         while (remaining > 3) {
             int p = prev[cur], q = next[cur];
             double c = cross(p, cur, q);

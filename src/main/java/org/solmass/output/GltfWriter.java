@@ -3,10 +3,6 @@ package org.solmass.output;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import org.locationtech.jts.geom.Coordinate;
-import org.locationtech.jts.geom.Geometry;
-import org.locationtech.jts.geom.GeometryFactory;
-import org.locationtech.jts.triangulate.polygon.PolygonTriangulator;
 import org.solmass.irradiation.IrradiationColumns;
 import org.solmass.surface.Patch;
 import org.solmass.table.Column;
@@ -18,7 +14,6 @@ import java.nio.ByteOrder;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Base64;
-import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -31,7 +26,8 @@ import java.util.Map;
  * <p>Layout (docs/outputs.md): one root node carrying the model's centre as its translation (so the
  * float vertex positions stay precise for survey coordinates), one child node and one mesh per block;
  * each mesh has one triangle primitive with POSITION, NORMAL and COLOR_0 (float VEC3) and
- * UNSIGNED_INT indices. Every patch has its own vertices (flat colour per patch). Colours are the
+ * UNSIGNED_INT indices. Every patch has its own vertices (flat colour per patch); its triangles are
+ * {@link Patch#triangles()}, the ones the viewer and the PNG map draw. Colours are the
  * sequential ramp ({@link ColourRamp#sequential}) of the main column over the map's automatic range,
  * converted from sRGB to linear as glTF requires for COLOR_0 (spec 3.7.2.1). Axes: glTF is y up,
  * right-handed, metres, so a Solmass point (x east, y north, z up) becomes (x, z, -y).
@@ -226,8 +222,9 @@ public final class GltfWriter {
                 nrm.putFloat((float) q.normal().x()).putFloat((float) q.normal().z()).putFloat((float) -q.normal().y());
                 col.putFloat(r).putFloat(g).putFloat(b);
             }
-            for (int[] t : triangulate(q)) {
-                tris.add(new int[] {base + t[0], base + t[1], base + t[2]});
+            int[] t = q.triangles();
+            for (int j = 0; j < t.length; j += 3) {
+                tris.add(new int[] {base + t[j], base + t[j + 1], base + t[j + 2]});
                 ni += 3;
             }
             base += m;
@@ -235,58 +232,6 @@ public final class GltfWriter {
         ByteBuffer idx = le(4 * ni);
         for (int[] t : tris) idx.putInt(t[0]).putInt(t[1]).putInt(t[2]);
         return new MeshData(pos.array(), nrm.array(), col.array(), idx.array(), nv, ni, min, max, first, counts);
-    }
-
-    /**
-     * Triangles of a patch outline as corner indices, counter-clockwise seen from the front: a fan
-     * for a convex outline, else JTS ear clipping ({@link PolygonTriangulator}) in the patch plane.
-     */
-    static List<int[]> triangulate(Patch q) {
-        double[] o = q.outline();
-        int m = o.length / 3;
-        double nx = q.normal().x(), ny = q.normal().y(), nz = q.normal().z();
-        // plane axes: u horizontal (or east for horizontal patches), w = n x u
-        double ux, uy, uz;
-        double h = Math.hypot(nx, ny);
-        if (h < 1e-9) { ux = 1; uy = 0; uz = 0; } else { ux = -ny / h; uy = nx / h; uz = 0; }
-        double wx = ny * uz - nz * uy, wy = nz * ux - nx * uz, wz = nx * uy - ny * ux;
-        double[] px = new double[m], py = new double[m];
-        for (int k = 0; k < m; k++) {
-            px[k] = o[3 * k] * ux + o[3 * k + 1] * uy + o[3 * k + 2] * uz;
-            py[k] = o[3 * k] * wx + o[3 * k + 1] * wy + o[3 * k + 2] * wz;
-        }
-        List<int[]> out = new ArrayList<>();
-        if (convex(px, py)) {
-            for (int k = 1; k + 1 < m; k++) out.add(new int[] {0, k, k + 1});
-            return out;
-        }
-        GeometryFactory gf = new GeometryFactory();
-        Coordinate[] cs = new Coordinate[m + 1];
-        Map<Coordinate, Integer> at = new HashMap<>();
-        for (int k = 0; k < m; k++) {
-            cs[k] = new Coordinate(px[k], py[k]);
-            at.putIfAbsent(cs[k], k);
-        }
-        cs[m] = cs[0];
-        Geometry tri = PolygonTriangulator.triangulate(gf.createPolygon(cs));
-        for (int i = 0; i < tri.getNumGeometries(); i++) {
-            Coordinate[] t = tri.getGeometryN(i).getCoordinates();
-            Integer a = at.get(t[0]), b = at.get(t[1]), c = at.get(t[2]);
-            if (a == null || b == null || c == null) continue;
-            double cross = (px[b] - px[a]) * (py[c] - py[a]) - (py[b] - py[a]) * (px[c] - px[a]);
-            out.add(cross >= 0 ? new int[] {a, b, c} : new int[] {a, c, b});
-        }
-        return out;
-    }
-
-    private static boolean convex(double[] x, double[] y) {
-        int m = x.length;
-        for (int k = 0; k < m; k++) {
-            int a = k, b = (k + 1) % m, c = (k + 2) % m;
-            double cross = (x[b] - x[a]) * (y[c] - y[b]) - (y[b] - y[a]) * (x[c] - x[b]);
-            if (cross < -1e-12) return false;
-        }
-        return true;
     }
 
     /** sRGB 8-bit code to linear (IEC 61966-2-1:1999 decoding). */

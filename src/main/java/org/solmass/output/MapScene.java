@@ -1,6 +1,7 @@
 package org.solmass.output;
 
 import org.solmass.model.MassingModel;
+import org.solmass.model.TriangleGeometry;
 import org.solmass.model.Vec3;
 import org.solmass.surface.Patch;
 
@@ -17,6 +18,8 @@ import java.util.Map;
 final class MapScene {
     /** Direction light comes from for the grey shading of blocks: azimuth 200 deg, elevation 60 deg. */
     private static final Vec3 LIGHT = Vec3.fromAzimuthElevation(200, 60);
+    /** The ground quad's two triangles (a fan from corner 0). */
+    private static final int[] QUAD_FAN = {0, 1, 2, 0, 2, 3};
     private static final double CREASE_COS = Math.cos(Math.toRadians(25));
 
     private final MassingModel model;
@@ -45,13 +48,13 @@ final class MapScene {
         int nt = model.triangleCount();
         triColour = new int[nt];
         triNormal = new double[3 * nt];
+        double[] n = new double[3];
         for (int t = 0; t < nt; t++) {
-            Vec3 a = model.vertex(t, 0), b = model.vertex(t, 1), c = model.vertex(t, 2);
-            Vec3 n = b.minus(a).cross(c.minus(a)).normalized();
-            triNormal[3 * t] = n.x();
-            triNormal[3 * t + 1] = n.y();
-            triNormal[3 * t + 2] = n.z();
-            double lambert = Math.max(0, n.dot(LIGHT));
+            if (!TriangleGeometry.unitNormal(model.vertices(), model.triangles(), t, n)) java.util.Arrays.fill(n, 0);
+            triNormal[3 * t] = n[0];
+            triNormal[3 * t + 1] = n[1];
+            triNormal[3 * t + 2] = n[2];
+            double lambert = Math.max(0, n[0] * LIGHT.x() + n[1] * LIGHT.y() + n[2] * LIGHT.z());
             triColour[t] = analysedBlock[model.triangleBlock()[t]] ? shade(MapRenderer.UNPATCHED, 0.82 + 0.18 * lambert) : contextGrey(lambert);
         }
         patchColour = new int[patches.size()];
@@ -127,7 +130,7 @@ final class MapScene {
             P.project(ground[3 * k], ground[3 * k + 1], ground[3 * k + 2]);
             xs[k] = P.sx; ys[k] = P.sy; zs[k] = P.depth - 4 * bias;
         }
-        ras.polygon(xs, ys, zs, 4, MapRenderer.GROUND, 0);
+        ras.polygon(xs, ys, zs, QUAD_FAN, MapRenderer.GROUND, 0);
 
         int[] tri = model.triangles();
         for (int t = 0; t < triColour.length; t++) {
@@ -154,7 +157,7 @@ final class MapScene {
                 P.project(o[3 * k], o[3 * k + 1], o[3 * k + 2]);
                 xs[k] = P.sx; ys[k] = P.sy; zs[k] = P.depth;
             }
-            ras.polygon(xs, ys, zs, n, patchColour[p], bias);
+            ras.polygon(xs, ys, zs, q.triangles(), patchColour[p], bias);
             if (outlineAlpha > 0) {
                 for (int k = 0; k < n; k++) {
                     int k1 = (k + 1) % n;

@@ -13,7 +13,7 @@ import java.util.Map;
 
 /**
  * Reads a month-hour.csv written by {@link MonthHourCsvWriter} back into one 12 x 24 table per patch
- * (index {@code month0 * 24 + hour}, W/m2), for the viewer's heat map. Errors name file:line.
+ * (index {@code MonthHour.index(month, hour)}, W/m2), for the viewer's heat map. Errors name file:line.
  */
 public final class MonthHourCsvReader {
     private MonthHourCsvReader() {}
@@ -53,7 +53,7 @@ public final class MonthHourCsvReader {
                 for (int h = 0; h < MonthHourCsvWriter.HOURS; h++) {
                     String c = cells[h + 1];
                     try {
-                        t[(month - 1) * 24 + h] = c.isEmpty() ? Float.NaN : Float.parseFloat(c);
+                        t[org.solmass.climate.MonthHour.index(month, h)] = c.isEmpty() ? Float.NaN : Float.parseFloat(c);
                     } catch (NumberFormatException e) {
                         throw new InputException(where, String.format("h%02d: expected a number, got \"%s\"", h, c));
                     }

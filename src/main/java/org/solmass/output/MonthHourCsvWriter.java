@@ -1,5 +1,6 @@
 package org.solmass.output;
 
+import org.solmass.climate.MonthHour;
 import org.solmass.surface.Patch;
 
 import java.util.List;
@@ -12,7 +13,7 @@ import java.nio.file.Path;
  * 1 to 12. One decimal (W/m2), LF line ends, UTF-8, no comment lines. Layout: docs/outputs.md.
  */
 public final class MonthHourCsvWriter {
-    public static final int MONTHS = 12, HOURS = 24, CELLS = MONTHS * HOURS;
+    public static final int MONTHS = MonthHour.MONTHS, HOURS = MonthHour.HOURS, CELLS = MonthHour.SLOTS;
     static final int DECIMALS = 1;
 
     private MonthHourCsvWriter() {}
@@ -28,7 +29,7 @@ public final class MonthHourCsvWriter {
      * Writes the file atomically.
      *
      * @param patches the patches, in index order
-     * @param wm2 mean irradiance, W/m2: patch p, month m (0..11), hour h (0..23) at {@code p*288 + m*24 + h}
+     * @param wm2 mean irradiance, W/m2: patch p, month m (0..11), hour h (0..23) at {@code p * MonthHour.SLOTS + MonthHour.index(m + 1, h)}
      */
     public static void write(Path file, List<Patch> patches, float[] wm2) {
         if (wm2.length != (long) patches.size() * CELLS) {
@@ -45,7 +46,7 @@ public final class MonthHourCsvWriter {
                 for (int m = 0; m < MONTHS; m++) {
                     sb.setLength(0);
                     sb.append(id).append(',').append(m + 1);
-                    int base = p * CELLS + m * HOURS;
+                    int base = p * CELLS + MonthHour.index(m + 1, 0);
                     for (int h = 0; h < HOURS; h++) {
                         sb.append(',');
                         org.solmass.table.Numbers.append(sb, wm2[base + h], DECIMALS);

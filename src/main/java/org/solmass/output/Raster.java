@@ -2,9 +2,9 @@ package org.solmass.output;
 
 /**
  * A small software rasteriser with a depth buffer for the headless map: filled triangles and
- * polygons, depth-tested lines with alpha, and a 2 x 2 box downsampling for anti-aliasing. Depth grows
- * towards the viewer. Pixel centres at (i + 0.5, j + 0.5); no allocation per primitive except for
- * polygons of more than four corners.
+ * polygons (triangulated by the caller), depth-tested lines with alpha, and a 2 x 2 box downsampling
+ * for anti-aliasing. Depth grows towards the viewer. Pixel centres at (i + 0.5, j + 0.5); no
+ * allocation per primitive.
  */
 final class Raster {
     final int w, h;
@@ -49,45 +49,14 @@ final class Raster {
     }
 
     /**
-     * Fills a simple polygon given as screen x, y and depth per corner (fan for convex, ear clipping
-     * otherwise).
+     * Fills a polygon given as screen x, y and depth per corner and its triangles as corner indices,
+     * three per triangle (for a patch, {@code Patch.triangles()}: the triangulation glTF and the viewer
+     * use too).
      */
-    void polygon(double[] xs, double[] ys, double[] zs, int n, int colour, float bias) {
-        if (n < 3) return;
-        if (n == 3 || convex(xs, ys, n)) {
-            for (int i = 1; i + 1 < n; i++) {
-                triangle(xs[0], ys[0], zs[0], xs[i], ys[i], zs[i], xs[i + 1], ys[i + 1], zs[i + 1], colour, bias);
-            }
-            return;
-        }
-        int[] idx = new int[n];
-        for (int i = 0; i < n; i++) idx[i] = i;
-        double sign = Math.signum(signedArea(xs, ys, n));
-        int m = n, guard = 0;
-        while (m > 3 && guard++ < n * n) {
-            boolean clipped = false;
-            for (int a = 0; a < m; a++) {
-                int ia = idx[(a + m - 1) % m], ib = idx[a], ic = idx[(a + 1) % m];
-                double cross = (xs[ib] - xs[ia]) * (ys[ic] - ys[ia]) - (xs[ic] - xs[ia]) * (ys[ib] - ys[ia]);
-                if (cross * sign <= 0) continue;
-                boolean inside = false;
-                for (int q = 0; q < m && !inside; q++) {
-                    int iq = idx[q];
-                    if (iq == ia || iq == ib || iq == ic) continue;
-                    inside = inTriangle(xs[iq], ys[iq], xs[ia], ys[ia], xs[ib], ys[ib], xs[ic], ys[ic]);
-                }
-                if (inside) continue;
-                triangle(xs[ia], ys[ia], zs[ia], xs[ib], ys[ib], zs[ib], xs[ic], ys[ic], zs[ic], colour, bias);
-                System.arraycopy(idx, a + 1, idx, a, m - a - 1);
-                m--;
-                clipped = true;
-                break;
-            }
-            if (!clipped) break;
-        }
-        for (int i = 1; i + 1 < m; i++) {
-            triangle(xs[idx[0]], ys[idx[0]], zs[idx[0]], xs[idx[i]], ys[idx[i]], zs[idx[i]],
-                    xs[idx[i + 1]], ys[idx[i + 1]], zs[idx[i + 1]], colour, bias);
+    void polygon(double[] xs, double[] ys, double[] zs, int[] triangles, int colour, float bias) {
+        for (int t = 0; t + 2 < triangles.length; t += 3) {
+            int a = triangles[t], b = triangles[t + 1], c = triangles[t + 2];
+            triangle(xs[a], ys[a], zs[a], xs[b], ys[b], zs[b], xs[c], ys[c], zs[c], colour, bias);
         }
     }
 
@@ -131,34 +100,5 @@ final class Raster {
             }
         }
         return out;
-    }
-
-    private static boolean convex(double[] xs, double[] ys, int n) {
-        double sign = 0;
-        for (int i = 0; i < n; i++) {
-            int a = i, b = (i + 1) % n, c = (i + 2) % n;
-            double cross = (xs[b] - xs[a]) * (ys[c] - ys[b]) - (ys[b] - ys[a]) * (xs[c] - xs[b]);
-            if (Math.abs(cross) < 1e-12) continue;
-            if (sign == 0) sign = Math.signum(cross);
-            else if (Math.signum(cross) != sign) return false;
-        }
-        return true;
-    }
-
-    private static double signedArea(double[] xs, double[] ys, int n) {
-        double s = 0;
-        for (int i = 0; i < n; i++) {
-            int j = (i + 1) % n;
-            s += xs[i] * ys[j] - xs[j] * ys[i];
-        }
-        return s / 2;
-    }
-
-    private static boolean inTriangle(double px, double py, double ax, double ay, double bx, double by, double cx, double cy) {
-        double d1 = (px - bx) * (ay - by) - (ax - bx) * (py - by);
-        double d2 = (px - cx) * (by - cy) - (bx - cx) * (py - cy);
-        double d3 = (px - ax) * (cy - ay) - (cx - ax) * (py - ay);
-        boolean neg = d1 < 0 || d2 < 0 || d3 < 0, pos = d1 > 0 || d2 > 0 || d3 > 0;
-        return !(neg && pos);
     }
 }

@@ -49,6 +49,44 @@ public final class SunPath {
         return out;
     }
 
+    /**
+     * A point of a sun-path arc.
+     *
+     * @param localHour    local standard time, hours (e.g. 13.5), at the middle of the sun-up part of the interval
+     * @param azimuthDeg   degrees from north, clockwise
+     * @param elevationDeg degrees above the horizon (apparent, refraction included)
+     */
+    public record ArcPoint(double localHour, double azimuthDeg, double elevationDeg) {}
+
+    /** The sun's arc over Klein's average day of a month (1..12): the points with the sun up. */
+    public record Arc(int month, List<ArcPoint> points) {
+        public Arc {
+            points = List.copyOf(points);
+        }
+    }
+
+    /**
+     * The sun over each monthly-average day (Klein's days), every {@code stepMinutes} while it is up:
+     * twelve arcs, January first. A point is kept when part of its interval has the sun up and its
+     * elevation is above 0.
+     */
+    public static List<Arc> averageDayArcs(Site site, int stepMinutes) {
+        SolarCalculator calc = new SolarCalculator(site);
+        ZoneOffset off = site.standardOffset(AVERAGE_DAY_YEAR);
+        List<Arc> arcs = new ArrayList<>();
+        for (int m = 1; m <= 12; m++) {
+            List<ArcPoint> pts = new ArrayList<>();
+            for (Sample s : averageDay(calc, m, stepMinutes)) {
+                if (s.sunUpFraction() <= 0 || s.sun().elevationDeg() <= 0) continue;
+                LocalDateTime t = LocalDateTime.ofInstant(s.start(), off);
+                double hour = t.getHour() + t.getMinute() / 60.0 + s.durationH() / 2;
+                pts.add(new ArcPoint(hour, s.sun().azimuthDeg(), s.sun().elevationDeg()));
+            }
+            arcs.add(new Arc(m, pts));
+        }
+        return arcs;
+    }
+
     /** The sun over Klein's average day of a month. */
     public static List<Sample> averageDay(SolarCalculator calc, int month, int stepMinutes) {
         return of(calc, averageDayStarts(calc.site(), month, stepMinutes), stepMinutes * 60L);

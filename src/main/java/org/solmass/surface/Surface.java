@@ -27,6 +27,20 @@ public record Surface(int id, int block, int indexInBlock, SurfaceKind kind, Vec
     /** Azimuth of the normal, degrees from north clockwise; 0 for horizontal. */
     public double azimuthDeg() { return SurfaceClassifier.azimuthDeg(normal); }
 
+    /**
+     * Which model triangles belong to GROUND surfaces: the one home of the ground mask that the
+     * albedo, the irradiation receivers and the sky-view classification read.
+     *
+     * @param surfaces surfaces of the model (all blocks)
+     * @param triangleCount number of model triangles
+     * @return per model triangle, whether a GROUND surface was built from it
+     */
+    public static boolean[] groundTriangles(java.util.List<Surface> surfaces, int triangleCount) {
+        boolean[] g = new boolean[triangleCount];
+        for (Surface s : surfaces) if (s.kind() == SurfaceKind.GROUND) for (int t : s.triangles()) g[t] = true;
+        return g;
+    }
+
     /** Stable label {@code B<block>-S<indexInBlock>}, the prefix of its patch ids. */
     public String label() { return "B" + block + "-S" + indexInBlock; }
 }

@@ -14,6 +14,7 @@ import org.locationtech.jts.geom.util.AffineTransformation;
 import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
 import org.solmass.model.IntList;
 import org.solmass.model.MassingModel;
+import org.solmass.model.TriangleGeometry;
 import org.solmass.model.Vec3;
 
 import java.util.ArrayList;
@@ -106,7 +107,7 @@ public final class SurfaceBuilder {
         double[] n = new double[3];
         int last = -1;
         for (int t = 0; t < nt; t++) {
-            if (!unitNormal(v, tri, t, n)) continue; // zero-area triangle (only in synthetic models)
+            if (!TriangleGeometry.unitNormal(v, tri, t, n)) continue; // zero-area triangle (only in synthetic models)
             int found = -1;
             if (last >= 0 && tb[groups.get(last).get(0)] == tb[t] && matches(planes.get(last), n, v, tri, t, tol)) {
                 found = last;
@@ -151,22 +152,6 @@ public final class SurfaceBuilder {
         return true;
     }
 
-    /** Writes the unit normal of triangle t; false (and nothing written) for a zero-area triangle. */
-    static boolean unitNormal(double[] v, int[] tri, int t, double[] out) {
-        double[] c = crossOf(v, tri, t);
-        double l = Math.sqrt(c[0] * c[0] + c[1] * c[1] + c[2] * c[2]);
-        if (!(l > 0) || !Double.isFinite(l)) return false;
-        out[0] = c[0] / l; out[1] = c[1] / l; out[2] = c[2] / l;
-        return true;
-    }
-
-    /** Cross product (b - a) x (c - a) of triangle t: twice its area times its unit normal. */
-    static double[] crossOf(double[] v, int[] tri, int t) {
-        int a = tri[3 * t] * 3, b = tri[3 * t + 1] * 3, c = tri[3 * t + 2] * 3;
-        double ux = v[b] - v[a], uy = v[b + 1] - v[a + 1], uz = v[b + 2] - v[a + 2];
-        double wx = v[c] - v[a], wy = v[c + 1] - v[a + 1], wz = v[c + 2] - v[a + 2];
-        return new double[]{uy * wz - uz * wy, uz * wx - ux * wz, ux * wy - uy * wx};
-    }
 
     /** The polygon without holes whose mean width (2 area / perimeter) is below {@code weld}. */
     static Polygon fillHairlineHoles(Polygon p, double weld) {
@@ -188,10 +173,11 @@ public final class SurfaceBuilder {
         int[] tri = m.triangles();
         int k = group.size();
         double sx = 0, sy = 0, sz = 0;
+        double[] cr = new double[3];
         for (int i = 0; i < k; i++) {
             int t = group.get(i);
-            double[] c = crossOf(v, tri, t);
-            sx += c[0]; sy += c[1]; sz += c[2];
+            TriangleGeometry.cross(v, tri, t, cr);
+            sx += cr[0]; sy += cr[1]; sz += cr[2];
         }
         Vec3 normal = new Vec3(sx, sy, sz).normalized();
         // The plane: area-weighted mean normal through the first vertex of the group's first triangle

@@ -6,6 +6,7 @@ import javafx.scene.canvas.GraphicsContext;
 import javafx.scene.paint.Color;
 import javafx.scene.text.Font;
 import javafx.scene.text.TextAlignment;
+import org.solmass.climate.MonthHour;
 import org.solmass.output.ColourRamp;
 
 /** A month (rows, January on top) by hour (columns, 0..23 local standard time) grid coloured with the ramp. */
@@ -17,7 +18,7 @@ final class HeatMap extends Canvas {
         super(w, h);
     }
 
-    /** Draws 288 values ({@code [month0 * 24 + hour]}) on 0..max; NaN cells stay empty. */
+    /** Draws 288 values ({@code [MonthHour.index(month, hour)]}) on 0..max; NaN cells stay empty. */
     void draw(double[] v, double max, String unit) {
         GraphicsContext g = getGraphicsContext2D();
         double w = getWidth(), h = getHeight();
@@ -25,7 +26,7 @@ final class HeatMap extends Canvas {
         double gw = w - LEFT - 10, gh = h - BOTTOM - TOP, cw = gw / 24, ch = gh / 12;
         for (int m = 0; m < 12; m++) {
             for (int hr = 0; hr < 24; hr++) {
-                double x = v == null ? Double.NaN : v[m * 24 + hr];
+                double x = v == null ? Double.NaN : v[MonthHour.index(m + 1, hr)];
                 Color c = Double.isFinite(x) ? rgb(ColourRamp.sequential(ColourRamp.normalise(x, 0, max))) : Color.rgb(235, 235, 235);
                 g.setFill(c);
                 g.fillRect(LEFT + hr * cw, TOP + m * ch, Math.ceil(cw), Math.ceil(ch));

@@ -1,6 +1,7 @@
 package org.solmass.viewer;
 
 import org.solmass.model.MassingModel;
+import org.solmass.model.TriangleGeometry;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -65,13 +66,12 @@ public final class MassingMeshData {
             int[] faces = new int[part.size() * 9];
             float[] nrm = new float[part.size() * 3];
             int[] f2b = new int[part.size()];
+            double[] cr = new double[3];
             for (int k = 0; k < part.size(); k++) {
                 int t = part.get(k);
-                int a = ix[3 * t] * 3, b = ix[3 * t + 1] * 3, c = ix[3 * t + 2] * 3;
-                double ux = v[b] - v[a], uy = v[b + 1] - v[a + 1], uz = v[b + 2] - v[a + 2];
-                double wx = v[c] - v[a], wy = v[c + 1] - v[a + 1], wz = v[c + 2] - v[a + 2];
-                double nx = uy * wz - uz * wy, ny = uz * wx - ux * wz, nz = ux * wy - uy * wx;
-                double len = Math.sqrt(nx * nx + ny * ny + nz * nz);
+                TriangleGeometry.cross(v, ix, t, cr);
+                double nx = cr[0], ny = cr[1], nz = cr[2];
+                double len = TriangleGeometry.length(cr);
                 int level = len > 0 ? (int) Math.round(shade(nx / len, ny / len, nz / len) * (LEVELS - 1)) : LEVELS - 1;
                 if (len > 0) {
                     nrm[3 * k] = (float) (nx / len);

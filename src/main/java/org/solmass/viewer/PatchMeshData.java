@@ -113,7 +113,7 @@ public final class PatchMeshData {
             } else {
                 Patch p = group.get(st[0]);
                 double[][] uv = localCoordinates(p);
-                int[] t = Triangulator.triangulate(uv[0], uv[1]);
+                int[] t = p.triangles();
                 tris.add(t);
                 uvs.add(uv);
                 nPts += uv[0].length;

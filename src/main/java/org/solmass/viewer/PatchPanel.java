@@ -11,6 +11,7 @@ import javafx.scene.control.Label;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.VBox;
+import org.solmass.climate.MonthHour;
 import org.solmass.irradiation.IrradiationColumns;
 import org.solmass.table.Column;
 import org.solmass.table.ResultTable;
@@ -143,11 +144,11 @@ final class PatchPanel extends VBox {
             if (t.has(c)) s.getData().add(new XYChart.Data<>(MONTHS[m - 1], t.column(c)[p]));
         }
         monthly.getData().setAll(FXCollections.singletonObservableList(s));
-        double[] mh = new double[288];
+        double[] mh = new double[MonthHour.SLOTS];
         double max = 0;
         for (int m = 1; m <= 12; m++) for (int h = 0; h < 24; h++) {
             double v = data.monthHour(p, m, h);
-            mh[(m - 1) * 24 + h] = v;
+            mh[MonthHour.index(m, h)] = v;
             if (Double.isFinite(v)) max = Math.max(max, v);
         }
         boolean hourly = data.monthHourWm2() != null;

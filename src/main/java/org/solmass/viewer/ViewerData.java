@@ -1,5 +1,6 @@
 package org.solmass.viewer;
 
+import org.solmass.climate.MonthHour;
 import org.solmass.model.MassingModel;
 import org.solmass.table.ResultTable;
 import org.solmass.surface.Patch;
@@ -16,7 +17,7 @@ import java.util.List;
  * @param patches the analysed patches, index = row of {@code table}
  * @param table per-patch result columns (CSV names and units)
  * @param monthHourWm2 mean irradiance per patch, month and local standard hour, W/m2, laid out as
- *                     {@code [(patch * 12 + month0) * 24 + hour]}; may be null
+ *                     {@code [patch * MonthHour.SLOTS + MonthHour.index(month, hour)]}; may be null
  * @param climate the input climate at a glance; may be null
  * @param sunPath the sun's path on the monthly-average days; may be empty
  * @param latitudeDeg site latitude, degrees north
@@ -33,9 +34,9 @@ public record ViewerData(String title, MassingModel model, boolean[] blockAnalys
         if (table.size() != patches.size()) {
             throw new IllegalArgumentException("table has " + table.size() + " rows for " + patches.size() + " patches");
         }
-        if (monthHourWm2 != null && monthHourWm2.length != patches.size() * 12 * 24) {
+        if (monthHourWm2 != null && monthHourWm2.length != patches.size() * MonthHour.SLOTS) {
             throw new IllegalArgumentException("monthHourWm2 has " + monthHourWm2.length
-                    + " values, expected patches x 12 x 24 = " + patches.size() * 288);
+                    + " values, expected patches x 12 x 24 = " + patches.size() * MonthHour.SLOTS);
         }
         if (blockAnalysed.length != model.blockNames().size()) {
             throw new IllegalArgumentException("blockAnalysed has " + blockAnalysed.length + " entries for "
@@ -53,6 +54,6 @@ public record ViewerData(String title, MassingModel model, boolean[] blockAnalys
     /** Mean irradiance of a patch in a month (1..12) at local standard hour h (0..23), W/m2; NaN if absent. */
     public double monthHour(int patch, int month, int hour) {
         if (monthHourWm2 == null) return Double.NaN;
-        return monthHourWm2[(patch * 12 + month - 1) * 24 + hour];
+        return monthHourWm2[patch * MonthHour.SLOTS + MonthHour.index(month, hour)];
     }
 }

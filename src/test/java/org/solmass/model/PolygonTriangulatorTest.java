@@ -9,7 +9,7 @@ import static org.junit.jupiter.api.Assertions.*;
 class PolygonTriangulatorTest {
 
     /** Shoelace area of a planar polygon in the x-y plane (Gauss's area formula; elementary). */
-    private static double shoelace(double[] xs, double[] ys) {
+    static double shoelace(double[] xs, double[] ys) {
         double a = 0;
         for (int i = 0; i < xs.length; i++) {
             int j = (i + 1) % xs.length;

@@ -152,9 +152,10 @@ class GltfWriterTest {
         double[] o = {0, 0, 0, 3, 0, 0, 3, 1, 0, 1, 1, 0, 1, 3, 0, 0, 3, 0};
         Patch q = new Patch(0, "L", 0, "b", 0, SurfaceKind.ROOF, new Vec3(1, 1, 0), new Vec3(0, 0, 1), 5, 0, 0, o);
         double area = 0;
-        List<int[]> tris = GltfWriter.triangulate(q);
-        assertEquals(4, tris.size());
-        for (int[] t : tris) {
+        int[] flat = q.triangles();
+        assertEquals(4 * 3, flat.length);
+        for (int j = 0; j < flat.length; j += 3) {
+            int[] t = {flat[j], flat[j + 1], flat[j + 2]};
             double ax = o[3 * t[1]] - o[3 * t[0]], ay = o[3 * t[1] + 1] - o[3 * t[0] + 1];
             double bx = o[3 * t[2]] - o[3 * t[0]], by = o[3 * t[2] + 1] - o[3 * t[0] + 1];
             double cross = ax * by - ay * bx;

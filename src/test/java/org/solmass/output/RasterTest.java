@@ -5,6 +5,8 @@ import org.junit.jupiter.api.Test;
 import static org.junit.jupiter.api.Assertions.*;
 
 class RasterTest {
+    private static final int[] SQUARE = {0, 1, 2, 0, 2, 3};
+
     private static int count(Raster r, int colour) {
         int n = 0;
         for (int c : r.rgb) if (c == colour) n++;
@@ -18,7 +20,7 @@ class RasterTest {
         // must not fill the notch.
         Raster r = new Raster(300, 300, 0xFFFFFF);
         double[] xs = {20, 220, 220, 120, 120, 20}, ys = {20, 20, 120, 120, 220, 220}, zs = new double[6];
-        r.polygon(xs, ys, zs, 6, 0x123456, 0);
+        r.polygon(xs, ys, zs, org.solmass.model.PolygonTriangulator.triangulate(xs, ys), 0x123456, 0);
         int n = count(r, 0x123456);
         assertEquals(30000, n, 800);
         assertNotEquals(0x123456, r.rgb[170 * 300 + 170], "the notch stays empty");
@@ -33,11 +35,11 @@ class RasterTest {
             double[] xs = {10, 90, 90, 10}, ys = {10, 10, 90, 90};
             double[] near = {5, 5, 5, 5}, far = {1, 1, 1, 1};
             if (order == 0) {
-                r.polygon(xs, ys, far, 4, 0xFF0000, 0);
-                r.polygon(xs, ys, near, 4, 0x00FF00, 0);
+                r.polygon(xs, ys, far, SQUARE, 0xFF0000, 0);
+                r.polygon(xs, ys, near, SQUARE, 0x00FF00, 0);
             } else {
-                r.polygon(xs, ys, near, 4, 0x00FF00, 0);
-                r.polygon(xs, ys, far, 4, 0xFF0000, 0);
+                r.polygon(xs, ys, near, SQUARE, 0x00FF00, 0);
+                r.polygon(xs, ys, far, SQUARE, 0xFF0000, 0);
             }
             assertEquals(0x00FF00, r.rgb[50 * 100 + 50]);
         }

@@ -48,4 +48,36 @@ class SunPathTest {
         for (SunPath.Sample s : SunPath.averageDay(calc, 3, 15)) h += s.sunUpFraction() * s.durationH();
         assertEquals(12.1, h, 0.1, "12 h plus refraction (about 4-5 min)");
     }
+
+    /**
+     * The highest point of the June and December arcs at 51 deg N is the noon elevation
+     * 90 - latitude + declination, with the declination of Klein's days (162 and 344) from Cooper's
+     * equation, delta = 23.45 sin(360 (284 + n) / 365) (Cooper, P. I., 1969, "The absorption of
+     * radiation in solar stills", Solar Energy 12(3):333-346): +23.09 and -23.05 deg. Within 1 deg
+     * (Cooper's equation is approximate; 20-minute points miss noon by at most 10 min, under 0.1 deg).
+     */
+    @Test
+    void averageDayArcsPeakAtTheNoonElevationOfTheirDeclination() {
+        Site site = new Site(51, 10, 0, ZoneOffset.ofHours(1));
+        List<SunPath.Arc> arcs = SunPath.averageDayArcs(site, 20);
+        assertEquals(12, arcs.size());
+        for (int m = 1; m <= 12; m++) {
+            SunPath.Arc a = arcs.get(m - 1);
+            assertEquals(m, a.month());
+            double lastHour = -1;
+            for (SunPath.ArcPoint p : a.points()) {
+                assertTrue(p.elevationDeg() > 0, "only points with the sun up");
+                assertTrue(p.localHour() > lastHour, "points in time order");
+                lastHour = p.localHour();
+            }
+        }
+        assertEquals(90 - 51 + 23.09, maxElevation(arcs.get(5)), 1.0);
+        assertEquals(90 - 51 - 23.05, maxElevation(arcs.get(11)), 1.0);
+    }
+
+    private static double maxElevation(SunPath.Arc a) {
+        double e = Double.NEGATIVE_INFINITY;
+        for (SunPath.ArcPoint p : a.points()) e = Math.max(e, p.elevationDeg());
+        return e;
+    }
 }

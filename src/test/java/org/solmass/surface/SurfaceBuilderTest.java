@@ -28,6 +28,17 @@ class SurfaceBuilderTest {
     }
 
     @Test
+    void groundMaskFlagsExactlyThePlazaTriangles() {
+        org.solmass.model.MassingModel m = fixture("box_plaza.obj");
+        List<Surface> ss = SurfaceBuilder.build(m);
+        boolean[] ground = Surface.groundTriangles(ss, m.triangleCount());
+        assertEquals(m.triangleCount(), ground.length);
+        for (int t = 0; t < m.triangleCount(); t++) {
+            assertEquals(m.triangleBlock()[t] == 1, ground[t], "triangle " + t + " (block 1 is the plaza)");
+        }
+    }
+
+    @Test
     void boxGivesFourFacadesRoofUndersideAndThePlazaIsGround() {
         List<Surface> ss = SurfaceBuilder.build(fixture("box_plaza.obj"));
         assertEquals(7, ss.size());
