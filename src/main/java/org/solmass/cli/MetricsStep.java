@@ -37,8 +37,7 @@ public final class MetricsStep {
     /** Computes the metrics of a finished irradiation run (call inside the run's worker pool). */
     public static Result run(Study study, Scene scene, PatchSet patches, IrradiationResult r, WeatherSeries weather,
                              SkyModel sky) {
-        Study.Site s = study.site();
-        Site site = new Site(s.latitudeDeg(), s.longitudeDeg(), s.elevationM(), Site.parseZone(s.zone(), "site.zone"));
+        Site site = study.site();
         SolarCalculator calc = new SolarCalculator(site);
         Study.SunHours sh = study.sunHours();
         double[][] hours = new double[sh.dates().size()][];
