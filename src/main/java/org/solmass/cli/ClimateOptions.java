@@ -49,7 +49,10 @@ public final class ClimateOptions {
             throw new InputException("--step-minutes", "expected a whole number of minutes that divides 60, got " + step);
         }
         int fill = fillGaps == null ? 0 : fillGaps;
-        if (fill < 0 || fill > 24) throw new InputException("--fill-gaps", "expected a whole number of steps from 0 to 24, got " + fill);
+        if (fill < 0 || fill > Study.Climate.MAX_FILL_GAPS_STEPS) {
+            throw new InputException("--fill-gaps", "expected a whole number of steps from 0 to "
+                    + Study.Climate.MAX_FILL_GAPS_STEPS + ", got " + fill);
+        }
         if (spec.kind() == ClimateSpec.Kind.CLEAR_SKY && timeBaseChoice().forClearSky() == TimeBase.HOURLY_YEAR) {
             spec = ClimateSpec.clearSkyYear(y);
         }

@@ -171,6 +171,8 @@ public record Study(String name, String description, Path source, Model model, S
         public static final int DEFAULT_YEAR = 2025;
         /** Longest run of missing hourly steps filled for {@code "fill_gaps": true}. */
         public static final int FILL_GAPS_STEPS = 3;
+        /** Longest gap {@code fill_gaps} may ask to fill: one day of hourly steps. */
+        public static final int MAX_FILL_GAPS_STEPS = 24;
         public static final Climate CLEAR_SKY = new Climate(null, ClimateSpec.Format.AUTO, ClimateSpec.IntervalLabel.START,
                 0, DEFAULT_YEAR, Map.of());
 

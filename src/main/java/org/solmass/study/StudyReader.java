@@ -235,14 +235,11 @@ public final class StudyReader {
         JsonNode n = k.raw("fill_gaps");
         if (n != null && n.isBoolean()) return n.asBoolean() ? Climate.FILL_GAPS_STEPS : 0;
         if (n != null && !n.isNumber()) {
-            throw k.error("fill_gaps", "expected true, false or a whole number of steps from 0 to " + MAX_FILL_GAPS_STEPS
+            throw k.error("fill_gaps", "expected true, false or a whole number of steps from 0 to " + Climate.MAX_FILL_GAPS_STEPS
                     + ", got " + JsonCursor.shown(n));
         }
-        return k.integer("fill_gaps", 0, 0, MAX_FILL_GAPS_STEPS);
+        return k.integer("fill_gaps", 0, 0, Climate.MAX_FILL_GAPS_STEPS);
     }
-
-    /** Longest gap {@code climate.fill_gaps} may ask to fill: one day of hourly steps. */
-    static final int MAX_FILL_GAPS_STEPS = 24;
 
     /** {@code climate.columns}: role -> header name (text) or 1-based column number. */
     private static Map<String, String> columns(JsonCursor k) {
