@@ -34,8 +34,7 @@ public final class AnalyseCommand implements Callable<Integer> {
     @Mixin ClimateOptions climate = new ClimateOptions();
     @Option(names = "--patch", paramLabel = "M", description = "patch size, metres (default 1)") Double patch;
     @Option(names = "--rays", paramLabel = "N", description = "hemisphere rays per patch (default 1024)") Integer rays;
-    @Option(names = "--sky", paramLabel = "MODEL", description = "sky diffuse model, one of ${COMPLETION-CANDIDATES}; the first is the default",
-            completionCandidates = SkyNames.class) String sky;
+    @Mixin SkyFlag sky = new SkyFlag();
     @Option(names = "--albedo", paramLabel = "A", description = "ground albedo (default 0.2)") Double albedo;
     @Option(names = "--month-hour", description = "also write month-hour.csv (large)") Boolean monthHour;
     @Option(names = "--sun-hours-date", paramLabel = "MM-DD", description = "date of the sun-hour metric, repeatable (default 03-21; replaces the study's sun_hours.dates)") List<String> sunHoursDates;
@@ -61,7 +60,7 @@ public final class AnalyseCommand implements Callable<Integer> {
 
     Study resolve() {
         StudyOverrides ov = new StudyOverrides().model(model).analyse(analyse).context(context).patchM(patch).rays(rays)
-                .sky(sky).albedo(albedo).monthHourCsv(monthHour).threads(threads).out(out).sunHoursDates(sunHoursDates)
+                .sky(sky.name).albedo(albedo).monthHourCsv(monthHour).threads(threads).out(out).sunHoursDates(sunHoursDates)
                 .gltf(gltf);
         modelFlags.applyTo(ov);
         site.applyTo(ov);

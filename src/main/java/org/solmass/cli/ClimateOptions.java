@@ -2,7 +2,6 @@ package org.solmass.cli;
 
 import org.solmass.InputException;
 import org.solmass.climate.ClimateSpec;
-import org.solmass.climate.TimeBase;
 import org.solmass.climate.TimeBaseChoice;
 import org.solmass.study.Study;
 import org.solmass.study.StudyOverrides;
@@ -53,9 +52,7 @@ public final class ClimateOptions {
             throw new InputException("--fill-gaps", "expected a whole number of steps from 0 to "
                     + Study.Climate.MAX_FILL_GAPS_STEPS + ", got " + fill);
         }
-        if (spec.kind() == ClimateSpec.Kind.CLEAR_SKY && timeBaseChoice().forClearSky() == TimeBase.HOURLY_YEAR) {
-            spec = ClimateSpec.clearSkyYear(y);
-        }
+        if (spec.kind() == ClimateSpec.Kind.CLEAR_SKY) spec = timeBaseChoice().clearSky(y);
         return spec.withFormat(format == null ? ClimateSpec.Format.AUTO : ClimateSpec.Format.parse(format, "--climate-format"))
                 .withStepMinutes(step)
                 .withIntervalLabel(intervalLabel == null ? ClimateSpec.IntervalLabel.START

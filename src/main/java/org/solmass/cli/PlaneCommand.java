@@ -8,7 +8,6 @@ import org.solmass.climate.WeatherSeries;
 import org.solmass.sky.PlaneIrradiation;
 import org.solmass.sky.PreparedSky;
 import org.solmass.sky.SkyModel;
-import org.solmass.sky.SkyModels;
 import org.solmass.sun.Site;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -27,8 +26,7 @@ public final class PlaneCommand implements Callable<Integer> {
     @Option(names = "--tilt", required = true, description = "plane tilt from horizontal, degrees (0..180)") double tilt;
     @Option(names = "--surface-azimuth", required = true, description = "direction the plane faces, degrees from north clockwise") double surfaceAzimuth;
     @Option(names = "--albedo", defaultValue = "0.2", description = "ground reflectance 0..1 (default ${DEFAULT-VALUE})") double albedo;
-    @Option(names = "--sky", paramLabel = "MODEL", description = "sky diffuse model, one of ${COMPLETION-CANDIDATES}; the first is the default",
-            completionCandidates = SkyNames.class) String sky;
+    @Mixin SkyFlag sky = new SkyFlag();
     @Mixin ClimateOptions climateOptions = new ClimateOptions();
     @Option(names = "--format", defaultValue = "text", description = "text, json or csv (default ${DEFAULT-VALUE})") String format;
 
@@ -42,7 +40,7 @@ public final class PlaneCommand implements Callable<Integer> {
         checkPlane(tilt, surfaceAzimuth);
         if (!(albedo >= 0 && albedo <= 1)) throw new InputException("--albedo", "expected 0..1, got " + albedo);
         if (!format.equals("text") && !format.equals("json") && !format.equals("csv")) throw new InputException("--format", "expected text, json or csv, got '" + format + "'");
-        SkyModel model = sky == null ? SkyModels.standard() : SkyModels.byName(sky, "--sky");
+        SkyModel model = sky.model();
         Site site = siteOptions.site(null);
         TimeBaseChoice base = climateOptions.timeBaseChoice();
         WeatherSeries series = ClimateSource.load(site, climateOptions.spec());

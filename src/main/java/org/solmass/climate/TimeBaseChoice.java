@@ -24,4 +24,13 @@ public enum TimeBaseChoice {
 
     /** The time base of the clear-sky model under this choice (AUTO: average days). */
     public TimeBase forClearSky() { return this == HOURLY_YEAR ? TimeBase.HOURLY_YEAR : TimeBase.AVERAGE_DAYS; }
+
+    /**
+     * The clear-sky model under this choice.
+     *
+     * @param year calendar year of an hourly year
+     */
+    public ClimateSpec clearSky(int year) {
+        return forClearSky() == TimeBase.HOURLY_YEAR ? ClimateSpec.clearSkyYear(year) : ClimateSpec.clearSky();
+    }
 }

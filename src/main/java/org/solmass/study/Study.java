@@ -26,7 +26,7 @@ import java.util.Map;
  * @param description free text kept with the results (e.g. "invented scenario"), may be empty
  * @param source the study file it was read from, absolute; null when built from flags only
  * @param model the massing model and how to read it
- * @param site where the model stands (the zone as given: an IANA id or a fixed offset)
+ * @param site where the model stands
  * @param climate where the weather comes from
  * @param albedo reflectances of the ground and the blocks
  * @param groundIrradiance whether the ground's irradiance (for ground reflection) is taken unshaded or
@@ -77,8 +77,7 @@ public record Study(String name, String description, Path source, Model model, S
         Climate c = climate;
         ClimateSpec spec;
         if (c.isClearSky()) {
-            spec = timeBase.forClearSky() == org.solmass.climate.TimeBase.HOURLY_YEAR
-                    ? ClimateSpec.clearSkyYear(c.year()) : ClimateSpec.clearSky();
+            spec = timeBase.clearSky(c.year());
         } else {
             spec = ClimateSpec.file(c.file()).withIntervalLabel(c.intervalLabel()).withFormat(c.format())
                     .withColumns(c.columns()).withFillGaps(c.fillGapsMaxSteps());

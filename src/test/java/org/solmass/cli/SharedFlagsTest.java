@@ -70,6 +70,13 @@ class SharedFlagsTest {
     }
 
     @Test
+    void everyCommandWithASkyModelTakesTheSameSkyFlagListingTheRegistry() {
+        sameOn(List.of("--sky"), List.of(new AnalyseCommand(), new PlaneCommand(), new BenchAnalysisCommand()));
+        String usage = new CommandLine(new PlaneCommand()).getUsageMessage().replaceAll("\\s+", " ");
+        assertTrue(usage.contains("one of " + String.join(", ", SkyModels.names())), usage);
+    }
+
+    @Test
     void skyViewTakesNoSiteBecauseViewFactorsAreGeometryOnly() {
         for (String flag : SITE_FLAGS) assertNull(option(new SkyViewCommand(), flag), flag);
     }

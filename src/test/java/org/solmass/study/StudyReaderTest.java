@@ -302,4 +302,22 @@ class StudyReaderTest {
         assertEquals(json, StudyWriter.toJson(t));
         assertTrue(json.endsWith("}\n") && !json.contains("\r"));
     }
+
+    @Test
+    void fillGapsIsTrueFalseOrAStepCountAndColumnsReadBackEqual() throws Exception {
+        String climate = "\"climate\": {\"source\": \"w.csv\", \"format\": \"hourly\", \"fill_gaps\": %s, "
+                + "\"columns\": {\"time\": \"Date\", \"ghi\": 2}}";
+        Study t = StudyReader.read(write("t.json", "{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", " + climate.formatted("true") + "}"));
+        assertEquals(Climate.FILL_GAPS_STEPS, t.climate().fillGapsMaxSteps());
+        assertEquals(Map.of("time", "Date", "ghi", "2"), t.climate().columns());
+        assertEquals(Map.of("time", "Date", "ghi", "2"), t.climateSpec().columns());
+        Study f = StudyReader.read(write("f.json", "{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", " + climate.formatted("false") + "}"));
+        assertEquals(0, f.climate().fillGapsMaxSteps());
+        Study n = StudyReader.read(write("n.json", "{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", " + climate.formatted("7") + "}"));
+        assertEquals(7, n.climateSpec().fillGapsMaxSteps());
+        Path again = write("again/n.json", StudyWriter.toJson(n));
+        assertEquals(n.climate(), StudyReader.read(again).climate());
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", " + climate.formatted("25") + "}");
+        assertTrue(e.getMessage().endsWith("climate.fill_gaps: expected a whole number from 0 to 24, got 25"), e.getMessage());
+    }
 }
