@@ -76,6 +76,30 @@ class SharedFlagsTest {
         assertTrue(usage.contains("one of " + String.join(", ", SkyModels.names())), usage);
     }
 
+    /** Solmass works in local standard time (DEVELOPERS.md conventions): Berlin's standard offset is +01:00, also in June. */
+    @Test
+    void sunReadsATimeWithoutOffsetAsLocalStandardTimeOfTheZone() throws Exception {
+        ByteArrayOutputStream a = new ByteArrayOutputStream(), b = new ByteArrayOutputStream();
+        assertEquals(Main.EXIT_OK, captured(a, "sun", "--lat", "52.5", "--lon", "13.4", "--time", "2025-06-21T12:00+01:00"));
+        assertEquals(Main.EXIT_OK, captured(b, "sun", "--lat", "52.5", "--lon", "13.4", "--zone", "Europe/Berlin",
+                "--time", "2025-06-21T12:00"));
+        assertEquals(a.toString(StandardCharsets.UTF_8), b.toString(StandardCharsets.UTF_8));
+        assertEquals(Main.EXIT_INPUT, captured(new ByteArrayOutputStream(), "sun", "--lat", "52.5", "--lon", "13.4",
+                "--time", "2025-06-21T12:00"));
+    }
+
+    private static int captured(ByteArrayOutputStream sink, String... args) {
+        PrintStream out = System.out, err = System.err;
+        try (PrintStream p = new PrintStream(sink, true, StandardCharsets.UTF_8)) {
+            System.setOut(p);
+            System.setErr(new PrintStream(new ByteArrayOutputStream()));
+            return Main.execute(args);
+        } finally {
+            System.setOut(out);
+            System.setErr(err);
+        }
+    }
+
     @Test
     void skyViewTakesNoSiteBecauseViewFactorsAreGeometryOnly() {
         for (String flag : SITE_FLAGS) assertNull(option(new SkyViewCommand(), flag), flag);
