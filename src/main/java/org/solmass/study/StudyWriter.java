@@ -62,8 +62,10 @@ public final class StudyWriter {
             c.put("fill_gaps", cl.fillGapsMaxSteps());
         }
         c.put("year", cl.year());
-        ObjectNode columns = c.putObject("columns");
-        new TreeMap<>(cl.columns()).forEach(columns::put);
+        if (!cl.columns().isEmpty()) {   // left out when empty, so that results of earlier versions compare byte for byte
+            ObjectNode columns = c.putObject("columns");
+            new TreeMap<>(cl.columns()).forEach(columns::put);
+        }
 
         ObjectNode a = root.putObject("albedo");
         a.put("ground", s.albedo().ground());
