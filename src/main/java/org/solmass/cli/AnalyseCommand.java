@@ -6,6 +6,7 @@ import org.solmass.table.AreaStats;
 import org.solmass.study.StudyOverrides;
 import org.solmass.study.StudyReader;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -27,21 +28,14 @@ public final class AnalyseCommand implements Callable<Integer> {
     Path studyFile;
 
     @Option(names = "--model", paramLabel = "MODEL.obj", description = "massing model (OBJ)") Path model;
-    @Option(names = "--lat", paramLabel = "DEG", description = "site latitude, degrees north") Double lat;
-    @Option(names = "--lon", paramLabel = "DEG", description = "site longitude, degrees east") Double lon;
-    @Option(names = "--elevation", paramLabel = "M", description = "site elevation, metres") Double elevation;
-    @Option(names = "--zone", paramLabel = "ZONE", description = "time zone: IANA name (Europe/Berlin) or UTC offset (+01:00)") String zone;
-    @Option(names = "--up", paramLabel = "y|z", description = "model up axis (default z)") String up;
-    @Option(names = "--unit", paramLabel = "UNIT", description = "model unit: m, cm, mm, ft (default m)") String unit;
-    @Option(names = "--north", paramLabel = "DEG", description = "angle from the model's +y axis to true north, clockwise (default 0)") Double north;
+    @Mixin ModelFlags modelFlags = new ModelFlags();
     @Option(names = "--analyse", paramLabel = "BLOCK", split = ",", description = "blocks to analyse (default all not in --context)") List<String> analyse;
     @Option(names = "--context", paramLabel = "BLOCK", split = ",", description = "blocks that only obstruct") List<String> context;
-    @Option(names = "--climate", paramLabel = "clear-sky|FILE", description = "weather: clear-sky (default) or a climate file") String climate;
-    @Option(names = "--climate-format", paramLabel = "FORMAT", description = "auto, month-hour, monthly, hourly") String climateFormat;
-    @Option(names = "--time-base", paramLabel = "BASE", description = "auto, average-days, hourly-year") String timeBase;
+    @Mixin SiteOptions site = new SiteOptions();
+    @Mixin ClimateOptions climate = new ClimateOptions();
     @Option(names = "--patch", paramLabel = "M", description = "patch size, metres (default 1)") Double patch;
     @Option(names = "--rays", paramLabel = "N", description = "hemisphere rays per patch (default 1024)") Integer rays;
-    @Option(names = "--sky", paramLabel = "MODEL", description = "perez (default) or isotropic") String sky;
+    @Mixin SkyFlag sky = new SkyFlag();
     @Option(names = "--albedo", paramLabel = "A", description = "ground albedo (default 0.2)") Double albedo;
     @Option(names = "--month-hour", description = "also write month-hour.csv (large)") Boolean monthHour;
     @Option(names = "--sun-hours-date", paramLabel = "MM-DD", description = "date of the sun-hour metric, repeatable (default 03-21; replaces the study's sun_hours.dates)") List<String> sunHoursDates;
@@ -66,11 +60,12 @@ public final class AnalyseCommand implements Callable<Integer> {
     }
 
     Study resolve() {
-        StudyOverrides ov = new StudyOverrides()
-                .model(model).latitude(lat).longitude(lon).elevationM(elevation).zone(zone).up(up).unit(unit)
-                .northDeg(north).analyse(analyse).context(context).climate(climate).climateFormat(climateFormat)
-                .timeBase(timeBase).patchM(patch).rays(rays).sky(sky).albedo(albedo).monthHourCsv(monthHour)
-                .threads(threads).out(out).sunHoursDates(sunHoursDates).gltf(gltf);
+        StudyOverrides ov = new StudyOverrides().model(model).analyse(analyse).context(context).patchM(patch).rays(rays)
+                .sky(sky.name).albedo(albedo).monthHourCsv(monthHour).threads(threads).out(out).sunHoursDates(sunHoursDates)
+                .gltf(gltf);
+        modelFlags.applyTo(ov);
+        site.applyTo(ov);
+        climate.applyTo(ov);
         if (studyFile == null && model == null) {
             throw new InputException("analyse", "give a study file, or --model with --lat, --lon and --zone");
         }
@@ -81,7 +76,7 @@ public final class AnalyseCommand implements Callable<Integer> {
         Map<String, Long> c = o.counts();
         System.out.printf("solmass analyse: %s%n", o.study().name());
         System.out.printf("  %d patches on %d blocks (%d triangles), %s, %s sky%n", c.get("patches"),
-                c.get("blocks"), c.get("triangles"), o.weather().timeBase().label(), o.study().sky().label());
+                c.get("blocks"), c.get("triangles"), o.weather().timeBase().label(), o.study().sky().name());
         AreaStats a = AreaStats.of(o.patches().patches(), o.result().annual());
         System.out.printf("  annual irradiation: area-weighted mean %.0f kWh/m2, min %.0f, max %.0f, total %.0f MWh on %.0f m2%n",
                 a.mean(), a.min(), a.max(), a.valueTimesAreaSum() / 1000, a.areaM2());

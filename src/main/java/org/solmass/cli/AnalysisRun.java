@@ -4,8 +4,8 @@ import org.solmass.InputException;
 import org.solmass.check.Plausibility;
 import org.solmass.check.Warning;
 import org.solmass.climate.ClimateSource;
-import org.solmass.climate.ClimateSpec;
 import org.solmass.climate.TimeBase;
+import org.solmass.climate.TimeBaseChoice;
 import org.solmass.climate.WeatherSeries;
 import org.solmass.irradiation.IrradiationColumns;
 import org.solmass.irradiation.IrradiationResult;
@@ -15,18 +15,10 @@ import org.solmass.irradiation.PhaseProgress;
 import org.solmass.irradiation.ShadedIrradiation;
 import org.solmass.metrics.MetricContext;
 import org.solmass.metrics.Metrics;
-import org.solmass.metrics.PvZones;
-import org.solmass.model.LengthUnit;
 import org.solmass.model.MassingModel;
-import org.solmass.model.ModelOptions;
 import org.solmass.model.ObjReader;
-import org.solmass.model.UpAxis;
 import org.solmass.scene.Scene;
-import org.solmass.sky.Isotropic;
-import org.solmass.sky.Perez;
-import org.solmass.sky.SkyModel;
 import org.solmass.study.Study;
-import org.solmass.sun.Site;
 import org.solmass.surface.PatchOptions;
 import org.solmass.surface.PatchSet;
 import org.solmass.surface.Patcher;
@@ -61,10 +53,7 @@ public final class AnalysisRun {
 
     /** The model read with the study's options, with the reader's warnings. */
     public static ObjReader.Result loadModel(Study study) {
-        Study.Model m = study.model();
-        ModelOptions mo = new ModelOptions(m.up() == Study.UpAxis.Y ? UpAxis.Y : UpAxis.Z,
-                LengthUnit.valueOf(m.unit().name()), m.northDeg());
-        return ObjReader.load(m.file(), mo);
+        return ObjReader.load(study.model().file(), study.model().options());
     }
 
     /** Names of the analysed blocks; checks that every named block exists. */
@@ -84,40 +73,7 @@ public final class AnalysisRun {
 
     /** The weather series of the study, with the time base resolved. */
     public static WeatherSeries loadWeather(Study study) {
-        return ClimateSource.load(site(study), climateSpec(study));
-    }
-
-    static Site site(Study study) {
-        Study.Site s = study.site();
-        return new Site(s.latitudeDeg(), s.longitudeDeg(), s.elevationM(), Site.parseZone(s.zone(), "site.zone"));
-    }
-
-    static ClimateSpec climateSpec(Study study) {
-        Study.Climate c = study.climate();
-        Study.TimeBase tb = study.timeBase();
-        ClimateSpec spec;
-        if (c.isClearSky()) {
-            spec = tb == Study.TimeBase.HOURLY_YEAR ? ClimateSpec.clearSkyYear(c.year()) : ClimateSpec.clearSky();
-        } else {
-            spec = ClimateSpec.file(c.file())
-                    .withIntervalLabel(c.intervalLabel() == Study.IntervalLabel.START
-                            ? ClimateSpec.IntervalLabel.START : ClimateSpec.IntervalLabel.END)
-                    .withFormat(switch (c.format()) {
-                        case AUTO -> ClimateSpec.Format.AUTO;
-                        case MONTH_HOUR -> ClimateSpec.Format.MONTH_HOUR;
-                        case MONTHLY -> ClimateSpec.Format.MONTHLY_MEANS;
-                        case HOURLY -> ClimateSpec.Format.HOURLY;
-                    });
-            if (c.fillGaps()) spec = spec.withFillGaps(FILL_GAPS_MAX_STEPS);
-        }
-        return spec.withStepMinutes(study.stepMinutes());
-    }
-
-    /** Longest run of missing hourly steps filled when a study asks for gap filling. */
-    static final int FILL_GAPS_MAX_STEPS = 3;
-
-    static SkyModel skyModel(Study study) {
-        return study.sky() == Study.SkyModel.ISOTROPIC ? Isotropic.INSTANCE : Perez.INSTANCE;
+        return ClimateSource.load(study.site(), study.climateSpec());
     }
 
     /** Runs the whole analysis on {@code threads} worker threads (0 = all cores). */
@@ -152,8 +108,8 @@ public final class AnalysisRun {
         WeatherSeries weather = loadWeather(study);
         for (String x : weather.report().repairs()) warnings.add("climate repaired: " + x);
         for (String x : weather.report().warnings()) warnings.add("climate: " + x);
-        for (Warning x : Plausibility.check(model, site(study), weather)) warnings.add(x.toString());
-        if (study.timeBase() == Study.TimeBase.AVERAGE_DAYS && weather.timeBase() != TimeBase.AVERAGE_DAYS) {
+        for (Warning x : Plausibility.check(model, study.site(), weather)) warnings.add(x.toString());
+        if (study.timeBase() == TimeBaseChoice.AVERAGE_DAYS && weather.timeBase() != TimeBase.AVERAGE_DAYS) {
             throw new InputException("time_base", "the climate source " + weather.source()
                     + " is an hourly year; monthly-average days need a month-hour table, monthly means or clear-sky");
         }
@@ -181,14 +137,14 @@ public final class AnalysisRun {
 
         long t2 = System.nanoTime();
         Scene scene = Scene.build(model, !patches.hasGroundFaces(), patches.groundLevelZ());
-        float[] albedo = triangleAlbedo(study, model, patches.surfaces());
+        float[] albedo = study.albedo().perTriangle(model, Surface.groundTriangles(patches.surfaces(), model.triangleCount()));
         IrradiationSetup.Options o = new IrradiationSetup.Options(study.patchM(), study.rays(),
                 study.albedo().ground(), study.groundIrradiance() == Study.GroundIrradiance.SHADED,
                 weather.timeBase() == TimeBase.AVERAGE_DAYS ? IrradiationSetup.SunSampling.EXACT
                         : IrradiationSetup.SunSampling.BINNED,
                 study.sunBins(), RUN_SEED, true);
         ShadedIrradiation.Inputs in = IrradiationSetup.build(scene, model, patches.surfaces(), patches.patches(),
-                contextPatches, albedo, weather, skyModel(study), o);
+                contextPatches, albedo, weather, study.sky(), o);
         t.put("scene", seconds(t2));
         requireMemory(study, in, patches.patchCount());
 
@@ -251,34 +207,10 @@ public final class AnalysisRun {
                 study.source() == null ? "--patch" : study.source() + ": patch_m");
     }
 
-    /** What the metrics read: the finished stages and the study's sun-hour and PV settings (the one mapping point). */
+    /** What the metrics read: the finished stages and the study's metric settings. */
     static MetricContext metricContext(Study study, Scene scene, PatchSet patches, IrradiationResult r, WeatherSeries weather) {
-        Study.SunHours sh = study.sunHours();
-        Study.Pv pv = study.pv();
-        MetricContext.Settings settings = new MetricContext.Settings(sh.dates(), sh.stepMinutes(), sh.minElevationDeg(),
-                new PvZones.Settings(pv.suitablePct(), pv.minZoneM2(), pv.moduleEfficiency(), pv.performanceRatio()));
-        return new MetricContext(scene, patches, r, weather, skyModel(study), site(study), study.climate().year(),
-                study.albedo().ground(), study.patchM(), settings);
-    }
-
-    /**
-     * Albedo of every triangle: its material's (albedo.materials), else its block's (albedo.blocks),
-     * else the ground albedo for ground faces and the blocks' default for the rest.
-     */
-    static float[] triangleAlbedo(Study study, MassingModel model, List<Surface> surfaces) {
-        Study.Albedo a = study.albedo();
-        boolean[] ground = Surface.groundTriangles(surfaces, model.triangleCount());
-        float[] out = new float[model.triangleCount()];
-        for (int tr = 0; tr < out.length; tr++) {
-            String block = model.blockNames().get(model.triangleBlock()[tr]);
-            int mi = model.triangleMaterial()[tr];
-            String mat = mi >= 0 ? model.materialNames().get(mi) : null;
-            Double v = mat != null ? a.materials().get(mat) : null;
-            if (v == null) v = a.blocks().get(block);
-            if (v == null) v = ground[tr] ? a.ground() : a.blocksDefault();
-            out[tr] = v.floatValue();
-        }
-        return out;
+        return new MetricContext(scene, patches, r, weather, study.sky(), study.site(), study.climate().year(),
+                study.albedo().ground(), study.patchM(), study.metricSettings());
     }
 
     static double seconds(long since) {

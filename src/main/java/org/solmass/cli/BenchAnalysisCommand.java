@@ -7,6 +7,7 @@ import org.solmass.study.Study;
 import org.solmass.study.StudyOverrides;
 import org.solmass.study.StudyReader;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 import java.io.BufferedWriter;
@@ -33,7 +34,7 @@ public final class BenchAnalysisCommand implements Callable<Integer> {
     @Option(names = "--patch", defaultValue = "2", paramLabel = "M", description = "patch size (default ${DEFAULT-VALUE} m)") double patch;
     @Option(names = "--rays", defaultValue = "1024", paramLabel = "N", description = "hemisphere rays per patch (default ${DEFAULT-VALUE})") int rays;
     @Option(names = "--time-base", defaultValue = "hourly-year", paramLabel = "BASE", description = "hourly-year (default) or average-days") String timeBase;
-    @Option(names = "--sky", defaultValue = "perez", paramLabel = "MODEL", description = "perez (default) or isotropic") String sky;
+    @Mixin SkyFlag sky = new SkyFlag();
     @Option(names = "--threads", defaultValue = "0", paramLabel = "N", description = "worker threads (default: all cores)") int threads;
     @Option(names = "--seed", defaultValue = "1", paramLabel = "N", description = "district seed (default ${DEFAULT-VALUE})") long seed;
 
@@ -47,7 +48,7 @@ public final class BenchAnalysisCommand implements Callable<Integer> {
             Path obj = dir.resolve("district-" + target + ".obj");
             writeObj(SyntheticDistrict.generate(blocks, seed), obj);
             StudyOverrides ov = new StudyOverrides().model(obj).latitude(51.0).longitude(10.0).zone("Europe/Berlin")
-                    .timeBase(timeBase).patchM(patch).rays(rays).sky(sky).threads(threads).out(dir.resolve("out"));
+                    .timeBase(timeBase).patchM(patch).rays(rays).sky(sky.name).threads(threads).out(dir.resolve("out"));
             Study study = StudyReader.read(null, ov);
             System.gc();
             resetPeaks();

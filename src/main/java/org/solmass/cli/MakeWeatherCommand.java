@@ -4,6 +4,7 @@ import org.solmass.climate.DemoWeather;
 import org.solmass.output.AtomicFiles;
 import org.solmass.sun.Site;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 import java.nio.file.Path;
@@ -15,10 +16,7 @@ import java.util.concurrent.Callable;
         description = {"Writes an INVENTED demo weather year (never for a real design).",
                 "The site's clear sky dimmed by a seeded random cloud cover; not measured data."})
 public final class MakeWeatherCommand implements Callable<Integer> {
-    @Option(names = "--lat", required = true, paramLabel = "DEG", description = "latitude, degrees north") double lat;
-    @Option(names = "--lon", required = true, paramLabel = "DEG", description = "longitude, degrees east") double lon;
-    @Option(names = "--elevation", defaultValue = "0", paramLabel = "M", description = "site elevation, metres (default ${DEFAULT-VALUE})") double elevation;
-    @Option(names = "--zone", required = true, paramLabel = "ZONE", description = "IANA zone or UTC offset") String zone;
+    @Mixin SiteOptions siteOptions = new SiteOptions();
     @Option(names = "--year", defaultValue = "2025", paramLabel = "YEAR", description = "calendar year (default ${DEFAULT-VALUE})") int year;
     @Option(names = "--seed", defaultValue = "1", paramLabel = "N", description = "random seed (default ${DEFAULT-VALUE})") long seed;
     @Option(names = "--hourly", paramLabel = "FILE", description = "write the hourly year here") Path hourly;
@@ -29,7 +27,7 @@ public final class MakeWeatherCommand implements Callable<Integer> {
         if (hourly == null && monthHour == null) {
             throw new org.solmass.InputException("make-weather", "give --hourly FILE and/or --month-hour FILE");
         }
-        Site site = new Site(lat, lon, elevation, Site.parseZone(zone, "--zone"));
+        Site site = siteOptions.site(null);
         List<DemoWeather.Hour> hours = DemoWeather.year(site, year, seed);
         if (hourly != null) AtomicFiles.writeString(hourly, DemoWeather.hourlyCsv(hours, site, seed));
         if (monthHour != null) AtomicFiles.writeString(monthHour, DemoWeather.monthHourCsv(hours, site, seed));

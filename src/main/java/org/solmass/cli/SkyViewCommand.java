@@ -1,11 +1,8 @@
 package org.solmass.cli;
 
 import org.solmass.InputException;
-import org.solmass.model.LengthUnit;
 import org.solmass.model.MassingModel;
-import org.solmass.model.ModelOptions;
 import org.solmass.model.ObjReader;
-import org.solmass.model.UpAxis;
 import org.solmass.output.PatchCsvWriter;
 import org.solmass.irradiation.IrradiationColumns;
 import org.solmass.table.ResultTable;
@@ -19,6 +16,7 @@ import org.solmass.surface.PatchSet;
 import org.solmass.surface.Patcher;
 import org.solmass.surface.Surface;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -40,9 +38,7 @@ public final class SkyViewCommand implements Callable<Integer> {
     public static final String FILE_NAME = "sky-view.csv";
 
     @Parameters(paramLabel = "MODEL.obj", description = "massing model (OBJ)") Path model;
-    @Option(names = "--up", paramLabel = "y|z", defaultValue = "z", description = "model up axis (default ${DEFAULT-VALUE})") String up;
-    @Option(names = "--unit", paramLabel = "UNIT", defaultValue = "m", description = "model unit: m, cm, mm, ft (default ${DEFAULT-VALUE})") String unit;
-    @Option(names = "--north", paramLabel = "DEG", defaultValue = "0", description = "angle from the model's +y axis to true north, clockwise (default ${DEFAULT-VALUE})") double north;
+    @Mixin ModelFlags modelFlags = new ModelFlags();
     @Option(names = "--patch", paramLabel = "METRES", defaultValue = "1", description = "patch size (default ${DEFAULT-VALUE} m)") double patch;
     @Option(names = "--rays", paramLabel = "N", defaultValue = "1024", description = "hemisphere rays per patch, rounded to a square grid (default ${DEFAULT-VALUE})") int rays;
     @Option(names = "--analyse", paramLabel = "BLOCK", split = ",", description = "blocks to analyse (default all)") List<String> analyse;
@@ -56,8 +52,7 @@ public final class SkyViewCommand implements Callable<Integer> {
         if (rays < 1) throw new InputException("--rays", "expected a positive number of rays, got " + rays);
         if (threads < 0) throw new InputException("--threads", "expected 0 (all cores) or a positive count, got " + threads);
         long t0 = System.nanoTime();
-        ModelOptions mo = new ModelOptions(UpAxis.parse(up, "--up"), LengthUnit.parse(unit, "--unit"), north);
-        ObjReader.Result read = ObjReader.load(model, mo);
+        ObjReader.Result read = ObjReader.load(model, modelFlags.options());
         for (String w : read.warnings()) System.err.println("solmass: warning: " + w);
         MassingModel m = read.model();
         PatchSet ps = Patcher.build(m, new PatchOptions(patch, analyse == null ? java.util.Set.of() : new LinkedHashSet<>(analyse), false));

@@ -6,9 +6,13 @@ import org.solmass.sun.SolarCalculator;
 import org.solmass.sun.Site;
 import org.solmass.sun.SunPosition;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
+import java.time.LocalDateTime;
 import java.time.OffsetDateTime;
+import java.time.ZoneId;
+import java.time.ZoneOffset;
 import java.time.ZonedDateTime;
 import java.time.format.DateTimeParseException;
 import java.util.LinkedHashMap;
@@ -20,10 +24,9 @@ import java.util.concurrent.Callable;
 @Command(name = "sun", mixinStandardHelpOptions = true,
         description = "Sun position (NREL SPA) at an instant: zenith, azimuth (from north, clockwise), elevation; incidence on a plane.")
 public final class SunCommand implements Callable<Integer> {
-    @Option(names = "--lat", required = true, description = "latitude, degrees north (-90..90)") double lat;
-    @Option(names = "--lon", required = true, description = "longitude, degrees east (-180..180)") double lon;
-    @Option(names = "--elevation", defaultValue = "0", description = "site elevation, m (default ${DEFAULT-VALUE})") double elevation;
-    @Option(names = "--time", required = true, description = "ISO-8601 instant with offset, e.g. 2003-10-17T12:30:30-07:00") String time;
+    @Mixin SiteOptions siteOptions = new SiteOptions();
+    @Option(names = "--time", required = true, description = {"ISO-8601 instant with offset, e.g. 2003-10-17T12:30:30-07:00,",
+            "or without offset as local standard time of --zone"}) String time;
     @Option(names = "--tilt", description = "plane tilt from horizontal, degrees (0..180)") Double tilt;
     @Option(names = "--surface-azimuth", description = "direction the plane faces, degrees from north clockwise") Double surfaceAzimuth;
     @Option(names = "--pressure", description = "mean pressure, mbar (default: standard atmosphere at the elevation)") Double pressure;
@@ -33,6 +36,7 @@ public final class SunCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        ZoneId zone = siteOptions.zoneOrNull();
         ZonedDateTime t;
         try {
             t = OffsetDateTime.parse(time).toZonedDateTime();
@@ -40,14 +44,18 @@ public final class SunCommand implements Callable<Integer> {
             try {
                 t = ZonedDateTime.parse(time);
             } catch (DateTimeParseException e2) {
-                throw new InputException("--time", "expected an ISO-8601 date-time with offset like 2003-10-17T12:30:30-07:00, got '" + time + "'");
+                t = zone == null ? null : localStandardTime(time, zone);
+                if (t == null) {
+                    throw new InputException("--time", "expected an ISO-8601 date-time with offset like 2003-10-17T12:30:30-07:00, got '" + time + "'"
+                            + (zone == null ? "" : " (or a local standard time like 2003-10-17T12:30:30 with --zone)"));
+                }
             }
         }
         if ((tilt == null) != (surfaceAzimuth == null)) throw new InputException(tilt == null ? "--tilt" : "--surface-azimuth", "--tilt and --surface-azimuth go together");
         if (tilt != null) PlaneCommand.checkPlane(tilt, surfaceAzimuth);
         if (!format.equals("text") && !format.equals("json")) throw new InputException("--format", "expected text or json, got '" + format + "'");
-        Site site = PlaneCommand.site(lat, lon, elevation, t.getZone());
-        SolarCalculator.Atmosphere std = SolarCalculator.Atmosphere.standard(elevation);
+        Site site = siteOptions.site(t.getZone());
+        SolarCalculator.Atmosphere std = SolarCalculator.Atmosphere.standard(site.elevationM());
         SolarCalculator.Atmosphere atm = new SolarCalculator.Atmosphere(pressure != null ? pressure : std.pressureMbar(),
                 temperature != null ? temperature : std.temperatureC(), deltaT != null ? deltaT : Double.NaN);
         if (!(atm.pressureMbar() > 0 && atm.pressureMbar() < 1200)) throw new InputException("--pressure", "expected 0..1200 mbar");
@@ -65,6 +73,17 @@ public final class SunCommand implements Callable<Integer> {
             out.forEach((k, v) -> System.out.println(String.format(Locale.ROOT, "%-14s %s", k, v)));
         }
         return Main.EXIT_OK;
+    }
+
+    /** A date-time without offset read as local standard time (never daylight saving) of the zone, or null. */
+    private static ZonedDateTime localStandardTime(String text, ZoneId zone) {
+        try {
+            LocalDateTime local = LocalDateTime.parse(text);
+            ZoneOffset standard = zone.getRules().getStandardOffset(local.toInstant(ZoneOffset.UTC));
+            return local.atOffset(standard).toZonedDateTime();
+        } catch (DateTimeParseException e) {
+            return null;
+        }
     }
 
     private static double round(double v) { return Math.round(v * 1e6) / 1e6; }

@@ -134,8 +134,7 @@ final class ViewerBridge implements ViewerActions {
 
     static ViewerData data(Study study, MassingModel model, PatchSet ps, ResultTable table, float[] monthHour,
                            WeatherSeries weather, List<String> warnings) {
-        Study.Site s = study.site();
-        Site site = new Site(s.latitudeDeg(), s.longitudeDeg(), s.elevationM(), Site.parseZone(s.zone(), "site.zone"));
+        Site site = study.site();
         ClimateGlance glance = glance(weather);
         Path climateFile = study.climate().file();
         if (climateFile != null && climateFile.getFileName() != null) {   // the file name reads better than its full path
@@ -143,7 +142,7 @@ final class ViewerBridge implements ViewerActions {
                     glance.ghiWm2(), glance.dhiWm2(), glance.ghiMonthKwhM2(), glance.dhiMonthKwhM2());
         }
         return new ViewerData(study.name(), model, ps.analysedBlocks(), ps.patches(), table, monthHour,
-                glance, sunPath(site), s.latitudeDeg(), s.longitudeDeg(), zoneLabel(site), warnings);
+                glance, sunPath(site), site.latitudeDeg(), site.longitudeDeg(), zoneLabel(site), warnings);
     }
 
     static String zoneLabel(Site site) {
@@ -171,7 +170,7 @@ final class ViewerBridge implements ViewerActions {
     @Override
     public RerunRequest currentOptions() {
         String climate = study.climate().isClearSky() ? "clear-sky" : study.climate().file().toString();
-        return new RerunRequest(study.patchM(), climate, study.sky().label());
+        return new RerunRequest(study.patchM(), climate, study.sky().name());
     }
 
     @Override
@@ -184,7 +183,7 @@ final class ViewerBridge implements ViewerActions {
 
     @Override
     public List<String> skyModels() {
-        return List.of("perez", "isotropic");
+        return org.solmass.sky.SkyModels.names();
     }
 
     @Override

@@ -25,17 +25,31 @@ public record ClimateSpec(Kind kind, Path file, Format format, TimeBase timeBase
 
     public enum Kind { CLEAR_SKY, FILE }
 
-    public enum Format {
-        AUTO, MONTH_HOUR, MONTHLY_MEANS, HOURLY;
+    /** Roles of the columns of an hourly file that {@code columns} can map. */
+    public static final java.util.List<String> COLUMN_ROLES = java.util.List.of("time", "ghi", "dhi", "dni", "temp");
 
+    /**
+     * Kind of climate file (docs/climate-formats.md). Written in lower case, '-' between words;
+     * {@code monthly} is also accepted as {@code monthly-means}, the name of its section there.
+     */
+    public enum Format {
+        AUTO("auto"), MONTH_HOUR("month-hour"), MONTHLY_MEANS("monthly"), HOURLY("hourly");
+
+        private final String label;
+
+        Format(String label) { this.label = label; }
+
+        /** The name as written in a study file or a flag. */
+        public String label() { return label; }
+
+        /** The other accepted spelling: the enum name in lower case, '-' between words. */
+        public String alias() { return name().toLowerCase(Locale.ROOT).replace('_', '-'); }
+
+        /** @param where the flag or key named in the error message */
         public static Format parse(String s, String where) {
-            switch (s.toLowerCase(Locale.ROOT)) {
-                case "auto": return AUTO;
-                case "month-hour": return MONTH_HOUR;
-                case "monthly-means": return MONTHLY_MEANS;
-                case "hourly": return HOURLY;
-                default: throw new InputException(where, "unknown climate format '" + s + "' (expected auto, month-hour, monthly-means or hourly)");
-            }
+            String t = s == null ? "" : s.trim();
+            for (Format f : values()) if (f.label.equalsIgnoreCase(t) || f.alias().equalsIgnoreCase(t)) return f;
+            throw new InputException(where, "expected one of auto, month-hour, monthly (or monthly-means), hourly, got \"" + s + "\"");
         }
     }
 
@@ -43,12 +57,14 @@ public record ClimateSpec(Kind kind, Path file, Format format, TimeBase timeBase
     public enum IntervalLabel {
         START, END;
 
+        /** The name as written in a study file or a flag. */
+        public String label() { return name().toLowerCase(Locale.ROOT); }
+
+        /** @param where the flag or key named in the error message */
         public static IntervalLabel parse(String s, String where) {
-            switch (s.toLowerCase(Locale.ROOT)) {
-                case "start": return START;
-                case "end": return END;
-                default: throw new InputException(where, "expected start or end, got '" + s + "'");
-            }
+            String t = s == null ? "" : s.trim();
+            for (IntervalLabel l : values()) if (l.label().equalsIgnoreCase(t)) return l;
+            throw new InputException(where, "expected one of start, end, got \"" + s + "\"");
         }
     }
 

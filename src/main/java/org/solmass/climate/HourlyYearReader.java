@@ -24,7 +24,7 @@ import java.util.Set;
 final class HourlyYearReader {
     private HourlyYearReader() {}
 
-    static final Set<String> ROLES = Set.of("time", "ghi", "dhi", "dni", "temp");
+    static final Set<String> ROLES = Set.copyOf(ClimateSpec.COLUMN_ROLES);
     static final List<String> TIME_NAMES = List.of("time", "timestamp", "datetime");
     private static final Map<String, List<String>> NAMES = Map.of(
             "time", TIME_NAMES,

@@ -1,10 +1,7 @@
 package org.solmass.sky;
 
-import org.solmass.InputException;
 import org.solmass.climate.Step;
 import org.solmass.sun.SunPosition;
-
-import java.util.Locale;
 
 /**
  * A sky diffuse model in the three-part form of Perez et al. (1990, Solar Energy 44(5) 271-289,
@@ -45,13 +42,5 @@ public interface SkyModel {
         SunPosition sun = step.sun();
         double r = circumsolarRatio(sun.cosIncidence(tiltDeg, surfaceAzimuthDeg), sun.cosZenith());
         return new DiffuseParts(dhi * (1 - f1), dhi * f1 * r, dhi * f2 * Math.sin(Math.toRadians(tiltDeg)));
-    }
-
-    static SkyModel parse(String name, String where) {
-        switch (name.toLowerCase(Locale.ROOT)) {
-            case "isotropic": return Isotropic.INSTANCE;
-            case "perez": return Perez.INSTANCE;
-            default: throw new InputException(where, "unknown sky model '" + name + "' (expected isotropic or perez)");
-        }
     }
 }

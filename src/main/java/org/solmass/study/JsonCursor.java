@@ -125,15 +125,33 @@ final class JsonCursor {
 
     /** One of an enum's labels (lower case, '-' between words). */
     <E extends Enum<E> & Study.Named> E choice(String key, Class<E> type, E dflt) {
+        return choice(key, type.getEnumConstants(), Study.Named::label, dflt);
+    }
+
+    /**
+     * One of an enum's labels, or (as a second spelling) its constant's name in lower case with '-'
+     * between words; the message lists the labels.
+     */
+    <E extends Enum<E>> E choice(String key, E[] all, Function<E, String> label, E dflt) {
         JsonNode n = raw(key);
         if (n == null) return dflt;
-        E[] all = type.getEnumConstants();
         List<String> labels = new ArrayList<>();
-        for (E e : all) labels.add(e.label());
+        for (E e : all) labels.add(label.apply(e));
         String expected = "expected one of " + String.join(", ", labels);
         if (!n.isTextual()) throw error(key, expected + ", got " + shown(n));
         String s = n.asText().trim();
-        for (E e : all) if (e.label().equalsIgnoreCase(s)) return e;
+        for (E e : all) if (label.apply(e).equalsIgnoreCase(s) || Study.Named.labelOf(e).equalsIgnoreCase(s)) return e;
+        throw error(key, expected + ", got " + shown(n));
+    }
+
+    /** One of the given names (any case), returned as listed; the message lists them all. */
+    String oneOf(String key, List<String> names, String dflt) {
+        JsonNode n = raw(key);
+        if (n == null) return dflt;
+        String expected = "expected one of " + String.join(", ", names);
+        if (!n.isTextual()) throw error(key, expected + ", got " + shown(n));
+        String s = n.asText().trim();
+        for (String name : names) if (name.equalsIgnoreCase(s)) return name;
         throw error(key, expected + ", got " + shown(n));
     }
 
@@ -183,6 +201,13 @@ final class JsonCursor {
             String name = names.next();
             out.put(name, m.number(name, null, min, max));
         }
+        return out;
+    }
+
+    /** The keys of this object, in file order. */
+    List<String> keys() {
+        List<String> out = new ArrayList<>();
+        node.fieldNames().forEachRemaining(out::add);
         return out;
     }
 

@@ -1,7 +1,15 @@
 package org.solmass.study;
 
+import org.solmass.climate.ClimateSpec;
+import org.solmass.climate.TimeBaseChoice;
+import org.solmass.model.LengthUnit;
+import org.solmass.model.MassingModel;
+import org.solmass.model.ModelOptions;
+import org.solmass.model.UpAxis;
+import org.solmass.sky.SkyModel;
+import org.solmass.sun.Site;
+
 import java.nio.file.Path;
-import java.time.ZoneId;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -10,6 +18,9 @@ import java.util.Map;
  * A resolved study: every option of an analysis with its default applied and every path made
  * absolute. Read from a study file by {@link StudyReader}, with command-line flags laid on top by
  * {@link StudyOverrides}; written back by {@link StudyWriter}. Keys and defaults: docs/study-file.md.
+ * Its values are the stages' own types ({@link ModelOptions}' axis and unit, {@link Site},
+ * {@link ClimateSpec}'s format and interval label, {@link SkyModel}); where a study value differs from
+ * the stage's, the one mapping is here ({@link Model#options()}, {@link #climateSpec()}).
  *
  * @param name study name for titles and reports (default: the study file's or the model's base name)
  * @param description free text kept with the results (e.g. "invented scenario"), may be empty
@@ -22,7 +33,7 @@ import java.util.Map;
  *                         from shaded ground samples
  * @param patchM patch edge length, metres (> 0)
  * @param rays hemisphere rays per patch for the view factors (> 0)
- * @param sky sky diffuse model
+ * @param sky sky diffuse model (one of {@link org.solmass.sky.SkyModels})
  * @param timeBase monthly-average days or an hourly year ({@code AUTO}: from the climate source)
  * @param sunBins number of sky cells the year's sun positions are binned into (hourly year)
  * @param stepMinutes time step of the average days, minutes (divides 60)
@@ -33,7 +44,7 @@ import java.util.Map;
  */
 public record Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
                     GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
-                    TimeBase timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads,
+                    TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads,
                     SunHours sunHours, Pv pv) {
 
     public static final double DEFAULT_PATCH_M = 1.0;
@@ -53,9 +64,31 @@ public record Study(String name, String description, Path source, Model model, S
     /** A study with the default sun-hour and PV settings. */
     public Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
                  GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
-                 TimeBase timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads) {
+                 TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads) {
         this(name, description, source, model, site, climate, albedo, groundIrradiance, patchM, rays, sky, timeBase,
                 sunBins, stepMinutes, outputs, threads, SunHours.DEFAULTS, Pv.DEFAULTS);
+    }
+
+    /** The metrics' settings from the study's {@code sun_hours} and {@code pv} keys. */
+    public org.solmass.metrics.MetricContext.Settings metricSettings() {
+        return new org.solmass.metrics.MetricContext.Settings(sunHours.dates(), sunHours.stepMinutes(), sunHours.minElevationDeg(),
+                new org.solmass.metrics.PvZones.Settings(pv.suitablePct(), pv.minZoneM2(), pv.moduleEfficiency(), pv.performanceRatio()));
+    }
+
+    /**
+     * What the climate stage reads: the clear-sky model in the study's time base, or the file with its
+     * format, interval label, column names and gap filling; steps of {@link #stepMinutes}.
+     */
+    public ClimateSpec climateSpec() {
+        Climate c = climate;
+        ClimateSpec spec;
+        if (c.isClearSky()) {
+            spec = timeBase.clearSky(c.year());
+        } else {
+            spec = ClimateSpec.file(c.file()).withIntervalLabel(c.intervalLabel()).withFormat(c.format())
+                    .withColumns(c.columns()).withFillGaps(c.fillGapsMaxSteps());
+        }
+        return spec.withStepMinutes(stepMinutes);
     }
 
     /**
@@ -110,6 +143,9 @@ public record Study(String name, String description, Path source, Model model, S
             context = List.copyOf(context);
         }
 
+        /** How the model reader turns the file into metres, x east, y north, z up. */
+        public ModelOptions options() { return new ModelOptions(up, unit, northDeg); }
+
         /** Whether a block of this name is analysed (listed in analyse, or analyse empty), and not context. */
         public boolean isAnalysed(String blockName) {
             if (context.contains(blockName)) return false;
@@ -125,33 +161,34 @@ public record Study(String name, String description, Path source, Model model, S
     }
 
     /**
-     * The site.
-     *
-     * @param latitudeDeg degrees north (-90..90)
-     * @param longitudeDeg degrees east (-180..180)
-     * @param elevationM height above sea level, metres
-     * @param zone time zone as given: an IANA id ("Europe/Berlin") or a fixed offset ("+02:00")
-     */
-    public record Site(double latitudeDeg, double longitudeDeg, double elevationM, String zone) {
-        /** The zone as a java.time id (validated when the study is read). */
-        public ZoneId zoneId() { return ZoneId.of(zone); }
-    }
-
-    /**
      * The climate source.
      *
      * @param file the weather file, absolute; null for the embedded clear-sky model
      * @param format kind of the file; {@code AUTO} recognises it from its header
      * @param intervalLabel whether a row's timestamp labels the end or the start of its interval
-     * @param fillGaps fill short gaps of an hourly file by interpolation instead of failing
+     * @param fillGapsMaxSteps fill gaps of an hourly file up to this many steps by interpolation instead
+     *                         of failing (0 = never)
      * @param year calendar year of the clear-sky hourly year
+     * @param columns hourly files: role (time, ghi, dhi, dni, temp) to header name or 1-based column number
      */
-    public record Climate(Path file, ClimateFormat format, IntervalLabel intervalLabel, boolean fillGaps,
-                          int year) {
+    public record Climate(Path file, ClimateSpec.Format format, ClimateSpec.IntervalLabel intervalLabel,
+                          int fillGapsMaxSteps, int year, Map<String, String> columns) {
         public static final int DEFAULT_YEAR = 2025;
-        public static final Climate CLEAR_SKY = new Climate(null, ClimateFormat.AUTO, IntervalLabel.START, false, DEFAULT_YEAR);
+        /** Longest run of missing hourly steps filled for {@code "fill_gaps": true}. */
+        public static final int FILL_GAPS_STEPS = 3;
+        /** Longest gap {@code fill_gaps} may ask to fill: one day of hourly steps. */
+        public static final int MAX_FILL_GAPS_STEPS = 24;
+        public static final Climate CLEAR_SKY = new Climate(null, ClimateSpec.Format.AUTO, ClimateSpec.IntervalLabel.START,
+                0, DEFAULT_YEAR, Map.of());
+
+        public Climate {
+            columns = Map.copyOf(columns);
+        }
 
         public boolean isClearSky() { return file == null; }
+
+        /** Whether gaps of an hourly file are filled. */
+        public boolean fillGaps() { return fillGapsMaxSteps > 0; }
     }
 
     /**
@@ -179,12 +216,31 @@ public record Study(String name, String description, Path source, Model model, S
          * @param materialName the face's {@code usemtl} name, or null
          */
         public double of(String blockName, String materialName) {
-            if (materialName != null) {
-                Double m = materials.get(materialName);
-                if (m != null) return m;
+            Double v = entry(blockName, materialName);
+            return v != null ? v : blocksDefault;
+        }
+
+        /**
+         * Albedo of every triangle of a model: its material's entry, else its block's entry, else
+         * {@code ground} for a ground triangle and {@code blocksDefault} for the rest.
+         *
+         * @param groundTriangle per triangle index: whether it belongs to a ground surface
+         */
+        public float[] perTriangle(MassingModel model, boolean[] groundTriangle) {
+            float[] out = new float[model.triangleCount()];
+            for (int tr = 0; tr < out.length; tr++) {
+                int mi = model.triangleMaterial()[tr];
+                Double v = entry(model.blockNames().get(model.triangleBlock()[tr]),
+                        mi >= 0 ? model.materialNames().get(mi) : null);
+                out[tr] = (float) (v != null ? v : groundTriangle[tr] ? ground : blocksDefault);
             }
-            Double b = blocks.get(blockName);
-            return b != null ? b : blocksDefault;
+            return out;
+        }
+
+        /** The material's entry, else the block's entry, else null. */
+        private Double entry(String blockName, String materialName) {
+            Double m = materialName != null ? materials.get(materialName) : null;
+            return m != null ? m : blocks.get(blockName);
         }
     }
 
@@ -223,34 +279,12 @@ public record Study(String name, String description, Path source, Model model, S
     public interface Named {
         String name();
 
-        default String label() { return name().toLowerCase(Locale.ROOT).replace('_', '-'); }
+        default String label() { return labelOf((Enum<?>) this); }
+
+        /** Any enum constant's name as written in a study file. */
+        static String labelOf(Enum<?> e) { return e.name().toLowerCase(Locale.ROOT).replace('_', '-'); }
     }
-
-    /** Model axis that points up. */
-    public enum UpAxis implements Named { Z, Y }
-
-    /** Length unit of the model file, with its size in metres. */
-    public enum LengthUnit implements Named {
-        M(1.0), CM(0.01), MM(0.001), FT(0.3048);
-
-        /** Metres per model unit (the international foot is exactly 0.3048 m). */
-        public final double metres;
-
-        LengthUnit(double metres) { this.metres = metres; }
-    }
-
-    /** Sky diffuse model: Perez et al. (1990) anisotropic, or isotropic (Liu and Jordan). */
-    public enum SkyModel implements Named { PEREZ, ISOTROPIC }
-
-    /** Time base of the run. */
-    public enum TimeBase implements Named { AUTO, AVERAGE_DAYS, HOURLY_YEAR }
 
     /** Irradiance of the ground that reflects onto the patches. */
     public enum GroundIrradiance implements Named { UNSHADED, SHADED }
-
-    /** Kind of climate file. */
-    public enum ClimateFormat implements Named { AUTO, MONTH_HOUR, MONTHLY, HOURLY }
-
-    /** Which end of its interval a weather row's timestamp labels. */
-    public enum IntervalLabel implements Named { END, START }
 }

@@ -35,8 +35,8 @@ public final class StudyOverrides {
      *
      * @param flag the flag as the user typed it, for messages ("--lat")
      * @param keyPath the study key path ("site.latitude")
-     * @param value a String, Number, Boolean, Path (made absolute against the working directory) or
-     *              List of Strings; null (and an empty list, as picocli gives for an absent
+     * @param value a String, Number, Boolean, Path (made absolute against the working directory),
+     *              Map (an object of texts) or List of Strings; null (and an empty list, as picocli gives for an absent
      *              repeatable option) leaves the key as it is
      */
     public StudyOverrides set(String flag, String keyPath, Object value) {
@@ -60,6 +60,11 @@ public final class StudyOverrides {
         if (v instanceof Integer i) return f.numberNode(i);
         if (v instanceof Long l) return f.numberNode(l);
         if (v instanceof Number n) return f.numberNode(n.doubleValue());
+        if (v instanceof Map<?, ?> map) {
+            ObjectNode o = f.objectNode();
+            map.forEach((k, e) -> o.put(String.valueOf(k), String.valueOf(e)));
+            return o;
+        }
         if (v instanceof List<?> list) {
             ArrayNode a = f.arrayNode();
             for (Object e : list) a.add(String.valueOf(e));
@@ -87,6 +92,18 @@ public final class StudyOverrides {
     }
 
     public StudyOverrides climateFormat(String format) { return set("--climate-format", "climate.format", format); }
+    public StudyOverrides climateYear(Integer year) { return set("--year", "climate.year", year); }
+    public StudyOverrides stepMinutes(Integer minutes) { return set("--step-minutes", "step_minutes", minutes); }
+    public StudyOverrides intervalLabel(String label) { return set("--interval-label", "climate.interval_label", label); }
+    /** Longest gap of an hourly file filled, steps (0 = never). */
+    public StudyOverrides fillGaps(Integer maxSteps) { return set("--fill-gaps", "climate.fill_gaps", maxSteps); }
+
+    /** Column roles of an hourly file, "time=1,ghi=GlobHor" (role=header name or 1-based column number). */
+    public StudyOverrides columns(String text) {
+        if (text == null) return this;
+        return set("--columns", "climate.columns", org.solmass.climate.ClimateSpec.parseColumns(text, "--columns"));
+    }
+
     public StudyOverrides patchM(Double m) { return set("--patch", "patch_m", m); }
     public StudyOverrides rays(Integer n) { return set("--rays", "rays", n); }
     public StudyOverrides sky(String model) { return set("--sky", "sky", model); }

@@ -9,16 +9,17 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.solmass.InputException;
+import org.solmass.climate.ClimateSpec;
+import org.solmass.climate.TimeBaseChoice;
+import org.solmass.model.LengthUnit;
+import org.solmass.model.UpAxis;
+import org.solmass.sky.SkyModel;
+import org.solmass.sky.SkyModels;
 import org.solmass.study.Study.Albedo;
 import org.solmass.study.Study.Climate;
-import org.solmass.study.Study.ClimateFormat;
 import org.solmass.study.Study.GroundIrradiance;
-import org.solmass.study.Study.IntervalLabel;
-import org.solmass.study.Study.LengthUnit;
 import org.solmass.study.Study.Outputs;
-import org.solmass.study.Study.SkyModel;
-import org.solmass.study.Study.TimeBase;
-import org.solmass.study.Study.UpAxis;
+import org.solmass.sun.Site;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -63,13 +64,19 @@ public final class StudyReader {
      */
     public static Study read(Path file, StudyOverrides overrides) {
         ObjectNode root = file == null ? JsonNodeFactory.instance.objectNode() : parse(file);
+        if (root.get("climate") instanceof com.fasterxml.jackson.databind.node.TextNode shorthand) {
+            root.putObject("climate").set("source", shorthand);   // so that climate flags merge into it
+        }
         merge(root, overrides.tree());
         Path base = file == null ? Path.of("").toAbsolutePath() : file.toAbsolutePath().getParent();
         Map<String, String> flags = overrides.flags();
         Function<String, String> where = key -> {
             String bare = key.replaceAll("\\[\\d+]$", "");
-            String flag = flags.get(bare);
-            if (flag != null) return flag;
+            for (String k = bare; ; k = k.substring(0, k.lastIndexOf('.'))) {   // climate.columns.ghi -> --columns
+                String flag = flags.get(k);
+                if (flag != null) return flag;
+                if (k.indexOf('.') < 0) break;
+            }
             if (file == null) return StudyOverrides.REQUIRED_FLAGS.getOrDefault(bare, key);
             return file + ": " + key;
         };
@@ -97,8 +104,8 @@ public final class StudyReader {
         JsonCursor m = c.object("model");
         Path modelFile = path(m, "file", null, base);
         Study.Model model = new Study.Model(modelFile,
-                m.choice("up", UpAxis.class, UpAxis.Z),
-                m.choice("unit", LengthUnit.class, LengthUnit.M),
+                m.choice("up", UpAxis.values(), Study.Named::labelOf, UpAxis.Z),
+                m.choice("unit", LengthUnit.values(), Study.Named::labelOf, LengthUnit.M),
                 m.number("north_deg", 0.0, -360, 360),
                 m.strings("analyse"),
                 m.strings("context"));
@@ -115,13 +122,14 @@ public final class StudyReader {
         double lon = s.number("longitude", null, -180, 180);
         double elev = s.number("elevation_m", 0.0, -500, 9000);
         String zone = s.string("zone", null);
+        ZoneId zoneId;
         try {
-            ZoneId.of(zone);
+            zoneId = ZoneId.of(zone);
         } catch (DateTimeException e) {
             throw s.error("zone", "expected an IANA time zone such as \"Europe/Berlin\" or a UTC offset such as \"+02:00\", got \"" + zone + "\"");
         }
         s.finish();
-        Study.Site site = new Study.Site(lat, lon, elev, zone);
+        Site site = new Site(lat, lon, elev, zoneId);
 
         Climate climate = climate(c, base);
 
@@ -134,8 +142,8 @@ public final class StudyReader {
         GroundIrradiance ground = c.choice("ground_irradiance", GroundIrradiance.class, GroundIrradiance.UNSHADED);
         double patchM = c.positive("patch_m", Study.DEFAULT_PATCH_M, 0, 100);
         int rays = c.integer("rays", Study.DEFAULT_RAYS, 1, 1 << 20);
-        SkyModel sky = c.choice("sky", SkyModel.class, SkyModel.PEREZ);
-        TimeBase timeBase = c.choice("time_base", TimeBase.class, TimeBase.AUTO);
+        SkyModel sky = SkyModels.byName(c.oneOf("sky", SkyModels.names(), SkyModels.standard().name()), "sky");
+        TimeBaseChoice timeBase = c.choice("time_base", TimeBaseChoice.values(), TimeBaseChoice::label, TimeBaseChoice.AUTO);
         int sunBins = c.integer("sun_bins", Study.DEFAULT_SUN_BINS, 16, 1 << 20);
         int step = c.integer("step_minutes", Study.DEFAULT_STEP_MINUTES, 1, 60);
         if (60 % step != 0) throw c.error("step_minutes", "expected a whole number of minutes that divides 60 (1, 2, 3, 4, 5, 6, 10, 12, 15, 20, 30, 60), got " + step);
@@ -210,13 +218,45 @@ public final class StudyReader {
         JsonCursor k = c.child("climate", raw == null ? JsonNodeFactory.instance.objectNode() : raw);
         String source = k.string("source", CLEAR_SKY);
         Path file = source.equalsIgnoreCase(CLEAR_SKY) ? null : base.resolve(source).normalize();
-        ClimateFormat format = k.choice("format", ClimateFormat.class, ClimateFormat.AUTO);
-        Climate climate = new Climate(file, file == null ? ClimateFormat.AUTO : format,   // format is moot for clear-sky
-                k.choice("interval_label", IntervalLabel.class, IntervalLabel.START),
-                k.bool("fill_gaps", false),
-                k.integer("year", Climate.DEFAULT_YEAR, 1900, 2100));
+        ClimateSpec.Format format = k.choice("format", ClimateSpec.Format.values(), ClimateSpec.Format::label,
+                ClimateSpec.Format.AUTO);
+        Climate climate = new Climate(file, file == null ? ClimateSpec.Format.AUTO : format,   // format is moot for clear-sky
+                k.choice("interval_label", ClimateSpec.IntervalLabel.values(), ClimateSpec.IntervalLabel::label,
+                        ClimateSpec.IntervalLabel.START),
+                fillGaps(k),
+                k.integer("year", Climate.DEFAULT_YEAR, 1900, 2100),
+                columns(k));
         k.finish();
         return climate;
+    }
+
+    /** {@code climate.fill_gaps}: true (= {@link Climate#FILL_GAPS_STEPS} steps), false (= 0) or a number of steps. */
+    private static int fillGaps(JsonCursor k) {
+        JsonNode n = k.raw("fill_gaps");
+        if (n != null && n.isBoolean()) return n.asBoolean() ? Climate.FILL_GAPS_STEPS : 0;
+        if (n != null && !n.isNumber()) {
+            throw k.error("fill_gaps", "expected true, false or a whole number of steps from 0 to " + Climate.MAX_FILL_GAPS_STEPS
+                    + ", got " + JsonCursor.shown(n));
+        }
+        return k.integer("fill_gaps", 0, 0, Climate.MAX_FILL_GAPS_STEPS);
+    }
+
+    /** {@code climate.columns}: role -> header name (text) or 1-based column number. */
+    private static Map<String, String> columns(JsonCursor k) {
+        JsonCursor m = k.object("columns");
+        Map<String, String> out = new java.util.LinkedHashMap<>();
+        List<String> roles = ClimateSpec.COLUMN_ROLES;
+        for (String role : m.keys()) {
+            if (!roles.contains(role)) throw m.error(role, "unknown column role; expected one of " + String.join(", ", roles));
+            JsonNode v = m.raw(role);
+            if (v != null && v.isNumber() && v.canConvertToExactIntegral()) {
+                out.put(role, Integer.toString(m.integer(role, 0, 1, 10_000)));
+            } else {
+                out.put(role, m.string(role, null));
+            }
+        }
+        m.finish();
+        return out;
     }
 
     private static Path path(JsonCursor o, String key, String dflt, Path base) {
@@ -287,10 +327,4 @@ public final class StudyReader {
         }
     }
 
-    /** Lists kept for callers that want the supported labels (CLI help). */
-    public static List<String> labels(Class<? extends Enum<?>> type) {
-        java.util.ArrayList<String> out = new java.util.ArrayList<>();
-        for (Enum<?> e : type.getEnumConstants()) out.add(((Study.Named) e).label());
-        return out;
-    }
 }

@@ -39,8 +39,8 @@ public final class StudyWriter {
 
         ObjectNode m = root.putObject("model");
         m.put("file", path(s.model().file()));
-        m.put("up", s.model().up().label());
-        m.put("unit", s.model().unit().label());
+        m.put("up", Study.Named.labelOf(s.model().up()));
+        m.put("unit", Study.Named.labelOf(s.model().unit()));
         m.put("north_deg", s.model().northDeg());
         strings(m.putArray("analyse"), s.model().analyse());
         strings(m.putArray("context"), s.model().context());
@@ -49,15 +49,23 @@ public final class StudyWriter {
         site.put("latitude", s.site().latitudeDeg());
         site.put("longitude", s.site().longitudeDeg());
         site.put("elevation_m", s.site().elevationM());
-        site.put("zone", s.site().zone());
+        site.put("zone", s.site().zone().getId());
 
         ObjectNode c = root.putObject("climate");
         Study.Climate cl = s.climate();
         c.put("source", cl.isClearSky() ? StudyReader.CLEAR_SKY : path(cl.file()));
         if (!cl.isClearSky()) c.put("format", cl.format().label());
         c.put("interval_label", cl.intervalLabel().label());
-        c.put("fill_gaps", cl.fillGaps());
+        if (cl.fillGapsMaxSteps() == 0 || cl.fillGapsMaxSteps() == Study.Climate.FILL_GAPS_STEPS) {
+            c.put("fill_gaps", cl.fillGaps());
+        } else {
+            c.put("fill_gaps", cl.fillGapsMaxSteps());
+        }
         c.put("year", cl.year());
+        if (!cl.columns().isEmpty()) {   // left out when empty, so that results of earlier versions compare byte for byte
+            ObjectNode columns = c.putObject("columns");
+            new TreeMap<>(cl.columns()).forEach(columns::put);
+        }
 
         ObjectNode a = root.putObject("albedo");
         a.put("ground", s.albedo().ground());
@@ -68,7 +76,7 @@ public final class StudyWriter {
         root.put("ground_irradiance", s.groundIrradiance().label());
         root.put("patch_m", s.patchM());
         root.put("rays", s.rays());
-        root.put("sky", s.sky().label());
+        root.put("sky", s.sky().name());
         root.put("time_base", s.timeBase().label());
         root.put("sun_bins", s.sunBins());
         root.put("step_minutes", s.stepMinutes());

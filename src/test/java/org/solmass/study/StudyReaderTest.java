@@ -3,10 +3,18 @@ package org.solmass.study;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.solmass.InputException;
+import org.solmass.climate.ClimateSpec;
+import org.solmass.climate.TimeBaseChoice;
+import org.solmass.model.LengthUnit;
+import org.solmass.model.UpAxis;
+import org.solmass.sky.Isotropic;
+import org.solmass.sky.Perez;
 import org.solmass.study.Study.*;
+import org.solmass.sun.Site;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.ZoneId;
 import java.util.List;
 import java.util.Map;
 
@@ -66,10 +74,10 @@ class StudyReaderTest {
         assertEquals(12.5, s.model().northDeg());
         assertEquals(List.of("A", "B"), s.model().analyse());
         assertEquals(List.of("C"), s.model().context());
-        assertEquals(new Site(48.2, 16.37, 180, "Europe/Vienna"), s.site());
+        assertEquals(new Site(48.2, 16.37, 180, ZoneId.of("Europe/Vienna")), s.site());
         assertEquals(base.resolve("weather/year.csv"), s.climate().file());
-        assertEquals(ClimateFormat.HOURLY, s.climate().format());
-        assertEquals(IntervalLabel.START, s.climate().intervalLabel());
+        assertEquals(ClimateSpec.Format.HOURLY, s.climate().format());
+        assertEquals(ClimateSpec.IntervalLabel.START, s.climate().intervalLabel());
         assertTrue(s.climate().fillGaps());
         assertEquals(2019, s.climate().year());
         assertEquals(0.15, s.albedo().ground());
@@ -79,8 +87,8 @@ class StudyReaderTest {
         assertEquals(GroundIrradiance.SHADED, s.groundIrradiance());
         assertEquals(0.5, s.patchM());
         assertEquals(256, s.rays());
-        assertEquals(SkyModel.ISOTROPIC, s.sky());
-        assertEquals(TimeBase.HOURLY_YEAR, s.timeBase());
+        assertEquals(Isotropic.INSTANCE, s.sky());
+        assertEquals(TimeBaseChoice.HOURLY_YEAR, s.timeBase());
         assertEquals(2048, s.sunBins());
         assertEquals(15, s.stepMinutes());
         assertEquals(base.resolve("out"), s.outputs().folder());
@@ -105,8 +113,8 @@ class StudyReaderTest {
         assertTrue(s.model().isAnalysed("anything"));
         assertEquals(0, s.site().elevationM());
         assertTrue(s.climate().isClearSky());
-        assertEquals(ClimateFormat.AUTO, s.climate().format());
-        assertEquals(IntervalLabel.START, s.climate().intervalLabel());
+        assertEquals(ClimateSpec.Format.AUTO, s.climate().format());
+        assertEquals(ClimateSpec.IntervalLabel.START, s.climate().intervalLabel());
         assertFalse(s.climate().fillGaps());
         assertEquals(Climate.DEFAULT_YEAR, s.climate().year());
         assertEquals(0.2, s.albedo().ground());
@@ -114,8 +122,8 @@ class StudyReaderTest {
         assertEquals(GroundIrradiance.UNSHADED, s.groundIrradiance());
         assertEquals(1.0, s.patchM());
         assertEquals(1024, s.rays());
-        assertEquals(SkyModel.PEREZ, s.sky());
-        assertEquals(TimeBase.AUTO, s.timeBase());
+        assertEquals(Perez.INSTANCE, s.sky());
+        assertEquals(TimeBaseChoice.AUTO, s.timeBase());
         assertEquals(4096, s.sunBins());
         assertEquals(60, s.stepMinutes());
         assertEquals(dir.toAbsolutePath().resolve("results"), s.outputs().folder());
@@ -257,9 +265,9 @@ class StudyReaderTest {
         assertEquals(10.0, s.site().latitudeDeg());
         assertEquals(16.37, s.site().longitudeDeg());   // from the file
         assertEquals(64, s.rays());
-        assertEquals(SkyModel.PEREZ, s.sky());
+        assertEquals(Perez.INSTANCE, s.sky());
         assertTrue(s.climate().isClearSky());
-        assertEquals(ClimateFormat.AUTO, s.climate().format());   // the file's "hourly" is moot for clear-sky
+        assertEquals(ClimateSpec.Format.AUTO, s.climate().format());   // the file's "hourly" is moot for clear-sky
         assertEquals(Path.of("flag-out").toAbsolutePath().normalize(), s.outputs().folder()); // working directory, not the study folder
         InputException e = assertThrows(InputException.class, () -> StudyReader.read(p, new StudyOverrides().latitude(95.0)));
         assertEquals("--lat: expected a number from -90 to 90, got 95.0", e.getMessage());
@@ -293,5 +301,23 @@ class StudyReaderTest {
                 s.outputs(), s.threads()), t);
         assertEquals(json, StudyWriter.toJson(t));
         assertTrue(json.endsWith("}\n") && !json.contains("\r"));
+    }
+
+    @Test
+    void fillGapsIsTrueFalseOrAStepCountAndColumnsReadBackEqual() throws Exception {
+        String climate = "\"climate\": {\"source\": \"w.csv\", \"format\": \"hourly\", \"fill_gaps\": %s, "
+                + "\"columns\": {\"time\": \"Date\", \"ghi\": 2}}";
+        Study t = StudyReader.read(write("t.json", "{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", " + climate.formatted("true") + "}"));
+        assertEquals(Climate.FILL_GAPS_STEPS, t.climate().fillGapsMaxSteps());
+        assertEquals(Map.of("time", "Date", "ghi", "2"), t.climate().columns());
+        assertEquals(Map.of("time", "Date", "ghi", "2"), t.climateSpec().columns());
+        Study f = StudyReader.read(write("f.json", "{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", " + climate.formatted("false") + "}"));
+        assertEquals(0, f.climate().fillGapsMaxSteps());
+        Study n = StudyReader.read(write("n.json", "{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", " + climate.formatted("7") + "}"));
+        assertEquals(7, n.climateSpec().fillGapsMaxSteps());
+        Path again = write("again/n.json", StudyWriter.toJson(n));
+        assertEquals(n.climate(), StudyReader.read(again).climate());
+        InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", " + climate.formatted("25") + "}");
+        assertTrue(e.getMessage().endsWith("climate.fill_gaps: expected a whole number from 0 to 24, got 25"), e.getMessage());
     }
 }
