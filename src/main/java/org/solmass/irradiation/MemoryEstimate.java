@@ -11,12 +11,14 @@ import java.util.Locale;
  * (4-byte floats and ints, 8-byte doubles and longs, 16-byte array headers):
  * <ul>
  * <li>per receiver (analysed patch, context patch or ground probe): the first-pass month-hour slot
- *     sums, {@code float[288]}, its ground view factor, origin, normal, seed, surface and reflector
- *     index entries;</li>
+ *     sums, {@code double[288]} (8 bytes a slot: they are the sums later weighted into other patches'
+ *     reflection, so they stay doubles), its ground view factor, origin, normal, seed, surface and
+ *     reflector index entries;</li>
  * <li>per analysed patch: up to one reflector reference (int + float) per hemisphere ray, about 40
  *     per-patch result doubles (components, 3 x 12 months) and the result table's columns, and the
  *     month-hour table {@code float[288]} when it is kept;</li>
- * <li>per worker thread: the ray scratch arrays; per step: the sun direction table.</li>
+ * <li>per worker thread: the ray scratch arrays; per sun-up step: the step table ({@link StepTable}:
+ *     sun vector, direction, slot, beam, circumsolar, cos zenith and sunshine entries).</li>
  * </ul>
  * The receiver count grows as 1 / patch size squared, which gives the suggested patch size.
  *
@@ -24,11 +26,11 @@ import java.util.Locale;
  * @param countBytes     the part that scales with the number of receivers and patches
  */
 public record MemoryEstimate(long bytes, long countBytes) {
-    static final long PER_RECEIVER = StepTable.SLOTS * 4L + 16 + 8 + 48 + 8 + 4 + 24;
+    static final long PER_RECEIVER = StepTable.SLOTS * 8L + 16 + 8 + 48 + 8 + 4 + 24;
     static final long PER_PATCH_FIXED = 40 * 8 + 36 * 8 + 2 * 16 + 30 * 8;
     static final long PER_PATCH_PER_RAY = 4 + 4;
     static final long PER_THREAD_PER_RAY = 24 + 4 + 4 + 8 + 4 + 4 + 8;
-    static final long PER_STEP = 16;
+    static final long PER_STEP = 3 * 4 + 4 + 4 + 8 + 8 + 4 + 8;
     /** Share of the free heap the estimate may use: the rest is for what the estimate leaves out. */
     static final double HEADROOM = 0.8;
 

@@ -5,6 +5,7 @@ import org.solmass.scene.HemisphereSampler;
 import org.solmass.scene.SkyViewCalculator;
 import org.solmass.scene.Tracer;
 import org.solmass.scene.ViewFactors;
+import org.solmass.sky.DiffuseParts;
 import org.solmass.sky.SkyModel;
 
 import java.util.Arrays;
@@ -34,8 +35,9 @@ import java.util.stream.IntStream;
  * month-hour slot ({@link MonthHour}, 288 values), and reflection becomes a sparse weighted sum of other receivers' slot
  * sums, computed after all first passes are known.
  *
- * <p>The sky diffuse of a slot is kept at or above zero (the Perez horizon term may be negative);
- * the clamp acts on slot sums.
+ * <p>The sky diffuse of a slot is the sky package's three-part sum {@link DiffuseParts#sum} of the
+ * slot's parts (kept at or above zero: the Perez horizon term may be negative); the clamp acts on
+ * slot sums.
  *
  * <p>Determinism: receivers are computed in parallel, each from its own ray seed into its own
  * array slots, so results do not depend on the thread count.
@@ -329,12 +331,12 @@ public final class ShadedIrradiation {
             Arrays.fill(diffMonth, 0);
             double unshadedSum = 0, ga = in.groundAlbedo();
             for (int k = 0; k < SLOTS; k++) {
-                double diff = Math.max(0, circSlot[k] + svf * st.backgroundWh[k] + hz * st.horizonWh[k]);
+                double diff = DiffuseParts.sum(st.backgroundWh[k], svf, circSlot[k], st.horizonWh[k], hz);
                 slotTotal[k] = beamSlot[k] + diff;
                 if (analysed) {
                     beamMonth[MonthHour.month(k) - 1] += beamSlot[k];
                     diffMonth[MonthHour.month(k) - 1] += diff;
-                    double diffU = Math.max(0, circUSlot[k] + svfU * st.backgroundWh[k] + sinTilt * st.horizonWh[k]);
+                    double diffU = DiffuseParts.sum(st.backgroundWh[k], svfU, circUSlot[k], st.horizonWh[k], sinTilt);
                     unshadedSum += beamUSlot[k] + diffU + ga * gvfU * st.ghiWh[k];
                 }
             }

@@ -3,12 +3,15 @@ package org.solmass.irradiation;
 import org.solmass.climate.MonthHour;
 import org.solmass.climate.Step;
 import org.solmass.climate.WeatherSeries;
+import org.solmass.sky.DiffuseParts;
 import org.solmass.sky.SkyModel;
 
 /**
  * The weather series flattened for the per-patch kernel: one entry per sun-up step with the sun
  * vector, its direction index, its month-hour slot and its beam and circumsolar weights; and, summed
  * per month-hour slot, the plane-independent parts (sky background, horizon band, GHI, hours).
+ * The sky diffuse parts are the sky model's own split ({@link SkyModel#parts}) times the step's
+ * weighted hours; {@link ShadedIrradiation} adds them with {@link DiffuseParts#sum}.
  *
  * <p>Every weight is irradiance x step duration x the days the step stands for, so that summing
  * {@code weight x geometry factor} over steps gives irradiation in Wh/m2 (see {@link Step}).
@@ -70,12 +73,10 @@ final class StepTable {
             hours[sl] += wh;
             ghiWh[sl] += st.ghiWm2() * wh;
             dhiWh[sl] += st.dhiWm2() * wh;
-            double dhi = st.dhiWm2(), f1 = 0, f2 = 0;
-            if (dhi > 0) {
-                f1 = sky.circumsolarCoefficient(st);
-                f2 = sky.horizonCoefficient(st);
-                backgroundWh[sl] += dhi * (1 - f1) * wh;
-                horizonWh[sl] += dhi * f2 * wh;
+            DiffuseParts parts = sky.parts(st);
+            if (parts != DiffuseParts.NONE) {
+                backgroundWh[sl] += parts.backgroundPerSvf() * wh;
+                horizonWh[sl] += parts.horizon() * wh;
             }
             int d = dirs.ofStep(s);
             if (d < 0) continue;
@@ -86,7 +87,7 @@ final class StepTable {
             direction[k] = d;
             slot[k] = sl;
             beamWh[k] = Math.max(0, st.dniWm2()) * wh;
-            circumsolarWh[k] = dhi > 0 ? dhi * f1 * wh : 0;
+            circumsolarWh[k] = parts.circumsolar() * wh;
             cosZenith[k] = (float) v.z();
             if (isSunshine(st.dniWm2())) {
                 sunshineHours[k] = wh;

@@ -101,10 +101,6 @@ public final class HemisphereSampler {
      */
     public void directions(double nx, double ny, double nz, long streamSeed, double[] dir) {
         long state = streamSeed;
-        double sign = Math.copySign(1.0, nz);
-        double a = -1.0 / (sign + nz), b = nx * ny * a;
-        double t1x = 1 + sign * nx * nx * a, t1y = sign * b, t1z = -sign * nx;
-        double t2x = b, t2y = sign + ny * ny * a, t2z = -ny;
         double inv = 1.0 / side;
         int s = 0;
         for (int i = 0; i < side; i++) {
@@ -113,22 +109,35 @@ public final class HemisphereSampler {
                 double r1 = (mix(state) >>> 11) * 0x1.0p-53;
                 state += GOLDEN;
                 double r2 = (mix(state) >>> 11) * 0x1.0p-53;
-                double ua = 2 * (i + r1) * inv - 1, ub = 2 * (j + r2) * inv - 1;
-                double x, y;
-                if (ua == 0 && ub == 0) { x = 0; y = 0; }
-                else if (Math.abs(ua) > Math.abs(ub)) {
-                    double th = Math.PI / 4 * (ub / ua);
-                    x = ua * Math.cos(th); y = ua * Math.sin(th);
-                } else {
-                    double th = Math.PI / 2 - Math.PI / 4 * (ua / ub);
-                    x = ub * Math.cos(th); y = ub * Math.sin(th);
-                }
-                double z = Math.sqrt(Math.max(0, 1 - x * x - y * y));
-                dir[3 * s] = x * t1x + y * t2x + z * nx;
-                dir[3 * s + 1] = x * t1y + y * t2y + z * ny;
-                dir[3 * s + 2] = x * t1z + y * t2z + z * nz;
+                cosineDirection((i + r1) * inv, (j + r2) * inv, nx, ny, nz, dir, s);
             }
         }
+    }
+
+    /**
+     * Maps a point (u, v) of the unit square to a direction of density cos(theta)/pi about the unit
+     * normal n (concentric map, Malley's method, tangent frame of Duff et al., see the class doc)
+     * into {@code dir[3s..3s+2]}. The one place where a square point becomes a ray direction.
+     */
+    public static void cosineDirection(double u, double v, double nx, double ny, double nz, double[] dir, int s) {
+        double sign = Math.copySign(1.0, nz);
+        double a = -1.0 / (sign + nz), b = nx * ny * a;
+        double t1x = 1 + sign * nx * nx * a, t1y = sign * b, t1z = -sign * nx;
+        double t2x = b, t2y = sign + ny * ny * a, t2z = -ny;
+        double ua = 2 * u - 1, ub = 2 * v - 1;
+        double x, y;
+        if (ua == 0 && ub == 0) { x = 0; y = 0; }
+        else if (Math.abs(ua) > Math.abs(ub)) {
+            double th = Math.PI / 4 * (ub / ua);
+            x = ua * Math.cos(th); y = ua * Math.sin(th);
+        } else {
+            double th = Math.PI / 2 - Math.PI / 4 * (ua / ub);
+            x = ub * Math.cos(th); y = ub * Math.sin(th);
+        }
+        double z = Math.sqrt(Math.max(0, 1 - x * x - y * y));
+        dir[3 * s] = x * t1x + y * t2x + z * nx;
+        dir[3 * s + 1] = x * t1y + y * t2y + z * ny;
+        dir[3 * s + 2] = x * t1z + y * t2z + z * nz;
     }
 
     /**

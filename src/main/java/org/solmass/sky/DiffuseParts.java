@@ -20,6 +20,39 @@ package org.solmass.sky;
  */
 public record DiffuseParts(double backgroundPerSvf, double circumsolar, double horizon) {
 
+    /** No diffuse light (a step with DHI 0). */
+    public static final DiffuseParts NONE = new DiffuseParts(0, 0, 0);
+
+    /**
+     * The one three-part sum of Perez et al. (1990, Solar Energy 44(5) 271-289, eq. 9) with each part
+     * obstructed on its own, clamped at 0: {@code max(0, background x svf + circumsolar + horizon x
+     * horizonShare)}. Every caller (the unobstructed plane, the obstructed patch, the month-hour slot
+     * sums of the pipeline, the plane search) adds the parts here and nowhere else. Allocation-free,
+     * for the hot loop; the order of the additions is part of the contract (results are compared
+     * byte for byte).
+     *
+     * @param backgroundPerSvf isotropic background, per unit sky view factor
+     * @param skyViewFactor    the plane's sky view factor, (1 + cos b)/2 unobstructed
+     * @param circumsolar      circumsolar part on the plane, already times the sun's visibility
+     * @param horizonPerShare  horizon part per unit of {@code horizonShare}
+     * @param horizonShare     sin b unobstructed; sin b times the visible share of the horizon band otherwise
+     */
+    public static double sum(double backgroundPerSvf, double skyViewFactor, double circumsolar,
+                             double horizonPerShare, double horizonShare) {
+        return Math.max(0, backgroundPerSvf * skyViewFactor + circumsolar + horizonPerShare * horizonShare);
+    }
+
+    /**
+     * These parts of a step per unit geometry (background per unit sky view factor, circumsolar per
+     * unit circumsolar ratio, horizon per unit sin b, see {@link SkyModel#parts}) on a plane.
+     *
+     * @param circumsolarRatio {@link SkyModel#circumsolarRatio} of the plane
+     * @param sinTilt          sin b of the plane
+     */
+    public DiffuseParts onPlane(double circumsolarRatio, double sinTilt) {
+        return new DiffuseParts(backgroundPerSvf, circumsolar * circumsolarRatio, horizon * sinTilt);
+    }
+
     /** Sky diffuse on the unobstructed plane of the given tilt, W/m2, >= 0. */
     public double unobstructed(double tiltDeg) {
         return combine((1 + Math.cos(Math.toRadians(tiltDeg))) / 2, 1, 1);
@@ -33,6 +66,6 @@ public record DiffuseParts(double backgroundPerSvf, double circumsolar, double h
      * @param horizonVisible   visible share of the horizon band, [0, 1]
      */
     public double combine(double skyViewFactor, double sunVisible, double horizonVisible) {
-        return Math.max(0, backgroundPerSvf * skyViewFactor + circumsolar * sunVisible + horizon * horizonVisible);
+        return sum(backgroundPerSvf, skyViewFactor, circumsolar * sunVisible, horizon, horizonVisible);
     }
 }

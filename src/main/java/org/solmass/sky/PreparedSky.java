@@ -11,7 +11,8 @@ import org.solmass.sun.SunPosition;
  * then given by their outward unit normal (nx east, ny north, nz up); no method allocates per step.
  *
  * <p>Per step on an unobstructed plane (W/m2): beam = DNI max(0, n.s) (Duffie &amp; Beckman 2013
- * eq. 2.15.1 first term, written with DNI); sky diffuse per {@link SkyModel} clamped at 0;
+ * eq. 2.15.1 first term, written with DNI); sky diffuse per {@link SkyModel}, the parts per unit DHI
+ * (1 - F1, F1 a/b, F2 sin b) added by {@link DiffuseParts#sum} (clamped at 0) and times DHI;
  * ground-reflected = albedo GHI (1 - cos b)/2 (Liu &amp; Jordan 1963; D&amp;B eq. 2.15.1 third term).
  *
  * <p>Immutable after construction: one instance may be shared by all threads of a run.
@@ -92,20 +93,6 @@ public final class PreparedSky {
         return c > 0 ? dni[i] * c : 0;
     }
 
-    /**
-     * Diffuse parts at step i on a plane of normal n into out[0..2] = background per unit sky view
-     * factor, circumsolar, horizon (W/m2), see {@link DiffuseParts}.
-     */
-    public void diffuseParts(int i, double nx, double ny, double nz, double[] out) {
-        double d = dhi[i];
-        if (d <= 0) { out[0] = 0; out[1] = 0; out[2] = 0; return; }
-        double c = nx * sx[i] + ny * sy[i] + nz * sz[i];
-        double sinTilt = Math.sqrt(Math.max(0, 1 - nz * nz));
-        out[0] = d * (1 - f1[i]);
-        out[1] = d * f1[i] * SkyModel.circumsolarRatio(c, sz[i]);
-        out[2] = d * f2[i] * sinTilt;
-    }
-
     /** Unobstructed beam, sky diffuse, ground-reflected at step i into out[0..2], W/m2, each >= 0. */
     public void unobstructed(int i, double nx, double ny, double nz, double albedo, double[] out) {
         double c = nx * sx[i] + ny * sy[i] + nz * sz[i];
@@ -113,7 +100,7 @@ public final class PreparedSky {
         double d = dhi[i];
         if (d > 0) {
             double sinTilt = Math.sqrt(Math.max(0, 1 - nz * nz));
-            out[1] = Math.max(0, d * ((1 - f1[i]) * (1 + nz) / 2 + f1[i] * SkyModel.circumsolarRatio(c, sz[i]) + f2[i] * sinTilt));
+            out[1] = d * DiffuseParts.sum(1 - f1[i], (1 + nz) / 2, f1[i] * SkyModel.circumsolarRatio(c, sz[i]), f2[i], sinTilt);
         } else {
             out[1] = 0;
         }
@@ -134,7 +121,7 @@ public final class PreparedSky {
             if (c > 0) wh36[m] += ldni[i] * c * h;
             double d = ldhi[i];
             if (d > 0) {
-                double v = d * ((1 - lf1[i]) * svf + lf1[i] * SkyModel.circumsolarRatio(c, lz[i]) + lf2[i] * sinTilt);
+                double v = d * DiffuseParts.sum(1 - lf1[i], svf, lf1[i] * SkyModel.circumsolarRatio(c, lz[i]), lf2[i], sinTilt);
                 if (v > 0) wh36[12 + m] += v * h;
             }
             wh36[24 + m] += refl * lghi[i] * h;

@@ -34,13 +34,24 @@ public interface SkyModel {
         return cosIncidence / cosZenith;
     }
 
+    /**
+     * The step's sky diffuse split into its three parts per unit of the geometry each part scales
+     * with (W/m2): the isotropic background DHI (1 - F1) per unit sky view factor, the circumsolar
+     * part DHI F1 per unit {@link #circumsolarRatio}, the horizon part DHI F2 per unit sin b
+     * (Perez et al. 1990, eq. 9). {@link DiffuseParts#NONE} without diffuse light. The one place
+     * where a step becomes parts: the pipeline's step table and {@link #diffuse} both call it.
+     */
+    default DiffuseParts parts(Step step) {
+        double dhi = step.dhiWm2();
+        if (dhi <= 0) return DiffuseParts.NONE;
+        double f1 = circumsolarCoefficient(step), f2 = horizonCoefficient(step);
+        return new DiffuseParts(dhi * (1 - f1), dhi * f1, dhi * f2);
+    }
+
     /** The diffuse parts of a step on an unobstructed plane of tilt and surface azimuth (degrees). */
     default DiffuseParts diffuse(Step step, double tiltDeg, double surfaceAzimuthDeg) {
-        double dhi = step.dhiWm2();
-        if (dhi <= 0) return new DiffuseParts(0, 0, 0);
-        double f1 = circumsolarCoefficient(step), f2 = horizonCoefficient(step);
         SunPosition sun = step.sun();
         double r = circumsolarRatio(sun.cosIncidence(tiltDeg, surfaceAzimuthDeg), sun.cosZenith());
-        return new DiffuseParts(dhi * (1 - f1), dhi * f1 * r, dhi * f2 * Math.sin(Math.toRadians(tiltDeg)));
+        return parts(step).onPlane(r, Math.sin(Math.toRadians(tiltDeg)));
     }
 }

@@ -9,9 +9,9 @@ import static org.junit.jupiter.api.Assertions.*;
 class MemoryEstimateTest {
     @Test
     void firstPassSlotSumsDominateAndEveryReceiverCostsAtLeastThem() {
-        // float[receivers x 288] of the first pass: 1152 bytes per receiver (4-byte floats)
+        // double[receivers x 288] of the first pass: 2304 bytes per receiver (8-byte doubles)
         MemoryEstimate m = MemoryEstimate.of(100_000, 80_000, 1024, 8760, false, 2);
-        assertTrue(m.bytes() >= 100_000L * 288 * 4);
+        assertTrue(m.bytes() >= 100_000L * 288 * 8);
         assertTrue(m.countBytes() <= m.bytes());
     }
 
@@ -52,9 +52,9 @@ class MemoryEstimateTest {
 
     @Test
     void estimateBeforePatchingCountsAreaOverPatchSizeSquared() {
-        // 9 km2 of roof at 1 m patches: 9 million patches, each at least its float[288] slot sums and its object
+        // 9 km2 of roof at 1 m patches: 9 million patches, each at least its double[288] slot sums and its object
         MemoryEstimate m = MemoryEstimate.beforePatching(9e6, 1.0, 0, 4.0, 16, false, 2);
-        assertTrue(m.bytes() >= 9_000_000L * (288 * 4 + MemoryEstimate.PATCH_OBJECT_BYTES));
+        assertTrue(m.bytes() >= 9_000_000L * (288 * 8 + MemoryEstimate.PATCH_OBJECT_BYTES));
         MemoryEstimate coarse = MemoryEstimate.beforePatching(9e6, 2.0, 0, 8.0, 16, false, 2);
         assertEquals(m.countBytes() / 4.0, coarse.countBytes(), m.countBytes() * 1e-6); // 2x the size, 1/4 the patches
         assertFalse(m.fits(512L << 20));

@@ -1,0 +1,70 @@
+package org.solmass.irradiation;
+
+import org.junit.jupiter.api.Test;
+import org.solmass.climate.ClimateSource;
+import org.solmass.climate.ClimateSpec;
+import org.solmass.climate.WeatherSeries;
+import org.solmass.sky.Perez;
+import org.solmass.sun.Site;
+
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryMXBean;
+import java.time.ZoneId;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Set;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+/**
+ * The memory estimate against the heap the visibility and irradiation phase really holds: the JVM's
+ * own count of the heap in use (MemoryMXBean, after a full collection), measured before the inputs
+ * are built and at the end of the last phase, while every array of the run is still reachable.
+ */
+class MemoryEstimateMeasuredTest {
+    /**
+     * The estimate guards a refusal: below the real heap it lets a study fail deep inside with
+     * OutOfMemoryError; more than 2x above it refuses studies that fit (our own bound).
+     */
+    static final double MAX_OVER_ESTIMATE = 2.0;
+
+    @Test
+    void estimateIsNotBelowTheMeasuredHeapAndWithinTwiceIt() {
+        // an invented block 60 m x 60 m x 20 m at 0.5 m patches: about 30,000 receivers, so that the
+        // run's arrays (tens of MB) dominate whatever else the test JVM holds
+        PipelineFixture f = new PipelineFixture(new TestModels().box("a", 0, 0, 60, 60, 20).build(), Set.of("a"), 0.5);
+        WeatherSeries w = ClimateSource.load(new Site(51, 10, 0, ZoneId.of("Europe/Berlin")), ClimateSpec.clearSky());
+        IrradiationSetup.Options o = new IrradiationSetup.Options(0.5, 16, 0.2, false,
+                IrradiationSetup.SunSampling.EXACT, 4096, 7L, true);
+        float[] albedo = new float[f.model.triangleCount()];
+        Arrays.fill(albedo, 0.3f);
+        MemoryMXBean mx = ManagementFactory.getMemoryMXBean();
+        long before = usedAfterGc(mx);
+        ShadedIrradiation.Inputs in = IrradiationSetup.build(f.scene, f.model, f.patches.surfaces(), f.patches.patches(),
+                List.of(), albedo, w, Perez.INSTANCE, o);
+        int n = in.receivers().analysed;
+        long[] peak = {-1};
+        PhaseProgress atTheEnd = new PhaseProgress() {
+            boolean last;
+            @Override public void begin(String phase, long total) { last = phase.equals("irradiation"); }
+            @Override public void advance(long done) { if (last && done == n) peak[0] = usedAfterGc(mx); }
+        };
+        IrradiationResult r = ShadedIrradiation.run(f.scene, in, atTheEnd);
+        assertEquals(n, r.annual().length);
+        assertTrue(peak[0] > 0, "the last phase reported its end");
+        long measured = peak[0] - before;
+        long estimate = MemoryEstimate.of(in, Runtime.getRuntime().availableProcessors()).bytes();
+        System.out.printf("memory estimate: %d receivers, estimate %.1f MB, measured %.1f MB (ratio %.2f)%n",
+                in.receivers().count, estimate / 1e6, measured / 1e6, estimate / (double) measured);
+        assertTrue(measured > (long) in.receivers().count * StepTable.SLOTS * 8,
+                "the run holds at least its first-pass double slot sums: " + measured);
+        assertTrue(estimate >= measured, "estimate " + estimate + " below the measured " + measured);
+        assertTrue(estimate <= MAX_OVER_ESTIMATE * measured, "estimate " + estimate + " over 2x the measured " + measured);
+    }
+
+    private static long usedAfterGc(MemoryMXBean mx) {
+        mx.gc();
+        mx.gc();
+        return mx.getHeapMemoryUsage().getUsed();
+    }
+}
