@@ -161,6 +161,6 @@ public final class CameraRig {
         target.setX(target.getX() + rx * mx + ux * my);
         target.setY(target.getY() + uy * my);
         target.setZ(target.getZ() + rz * mx + uz * my);
-        moves.set(moves.get() + 1);
+        setView(headingDeg(), pitchDeg(), distance());   // counts the move; keeps the eye outside the sun path's dome
     }
 }

@@ -16,6 +16,7 @@ import java.util.List;
 import java.util.Set;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The automatic axonometric view of the map ({@link MapRenderer#bestViewAzimuth}): of the four diagonal
@@ -85,7 +86,7 @@ class MapViewChoiceTest {
         analysed[m.blockNames().indexOf("block")] = true;
         double[] v = new double[patches.size()];
         Arrays.fill(v, 3);
-        assertEquals(true, patches.size() > 0, "no patches on the chosen walls");
+        assertTrue(patches.size() > 0, "no patches on the chosen walls");
         return new MapScene(m, analysed, patches, v, 0, 6, false, List.of());
     }
 }
