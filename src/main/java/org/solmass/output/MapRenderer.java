@@ -10,6 +10,7 @@ import java.awt.Color;
 import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.Graphics2D;
+import java.awt.Rectangle;
 import java.awt.RenderingHints;
 import java.awt.geom.Path2D;
 import java.awt.image.BufferedImage;
@@ -29,7 +30,7 @@ import java.util.List;
 public final class MapRenderer {
     /** Background, ground plane, analysed-but-unpatched faces and edge colours (sRGB). */
     static final int BACKGROUND = 0xFFFFFF, GROUND = 0xECEAE4, UNPATCHED = 0xD9D6CF, EDGE = 0x2E2E2E;
-    private static final int TITLE_H = 70, LEGEND_H = 110, MARGIN = 16;
+    private static final int TITLE_H = 70, LEGEND_H = 110, MARGIN = 16, CAPTION_H = 24;
 
     private MapRenderer() {}
 
@@ -132,14 +133,14 @@ public final class MapRenderer {
         g.setColor(new Color(BACKGROUND));
         g.fillRect(0, 0, w, h);
 
-        int panelTop = TITLE_H, panelH = Math.max(40, h - TITLE_H - LEGEND_H);
-        int axoW = (int) Math.round((w - 3 * MARGIN) * 0.56), planW = w - 3 * MARGIN - axoW;
+        Rectangle planTile = planTile(w, h);
+        int captionH = CAPTION_H, tileH = planTile.height, panelTop = TITLE_H, panelH = tileH + captionH;
+        int planW = planTile.width, axoW = w - 3 * MARGIN - planW;
         MapScene scene = new MapScene(model, analysedBlock, patches, values, lo, hi, x.diverging(), x.outlines());
         double az = Double.isNaN(o.viewAzimuthDeg()) ? bestViewAzimuth(scene, o.viewElevationDeg()) : o.viewAzimuthDeg();
         Vec3 eye = Vec3.fromAzimuthElevation(az, o.viewElevationDeg());
         MapView axo = MapView.looking(eye);
         MapView plan = MapView.looking(Vec3.UP);
-        int captionH = 24, tileH = panelH - captionH;
         int[][] plPixels = new int[1][];
         Thread planThread = new Thread(() -> plPixels[0] = scene.draw(plan, planW * 2, tileH * 2), "solmass-map-plan");
         planThread.start();
@@ -160,6 +161,16 @@ public final class MapRenderer {
         legend(g, w, h - LEGEND_H, lo, hi, label, unit, auto, scene.hasMissing(), x);
         g.dispose();
         return img;
+    }
+
+    /**
+     * Where the plan's picture sits in a map of {@code w} x {@code h} pixels: the right-hand panel
+     * (44 % of the width between margins), below its caption.
+     */
+    static Rectangle planTile(int w, int h) {
+        int panelH = Math.max(40, h - TITLE_H - LEGEND_H);
+        int axoW = (int) Math.round((w - 3 * MARGIN) * 0.56);
+        return new Rectangle(2 * MARGIN + axoW, TITLE_H + CAPTION_H, w - 3 * MARGIN - axoW, panelH - CAPTION_H);
     }
 
     /** Diagonal view azimuths tried by {@link #bestViewAzimuth}, in order of preference on ties. */

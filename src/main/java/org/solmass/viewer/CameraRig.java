@@ -2,6 +2,7 @@ package org.solmass.viewer;
 
 import javafx.beans.property.DoubleProperty;
 import javafx.beans.property.SimpleDoubleProperty;
+import javafx.geometry.Point3D;
 import javafx.scene.Group;
 import javafx.scene.PerspectiveCamera;
 import javafx.scene.SubScene;
@@ -26,6 +27,7 @@ public final class CameraRig {
     private final double radius;
     private final double[] focus;
     private double lastX, lastY;
+    private double outsideRadiusM;
 
     /**
      * @param siteRadiusM half the diagonal of the whole model, metres (zoom limits, clipping)
@@ -63,10 +65,31 @@ public final class CameraRig {
     public void setView(double headingDeg, double pitchDeg, double distance) {
         yaw.setAngle(headingDeg);
         pitch.setAngle(-Math.max(-5, Math.min(90, pitchDeg)));
-        back.setZ(-distance);
+        back.setZ(-Math.max(distance, outsideDistance()));
         heading.set(headingDeg);
         clip();
         moves.set(moves.get() + 1);
+    }
+
+    /**
+     * Keeps the camera at least {@code radiusM} from the scene origin (0 = no limit): the sun path's
+     * dome is centred there, and from inside it its arcs and beads would pass close up across the
+     * model. Moves the camera back along its line of sight when it is inside.
+     */
+    public void keepOutside(double radiusM) {
+        outsideRadiusM = radiusM;
+        setView(headingDeg(), pitchDeg(), distance());
+    }
+
+    /** Smallest distance from the target that puts the eye {@link #outsideRadiusM} from the origin. */
+    private double outsideDistance() {
+        if (!(outsideRadiusM > 0)) return 0;
+        back.setZ(0);
+        Point3D p0 = camera.localToParent(0, 0, 0);
+        back.setZ(-1);
+        Point3D u = camera.localToParent(0, 0, 0).subtract(p0);   // unit: the line of sight, backwards
+        double b = p0.dotProduct(u), c = p0.dotProduct(p0) - outsideRadiusM * outsideRadiusM;
+        return Math.max(0, -b + Math.sqrt(Math.max(0, b * b - c)));
     }
 
     /** Fixed views: "top" or the side looked from, "N", "E", "S", "W". */
@@ -89,6 +112,12 @@ public final class CameraRig {
     }
 
     public double headingDeg() { return yaw.getAngle(); }
+
+    /** The camera's position in the frame of the rig's parent (the scene frame of the model). */
+    public Point3D eye() { return camera.localToParent(0, 0, 0); }
+
+    /** Pixels per metre at one metre's distance for a view {@code heightPx} high (the camera's field of view is vertical). */
+    public double focalPx(double heightPx) { return heightPx / 2 / Math.tan(Math.toRadians(camera.getFieldOfView() / 2)); }
 
     public double pitchDeg() { return -pitch.getAngle(); }
 
@@ -132,6 +161,6 @@ public final class CameraRig {
         target.setX(target.getX() + rx * mx + ux * my);
         target.setY(target.getY() + uy * my);
         target.setZ(target.getZ() + rz * mx + uz * my);
-        moves.set(moves.get() + 1);
+        setView(headingDeg(), pitchDeg(), distance());   // counts the move; keeps the eye outside the sun path's dome
     }
 }

@@ -65,6 +65,7 @@ public final class ViewerWindow {
     private final TabPane tabs;
     private SubScene sub;
     private CameraRig rig;
+    private SunPathView.Built sunPath;
     private ModelView3D view;
     private ViewerData data;
     private long shownAtNanos;
@@ -238,6 +239,7 @@ public final class ViewerWindow {
         javafx.scene.Group world = new javafx.scene.Group(view.node(), rig.node());
         SunPathView.Built sp = SunPathView.build(d.sunPath(), prep.frame().radiusM());
         view.sunPathGroup().getChildren().setAll(sp.group());
+        sunPath = sp;
         hourAnchors.clear();
         hourLayer.getChildren().clear();
         for (int i = 0; i < sp.labelBeads().size(); i++) {
@@ -257,9 +259,15 @@ public final class ViewerWindow {
         rig.attach(sub);
         rig.headingProperty().addListener((o, a, b) -> north.setRotate(-b.doubleValue()));
         north.setRotate(-rig.headingDeg());
-        rig.movesProperty().addListener((o, a, b) -> placeHourLabels());
+        rig.movesProperty().addListener((o, a, b) -> {
+            fitSunPath();
+            placeHourLabels();
+        });
         sub.widthProperty().addListener((o, a, b) -> placeHourLabels());
-        sub.heightProperty().addListener((o, a, b) -> placeHourLabels());
+        sub.heightProperty().addListener((o, a, b) -> {
+            fitSunPath();
+            placeHourLabels();
+        });
         sub.addEventHandler(javafx.scene.input.MouseEvent.MOUSE_CLICKED, e -> {
             if (e.isStillSincePress() && e.getButton() == javafx.scene.input.MouseButton.PRIMARY) pick(e.getPickResult());
         });
@@ -275,7 +283,7 @@ public final class ViewerWindow {
             System.err.printf("viewer: meshes %.2f s, scene %.2f s, panels %.2f s, colours %.2f s%n",
                     (t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9, (t4 - t3) / 1e9);
         }
-        view.sunPathGroup().setVisible(controls.sunPathOn());
+        setSunPathVisible(controls.sunPathOn());
         controls.setZonesAvailable(view.hasZones());
         view.zoneGroup().setVisible(view.hasZones() && controls.zonesOn());
         Platform.runLater(this::placeHourLabels);
@@ -312,7 +320,15 @@ public final class ViewerWindow {
 
     void setSunPathVisible(boolean on) {
         if (view != null) view.sunPathGroup().setVisible(on);
+        if (rig != null && view != null) rig.keepOutside(on ? 1.1 * SunPathView.domeRadiusM(view.frame().radiusM()) : 0);
+        fitSunPath();
         placeHourLabels();
+    }
+
+    /** Gives the sun path's rods and beads their set width on screen for the current camera. */
+    private void fitSunPath() {
+        if (view == null || sunPath == null || rig == null || sub == null || !view.sunPathGroup().isVisible()) return;
+        sunPath.fitTo(rig.eye(), rig.focalPx(Math.max(1, sub.getHeight())));
     }
 
     /** Puts the hour numbers next to the labelled beads as seen through the camera. */

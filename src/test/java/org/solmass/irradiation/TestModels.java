@@ -1,5 +1,6 @@
 package org.solmass.irradiation;
 
+import org.solmass.fixtures.Boxes;
 import org.solmass.model.MassingModel;
 
 import java.util.ArrayList;
@@ -12,14 +13,10 @@ final class TestModels {
     private final List<int[]> tris = new ArrayList<>();
     private final List<Integer> triBlock = new ArrayList<>();
 
-    /** A box without a bottom face, on z = 0. */
+    /** A box without a bottom face, on z = 0 ({@link Boxes#onGround}). */
     TestModels box(String name, double x0, double y0, double x1, double y1, double h) {
         int b = block(name);
-        quad(b, new double[] {x0, y0, h}, new double[] {x1, y0, h}, new double[] {x1, y1, h}, new double[] {x0, y1, h});
-        quad(b, new double[] {x0, y0, 0}, new double[] {x1, y0, 0}, new double[] {x1, y0, h}, new double[] {x0, y0, h});
-        quad(b, new double[] {x1, y0, 0}, new double[] {x1, y1, 0}, new double[] {x1, y1, h}, new double[] {x1, y0, h});
-        quad(b, new double[] {x1, y1, 0}, new double[] {x0, y1, 0}, new double[] {x0, y1, h}, new double[] {x1, y1, h});
-        quad(b, new double[] {x0, y1, 0}, new double[] {x0, y0, 0}, new double[] {x0, y0, h}, new double[] {x0, y1, h});
+        for (double[][] f : Boxes.onGround(x0, y0, x1, y1, h).faces()) quad(b, f[0], f[1], f[2], f[3]);
         return this;
     }
 

@@ -1,5 +1,6 @@
 package org.solmass.metrics;
 
+import org.solmass.fixtures.Boxes;
 import org.solmass.model.MassingModel;
 import org.solmass.model.ModelOptions;
 import org.solmass.model.ObjReader;
@@ -12,13 +13,11 @@ final class Obj {
 
     Obj block(String name) { sb.append("o ").append(name).append('\n'); return this; }
 
-    /** A box from (x0, y0, 0) to (x1, y1, h) with roof and four walls. */
+    /** A box from (x0, y0, 0) to (x1, y1, h) with roof and four walls ({@link Boxes#onGround}). */
     Obj box(double x0, double y0, double x1, double y1, double h) {
-        quad(x0, y0, h, x1, y0, h, x1, y1, h, x0, y1, h);
-        quad(x0, y0, 0, x1, y0, 0, x1, y0, h, x0, y0, h);
-        quad(x1, y0, 0, x1, y1, 0, x1, y1, h, x1, y0, h);
-        quad(x1, y1, 0, x0, y1, 0, x0, y1, h, x1, y1, h);
-        quad(x0, y1, 0, x0, y0, 0, x0, y0, h, x0, y1, h);
+        for (double[][] f : Boxes.onGround(x0, y0, x1, y1, h).faces()) {
+            quad(f[0][0], f[0][1], f[0][2], f[1][0], f[1][1], f[1][2], f[2][0], f[2][1], f[2][2], f[3][0], f[3][1], f[3][2]);
+        }
         return this;
     }
 

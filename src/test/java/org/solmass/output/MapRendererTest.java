@@ -11,7 +11,7 @@ import static org.junit.jupiter.api.Assertions.*;
 
 class MapRendererTest {
     @Test
-    void mapIsAPngOfTheRequestedSizeMostlyInRampColours() throws Exception {
+    void mapIsAPngOfTheRequestedSizeWhosePlanShowsEveryUpFacingPatchInRampColours() throws Exception {
         System.setProperty("java.awt.headless", "true");
         SyntheticScene s = SyntheticScene.district(1.0);
         Path dir = Files.createTempDirectory("map");
@@ -23,18 +23,13 @@ class MapRendererTest {
         BufferedImage img = ImageIO.read(png.toFile());
         assertEquals(1600, img.getWidth());
         assertEquals(900, img.getHeight());
-        boolean[] nearRamp = nearRampLookup(10);
-        int hits = 0;
-        for (int y = 0; y < img.getHeight(); y++) {
-            for (int x = 0; x < img.getWidth(); x++) {
-                if (nearRamp[img.getRGB(x, y) & 0xFFFFFF]) hits++;
-            }
-        }
-        double share = hits / (double) (img.getWidth() * img.getHeight());
-        // The analysed faces of this fixture, seen in both panels, cover about an eighth of the image
-        // (measured by eye on the saved PNG); a map that drew them grey, hid them or left them out would
-        // fall far below a tenth.
-        assertTrue(share > 0.10, "ramp colours cover " + share + " of the pixels");
+        PlanCount c = PlanCount.of(img, s);
+        double expected = c.expectedRampPx();
+        // The plan must show every analysed face that looks up (roofs, the courtyard floor) in ramp
+        // colours, nothing else (walls are edge-on): see PlanCount for the expectation and its band.
+        assertTrue(c.rampPx() >= expected - c.lowSlackPx() && c.rampPx() <= expected + c.highSlackPx(),
+                String.format(java.util.Locale.ROOT, "plan: %d ramp pixels, expected %.0f (-%.0f, +%.0f)",
+                        c.rampPx(), expected, c.lowSlackPx(), c.highSlackPx()));
     }
 
     @Test
@@ -42,18 +37,80 @@ class MapRendererTest {
         SyntheticScene s = SyntheticScene.district(2.0).gableHouse("House", -30, 45, 16, 9, 6, 10, 25);
         BufferedImage img = MapRenderer.render(s.model(), s.analysedBlocks(), s.patches, s.values(), "Annual irradiation",
                 "kWh/m2", MapRenderer.Options.of(1000, 600, "t"));
-        boolean[] nearRamp = nearRampLookup(10);
-        int grey = 0, ramp = 0;
-        for (int y = 0; y < img.getHeight(); y++) {
-            for (int x = 0; x < img.getWidth(); x++) {
-                int c = img.getRGB(x, y) & 0xFFFFFF;
-                int r = (c >> 16) & 255, g = (c >> 8) & 255, b = c & 255;
-                if (r == g && g == b && r > 100 && r < 235) grey++;
-                if (nearRamp[c]) ramp++;
+        PlanCount c = PlanCount.of(img, s);
+        // Context roofs (two neighbours, 18 x 40 m and 50 x 14 m) are neutral grey in the plan, less the
+        // rim their crease lines and anti-aliasing take (two pixels along their outline); the analysed
+        // faces that look up (roofs, courtyard, both slopes of the house) are in ramp colours.
+        double greyExpected = (18 * 40 + 50 * 14) * c.pxPerM() * c.pxPerM();
+        double greyRim = 2 * (2 * (18 + 40) + 2 * (50 + 14)) * c.pxPerM();
+        assertTrue(c.greyPx() >= greyExpected - greyRim, "context grey pixels: " + c.greyPx() + ", expected " + greyExpected);
+        assertTrue(c.greyPx() <= greyExpected + greyRim + PlanCount.ARROW_DISC_PX, "grey pixels: " + c.greyPx() + ", expected " + greyExpected);
+        double expected = c.expectedRampPx();
+        assertTrue(c.rampPx() >= expected - c.lowSlackPx() && c.rampPx() <= expected + c.highSlackPx(),
+                "plan ramp pixels " + c.rampPx() + ", expected " + expected);
+    }
+
+    /**
+     * Counts of the plan's picture ({@link MapRenderer#planTile}) against what geometry says it must
+     * hold. The plan is an orthographic view from above that fits the model's bounds into 92 % of the
+     * tile's width or 88 % of its height, whichever is tighter (MapScene.draw): {@code pxPerM} pixels
+     * per metre. An analysed patch facing up covers its area times n_z (its projection on the ground)
+     * times pxPerM^2; nothing in these fixtures overhangs a roof or the courtyard. Where a patch's edge
+     * is at least 6 px long the renderer hatches the patch outline, one pixel row and column per patch
+     * of e x e pixels, leaving (1 - 1/e)^2 of it in a pure ramp colour. Slack: the outer rim of each
+     * surface (crease line, anti-aliasing), up to two pixels along the boundary edges inward and one
+     * outward, and the north arrow's disc (radius 38 px) which may cover part of the plan.
+     */
+    record PlanCount(int rampPx, int greyPx, double pxPerM, double upAreaM2, double keep, double rimPx) {
+        static final double ARROW_DISC_PX = Math.PI * 38 * 38;
+
+        static PlanCount of(BufferedImage img, SyntheticScene s) {
+            java.awt.Rectangle t = MapRenderer.planTile(img.getWidth(), img.getHeight());
+            double[] b = s.model().bounds();
+            double pxPerM = Math.min(t.width * 0.92 / (b[3] - b[0]), t.height * 0.88 / (b[4] - b[1]));
+            double area = 0, edgeSum = 0;
+            java.util.Map<String, Integer> edges = new java.util.HashMap<>();
+            java.util.Map<String, Double> edgeLength = new java.util.HashMap<>();
+            for (org.solmass.surface.Patch p : s.patches) {
+                edgeSum += Math.sqrt(p.areaM2());
+                if (p.normal().z() <= 1e-6) continue;
+                area += p.areaM2() * p.normal().z();
+                double[] o = p.outline();
+                int n = o.length / 3;
+                for (int i = 0; i < n; i++) {
+                    int j = (i + 1) % n;
+                    String ka = key(o, i), kb = key(o, j);
+                    String k = ka.compareTo(kb) < 0 ? ka + "|" + kb : kb + "|" + ka;
+                    edges.merge(k, 1, Integer::sum);
+                    edgeLength.put(k, Math.hypot(o[3 * j] - o[3 * i], o[3 * j + 1] - o[3 * i + 1]));
+                }
             }
+            double boundaryM = 0;
+            for (var e : edges.entrySet()) if (e.getValue() == 1) boundaryM += edgeLength.get(e.getKey());
+            double edgePx = edgeSum / s.patches.size() * pxPerM;
+            double keep = edgePx >= 6 ? (1 - 1 / edgePx) * (1 - 1 / edgePx) : 1;
+            boolean[] nearRamp = nearRampLookup(10);
+            int ramp = 0, grey = 0;
+            for (int y = t.y; y < t.y + t.height; y++) {
+                for (int x = t.x; x < t.x + t.width; x++) {
+                    int c = img.getRGB(x, y) & 0xFFFFFF;
+                    int r = (c >> 16) & 255, g = (c >> 8) & 255, bl = c & 255;
+                    if (nearRamp[c]) ramp++;
+                    if (r == g && g == bl && r > 100 && r < 235) grey++;
+                }
+            }
+            return new PlanCount(ramp, grey, pxPerM, area, keep, boundaryM * pxPerM);
         }
-        assertTrue(grey > 0.03 * img.getWidth() * img.getHeight(), "context grey pixels: " + grey);
-        assertTrue(ramp > 0.05 * img.getWidth() * img.getHeight(), "ramp pixels: " + ramp);
+
+        double expectedRampPx() { return upAreaM2 * pxPerM * pxPerM * keep; }
+
+        double lowSlackPx() { return 2 * rimPx + ARROW_DISC_PX; }
+
+        double highSlackPx() { return rimPx; }
+
+        private static String key(double[] o, int i) {
+            return Math.round(o[3 * i] * 1000) + "," + Math.round(o[3 * i + 1] * 1000) + "," + Math.round(o[3 * i + 2] * 1000);
+        }
     }
 
     @Test
@@ -100,7 +157,7 @@ class MapRendererTest {
     }
 
     /** Colours within {@code tol} code values per channel of a ramp colour (outlines and anti-aliasing blend a little). */
-    private static boolean[] nearRampLookup(int tol) {
+    static boolean[] nearRampLookup(int tol) {
         boolean[] near = new boolean[1 << 24];
         for (int i = 0; i < 256; i++) {
             int c = ColourRamp.sequential(i / 255.0);

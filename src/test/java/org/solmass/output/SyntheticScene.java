@@ -1,5 +1,6 @@
 package org.solmass.output;
 
+import org.solmass.fixtures.Boxes;
 import org.solmass.model.MassingModel;
 import org.solmass.model.Vec3;
 import org.solmass.surface.Patch;
@@ -29,12 +30,11 @@ final class SyntheticScene {
         int b = blocks.size();
         blocks.add(name);
         analysed.add(analyse);
-        // faces as (origin, edge u, edge v) with u x v pointing outward
-        face(b, analyse, new Vec3(x0, y0, h), new Vec3(x1 - x0, 0, 0), new Vec3(0, y1 - y0, 0));       // roof
-        face(b, analyse, new Vec3(x0, y0, 0), new Vec3(x1 - x0, 0, 0), new Vec3(0, 0, h));              // south
-        face(b, analyse, new Vec3(x1, y0, 0), new Vec3(0, y1 - y0, 0), new Vec3(0, 0, h));              // east
-        face(b, analyse, new Vec3(x1, y1, 0), new Vec3(x0 - x1, 0, 0), new Vec3(0, 0, h));              // north
-        face(b, analyse, new Vec3(x0, y1, 0), new Vec3(0, y0 - y1, 0), new Vec3(0, 0, h));              // west
+        // faces of Boxes.onGround as (first corner, edge u to the second, edge v to the fourth): u x v points outward
+        for (double[][] f : Boxes.onGround(x0, y0, x1, y1, h).faces()) {
+            Vec3 o = new Vec3(f[0][0], f[0][1], f[0][2]);
+            face(b, analyse, o, new Vec3(f[1][0], f[1][1], f[1][2]).minus(o), new Vec3(f[3][0], f[3][1], f[3][2]).minus(o));
+        }
         return this;
     }
 

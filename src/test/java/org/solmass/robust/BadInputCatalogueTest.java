@@ -4,6 +4,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.solmass.cli.Main;
+import org.solmass.fixtures.Boxes;
 import picocli.CommandLine;
 
 import java.io.IOException;
@@ -33,17 +34,7 @@ class BadInputCatalogueTest {
     @TempDir Path dir;
 
     /** Two invented 10 m boxes, blocks "east" and "west", 6 m apart. */
-    static final String TWO_BOXES = box("west", 0, 0) + box("east", 16, 8);
-
-    static String box(String name, double x0, int base) {
-        StringBuilder b = new StringBuilder("o " + name + "\n");
-        for (int z = 0; z <= 1; z++) for (int y = 0; y <= 1; y++) for (int x = 0; x <= 1; x++) {
-            b.append("v ").append(x0 + 10 * x).append(' ').append(10 * y).append(' ').append(10 * z).append('\n');
-        }
-        int[][] faces = {{1, 3, 4, 2}, {5, 6, 8, 7}, {1, 2, 6, 5}, {3, 7, 8, 4}, {1, 5, 7, 3}, {2, 4, 8, 6}};
-        for (int[] f : faces) b.append(String.format("f %d %d %d %d%n", f[0] + base, f[1] + base, f[2] + base, f[3] + base));
-        return b.toString();
-    }
+    static final String TWO_BOXES = Boxes.closed(0, 0, 0, 10, 10, 10).obj("west") + Boxes.closed(16, 0, 0, 26, 10, 10).obj("east");
 
     static Stream<String> ids() {
         return BadInputCases.CASES.keySet().stream();

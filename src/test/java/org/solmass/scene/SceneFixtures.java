@@ -1,5 +1,6 @@
 package org.solmass.scene;
 
+import org.solmass.fixtures.Boxes;
 import org.solmass.model.MassingModel;
 import org.solmass.model.Vec3;
 import org.solmass.surface.Patch;
@@ -33,17 +34,10 @@ final class SceneFixtures {
         return triangle(a[0], a[1], a[2], c[0], c[1], c[2], d[0], d[1], d[2]);
     }
 
-    /** Closed axis-aligned box [x0,x1] x [y0,y1] x [z0,z1] with outward faces, as a new block. */
+    /** Closed axis-aligned box [x0,x1] x [y0,y1] x [z0,z1] with outward faces ({@link Boxes#closed}), as a new block. */
     SceneFixtures box(double x0, double y0, double z0, double x1, double y1, double z1) {
         block();
-        double[] p000 = {x0, y0, z0}, p100 = {x1, y0, z0}, p110 = {x1, y1, z0}, p010 = {x0, y1, z0};
-        double[] p001 = {x0, y0, z1}, p101 = {x1, y0, z1}, p111 = {x1, y1, z1}, p011 = {x0, y1, z1};
-        quad(p001, p101, p111, p011); // top, +z
-        quad(p000, p010, p110, p100); // bottom, -z
-        quad(p000, p100, p101, p001); // south, -y
-        quad(p110, p010, p011, p111); // north, +y
-        quad(p100, p110, p111, p101); // east, +x
-        quad(p010, p000, p001, p011); // west, -x
+        for (double[][] f : Boxes.closed(x0, y0, z0, x1, y1, z1).faces()) quad(f[0], f[1], f[2], f[3]);
         return this;
     }
 

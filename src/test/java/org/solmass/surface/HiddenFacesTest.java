@@ -1,7 +1,7 @@
 package org.solmass.surface;
 
 import org.junit.jupiter.api.Test;
-import org.solmass.testkit.ObjBoxes;
+import org.solmass.fixtures.Boxes;
 import org.solmass.model.ModelOptions;
 import org.solmass.model.ObjReader;
 
@@ -10,14 +10,14 @@ import java.util.Set;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 /**
- * Two boxes that touch along x = 10 (heights 10 m and 6 m), modelled as separate closed boxes as
+ * Two boxes that touch along x = 10 (heights 10 m and 6 m), modelled as separate boxes (walls and roof) as
  * massing exports often are: the lower box's west wall is wholly against the taller box and the taller
  * box's east wall is covered from 0 to 6 m. Geometry: the exposed areas are exact rectangles.
  */
 class HiddenFacesTest {
     @Test
     void facesAgainstATouchingBlockAreNotPatchedAndExposedPartsAreExact() {
-        String obj = "o tall\n" + ObjBoxes.box(0, 0, 10, 8, 10, 0) + "o low\n" + ObjBoxes.box(10, 0, 20, 8, 6, 8);
+        String obj = Boxes.onGround(0, 0, 10, 8, 10).obj("tall") + Boxes.onGround(10, 0, 20, 8, 6).obj("low");
         var m = ObjReader.parse(obj, "touching.obj", ModelOptions.defaults()).model();
         PatchSet ps = Patcher.build(m, new PatchOptions(1.0, Set.of(), false));
         double tallEast = 0, lowWest = 0;
@@ -33,7 +33,7 @@ class HiddenFacesTest {
 
     @Test
     void boxesThatDoNotTouchKeepEveryFace() {
-        String obj = "o a\n" + ObjBoxes.box(0, 0, 10, 8, 10, 0) + "o b\n" + ObjBoxes.box(10.5, 0, 20, 8, 6, 8);
+        String obj = Boxes.onGround(0, 0, 10, 8, 10).obj("a") + Boxes.onGround(10.5, 0, 20, 8, 6).obj("b");
         var m = ObjReader.parse(obj, "apart.obj", ModelOptions.defaults()).model();
         PatchSet ps = Patcher.build(m, new PatchOptions(1.0, Set.of(), false));
         assertEquals(0, ps.hiddenAreaM2(), 1e-9);

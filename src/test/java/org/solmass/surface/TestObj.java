@@ -1,5 +1,6 @@
 package org.solmass.surface;
 
+import org.solmass.fixtures.Boxes;
 import org.solmass.model.MassingModel;
 import org.solmass.model.ModelOptions;
 import org.solmass.model.ObjReader;
@@ -12,15 +13,11 @@ final class TestObj {
 
     TestObj block(String name) { sb.append("o ").append(name).append('\n'); return this; }
 
-    /** A closed axis-aligned box with corner (x, y, z) and size w (x), d (y), h (z). */
+    /** A closed axis-aligned box with corner (x, y, z) and size w (x), d (y), h (z) ({@link Boxes#closed}). */
     TestObj box(double x, double y, double z, double w, double d, double h) {
-        double X = x + w, Y = y + d, Z = z + h;
-        quad(x, y, Z, X, y, Z, X, Y, Z, x, Y, Z);  // roof
-        quad(x, y, z, x, Y, z, X, Y, z, X, y, z);  // bottom
-        quad(x, y, z, X, y, z, X, y, Z, x, y, Z);  // south
-        quad(X, y, z, X, Y, z, X, Y, Z, X, y, Z);  // east
-        quad(X, Y, z, x, Y, z, x, Y, Z, X, Y, Z);  // north
-        quad(x, Y, z, x, y, z, x, y, Z, x, Y, Z);  // west
+        for (double[][] f : Boxes.closed(x, y, z, x + w, y + d, z + h).faces()) {
+            quad(f[0][0], f[0][1], f[0][2], f[1][0], f[1][1], f[1][2], f[2][0], f[2][1], f[2][2], f[3][0], f[3][1], f[3][2]);
+        }
         return this;
     }
 

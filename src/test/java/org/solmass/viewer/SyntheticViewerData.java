@@ -1,5 +1,6 @@
 package org.solmass.viewer;
 
+import org.solmass.fixtures.Boxes;
 import org.solmass.model.MassingModel;
 import org.solmass.model.Vec3;
 import org.solmass.table.ResultTable;
@@ -49,12 +50,12 @@ final class SyntheticViewerData {
         for (int b = 0; b < BLOCKS.length; b++) {
             double[] k = BLOCKS[b];
             double x0 = k[0], y0 = k[1], x1 = k[2], y1 = k[3], h = k[4];
-            Vec3[][] faces = {   // origin, U, V (lengths), normal
-                    {new Vec3(x0, y0, h), new Vec3(x1 - x0, 0, 0), new Vec3(0, y1 - y0, 0), Vec3.UP},
-                    {new Vec3(x0, y0, 0), new Vec3(x1 - x0, 0, 0), new Vec3(0, 0, h), new Vec3(0, -1, 0)},
-                    {new Vec3(x1, y1, 0), new Vec3(x0 - x1, 0, 0), new Vec3(0, 0, h), new Vec3(0, 1, 0)},
-                    {new Vec3(x1, y0, 0), new Vec3(0, y1 - y0, 0), new Vec3(0, 0, h), new Vec3(1, 0, 0)},
-                    {new Vec3(x0, y1, 0), new Vec3(0, y0 - y1, 0), new Vec3(0, 0, h), new Vec3(-1, 0, 0)}};
+            List<Vec3[]> faces = new ArrayList<>();   // origin, U, V (lengths), outward normal U x V
+            for (double[][] c : Boxes.onGround(x0, y0, x1, y1, h).faces()) {
+                Vec3 o = new Vec3(c[0][0], c[0][1], c[0][2]);
+                Vec3 u = new Vec3(c[1][0], c[1][1], c[1][2]).minus(o), v = new Vec3(c[3][0], c[3][1], c[3][2]).minus(o);
+                faces.add(new Vec3[] {o, u, v, u.cross(v).normalized()});
+            }
             for (Vec3[] f : faces) {
                 int v0 = verts.size() / 3;
                 Vec3 o = f[0], u = f[1], v = f[2];

@@ -54,24 +54,55 @@ class ViewerSmokeTest {
         int width = (int) img.getWidth(), height = (int) img.getHeight();
         PixelReader pr = img.getPixelReader();
 
-        // share of pixels whose colour is (nearly) an entry of the sequential ramp: the coloured model
-        int ramp = 0, total = 0, bestX = -1, bestY = -1;
+        int ramp = 0, bestX = -1, bestY = -1;
         for (int y = 4; y < height - 4; y += 2) {
             for (int x = 4; x < width - 4; x += 2) {
-                total++;
-                int c = pr.getArgb(x, y) & 0xFFFFFF;
-                if (nearRamp(c)) {
-                    ramp++;
-                    if (bestX < 0 && y > height / 3 && uniform(pr, x, y)) {
-                        bestX = x;
-                        bestY = y;
-                    }
+                if (!nearRamp(pr.getArgb(x, y))) continue;
+                ramp++;
+                if (bestX < 0 && y > height / 3 && uniform(pr, x, y)) {
+                    bestX = x;
+                    bestY = y;
                 }
             }
         }
-        double share = ramp / (double) total;
-        // the synthetic courtyard fills a good part of the default view; 10 % is a conservative floor
-        assertTrue(share > 0.10, "ramp-coloured share of the 3D view " + share);
+        // Expected ramp pixels, from the camera's own projection of the analysed faces (all of them carry
+        // patches in this fixture). Upper bound: the faces turned to the camera, as if none hid another
+        // (occlusion only takes away), plus a one-pixel rim along their outlines. Lower bound, less a
+        // one-pixel rim along its outline (anti-aliased edge, crease with the walls): the roof
+        // of the tallest analysed block (north bar, 18 m), which nothing can hide: a line of sight from
+        // it rises towards the camera above, and the only taller block, the context tower, stands
+        // south-east while the default camera looks from the south-south-west. Of a face's pixels at
+        // least ((e - 3) / e)^2 show the ramp colour unchanged: each patch's texture cell is e x e texels
+        // with a one-texel border darkened to 0.88 (PaletteAtlas; 12 % off, beyond nearRamp's 6 code
+        // values) and bilinear sampling blends half a texel more on each side; the only light is a
+        // white ambient one, so texels reach the screen as they are. Pixels are sampled every second row
+        // and column: counts are quartered.
+        int cell = prep.patches().stream().mapToInt(m -> m.atlas.cell).min().orElseThrow();
+        double keep = Math.pow((cell - 3.0) / cell, 2);
+        double[] upper = {0, 0}, lower = {0, 0};
+        onFx(() -> {
+            javafx.geometry.Point3D eye = w.rig().camera().localToScene(0, 0, 0);
+            javafx.scene.Node world = w.view().node();
+            eye = world.sceneToLocal(eye);
+            double top = 0;
+            for (int bl = 0; bl < 4; bl++) top = Math.max(top, SyntheticViewerData.BLOCKS[bl][4]);
+            for (int bl = 0; bl < 4; bl++) {
+                double[] k = SyntheticViewerData.BLOCKS[bl];
+                for (double[][] f : org.solmass.fixtures.Boxes.onGround(k[0], k[1], k[2], k[3], k[4]).faces()) {
+                    double[] a2 = projectedAreaAndPerimeter(w, prep.frame(), f, eye);
+                    upper[0] += a2[0];
+                    upper[1] += a2[1];
+                    if (k[4] == top && f[0][2] == top && f[2][2] == top) {
+                        lower[0] += a2[0];
+                        lower[1] += a2[1];
+                    }
+                }
+            }
+            return null;
+        });
+        double upperPx = (upper[0] + upper[1]) / 4, lowerPx = keep * (lower[0] - lower[1]) / 4;
+        assertTrue(ramp >= lowerPx && ramp <= upperPx, String.format(java.util.Locale.ROOT,
+                "%d sampled ramp pixels, expected %.0f..%.0f (cell %d texels)", ramp, lowerPx, upperPx, cell));
         assertTrue(bestX >= 0, "found no patch interior to click");
         int clicked = pr.getArgb(bestX, bestY) & 0xFFFFFF;
 
@@ -177,6 +208,26 @@ class ViewerSmokeTest {
         assertTrue(done.await(60, TimeUnit.SECONDS), "FX thread did not answer");
         if (err.get() != null) throw new AssertionError(err.get());
         return r.get();
+    }
+
+    /**
+     * Area (px^2) and perimeter (px) in the 3D view's pixels of a face (world corners, metres), 0 when
+     * it is turned away from the eye (scene frame of the model).
+     */
+    static double[] projectedAreaAndPerimeter(ViewerWindow w, SceneFrame fr, double[][] face, javafx.geometry.Point3D eye) {
+        javafx.geometry.Point3D[] p = new javafx.geometry.Point3D[face.length];
+        for (int i = 0; i < face.length; i++) p[i] = new javafx.geometry.Point3D(fr.fx(face[i][0]), fr.fy(face[i][2]), fr.fz(face[i][1]));
+        javafx.geometry.Point3D n = p[1].subtract(p[0]).crossProduct(p[2].subtract(p[0]));
+        if (n.dotProduct(eye.subtract(p[0])) <= 0) return new double[] {0, 0};   // (x, y, z) -> (x, -z, y) is a rotation: normals stay outward
+        double area = 0, perimeter = 0;
+        Point2D[] q = new Point2D[p.length];
+        for (int i = 0; i < p.length; i++) q[i] = w.subScene().screenToLocal(w.view().node().localToScreen(p[i]));
+        for (int i = 0; i < q.length; i++) {
+            Point2D a = q[i], b = q[(i + 1) % q.length];
+            area += a.getX() * b.getY() - b.getX() * a.getY();
+            perimeter += a.distance(b);
+        }
+        return new double[] {Math.abs(area) / 2, perimeter};
     }
 
     static void frames(int n) throws InterruptedException {
