@@ -210,7 +210,7 @@ public final class AnalysisRun {
     /** What the metrics read: the finished stages and the study's metric settings. */
     static MetricContext metricContext(Study study, Scene scene, PatchSet patches, IrradiationResult r, WeatherSeries weather) {
         return new MetricContext(scene, patches, r, weather, study.sky(), study.site(), study.climate().year(),
-                study.albedo().ground(), study.patchM(), study.metricSettings());
+                study.albedo().ground(), study.patchM(), study.rays(), RUN_SEED, study.metricSettings());
     }
 
     static double seconds(long since) {

@@ -22,10 +22,13 @@ import java.util.List;
  * @param year calendar year of dated metrics (sun hours on a date)
  * @param groundAlbedo ground albedo, 0..1
  * @param patchM patch size, metres
+ * @param rays hemisphere rays per patch the study asks for (metrics that sample the hemisphere use as many)
+ * @param raySeed seed of the run's ray streams (with each patch's id: results do not depend on threads)
  * @param settings the metrics' own settings
  */
 public record MetricContext(Scene scene, PatchSet patches, IrradiationResult irradiation, WeatherSeries weather,
-                            SkyModel sky, Site site, int year, double groundAlbedo, double patchM, Settings settings) {
+                            SkyModel sky, Site site, int year, double groundAlbedo, double patchM, int rays, long raySeed,
+                            Settings settings) {
 
     /**
      * Settings of the metrics (study keys {@code sun_hours} and {@code pv}, docs/study-file.md).

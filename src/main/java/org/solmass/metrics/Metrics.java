@@ -14,7 +14,8 @@ import java.util.function.Supplier;
  */
 public final class Metrics {
     /** Every metric, in run order. */
-    private static final List<Supplier<Metric>> ALL = List.of(SunHoursMetric::new, PvZonesMetric::new);
+    private static final List<Supplier<Metric>> ALL = List.of(SunHoursMetric::new, PvZonesMetric::new,
+            VerticalSkyComponentMetric::new);
 
     private Metrics() {}
 
