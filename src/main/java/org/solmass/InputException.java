@@ -7,6 +7,7 @@ package org.solmass;
  */
 public class InputException extends RuntimeException {
     private final String where;
+    private final String detail;
 
     /**
      * @param where the file (with ":line" when known), study key or flag the problem is in
@@ -15,11 +16,18 @@ public class InputException extends RuntimeException {
     public InputException(String where, String message) {
         super(where == null || where.isEmpty() ? message : where + ": " + message);
         this.where = where;
+        this.detail = message;
     }
 
     public InputException(String where, String message, Throwable cause) {
         super(where == null || where.isEmpty() ? message : where + ": " + message, cause);
         this.where = where;
+        this.detail = message;
+    }
+
+    /** The same problem with a further sentence appended (e.g. the warnings that probably explain it). */
+    public InputException withHint(String hint) {
+        return new InputException(where, detail + hint, this);
     }
 
     /** Where the problem is: "file:line", "file", a study key or a flag. */

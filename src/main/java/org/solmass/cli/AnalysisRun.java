@@ -118,7 +118,12 @@ public final class AnalysisRun {
         long t1 = System.nanoTime();
         progress.begin("patches", 0);
         Set<String> analysed = analysedBlocks(study, model);
-        requireMemoryForPatches(study, model, analysed);
+        try {
+            requireMemoryForPatches(study, model, analysed);
+        } catch (InputException e) {   // a model in millimetres read as metres ends here: say so first
+            throw warnings.isEmpty() ? e : e.withHint(". The input already gave these warnings, which may be the cause: "
+                    + String.join("; ", warnings));
+        }
         PatchSet patches = Patcher.build(model, new PatchOptions(study.patchM(), analysed, false));
         double hidden = patches.hiddenAreaM2();
         if (hidden > 0.5) {
