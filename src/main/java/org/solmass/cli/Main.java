@@ -25,11 +25,21 @@ public final class Main implements Runnable {
     /** Builds the command line with every subcommand registered. */
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new Main());
+        cl.registerConverter(java.nio.file.Path.class, Main::path);
         for (Object sub : Commands.all()) cl.addSubcommand(sub);
         cl.setExecutionExceptionHandler((ex, line, parse) -> {
             if (ex instanceof InputException) {
                 line.getErr().println("solmass: " + ex.getMessage());
                 return EXIT_INPUT;
+            }
+            if (outOfMemory(ex) != null) {
+                line.getErr().println(outOfMemoryMessage());
+                return EXIT_FAILED;
+            }
+            if (ex instanceof java.io.UncheckedIOException && ex.getMessage() != null) {
+                line.getErr().println("solmass: failed: " + ex.getMessage());   // says which file and why
+                if (System.getenv("SOLMASS_DEBUG") != null) ex.printStackTrace(line.getErr());
+                return EXIT_FAILED;
             }
             line.getErr().println("solmass: failed: " + ex);
             if (System.getenv("SOLMASS_DEBUG") != null) ex.printStackTrace(line.getErr());
@@ -46,7 +56,50 @@ public final class Main implements Runnable {
 
     /** Runs a command line and returns the exit code (used by tests). */
     public static int execute(String... args) {
-        return commandLine().execute(args);
+        return execute(commandLine(), args);
+    }
+
+    /**
+     * Runs a command line; running out of memory anywhere (picocli passes errors on) becomes exit 1
+     * with {@link #outOfMemoryMessage()} instead of a stack trace. Results are not published then: the
+     * results folder keeps the previous run ({@code output.Publication}).
+     */
+    public static int execute(CommandLine cl, String... args) {
+        try {
+            return cl.execute(args);
+        } catch (OutOfMemoryError e) {
+            cl.getErr().println(outOfMemoryMessage());
+            cl.getErr().flush();
+            return EXIT_FAILED;
+        }
+    }
+
+    /** What a user can do when the Java heap ran out. */
+    static String outOfMemoryMessage() {
+        double gb = Runtime.getRuntime().maxMemory() / 1e9;
+        return String.format(java.util.Locale.ROOT, "solmass: out of memory: the Java heap (at most %.1f GB) was not enough; "
+                + "give Java more heap with SOLMASS_JAVA_OPTS=-Xmx... (the launcher's default is -Xmx8g), or a larger patch "
+                + "size (--patch, patch_m) or fewer rays; no results were written", gb);
+    }
+
+    private static OutOfMemoryError outOfMemory(Throwable t) {
+        for (int depth = 0; t != null && depth < 20; t = t.getCause(), depth++) {
+            if (t instanceof OutOfMemoryError oom) return oom;
+        }
+        return null;
+    }
+
+    /** Converts a command-line path; a NUL character (which no file name can hold) is refused in words. */
+    private static java.nio.file.Path path(String s) {
+        if (s.indexOf('\0') >= 0) {
+            throw new CommandLine.TypeConversionException("a path cannot contain a NUL character (\\0), got '"
+                    + s.replace("\0", "\\0") + "'");
+        }
+        try {
+            return java.nio.file.Path.of(s);
+        } catch (java.nio.file.InvalidPathException e) {
+            throw new CommandLine.TypeConversionException("'" + s + "' is not a valid path (" + e.getReason() + ")");
+        }
     }
 
     public static void main(String[] args) {
