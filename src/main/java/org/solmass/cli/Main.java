@@ -25,8 +25,8 @@ public final class Main implements Runnable {
     /** Builds the command line with every subcommand registered. */
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new Main());
-        cl.registerConverter(java.nio.file.Path.class, Main::path);
         for (Object sub : Commands.all()) cl.addSubcommand(sub);
+        cl.registerConverter(java.nio.file.Path.class, Main::path);   // after the subcommands: it reaches those present
         cl.setExecutionExceptionHandler((ex, line, parse) -> {
             if (ex instanceof InputException) {
                 line.getErr().println("solmass: " + ex.getMessage());
@@ -76,10 +76,12 @@ public final class Main implements Runnable {
 
     /** What a user can do when the Java heap ran out. */
     static String outOfMemoryMessage() {
-        double gb = Runtime.getRuntime().maxMemory() / 1e9;
-        return String.format(java.util.Locale.ROOT, "solmass: out of memory: the Java heap (at most %.1f GB) was not enough; "
+        long max = Runtime.getRuntime().maxMemory();
+        String heap = max >= 1e9 ? String.format(java.util.Locale.ROOT, "%.1f GB", max / 1e9)
+                : String.format(java.util.Locale.ROOT, "%.0f MB", max / 1e6);
+        return String.format(java.util.Locale.ROOT, "solmass: out of memory: the Java heap (at most %s) was not enough; "
                 + "give Java more heap with SOLMASS_JAVA_OPTS=-Xmx... (the launcher's default is -Xmx8g), or a larger patch "
-                + "size (--patch, patch_m) or fewer rays; no results were written", gb);
+                + "size (--patch, patch_m) or fewer rays; no results were written", heap);
     }
 
     private static OutOfMemoryError outOfMemory(Throwable t) {
@@ -103,6 +105,17 @@ public final class Main implements Runnable {
     }
 
     public static void main(String[] args) {
+        // a worker thread that runs out of memory ends the run with the message, not a stack trace;
+        // nothing is published then (publishing runs on the main thread, after the workers are done)
+        Thread.setDefaultUncaughtExceptionHandler((t, e) -> {
+            if (e instanceof OutOfMemoryError) {
+                System.err.println(outOfMemoryMessage());
+                System.err.flush();
+                Runtime.getRuntime().halt(EXIT_FAILED);
+            }
+            System.err.print("Exception in thread \"" + t.getName() + "\" ");
+            e.printStackTrace();
+        });
         System.exit(execute(args));
     }
 
