@@ -40,6 +40,13 @@ public final class FolderClaim implements AutoCloseable {
     /** The longest name of one path element most file systems allow (ext4, XFS, Btrfs, APFS, NTFS: 255). */
     static final int NAME_MAX_BYTES = 255;
 
+    /**
+     * Lock files this Java process holds, with their holder text. Checked before a channel is opened:
+     * on Linux, closing any channel of a file releases every lock the process holds on it, so a second
+     * claim in the same process must not even open the file.
+     */
+    private static final java.util.Map<Path, String> HELD = new java.util.concurrent.ConcurrentHashMap<>();
+
     private final Path folder;
     private final boolean created;
     private final FileChannel channel;
@@ -77,6 +84,8 @@ public final class FolderClaim implements AutoCloseable {
         } catch (IOException e) {
             throw refusal(dir, where, e);
         }
+        String heldHere = HELD.get(key(dir));
+        if (heldHere != null) throw inUse(where, dir, heldHere);
         FileChannel ch;
         try {
             ch = FileChannel.open(dir.resolve(LOCK_FILE), StandardOpenOption.CREATE, StandardOpenOption.READ,
@@ -100,8 +109,7 @@ public final class FolderClaim implements AutoCloseable {
             String holder = readHolder(ch);
             if (lock == null) {
                 ch.close();
-                throw new InputException(where, dir + " is in use by another Solmass run (" + (holder.isEmpty() ? "no details" : holder)
-                        + "); wait for it to finish or give another folder");
+                throw inUse(where, dir, holder);
             }
             if (!holder.isEmpty()) {
                 note = "an earlier run into " + dir + " did not finish (" + holder + "); its lock is taken over and its leftovers removed";
@@ -116,6 +124,20 @@ public final class FolderClaim implements AutoCloseable {
         }
     }
 
+    /** The key of a folder's lock in {@link #HELD}: its real path where it exists. */
+    private static Path key(Path dir) {
+        try {
+            return dir.toRealPath().resolve(LOCK_FILE);
+        } catch (IOException e) {
+            return dir.resolve(LOCK_FILE);
+        }
+    }
+
+    private static InputException inUse(String where, Path dir, String holder) {
+        return new InputException(where, dir + " is in use by another Solmass run (" + (holder.isEmpty() ? "no details" : holder)
+                + "); wait for it to finish or give another folder");
+    }
+
     private static FolderClaim start(Path dir, boolean created, FileChannel ch, FileLock lock, String studyLabel, String note)
             throws IOException {
         Instant now = Instant.now().truncatedTo(ChronoUnit.SECONDS);
@@ -125,6 +147,7 @@ public final class FolderClaim implements AutoCloseable {
         ch.truncate(0);
         ch.write(ByteBuffer.wrap((holder + "\n").getBytes(StandardCharsets.UTF_8)), 0);
         ch.force(true);
+        HELD.put(key(dir), holder);
         java.util.Set<String> interrupted = Publication.removeLeftovers(dir);
         return new FolderClaim(dir, created, ch, lock, runId, note, interrupted);
     }
@@ -262,9 +285,15 @@ public final class FolderClaim implements AutoCloseable {
      */
     @Override
     public void close() {
+        Path key = key(folder);
         try {
             channel.truncate(0);
             if (lock != null) lock.release();
+        } catch (IOException ignored) {
+            // the lock goes with the channel or the process anyway
+        }
+        HELD.remove(key);
+        try {
             channel.close();
             if (created && !published) {
                 Files.deleteIfExists(folder.resolve(LOCK_FILE));
