@@ -49,11 +49,12 @@ public final class AnalyseCommand implements Callable<Integer> {
         Study study = resolve();
         long t0 = System.nanoTime();
         AnalysisRun.Outcome o;
-        try (ConsoleProgress progress = new ConsoleProgress(System.err, quiet)) {
+        try (org.solmass.output.FolderClaim folder = ResultFiles.claim(study, out != null);   // before any work
+             ConsoleProgress progress = new ConsoleProgress(System.err, quiet)) {
             o = AnalysisRun.run(study, progress);
             progress.begin("write", 0);
             for (String w : o.warnings()) System.err.println("solmass: warning: " + w);
-            List<Path> files = ResultFiles.write(o);
+            List<Path> files = ResultFiles.write(o, folder);
             printSummary(o, files, AnalysisRun.seconds(t0));
         }
         return Main.EXIT_OK;

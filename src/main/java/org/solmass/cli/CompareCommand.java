@@ -8,6 +8,8 @@ import org.solmass.metrics.PatchComparison;
 import org.solmass.output.ComparedResults;
 import org.solmass.output.DeltaCsvWriter;
 import org.solmass.output.MapRenderer;
+import org.solmass.output.PatchCsvReader;
+import org.solmass.output.PublishedRun;
 import org.solmass.output.ResultsFolder;
 import org.solmass.output.RunRecord;
 import org.solmass.study.Study;
@@ -51,8 +53,11 @@ public final class CompareCommand implements Callable<Integer> {
             throw new InputException("--max-angle", "expected an angle from 0 to 90 degrees, got " + maxAngle);
         }
         Path dir = out != null ? out : b.resolve("compare");
-        RunRecord runA = RunRecord.read(a), runB = RunRecord.read(b);
-        ComparedResults c = read(a, b, runA, runB, maxAngle != null ? maxAngle : PatchMatcher.DEFAULT_MAX_ANGLE_DEG);
+        PublishedRun pa = PublishedRun.open(a), pb = PublishedRun.open(b);
+        for (String w : pa.warnings()) System.err.println("solmass: warning: " + w);
+        for (String w : pb.warnings()) System.err.println("solmass: warning: " + w);
+        RunRecord runB = pb.record();
+        ComparedResults c = read(pa, pb, maxAngle != null ? maxAngle : PatchMatcher.DEFAULT_MAX_ANGLE_DEG);
         List<Path> written = new ArrayList<>();
         Path delta = dir.resolve(DELTA);
         DeltaCsvWriter.writeDelta(delta, c);
@@ -84,10 +89,15 @@ public final class CompareCommand implements Callable<Integer> {
         return Main.EXIT_OK;
     }
 
-    /** Reads and matches the patches.csv files of two results folders; matched within half the smaller patch size. */
-    static ComparedResults read(Path folderA, Path folderB, RunRecord runA, RunRecord runB, double maxAngleDeg) {
-        return ComparedResults.read(folderA.resolve(ResultsFolder.PATCHES), folderB.resolve(ResultsFolder.PATCHES),
-                0.5 * Math.min(runA.study().patchM(), runB.study().patchM()), maxAngleDeg);
+    /**
+     * Reads (each checked against its folder's run.json) and matches the patches.csv files of two results
+     * folders; matched within half the smaller patch size.
+     */
+    static ComparedResults read(PublishedRun runA, PublishedRun runB, double maxAngleDeg) {
+        PatchCsvReader.Table ta = runA.read(ResultsFolder.PATCHES, PatchCsvReader::read);
+        PatchCsvReader.Table tb = runB.read(ResultsFolder.PATCHES, PatchCsvReader::read);
+        return ComparedResults.of(ta, runA.folder().resolve(ResultsFolder.PATCHES), tb, runB.folder().resolve(ResultsFolder.PATCHES),
+                0.5 * Math.min(runA.record().study().patchM(), runB.record().study().patchM()), maxAngleDeg);
     }
 
     /** delta-map.png: B's geometry rebuilt from its run record, patches coloured by the annual difference. */

@@ -26,10 +26,20 @@ public final class Main implements Runnable {
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new Main());
         for (Object sub : Commands.all()) cl.addSubcommand(sub);
+        cl.registerConverter(java.nio.file.Path.class, Main::path);   // after the subcommands: it reaches those present
         cl.setExecutionExceptionHandler((ex, line, parse) -> {
             if (ex instanceof InputException) {
                 line.getErr().println("solmass: " + ex.getMessage());
                 return EXIT_INPUT;
+            }
+            if (outOfMemory(ex) != null) {
+                line.getErr().println(outOfMemoryMessage());
+                return EXIT_FAILED;
+            }
+            if (ex instanceof java.io.UncheckedIOException && ex.getMessage() != null) {
+                line.getErr().println("solmass: failed: " + ex.getMessage());   // says which file and why
+                if (System.getenv("SOLMASS_DEBUG") != null) ex.printStackTrace(line.getErr());
+                return EXIT_FAILED;
             }
             line.getErr().println("solmass: failed: " + ex);
             if (System.getenv("SOLMASS_DEBUG") != null) ex.printStackTrace(line.getErr());
@@ -46,10 +56,66 @@ public final class Main implements Runnable {
 
     /** Runs a command line and returns the exit code (used by tests). */
     public static int execute(String... args) {
-        return commandLine().execute(args);
+        return execute(commandLine(), args);
+    }
+
+    /**
+     * Runs a command line; running out of memory anywhere (picocli passes errors on) becomes exit 1
+     * with {@link #outOfMemoryMessage()} instead of a stack trace. Results are not published then: the
+     * results folder keeps the previous run ({@code output.Publication}).
+     */
+    public static int execute(CommandLine cl, String... args) {
+        try {
+            return cl.execute(args);
+        } catch (OutOfMemoryError e) {
+            cl.getErr().println(outOfMemoryMessage());
+            cl.getErr().flush();
+            return EXIT_FAILED;
+        }
+    }
+
+    /** What a user can do when the Java heap ran out. */
+    static String outOfMemoryMessage() {
+        long max = Runtime.getRuntime().maxMemory();
+        String heap = max >= 1e9 ? String.format(java.util.Locale.ROOT, "%.1f GB", max / 1e9)
+                : String.format(java.util.Locale.ROOT, "%.0f MB", max / 1e6);
+        return String.format(java.util.Locale.ROOT, "solmass: out of memory: the Java heap (at most %s) was not enough; "
+                + "give Java more heap with SOLMASS_JAVA_OPTS=-Xmx... (the launcher's default is -Xmx8g), or a larger patch "
+                + "size (--patch, patch_m) or fewer rays; no results were written", heap);
+    }
+
+    private static OutOfMemoryError outOfMemory(Throwable t) {
+        for (int depth = 0; t != null && depth < 20; t = t.getCause(), depth++) {
+            if (t instanceof OutOfMemoryError oom) return oom;
+        }
+        return null;
+    }
+
+    /** Converts a command-line path; a NUL character (which no file name can hold) is refused in words. */
+    private static java.nio.file.Path path(String s) {
+        if (s.indexOf('\0') >= 0) {
+            throw new CommandLine.TypeConversionException("a path cannot contain a NUL character (\\0), got '"
+                    + s.replace("\0", "\\0") + "'");
+        }
+        try {
+            return java.nio.file.Path.of(s);
+        } catch (java.nio.file.InvalidPathException e) {
+            throw new CommandLine.TypeConversionException("'" + s + "' is not a valid path (" + e.getReason() + ")");
+        }
     }
 
     public static void main(String[] args) {
+        // a worker thread that runs out of memory ends the run with the message, not a stack trace;
+        // nothing is published then (publishing runs on the main thread, after the workers are done)
+        Thread.setDefaultUncaughtExceptionHandler((t, e) -> {
+            if (e instanceof OutOfMemoryError) {
+                System.err.println(outOfMemoryMessage());
+                System.err.flush();
+                Runtime.getRuntime().halt(EXIT_FAILED);
+            }
+            System.err.print("Exception in thread \"" + t.getName() + "\" ");
+            e.printStackTrace();
+        });
         System.exit(execute(args));
     }
 

@@ -32,7 +32,7 @@ public final class ViewCommand implements Callable<Integer> {
         ViewerLoader loader;
         ViewerActions actions;
         if (Files.isDirectory(target)) {
-            if (!Files.exists(target.resolve(RunRecord.FILE_NAME))) {
+            if (!Files.exists(target.resolve(RunRecord.FILE_NAME)) && !org.solmass.output.PublishedRun.looksIncomplete(target)) {
                 throw new InputException(target.toString(), "not a results folder: no " + RunRecord.FILE_NAME
                         + " (run 'solmass analyse' first, or give a study file)");
             }

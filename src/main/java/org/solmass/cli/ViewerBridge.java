@@ -12,6 +12,7 @@ import org.solmass.model.MassingModel;
 import org.solmass.output.MonthHourCsvReader;
 import org.solmass.output.PatchCsvReader;
 import org.solmass.output.PatchCsvWriter;
+import org.solmass.output.PublishedRun;
 import org.solmass.output.ComparedResults;
 import org.solmass.output.ResultsFolder;
 import org.solmass.output.RunRecord;
@@ -55,28 +56,35 @@ final class ViewerBridge implements ViewerActions {
 
     /** Runs the study, writes its results folder and returns what the viewer shows. */
     ViewerData analyse(ProgressSink progress, BooleanSupplier cancelled) {
-        AnalysisRun.Outcome o = AnalysisRun.run(study, new Progress(progress, cancelled));
-        ResultFiles.write(o);
+        AnalysisRun.Outcome o;
+        try (org.solmass.output.FolderClaim folder = ResultFiles.claim(study, false)) {
+            o = AnalysisRun.run(study, new Progress(progress, cancelled));
+            ResultFiles.write(o, folder);
+        }
         last = o;
         shown = o.table();
         return data(o.study(), o.model(), o.patches(), o.table(), o.result().monthHourWm2(), o.weather(), o.warnings());
     }
 
-    /** Reads a finished results folder (run.json, patches.csv, month-hour.csv if present). */
+    /**
+     * Reads a finished results folder (run.json, patches.csv, month-hour.csv when the run wrote it),
+     * each file checked against run.json's manifest ({@link PublishedRun}).
+     */
     static ViewerData fromFolder(Path folder, ViewerBridge[] bridgeOut) {
-        RunRecord run = RunRecord.read(folder);
+        PublishedRun published = PublishedRun.open(folder);
+        RunRecord run = published.record();
         Study study = run.study();
         if (!Files.exists(study.model().file())) {
             throw new InputException(folder.resolve(RunRecord.FILE_NAME).toString(),
                     "the model " + study.model().file() + " these results were made from is missing");
         }
-        List<String> warnings = new ArrayList<>();
+        List<String> warnings = new ArrayList<>(published.warnings());
         if (!run.modelUnchanged()) {
             warnings.add("the model " + study.model().file() + " changed since these results were made; geometry may not match");
         }
         MassingModel model = AnalysisRun.loadModel(study).model();
         PatchSet ps = Patcher.build(model, new PatchOptions(study.patchM(), AnalysisRun.analysedBlocks(study, model), false));
-        PatchCsvReader.Table csv = PatchCsvReader.read(folder.resolve(ResultsFolder.PATCHES));
+        PatchCsvReader.Table csv = published.read(ResultsFolder.PATCHES, PatchCsvReader::read);
         ResultTable table = new ResultTable(ps.patches());
         int n = ps.patchCount(), missing = 0;
         int[] row = new int[n];
@@ -91,9 +99,8 @@ final class ViewerBridge implements ViewerActions {
             table.put(csv.def(col), v);
         }
         float[] monthHour = null;
-        Path mh = folder.resolve(ResultsFolder.MONTH_HOUR);
-        if (Files.exists(mh)) {
-            Map<String, float[]> byId = MonthHourCsvReader.read(mh);
+        if (published.has(ResultsFolder.MONTH_HOUR)) {
+            Map<String, float[]> byId = published.read(ResultsFolder.MONTH_HOUR, MonthHourCsvReader::read);
             monthHour = new float[n * MonthHour.SLOTS];
             java.util.Arrays.fill(monthHour, Float.NaN);
             for (Patch p : ps.patches()) {
@@ -114,8 +121,8 @@ final class ViewerBridge implements ViewerActions {
      * matching is {@code compare}'s.
      */
     static ViewerData withDifferences(ViewerData b, Path folderA, Path folderB) {
-        RunRecord runA = RunRecord.read(folderA), runB = RunRecord.read(folderB);
-        ComparedResults c = CompareCommand.read(folderA, folderB, runA, runB, org.solmass.metrics.PatchMatcher.DEFAULT_MAX_ANGLE_DEG);
+        PublishedRun runA = PublishedRun.open(folderA), runB = PublishedRun.open(folderB);
+        ComparedResults c = CompareCommand.read(runA, runB, org.solmass.metrics.PatchMatcher.DEFAULT_MAX_ANGLE_DEG);
         ResultTable t = b.table().copy();
         int n = b.patches().size();
         for (Column q : c.comparison().quantities()) {
@@ -127,8 +134,9 @@ final class ViewerBridge implements ViewerActions {
             t.put(PatchComparison.delta(q), v);
         }
         List<String> warnings = new ArrayList<>(b.warnings());
+        warnings.addAll(runA.warnings());
         warnings.add(c.matched() + " of " + n + " patches matched with " + folderA);
-        return new ViewerData(b.title() + " vs " + runA.study().name(), b.model(), b.blockAnalysed(), b.patches(), t,
+        return new ViewerData(b.title() + " vs " + runA.record().study().name(), b.model(), b.blockAnalysed(), b.patches(), t,
                 b.monthHourWm2(), b.climate(), b.sunPath(), b.latitudeDeg(), b.longitudeDeg(), b.zone(), warnings);
     }
 

@@ -20,15 +20,13 @@ import java.nio.file.StandardOpenOption;
  * Writes a file so that readers see either the old or the complete new content, never a half-written
  * file: the content goes to a temporary file in the target's folder, is flushed and fsynced, then moved
  * over the target with an atomic rename (where the file system cannot, a plain replacing move). If
- * the writer fails, the temporary file is deleted and the old file stays as it was.
+ * the writer fails, the temporary file is deleted and the old file stays as it was. The temporary file
+ * is created with the default permissions (0666 less the user's umask), not the 0600 of
+ * {@link Files#createTempFile}, so the file keeps them after the move.
+ * A whole results folder is published by {@link Publication}, on top of this.
  */
 public final class AtomicFiles {
-    /**
-     * Test hook (DEVELOPERS.md, "Testing a killed run"): the system property
-     * {@code solmass.test.pauseBeforeMoveMs} makes every write wait that long with its complete
-     * temporary file in place before the move, so a test can kill the process mid-write. Unset: 0.
-     */
-    static final long PAUSE_BEFORE_MOVE_MS = Long.getLong("solmass.test.pauseBeforeMoveMs", 0L);
+    private static final java.security.SecureRandom RANDOM = new java.security.SecureRandom();
 
     private AtomicFiles() {}
 
@@ -55,14 +53,13 @@ public final class AtomicFiles {
         Path tmp = null;
         try {
             Files.createDirectories(dir);
-            tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
+            tmp = createTemp(dir, abs.getFileName().toString());
             try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
                 OutputStream out = new BufferedOutputStream(Channels.newOutputStream(ch), 1 << 16);
                 body.write(out);
                 out.flush();
                 ch.force(true);
             }
-            if (PAUSE_BEFORE_MOVE_MS > 0) pauseForTest();
             try {
                 Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE);
             } catch (AtomicMoveNotSupportedException e) {
@@ -99,16 +96,24 @@ public final class AtomicFiles {
         write(target, out -> out.write(text.getBytes(StandardCharsets.UTF_8)));
     }
 
-    private static void pauseForTest() {
-        try {
-            Thread.sleep(PAUSE_BEFORE_MOVE_MS);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
+    /**
+     * Creates a new empty file {@code .NAME.<random>.tmp} in {@code dir} with the default permissions
+     * (the user's umask applies), unlike {@link Files#createTempFile}, which makes it 0600.
+     */
+    static Path createTemp(Path dir, String name) throws IOException {
+        for (int attempt = 0; ; attempt++) {
+            Path tmp = dir.resolve("." + name + "." + Long.toUnsignedString(RANDOM.nextLong(), 36) + ".tmp");
+            try {
+                Files.newByteChannel(tmp, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE).close();
+                return tmp;
+            } catch (java.nio.file.FileAlreadyExistsException e) {
+                if (attempt > 100) throw e;
+            }
         }
     }
 
-    /** Makes the rename durable where the platform allows opening a folder (Linux); ignored elsewhere. */
-    private static void syncFolder(Path dir) {
+    /** Makes renames and deletions in a folder durable where the platform allows opening a folder (Linux); ignored elsewhere. */
+    static void syncFolder(Path dir) {
         try (FileChannel ch = FileChannel.open(dir, StandardOpenOption.READ)) {
             ch.force(true);
         } catch (IOException | UnsupportedOperationException ignored) {

@@ -15,9 +15,12 @@ import java.nio.file.Path;
  */
 public record ComparedResults(PatchCsvReader.Table a, PatchCsvReader.Table b, PatchComparison comparison) {
 
-    /** Reads and matches two patches.csv files; refuses two files with no result column in common. */
-    public static ComparedResults read(Path csvA, Path csvB, double maxDistanceM, double maxAngleDeg) {
-        PatchCsvReader.Table ta = PatchCsvReader.read(csvA), tb = PatchCsvReader.read(csvB);
+    /**
+     * Matches two patches.csv tables (read from {@code csvA} and {@code csvB}, named in messages);
+     * refuses two tables with no result column in common.
+     */
+    public static ComparedResults of(PatchCsvReader.Table ta, Path csvA, PatchCsvReader.Table tb, Path csvB,
+                                     double maxDistanceM, double maxAngleDeg) {
         PatchComparison c = PatchComparison.of(xyz(ta, "x", "y", "z"), xyz(ta, "nx", "ny", "nz"), ta.resultColumns(),
                 xyz(tb, "x", "y", "z"), xyz(tb, "nx", "ny", "nz"), tb.resultColumns(), maxDistanceM, maxAngleDeg);
         if (c.quantities().isEmpty()) {

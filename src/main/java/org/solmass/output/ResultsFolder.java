@@ -17,12 +17,15 @@ import java.util.List;
 /**
  * Writes a whole results folder in one call: patches.csv, month-hour.csv (when the study asks and the
  * table is given), zones.csv (when the PV metric ran), summary.json, map.png (when the study asks),
- * patches.gltf (when the study asks) and, last, run.json, so a folder with a run.json is complete.
- * Every file is written atomically ({@link AtomicFiles}).
+ * patches.gltf (when the study asks) and, last, run.json with the manifest. The outputs are staged
+ * complete and published together ({@link Publication}); readers check them ({@link PublishedRun}).
  */
 public final class ResultsFolder {
     public static final String PATCHES = "patches.csv", SUMMARY = "summary.json", MAP = "map.png",
             MONTH_HOUR = "month-hour.csv";
+    /** Every output a run may write (run.json apart): what a results folder holds. */
+    public static final List<String> OUTPUT_NAMES = List.of(PATCHES, MONTH_HOUR, ZoneCsvWriter.FILE_NAME, SUMMARY, MAP,
+            GltfWriter.FILE_NAME);
     /** The column the map, glTF colours and the thresholds use. */
     public static final Column MAIN_COLUMN = IrradiationColumns.ANNUAL;
 
@@ -55,53 +58,52 @@ public final class ResultsFolder {
         }
     }
 
-    /** Writes the files and returns their paths in the order written. */
+    /** Claims the study's output folder, writes the files and returns their paths in the order written. */
     public static List<Path> write(Results r) {
+        Study s = r.study();
+        try (FolderClaim claim = FolderClaim.claim(s.outputs().folder(), "outputs.folder", s.source(), s.name())) {
+            return write(r, claim);
+        }
+    }
+
+    /** Writes the files into a folder already claimed (the study's output folder) and returns their paths in the order written. */
+    public static List<Path> write(Results r, FolderClaim claim) {
         Study.Outputs o = r.study().outputs();
-        Path dir = o.folder();
-        List<Path> written = new ArrayList<>();
-        Path patches = dir.resolve(PATCHES);
-        PatchCsvWriter.write(patches, r.table());
-        written.add(patches);
+        if (!claim.folder().equals(o.folder().toAbsolutePath().normalize())) {
+            throw new IllegalArgumentException("the claimed folder " + claim.folder() + " is not the study's " + o.folder());
+        }
+        try (Publication pub = new Publication(claim)) {
+            stage(r, o, pub);
+            return pub.publish(r.run());
+        }
+    }
+
+    private static void stage(Results r, Study.Outputs o, Publication pub) {
+        pub.write(PATCHES, p -> PatchCsvWriter.write(p, r.table()));
         if (o.monthHourCsv() && r.monthHourWm2() != null) {
-            Path mh = dir.resolve(MONTH_HOUR);
-            MonthHourCsvWriter.write(mh, r.table().patches(), r.monthHourWm2());
-            written.add(mh);
+            pub.write(MONTH_HOUR, p -> MonthHourCsvWriter.write(p, r.table().patches(), r.monthHourWm2()));
         }
         PvZones.Result pv = r.metrics().find(PvZonesMetric.Found.class).map(PvZonesMetric.Found::zones).orElse(null);
-        if (pv != null) {
-            Path zones = dir.resolve(ZoneCsvWriter.FILE_NAME);
-            ZoneCsvWriter.write(zones, pv.zones());
-            written.add(zones);
-        }
-        Path summary = dir.resolve(SUMMARY);
+        if (pv != null) pub.write(ZoneCsvWriter.FILE_NAME, p -> ZoneCsvWriter.write(p, pv.zones()));
         SummaryWriter.Spec spec = SummaryWriter.Spec.standard(o.thresholdsKwhM2()).with(r.metrics().summaryColumns());
         List<String> texts = new ArrayList<>(r.cautions());
         texts.addAll(r.metrics().notes());
         texts.addAll(r.notes());
         com.fasterxml.jackson.databind.node.ObjectNode tree = SummaryWriter.toTree(r.table(), spec, r.run(), texts);
         for (Metric.Findings f : r.metrics().findings()) if (f.summarySection() != null) tree.set(f.summaryKey(), f.summarySection());
-        AtomicFiles.writeString(summary, org.solmass.study.StudyWriter.pretty(tree));
-        written.add(summary);
+        pub.write(SUMMARY, p -> AtomicFiles.writeString(p, org.solmass.study.StudyWriter.pretty(tree)));
         if (o.map() && !r.table().names().isEmpty()) {
             Column col = r.table().has(MAIN_COLUMN.name()) ? MAIN_COLUMN : r.table().columns().get(0);
-            Path map = dir.resolve(MAP);
             List<double[]> outlines = new ArrayList<>();
             if (pv != null) for (PvZones.Zone z : pv.zones()) outlines.addAll(z.outlines());
-            MapRenderer.write(map, r.model(), r.study().model().analysedMask(r.model().blockNames()), r.table().patches(),
+            pub.write(MAP, p -> MapRenderer.write(p, r.model(), r.study().model().analysedMask(r.model().blockNames()), r.table().patches(),
                     r.table().column(col.name()), col.label(), col.unit().symbol(),
                     MapRenderer.Options.of(o.mapWidthPx(), o.mapHeightPx(), r.study().name()),
-                    new MapRenderer.Extras(false, outlines, "PV roof zone (zones.csv)"));
-            written.add(map);
+                    new MapRenderer.Extras(false, outlines, "PV roof zone (zones.csv)")));
         }
         if (o.gltf() && r.table().has(MAIN_COLUMN.name()) && r.table().size() > 0) {
-            Path gltf = dir.resolve(GltfWriter.FILE_NAME);
-            GltfWriter.write(gltf, r.table(), MAIN_COLUMN.name(), "Solmass " + r.run().solmassVersion(), r.cautions());
-            written.add(gltf);
+            pub.write(GltfWriter.FILE_NAME, p -> GltfWriter.write(p, r.table(), MAIN_COLUMN.name(),
+                    "Solmass " + r.run().solmassVersion(), r.cautions()));
         }
-        Path run = dir.resolve(RunRecord.FILE_NAME);
-        r.run().write(run);
-        written.add(run);
-        return written;
     }
 }

@@ -100,12 +100,18 @@ public record RunRecord(String solmassVersion, Study study, String modelSha256, 
         return o;
     }
 
-    /** Writes run.json atomically. */
+    /**
+     * Writes a run record alone (without the manifest of a published results folder, which
+     * {@link Publication} adds).
+     */
     public void write(Path file) {
         AtomicFiles.writeString(file, StudyWriter.pretty(toTree()));
     }
 
-    /** Reads a run.json (or the folder holding one). */
+    /**
+     * Reads a run.json (or the folder holding one) without checking the folder's files; readers of
+     * results use {@link PublishedRun#open}.
+     */
     public static RunRecord read(Path fileOrFolder) {
         Path file = Files.isDirectory(fileOrFolder) ? fileOrFolder.resolve(FILE_NAME) : fileOrFolder;
         JsonNode n;
@@ -116,6 +122,11 @@ public record RunRecord(String solmassVersion, Study study, String modelSha256, 
         } catch (IOException e) {
             throw new InputException(file.toString(), "cannot read the run record: " + e.getMessage(), e);
         }
+        return fromTree(n, file);
+    }
+
+    /** A run record from the parsed run.json {@code file}. */
+    static RunRecord fromTree(JsonNode n, Path file) {
         String w = file.toString();
         if (n == null || !n.isObject()) throw new InputException(w, "expected a JSON object");
         JsonNode studyNode = require(n, "study", w);

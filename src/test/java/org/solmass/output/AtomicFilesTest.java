@@ -34,6 +34,15 @@ class AtomicFilesTest {
         }
     }
 
+    /** POSIX open(2) creates files 0666 less the umask; a written file must get that, not a temporary file's 0600. */
+    @Test
+    void writtenFilesHaveThePermissionsOfAPlainNewFileNotOfATemporaryFile() throws Exception {
+        Path plain = Files.createFile(dir.resolve("plain"));
+        Path f = dir.resolve("patches.csv");
+        AtomicFiles.writeString(f, "x");
+        assertEquals(Files.getPosixFilePermissions(plain), Files.getPosixFilePermissions(f));
+    }
+
     @Test
     void writeReplacesAndCreatesFolders() throws Exception {
         Path f = dir.resolve("a/b/summary.json");

@@ -51,6 +51,43 @@ class ResultsFolderTest {
     }
 
     @Test
+    void readersRefuseAnIncompleteFolderAndWarnAboutARunJsonWithoutManifest() throws Exception {
+        SyntheticScene s = SyntheticScene.district(4.0);
+        Path obj = Files.writeString(dir.resolve("district.obj"), "# stands in for the model file of this invented scene\n");
+        Path out = dir.resolve("out");
+        Study study = StudyReader.read(null, new StudyOverrides().model(obj).latitude(47.0).longitude(8.0).zone("+01:00")
+                .context(List.of("Neighbour east", "Neighbour south")).out(out).gltf(false));
+        ResultTable t = new ResultTable(s.patches);
+        t.put(org.solmass.metrics.ColumnCatalogue.of("annual_kwh_m2"), s.values());
+        RunRecord run = RunRecord.of("test", study, "average-days", Map.of(), Map.of(), Instant.EPOCH);
+        ResultsFolder.write(new ResultsFolder.Results(study, s.model(), t, null, run, List.of("invented scene")));
+
+        PublishedRun ok = PublishedRun.open(out);
+        assertTrue(ok.warnings().isEmpty());
+        assertTrue(ok.has("patches.csv") && !ok.has("patches.gltf"));
+        assertEquals(s.patches.size(), ok.read("patches.csv", PatchCsvReader::read).size());
+
+        // run.json of a Solmass before manifests: read, with a warning
+        com.fasterxml.jackson.databind.node.ObjectNode tree = (com.fasterxml.jackson.databind.node.ObjectNode)
+                new ObjectMapper().readTree(out.resolve("run.json").toFile());
+        tree.remove(List.of("run_id", "outputs"));
+        Files.writeString(out.resolve("run.json"), tree.toString());
+        PublishedRun legacy = PublishedRun.open(out);
+        assertEquals(1, legacy.warnings().size());
+        assertTrue(legacy.warnings().get(0).endsWith("was written by a Solmass without run manifests: its files cannot be checked "
+                + "to belong to one run; run analyse again to be sure"), legacy.warnings().get(0));
+
+        // outputs without run.json: incomplete; an empty folder: no results folder
+        Files.delete(out.resolve("run.json"));
+        InputException e = assertThrows(InputException.class, () -> PublishedRun.open(out));
+        assertEquals(out + ": results folder is incomplete: the run that wrote it was interrupted (no run.json beside its files); "
+                + "run analyse again", e.getMessage());
+        Path empty = Files.createDirectory(dir.resolve("empty"));
+        e = assertThrows(InputException.class, () -> PublishedRun.open(empty));
+        assertTrue(e.getMessage().endsWith("no run record here (is this a Solmass results folder?)"), e.getMessage());
+    }
+
+    @Test
     void unknownBlockNamesInTheStudyAreNamed() {
         Study study = StudyReader.read(null, new StudyOverrides().model(Path.of("m.obj")).latitude(1.0).longitude(1.0)
                 .zone("UTC").analyse(List.of("A", "Z")));

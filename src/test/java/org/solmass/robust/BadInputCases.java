@@ -15,6 +15,17 @@ final class BadInputCases {
 
     static final Map<String, Case> CASES = new LinkedHashMap<>();
 
+    /** Prepares a case's folder beyond its files; what it returns is closed after the run. */
+    interface Setup {
+        AutoCloseable prepare(java.nio.file.Path dir) throws Exception;
+    }
+
+    /** Cases that need more than files: a read-only folder, a folder held by another run. */
+    static final Map<String, Setup> SETUP = new LinkedHashMap<>();
+
+    /** Cases that only fail for a user without root's rights (root may write into a read-only folder). */
+    static final java.util.Set<String> NOT_AS_ROOT = new java.util.HashSet<>();
+
     private BadInputCases() {}
 
     private static final String MODEL = BadInputCatalogueTest.TWO_BOXES;
@@ -119,6 +130,31 @@ final class BadInputCases {
         flags("flag-unknown-unit", withSite("--unit", "furlong"));
         flags("flag-unknown-up-axis", withSite("--up", "x"));
         flags("flag-threads-negative", withSite("--threads", "-2"));
+
+        // the output folder, checked before the work (errors before work; the folder held by one run)
+        CASES.put("out-is-a-file", new Case(Map.of("m.obj", MODEL, "out", "a file"), withSite()));
+        CASES.put("out-parent-is-a-file", new Case(Map.of("m.obj", MODEL, "f", "a file"), outAt("@f/out")));
+        study("out-is-the-study-file", studyJson(GOOD_SITE, ",\n  \"outputs\": {\"folder\": \"s.json\"}"));
+        CASES.put("out-root", new Case(Map.of("m.obj", MODEL), outAt("/")));
+        CASES.put("out-under-proc", new Case(Map.of("m.obj", MODEL), outAt("/proc/self/results")));
+        CASES.put("out-name-too-long", new Case(Map.of("m.obj", MODEL), outAt("@" + "a".repeat(300))));
+        CASES.put("out-nul-character", new Case(Map.of("m.obj", MODEL), outAt("@out\0x")));
+        CASES.put("out-read-only-folder", new Case(Map.of("m.obj", MODEL), outAt("@ro")));
+        SETUP.put("out-read-only-folder", dir -> {
+            java.nio.file.Path ro = java.nio.file.Files.createDirectory(dir.resolve("ro"));
+            java.nio.file.Files.setPosixFilePermissions(ro, java.nio.file.attribute.PosixFilePermissions.fromString("r-xr-xr-x"));
+            return () -> java.nio.file.Files.setPosixFilePermissions(ro, java.nio.file.attribute.PosixFilePermissions.fromString("rwxr-xr-x"));
+        });
+        NOT_AS_ROOT.add("out-read-only-folder");
+        CASES.put("out-in-use", new Case(Map.of("m.obj", MODEL), withSite()));
+        SETUP.put("out-in-use", dir -> org.solmass.output.FolderClaim.claim(dir.resolve("out"), "--out", null, "another study"));
+    }
+
+    /** analyse with the two-box model and the invented site into {@code out}. */
+    private static String[] outAt(String out) {
+        List<String> a = new ArrayList<>(List.of("analyse", "-q", "--model", "@m.obj", "--out", out));
+        a.addAll(Arrays.asList(SITE));
+        return a.toArray(String[]::new);
     }
 
     /** A monthly-means table of the invented Vallmora example with January's GHI replaced. */
