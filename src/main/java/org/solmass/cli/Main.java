@@ -1,8 +1,12 @@
 package org.solmass.cli;
 
 import org.solmass.InputException;
+import org.solmass.TextInput;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+
+import java.nio.file.InvalidPathException;
+import java.nio.file.Path;
 
 /**
  * Entry point of the {@code solmass} command. Each stage of the pipeline has a thin subcommand here;
@@ -26,6 +30,7 @@ public final class Main implements Runnable {
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new Main());
         for (Object sub : Commands.all()) cl.addSubcommand(sub);
+        cl.registerConverter(Path.class, Main::path);   // after the subcommands: it reaches them all
         cl.setExecutionExceptionHandler((ex, line, parse) -> {
             if (ex instanceof InputException) {
                 line.getErr().println("solmass: " + ex.getMessage());
@@ -42,6 +47,15 @@ public final class Main implements Runnable {
             return EXIT_INPUT;
         });
         return cl;
+    }
+
+    /** A path flag's value; a text that cannot be a path (a NUL character) is bad usage naming the flag. */
+    static Path path(String text) {
+        try {
+            return Path.of(text);
+        } catch (InvalidPathException e) {
+            throw new CommandLine.TypeConversionException(TextInput.invalidPath(text, e));
+        }
     }
 
     /** Runs a command line and returns the exit code (used by tests). */
