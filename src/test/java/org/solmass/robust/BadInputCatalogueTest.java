@@ -54,6 +54,7 @@ class BadInputCatalogueTest {
     void catalogueCaseGivesItsMessageAndExitCode2(String id) throws IOException {
         BadInputCases.Case c = BadInputCases.CASES.get(id);
         for (Map.Entry<String, String> f : c.files().entrySet()) Files.writeString(dir.resolve(f.getKey()), f.getValue());
+        for (Map.Entry<String, byte[]> f : c.bytes().entrySet()) Files.write(dir.resolve(f.getKey()), f.getValue());
         List<String> args = new ArrayList<>();
         for (String a : c.args()) args.add(a.replace("@", dir.toString() + "/"));
         StringWriter err = new StringWriter();
