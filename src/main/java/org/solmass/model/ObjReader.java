@@ -63,7 +63,7 @@ public final class ObjReader {
 
     /**
      * Reads OBJ bytes as {@link #load(Path, ModelOptions)} reads a file's (encoding, line length);
-     * {@code displayName} names the source in messages and the default block.
+     * {@code displayName} names the source in messages and the default block. The stream is not closed.
      */
     public static Result load(InputStream in, String displayName, ModelOptions options) throws IOException {
         return parse(new TextInput.Lines(in, displayName, "an OBJ model"), displayName, null, options);
