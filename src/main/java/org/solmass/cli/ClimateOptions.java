@@ -1,6 +1,7 @@
 package org.solmass.cli;
 
 import org.solmass.InputException;
+import org.solmass.TextInput;
 import org.solmass.climate.ClimateSpec;
 import org.solmass.climate.TimeBaseChoice;
 import org.solmass.study.Study;
@@ -37,6 +38,7 @@ public final class ClimateOptions {
 
     /** What the climate stage reads, from the flags alone (errors name the flag). */
     ClimateSpec spec() {
+        if (climate != null) TextInput.path(climate, "--climate");   // a NUL character: an error naming the flag
         ClimateSpec spec = ClimateSpec.parse(climate);
         if (spec.kind() == ClimateSpec.Kind.FILE && !Files.isRegularFile(spec.file())) {
             throw new InputException("--climate", "no such file '" + climate + "' (expected clear-sky or a climate CSV file)");

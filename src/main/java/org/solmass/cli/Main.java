@@ -1,8 +1,12 @@
 package org.solmass.cli;
 
 import org.solmass.InputException;
+import org.solmass.TextInput;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+
+import java.nio.file.InvalidPathException;
+import java.nio.file.Path;
 
 /**
  * Entry point of the {@code solmass} command. Each stage of the pipeline has a thin subcommand here;
@@ -26,7 +30,7 @@ public final class Main implements Runnable {
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new Main());
         for (Object sub : Commands.all()) cl.addSubcommand(sub);
-        cl.registerConverter(java.nio.file.Path.class, Main::path);   // after the subcommands: it reaches those present
+        cl.registerConverter(Path.class, Main::path);   // after the subcommands: it reaches them all
         cl.setExecutionExceptionHandler((ex, line, parse) -> {
             if (ex instanceof InputException) {
                 line.getErr().println("solmass: " + ex.getMessage());
@@ -52,6 +56,15 @@ public final class Main implements Runnable {
             return EXIT_INPUT;
         });
         return cl;
+    }
+
+    /** A path flag's value; a text that cannot be a path (a NUL character) is bad usage naming the flag. */
+    static Path path(String text) {
+        try {
+            return Path.of(text);
+        } catch (InvalidPathException e) {
+            throw new CommandLine.TypeConversionException(TextInput.invalidPath(text, e));
+        }
     }
 
     /** Runs a command line and returns the exit code (used by tests). */
@@ -92,18 +105,6 @@ public final class Main implements Runnable {
     }
 
     /** Converts a command-line path; a NUL character (which no file name can hold) is refused in words. */
-    private static java.nio.file.Path path(String s) {
-        if (s.indexOf('\0') >= 0) {
-            throw new CommandLine.TypeConversionException("a path cannot contain a NUL character (\\0), got '"
-                    + s.replace("\0", "\\0") + "'");
-        }
-        try {
-            return java.nio.file.Path.of(s);
-        } catch (java.nio.file.InvalidPathException e) {
-            throw new CommandLine.TypeConversionException("'" + s + "' is not a valid path (" + e.getReason() + ")");
-        }
-    }
-
     public static void main(String[] args) {
         // a worker thread that runs out of memory ends the run with the message, not a stack trace;
         // nothing is published then (publishing runs on the main thread, after the workers are done)

@@ -1,13 +1,13 @@
 package org.solmass.model;
 
 import org.solmass.InputException;
+import org.solmass.TextInput;
 
 import java.io.BufferedReader;
 import java.io.IOException;
+import java.io.InputStream;
 import java.io.Reader;
 import java.io.StringReader;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -47,10 +47,13 @@ public final class ObjReader {
         return load(file, options).model();
     }
 
-    /** Reads an OBJ file with its warnings. */
+    /**
+     * Reads an OBJ file with its warnings. The file must be a regular file of UTF-8 text (a UTF-8 or
+     * UTF-16 byte-order mark is honoured) with lines of at most {@link TextInput#MAX_LINE_BYTES} bytes.
+     */
     public static Result load(Path file, ModelOptions options) {
-        try (BufferedReader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
-            return parse(r, file.toString(), file, options);
+        try (TextInput.Lines lines = TextInput.Lines.open(file, "file not found, expected an OBJ model", "an OBJ model")) {
+            return parse(lines, file.toString(), file, options);
         } catch (NoSuchFileException e) {
             throw new InputException(file.toString(), "file not found, expected an OBJ model", e);
         } catch (IOException e) {
@@ -58,10 +61,18 @@ public final class ObjReader {
         }
     }
 
+    /**
+     * Reads OBJ bytes as {@link #load(Path, ModelOptions)} reads a file's (encoding, line length);
+     * {@code displayName} names the source in messages and the default block. The stream is not closed.
+     */
+    public static Result load(InputStream in, String displayName, ModelOptions options) throws IOException {
+        return parse(new TextInput.Lines(in, displayName, "an OBJ model"), displayName, null, options);
+    }
+
     /** Parses OBJ text; {@code displayName} names the source in messages and the default block. */
     public static Result parse(String text, String displayName, ModelOptions options) {
         try {
-            return parse(new BufferedReader(new StringReader(text)), displayName, null, options);
+            return parse(new BufferedReader(new StringReader(text))::readLine, displayName, null, options);
         } catch (IOException e) {
             throw new IllegalStateException(e); // a StringReader does not fail
         }
@@ -70,10 +81,10 @@ public final class ObjReader {
     /** Parses OBJ text from a reader; {@code displayName} names the source in messages. */
     public static Result parse(Reader reader, String displayName, ModelOptions options) throws IOException {
         BufferedReader br = reader instanceof BufferedReader b ? b : new BufferedReader(reader);
-        return parse(br, displayName, null, options);
+        return parse(br::readLine, displayName, null, options);
     }
 
-    private static Result parse(BufferedReader r, String name, Path source, ModelOptions options)
+    private static Result parse(TextInput.LineSource r, String name, Path source, ModelOptions options)
             throws IOException {
         if (options == null) options = ModelOptions.defaults();
         return new Parser(name, source, options).run(r);
@@ -117,7 +128,7 @@ public final class ObjReader {
             this.currentBlock = defaultBlockName(name);
         }
 
-        Result run(BufferedReader r) throws IOException {
+        Result run(TextInput.LineSource r) throws IOException {
             String line;
             StringBuilder cont = null;
             int startLine = 0;
@@ -128,6 +139,10 @@ public final class ObjReader {
                 while (end > 0 && line.charAt(end - 1) <= ' ') end--;
                 if (end > 0 && line.charAt(end - 1) == '\\') {
                     if (cont == null) { cont = new StringBuilder(); startLine = lineNo; }
+                    if (cont.length() + end > TextInput.MAX_LINE_BYTES) {
+                        throw new InputException(at(startLine), "statement continued (trailing \\) to over "
+                                + TextInput.MAX_LINE_BYTES + " characters, the most one line may have");
+                    }
                     cont.append(line, 0, end - 1).append(' ');
                     continue;
                 }

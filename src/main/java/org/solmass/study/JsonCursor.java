@@ -2,7 +2,10 @@ package org.solmass.study;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import org.solmass.InputException;
+import org.solmass.TextInput;
 
+import java.nio.file.InvalidPathException;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.LinkedHashSet;
@@ -71,6 +74,18 @@ final class JsonCursor {
         String s = n.asText().trim();
         if (s.isEmpty()) throw error(key, "expected a non-empty text value, got \"\"");
         return s;
+    }
+
+    /**
+     * The value {@code text} of {@code key} as a path resolved against {@code base}; a text that cannot
+     * be a path (a NUL character) is an error naming the key.
+     */
+    Path path(String key, String text, Path base) {
+        try {
+            return base.resolve(text).normalize();
+        } catch (InvalidPathException e) {
+            throw error(key, TextInput.invalidPath(text, e));
+        }
     }
 
     /** Optional text, may be empty; absent gives {@code dflt}. */

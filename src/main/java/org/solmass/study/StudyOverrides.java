@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import org.solmass.TextInput;
 
 import java.nio.file.Path;
 import java.util.Collections;
@@ -88,7 +89,7 @@ public final class StudyOverrides {
     public StudyOverrides climate(String source) {
         if (source == null) return this;
         return set("--climate", "climate.source",
-                source.equalsIgnoreCase(StudyReader.CLEAR_SKY) ? StudyReader.CLEAR_SKY : Path.of(source));
+                source.equalsIgnoreCase(StudyReader.CLEAR_SKY) ? StudyReader.CLEAR_SKY : TextInput.path(source, "--climate"));
     }
 
     public StudyOverrides climateFormat(String format) { return set("--climate-format", "climate.format", format); }

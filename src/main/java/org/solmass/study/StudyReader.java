@@ -9,6 +9,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.solmass.InputException;
+import org.solmass.TextInput;
 import org.solmass.climate.ClimateSpec;
 import org.solmass.climate.TimeBaseChoice;
 import org.solmass.model.LengthUnit;
@@ -22,7 +23,6 @@ import org.solmass.study.Study.Outputs;
 import org.solmass.sun.Site;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.time.DateTimeException;
@@ -42,6 +42,14 @@ import java.util.function.Function;
 public final class StudyReader {
     /** The value of {@code climate.source} that selects the embedded clear-sky model. */
     public static final String CLEAR_SKY = "clear-sky";
+
+    /**
+     * The largest study file read (16 MiB). A study is a few KB of JSON; even a per-block albedo map
+     * for 100,000 blocks (about 30 bytes each) is 3 MB. The bound keeps a wrong file (a device, a
+     * model or a weather file named as the study) from being read whole into memory. One line may be
+     * as long as the file: minified JSON is a study on one line.
+     */
+    public static final int MAX_FILE_BYTES = 16 << 20;
 
     private static final ObjectMapper MAPPER = new ObjectMapper()
             .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
@@ -217,7 +225,7 @@ public final class StudyReader {
         if (raw != null && !raw.isObject()) throw c.error("climate", "expected an object { \"source\": ... } or a text value, got " + JsonCursor.shown(raw));
         JsonCursor k = c.child("climate", raw == null ? JsonNodeFactory.instance.objectNode() : raw);
         String source = k.string("source", CLEAR_SKY);
-        Path file = source.equalsIgnoreCase(CLEAR_SKY) ? null : base.resolve(source).normalize();
+        Path file = source.equalsIgnoreCase(CLEAR_SKY) ? null : k.path("source", source, base);
         ClimateSpec.Format format = k.choice("format", ClimateSpec.Format.values(), ClimateSpec.Format::label,
                 ClimateSpec.Format.AUTO);
         Climate climate = new Climate(file, file == null ? ClimateSpec.Format.AUTO : format,   // format is moot for clear-sky
@@ -260,12 +268,7 @@ public final class StudyReader {
     }
 
     private static Path path(JsonCursor o, String key, String dflt, Path base) {
-        String s = o.string(key, dflt);
-        try {
-            return base.resolve(s).normalize();
-        } catch (java.nio.file.InvalidPathException e) {
-            throw o.error(key, "expected a file path, got \"" + s + "\" (" + e.getReason() + ")");
-        }
+        return o.path(key, o.string(key, dflt), base);
     }
 
     private static String baseName(Path p) {
@@ -275,9 +278,10 @@ public final class StudyReader {
     }
 
     private static ObjectNode parse(Path file) {
+        TextInput.requireRegularFile(file, "study file not found", "a study file (JSON)");
         String text;
         try {
-            text = Files.readString(file);
+            text = TextInput.readAll(file, MAX_FILE_BYTES, "a study file");
         } catch (NoSuchFileException e) {
             throw new InputException(file.toString(), "study file not found");
         } catch (IOException e) {

@@ -4,14 +4,23 @@ import com.code_intelligence.jazzer.junit.FuzzTest;
 import org.solmass.model.ModelOptions;
 import org.solmass.model.ObjReader;
 
-import java.nio.charset.StandardCharsets;
+import java.io.ByteArrayInputStream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
 
-/** Fuzz target: OBJ text through the model reader (seeds in ObjReaderFuzzTestInputs/). */
+/**
+ * Fuzz target: OBJ bytes through the model reader as a file's bytes are read (byte-order mark,
+ * decoding, line ends, line length), seeds in ObjReaderFuzzTestInputs/.
+ */
 class ObjReaderFuzzTest {
     @FuzzTest(maxDuration = "10s")
     void objTextReadsOrFailsWithAnInputError(byte[] data) {
-        String text = new String(data, StandardCharsets.UTF_8);
-        FuzzCheck.check("ObjReader.parse", data.length,
-                () -> ObjReader.parse(text, "fuzz.obj", ModelOptions.defaults()));
+        FuzzCheck.check("ObjReader.load", data.length, () -> {
+            try {
+                ObjReader.load(new ByteArrayInputStream(data), "fuzz.obj", ModelOptions.defaults());
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);   // a byte array does not fail
+            }
+        });
     }
 }

@@ -1,5 +1,6 @@
 package org.solmass.robust;
 
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
@@ -11,7 +12,12 @@ import java.util.Map;
  * stands for it) and the command line. All sites and models are invented.
  */
 final class BadInputCases {
-    record Case(Map<String, String> files, String[] args) {}
+    /** Text files (written as UTF-8), the command line, and files given as bytes (other encodings). */
+    record Case(Map<String, String> files, String[] args, Map<String, byte[]> bytes) {
+        Case(Map<String, String> files, String[] args) {
+            this(files, args, Map.of());
+        }
+    }
 
     static final Map<String, Case> CASES = new LinkedHashMap<>();
 
@@ -46,6 +52,16 @@ final class BadInputCases {
 
     private static void obj(String id, String objText) {
         CASES.put(id, new Case(Map.of("m.obj", objText), withSite("--rays", "16")));
+    }
+
+    /** An OBJ model given as bytes. */
+    private static void objBytes(String id, byte[] obj) {
+        CASES.put(id, new Case(Map.of(), withSite("--rays", "16"), Map.of("m.obj", obj)));
+    }
+
+    /** A study file given as bytes. */
+    private static void studyBytes(String id, byte[] json) {
+        CASES.put(id, new Case(Map.of("m.obj", MODEL), new String[] {"analyse", "-q", "@s.json"}, Map.of("s.json", json)));
     }
 
     private static void climate(String id, String csv) {
@@ -83,6 +99,13 @@ final class BadInputCases {
         obj("obj-all-faces-degenerate", "v 0 0 0\nv 1 0 0\nv 2 0 0\nf 1 2 3\n");
         CASES.put("obj-only-context-blocks", new Case(Map.of("m.obj", MODEL), withSite("--context", "west,east")));
         CASES.put("obj-unknown-analysed-block", new Case(Map.of("m.obj", MODEL), withSite("--analyse", "north")));
+        // "é" is the byte 0xE9 in ISO/IEC 8859-1 (Latin-1) and Windows-1252; in UTF-8 it starts a 3-byte sequence (RFC 3629)
+        objBytes("obj-latin-1-byte", concat(ascii("v 0 0 0\nv 1 0 0\nv 0 1 0\n# caf"), new byte[] {(byte) 0xE9}, ascii("\nf 1 2 3\n")));
+        objBytes("obj-utf-16-without-bom", "v 0 0 0\nv 1 0 0\nv 0 1 0\nf 1 2 3\n".getBytes(StandardCharsets.UTF_16LE));
+        obj("obj-line-over-1-mb", "v 0 0 0\nv 1 0 0\nv 0 1 0\nf 1 2 3 " + "1 ".repeat(1 << 19) + "\n");
+        CASES.put("obj-folder", new Case(Map.of(), withModel("@", SITE)));
+        CASES.put("obj-device", new Case(Map.of(), withModel("/dev/zero", SITE)));
+        CASES.put("obj-path-nul", new Case(Map.of(), withModel("@m\u0000.obj", SITE)));
 
         // climate files
         climate("climate-empty", "# only a comment\n");
@@ -116,6 +139,14 @@ final class BadInputCases {
                 + GOOD_SITE + "\n}\n");
         study("study-block-analysed-and-context", "{\n  \"model\": {\"file\": \"m.obj\", \"analyse\": [\"west\"], \"context\": [\"west\"]},\n  \"site\": "
                 + GOOD_SITE + "\n}\n");
+        studyBytes("study-latin-1-byte", concat(ascii("{\n  \"name\": \"Caf"), new byte[] {(byte) 0xE9},
+                ascii("\",\n  \"model\": {\"file\": \"m.obj\"},\n  \"site\": " + GOOD_SITE + "\n}\n")));
+        studyBytes("study-utf-16-without-bom", studyJson(GOOD_SITE, "").getBytes(StandardCharsets.UTF_16BE));
+        study("study-larger-than-16-mb", studyJson(GOOD_SITE, "") + " ".repeat(16 << 20));
+        CASES.put("study-folder", new Case(Map.of(), new String[] {"analyse", "-q", "@"}));
+        CASES.put("study-device", new Case(Map.of(), new String[] {"analyse", "-q", "/dev/zero"}));
+        study("study-model-path-nul", "{\n  \"model\": {\"file\": \"m\\u0000.obj\"},\n  \"site\": " + GOOD_SITE + "\n}\n");
+        study("study-climate-path-nul", studyJson(GOOD_SITE, ",\n  \"climate\": {\"source\": \"w\\u0000.csv\"}"));
 
         // command-line flags
         flags("flag-nothing-given", "analyse");
@@ -130,6 +161,7 @@ final class BadInputCases {
         flags("flag-unknown-unit", withSite("--unit", "furlong"));
         flags("flag-unknown-up-axis", withSite("--up", "x"));
         flags("flag-threads-negative", withSite("--threads", "-2"));
+        flags("flag-climate-path-nul", withSite("--climate", "@w\u0000.csv"));
 
         // the output folder, checked before the work (errors before work; the folder held by one run)
         CASES.put("out-is-a-file", new Case(Map.of("m.obj", MODEL, "out", "a file"), withSite()));
@@ -155,6 +187,23 @@ final class BadInputCases {
         List<String> a = new ArrayList<>(List.of("analyse", "-q", "--model", "@m.obj", "--out", out));
         a.addAll(Arrays.asList(SITE));
         return a.toArray(String[]::new);
+    }
+
+    /** analyse with {@code model} as --model (not the fresh folder's m.obj), plus {@code extra}. */
+    private static String[] withModel(String model, String... extra) {
+        List<String> a = new ArrayList<>(List.of("analyse", "-q", "--model", model, "--out", "@out"));
+        a.addAll(Arrays.asList(extra));
+        return a.toArray(String[]::new);
+    }
+
+    private static byte[] ascii(String s) {
+        return s.getBytes(StandardCharsets.US_ASCII);
+    }
+
+    private static byte[] concat(byte[]... parts) {
+        java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
+        for (byte[] p : parts) out.writeBytes(p);
+        return out.toByteArray();
     }
 
     /** A monthly-means table of the invented Vallmora example with January's GHI replaced. */

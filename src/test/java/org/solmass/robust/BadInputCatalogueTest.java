@@ -47,6 +47,7 @@ class BadInputCatalogueTest {
         org.junit.jupiter.api.Assumptions.assumeFalse(BadInputCases.NOT_AS_ROOT.contains(id) && "root".equals(System.getProperty("user.name")),
                 "root may write into a read-only folder");
         for (Map.Entry<String, String> f : c.files().entrySet()) Files.writeString(dir.resolve(f.getKey()), f.getValue());
+        for (Map.Entry<String, byte[]> f : c.bytes().entrySet()) Files.write(dir.resolve(f.getKey()), f.getValue());
         BadInputCases.Setup setup = BadInputCases.SETUP.get(id);
         try (AutoCloseable held = setup != null ? setup.prepare(dir) : null) {
             run(id, c);
