@@ -57,7 +57,8 @@ public final class Plausibility {
                             + " probably in millimetres or centimetres read as metres: set model.unit (--unit) to %s",
                     dz, extent, unitAdvice(dz, extent))));
         }
-        double zBase = baseShare(m.vertices(), 2, b[2], dz), yBase = baseShare(m.vertices(), 1, b[1], dy);
+        boolean[] used = m.usedVertices();
+        double zBase = baseShare(m.vertices(), used, 2, b[2], dz), yBase = baseShare(m.vertices(), used, 1, b[1], dy);
         double[] area = orientationAreas(m);
         double vertical = area[0];
         // Blocks stand on a common ground plane (half the vertices of extruded blocks lie on it). As read,
@@ -85,12 +86,19 @@ public final class Plausibility {
         return ok.isEmpty() ? "the unit it was drawn in" : String.join(" or ", ok);
     }
 
-    /** Share of the vertices within {@link #BASE_TOLERANCE} of the lowest value along an axis. */
-    private static double baseShare(double[] v, int axis, double min, double size) {
-        int n = v.length / 3, on = 0;
+    /**
+     * Share of the used vertices (those of a face; a stray vertex says nothing of the base) within
+     * {@link #BASE_TOLERANCE} of the lowest value along an axis.
+     */
+    private static double baseShare(double[] v, boolean[] used, int axis, double min, double size) {
+        int n = v.length / 3, on = 0, count = 0;
         double tol = Math.max(1e-9, BASE_TOLERANCE * size);
-        for (int i = 0; i < n; i++) if (v[3 * i + axis] - min <= tol) on++;
-        return n == 0 ? 0 : on / (double) n;
+        for (int i = 0; i < n; i++) {
+            if (!used[i]) continue;
+            count++;
+            if (v[3 * i + axis] - min <= tol) on++;
+        }
+        return count == 0 ? 0 : on / (double) count;
     }
 
     /** Areas (m2): {vertical (|nz| < 0.3), facing up (nz > 0.7), facing +y (ny > 0.7), total}. */

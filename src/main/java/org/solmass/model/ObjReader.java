@@ -13,6 +13,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
 
@@ -36,6 +37,22 @@ import java.util.TreeMap;
 public final class ObjReader {
     /** Relative height (height / longest edge) below which a triangle counts as degenerate. */
     public static final double DEGENERATE_REL = 1e-9;
+    /**
+     * Largest |coordinate| of a vertex that a face uses, metres, after the unit, up axis and north
+     * angle are applied. Every projected coordinate system in use stays below it (Web Mercator
+     * reaches about 2.0e7 m, UTM northings 1e7 m). At 1e8 m the spacing of doubles is 1.5e-8 m, so
+     * the weld tolerance (1e-6 of the model's diagonal, {@link VertexWelder}) stays over 100 double
+     * steps for any model wider than 1.5 m; the ray engine stores floats relative to the model's
+     * centre, so the absolute position costs it nothing.
+     */
+    public static final double MAX_COORDINATE_M = 1e8;
+    /**
+     * Largest extent along any axis of the vertices the faces use, metres (100 km). The ray engine
+     * stores triangles as floats relative to the model's centre: at 50 km from it a float resolves
+     * 2^-24 x 5e4 = 3 mm, and its ray offset (1e-5 of the diagonal) reaches 1.4 m, the size of a
+     * patch; a larger model is more likely in millimetres read as metres than a real study.
+     */
+    public static final double MAX_EXTENT_M = 1e5;
 
     /** A model and the warnings met while reading it (for the CLI to print). */
     public record Result(MassingModel model, List<String> warnings) {}
@@ -95,6 +112,7 @@ public final class ObjReader {
         final double scale, cosN, sinN;
         final UpAxis up;
         final DoubleList verts = new DoubleList();
+        final IntList vertLine = new IntList();
         final IntList faceIdx = new IntList(1 << 12), faceStart = new IntList(), faceLine = new IntList();
         final IntList faceBlock = new IntList(), faceMat = new IntList();
         final Map<String, Integer> blocks = new LinkedHashMap<>();
@@ -200,6 +218,7 @@ public final class ObjReader {
             verts.add(m[0] * cosN - m[1] * sinN);
             verts.add(m[0] * sinN + m[1] * cosN);
             verts.add(m[2]);
+            vertLine.add(ln);
         }
 
         private void face(String s, int from, int ln) {
@@ -283,7 +302,33 @@ public final class ObjReader {
             if (nv == 0) throw new InputException(name, "the model has no vertices, expected v x y z lines");
             int nf = faceStart.size();
             if (nf == 0) throw new InputException(name, "the model has no faces, expected f lines");
-            double[] v = verts.toArray();
+            // Indices in range; only the vertices that faces use are kept (in their order), so that a stray
+            // vertex changes no bounds, tolerance or ground level.
+            boolean[] used = new boolean[nv];
+            for (int f = 0; f < nf; f++) {
+                int s = faceStart.get(f), e = f + 1 < nf ? faceStart.get(f + 1) : faceIdx.size();
+                for (int i = s; i < e; i++) {
+                    int vi = faceIdx.get(i);
+                    if (vi >= nv) {
+                        throw new InputException(at(faceLine.get(f)), "vertex index " + (vi + 1)
+                                + " is out of range, the model has " + nv + " vertices");
+                    }
+                    used[vi] = true;
+                }
+            }
+            double[] all = verts.toArray();
+            int[] newIndex = new int[nv];
+            int kept = 0;
+            for (int i = 0; i < nv; i++) newIndex[i] = used[i] ? kept++ : -1;
+            double[] v = new double[3 * kept];
+            int[] vLine = new int[kept];
+            for (int i = 0; i < nv; i++) {
+                if (!used[i]) continue;
+                System.arraycopy(all, 3 * i, v, 3 * newIndex[i], 3);
+                vLine[newIndex[i]] = vertLine.get(i);
+            }
+            checkRange(v, vLine);
+            if (kept < nv) unusedOutside(all, used, v);
             IntList tris = new IntList(nf * 2), tBlock = new IntList(nf * 2);
             IntList tMat = new IntList(nf * 2), tLine = new IntList(nf * 2);
             PolygonTriangulator tri = new PolygonTriangulator();
@@ -293,13 +338,13 @@ public final class ObjReader {
                 int s = faceStart.get(f), e = f + 1 < nf ? faceStart.get(f + 1) : faceIdx.size();
                 int k = e - s;
                 if (face.length < k) face = new int[Math.max(k, face.length * 2)];
-                for (int i = 0; i < k; i++) {
-                    int vi = faceIdx.get(s + i);
-                    if (vi >= nv) {
-                        throw new InputException(at(faceLine.get(f)), "vertex index " + (vi + 1)
-                                + " is out of range, the model has " + nv + " vertices");
-                    }
-                    face[i] = vi;
+                for (int i = 0; i < k; i++) face[i] = newIndex[faceIdx.get(s + i)];
+                int[] cross = PolygonTriangulator.crossingEdges(face, k, v);
+                if (cross != null) {
+                    throw new InputException(at(faceLine.get(f)), String.format(Locale.ROOT,
+                            "face is self-intersecting: its edge from corner %d to %d crosses the edge from corner %d"
+                                    + " to %d (a bow-tie); expected a simple polygon: reorder its corners or split it",
+                            cross[0] + 1, (cross[0] + 1) % k + 1, cross[1] + 1, (cross[1] + 1) % k + 1));
                 }
                 int before = tris.size();
                 int made = tri.triangulate(face, k, v, tris);
@@ -329,7 +374,64 @@ public final class ObjReader {
             MassingModel m = new MassingModel(source, List.copyOf(blocks.keySet()),
                     List.copyOf(materials.keySet()), v, tris.toArray(), tBlock.toArray(), tMat.toArray(),
                     tLine.toArray(), degenerate);
+            double[] b = m.bounds();
+            double diagonal = Math.sqrt((b[3] - b[0]) * (b[3] - b[0]) + (b[4] - b[1]) * (b[4] - b[1])
+                    + (b[5] - b[2]) * (b[5] - b[2]));
+            warnings.addAll(Orientation.orient(m.vertices(), m.triangles(), m.triangleBlock(), m.triangleLine(),
+                    m.blockNames(), name, VertexWelder.tolerance(diagonal)));
             return new Result(m, List.copyOf(warnings));
+        }
+
+        /** The supported coordinate range and extent ({@link #MAX_COORDINATE_M}, {@link #MAX_EXTENT_M}). */
+        private void checkRange(double[] v, int[] vLine) {
+            int n = v.length / 3;
+            int[] lo = new int[3], hi = new int[3];
+            for (int i = 0; i < n; i++) {
+                for (int k = 0; k < 3; k++) {
+                    double c = v[3 * i + k];
+                    if (Math.abs(c) > MAX_COORDINATE_M) {
+                        throw new InputException(at(vLine[i]), String.format(Locale.ROOT,
+                                "vertex at %s = %.3g m is outside the supported range of +-1e8 m (after the unit is"
+                                        + " applied); move the model near the origin (subtract a site origin) or check"
+                                        + " the unit (--unit)", "xyz".charAt(k), c));
+                    }
+                    if (c < v[3 * lo[k] + k]) lo[k] = i;
+                    if (c > v[3 * hi[k] + k]) hi[k] = i;
+                }
+            }
+            for (int k = 0; k < 3; k++) {
+                double span = v[3 * hi[k] + k] - v[3 * lo[k] + k];
+                if (span > MAX_EXTENT_M) {
+                    throw new InputException(at(vLine[hi[k]]), String.format(Locale.ROOT,
+                            "the faces span %.0f m along %s (from the vertex at line %d to this one); the supported"
+                                    + " extent is %.0f m along each axis: check the unit (--unit) or split the model",
+                            span, "xyz".charAt(k), vLine[lo[k]], MAX_EXTENT_M));
+                }
+            }
+        }
+
+        /** Warns when vertices that no face uses lie outside the box of those that are used. */
+        private void unusedOutside(double[] all, boolean[] used, double[] v) {
+            double[] b = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY,
+                    Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
+            for (int i = 0; i < v.length; i += 3) {
+                for (int k = 0; k < 3; k++) { b[k] = Math.min(b[k], v[i + k]); b[k + 3] = Math.max(b[k + 3], v[i + k]); }
+            }
+            int outside = 0, first = -1;
+            for (int i = 0; i < used.length; i++) {
+                if (used[i]) continue;
+                for (int k = 0; k < 3; k++) {
+                    double c = all[3 * i + k];
+                    if (c < b[k] || c > b[k + 3]) {
+                        if (outside++ == 0) first = i;
+                        break;
+                    }
+                }
+            }
+            if (outside > 0) {
+                warnings.add(at(vertLine.get(first)) + ": " + outside + " vertex(es) that no face uses lie outside the"
+                        + " faces' bounding box (the first on this line); ignored");
+            }
         }
     }
 
