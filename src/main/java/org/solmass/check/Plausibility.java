@@ -5,12 +5,16 @@ import org.solmass.climate.TimeBase;
 import org.solmass.climate.WeatherSeries;
 import org.solmass.model.MassingModel;
 import org.solmass.model.TriangleGeometry;
+import org.solmass.surface.HiddenFaces;
+import org.solmass.surface.Surface;
 import org.solmass.sun.SolarGeometry;
 import org.solmass.sun.Site;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
 /**
  * Checks for inputs that parse but are probably wrong. Thresholds are deliberately loose: a warning
@@ -70,6 +74,29 @@ public final class Plausibility {
                             + " stands vertical and the model is %.0f m tall on a %.0f m deep footprint: the blocks seem to stand"
                             + " on their side, as a model exported with y up looks when read as z up; set model.up (--up) to y",
                     100 * yBase, b[1], 100 * zBase, 100 * vertical / Math.max(1e-12, area[3]), dz, dy)));
+        }
+        return out;
+    }
+
+    /**
+     * A block written twice under two names: faces of two blocks in the same place facing the same
+     * way ({@link HiddenFaces#duplicates}); one warning per pair of blocks with their shared area.
+     */
+    public static List<Warning> surfaces(MassingModel m, List<Surface> surfaces) {
+        Map<String, double[]> perPair = new LinkedHashMap<>();
+        for (HiddenFaces.Duplicate d : HiddenFaces.duplicates(surfaces)) {
+            int a = surfaces.get(d.surfaceA()).block(), b = surfaces.get(d.surfaceB()).block();
+            String key = Math.min(a, b) + " " + Math.max(a, b);
+            perPair.computeIfAbsent(key, k -> new double[1])[0] += d.areaM2();
+        }
+        List<Warning> out = new ArrayList<>();
+        for (Map.Entry<String, double[]> e : perPair.entrySet()) {
+            String[] ab = e.getKey().split(" ");
+            String a = m.blockNames().get(Integer.parseInt(ab[0])), b = m.blockNames().get(Integer.parseInt(ab[1]));
+            out.add(new Warning("model-duplicate-block", String.format(Locale.ROOT,
+                    "blocks '%s' and '%s' have %.1f m2 of faces in the same place facing the same way, as a block"
+                            + " written twice under two names has: areas and totals count that part twice; remove one"
+                            + " copy from the model", a, b, e.getValue()[0])));
         }
         return out;
     }
