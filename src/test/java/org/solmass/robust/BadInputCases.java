@@ -54,6 +54,11 @@ final class BadInputCases {
         return "{\n  \"model\": {\"file\": \"m.obj\"},\n  \"site\": " + site + ",\n  \"rays\": 16" + extra + "\n}\n";
     }
 
+    /** The 10 m box stretched to {@code widthM} along x (one block "wide"). */
+    private static String scaledBox(double widthM) {
+        return BadInputCatalogueTest.box("wide", 0, 0).replace("v 10.0 ", "v " + widthM + " ");
+    }
+
     private static final String GOOD_SITE = "{\"latitude\": 51, \"longitude\": 10, \"zone\": \"Europe/Berlin\"}";
 
     static {
@@ -70,6 +75,10 @@ final class BadInputCases {
         obj("obj-face-two-vertices", "v 0 0 0\nv 1 0 0\nv 0 1 0\nf 1 2\n");
         obj("obj-face-index-not-integer", "v 0 0 0\nv 1 0 0\nv 0 1 0\nf 1 2 3.5\n");
         obj("obj-all-faces-degenerate", "v 0 0 0\nv 1 0 0\nv 2 0 0\nf 1 2 3\n");
+        obj("obj-box-far-from-origin", BadInputCatalogueTest.box("far", 1e30, 0));
+        obj("obj-box-1e200-m-wide", scaledBox(1e200));
+        obj("obj-box-wider-than-100-km", scaledBox(150_000));
+        obj("obj-bow-tie-roof", BadInputCatalogueTest.box("roof", 0, 0).replace("f 5 6 8 7", "f 5 6 7 8"));
         CASES.put("obj-only-context-blocks", new Case(Map.of("m.obj", MODEL), withSite("--context", "west,east")));
         CASES.put("obj-unknown-analysed-block", new Case(Map.of("m.obj", MODEL), withSite("--analyse", "north")));
 
