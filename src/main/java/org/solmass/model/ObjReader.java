@@ -32,6 +32,11 @@ import java.util.TreeMap;
  * most {@link #DEGENERATE_REL} times the square of its longest edge (its height is below that
  * fraction of its longest edge), or when its longest edge is zero.
  *
+ * <p>Vertices that no face uses are dropped (the rest keep their order), so a stray vertex changes no
+ * bounds, tolerance or ground level; the used ones must lie within {@link #MAX_COORDINATE_M} of the
+ * origin and span at most {@link #MAX_EXTENT_M}. A face whose edges cross (a bow-tie) is refused
+ * with its line. Last, the faces of every block are turned to face out of it ({@link Orientation}).
+ *
  * <p>Parsing is by hand (no regular expressions) so a 100k-triangle file reads in a fraction of a second.
  */
 public final class ObjReader {

@@ -38,7 +38,8 @@ import java.util.stream.IntStream;
  * Holes narrower than the weld tolerance (mean width = 2 area / perimeter) are hairline gaps
  * between triangles, not openings, and are filled.
  *
- * <p>Tolerances scale with the model's bounding-box diagonal D: weld tolerance
+ * <p>Tolerances scale with the model's bounding-box diagonal D (of the vertices that faces use,
+ * {@link MassingModel#bounds()}): weld tolerance
  * {@code max(1e-6 D, 1e-9 m)}; plane distance tolerance {@code max(1e-5 D, 1 mm)}. A surface's plane
  * has the area-weighted mean normal of its triangles and passes through the first vertex of its
  * first triangle, which is also the origin of the frame used for the union, so axis-aligned faces
