@@ -33,8 +33,8 @@ import java.util.TreeMap;
  * fraction of its longest edge), or when its longest edge is zero.
  *
  * <p>Vertices that no face uses are dropped (the rest keep their order), so a stray vertex changes no
- * bounds, tolerance or ground level; the used ones must lie within {@link #MAX_COORDINATE_M} of the
- * origin and span at most {@link #MAX_EXTENT_M}. A face whose edges cross (a bow-tie) is refused
+ * bounds, tolerance or ground level; the used ones must lie within {@link CoordinateRange#MAX_COORDINATE_M} of the
+ * origin and span at most {@link CoordinateRange#MAX_EXTENT_M}. A face whose edges cross (a bow-tie) is refused
  * with its line. Last, the faces of every block are turned to face out of it ({@link Orientation}).
  *
  * <p>Parsing is by hand (no regular expressions) so a 100k-triangle file reads in a fraction of a second.
@@ -42,23 +42,6 @@ import java.util.TreeMap;
 public final class ObjReader {
     /** Relative height (height / longest edge) below which a triangle counts as degenerate. */
     public static final double DEGENERATE_REL = 1e-9;
-    /**
-     * Largest |coordinate| of a vertex that a face uses, metres, after the unit, up axis and north
-     * angle are applied. Every projected coordinate system in use stays below it (Web Mercator
-     * reaches about 2.0e7 m, UTM northings 1e7 m). At 1e8 m the spacing of doubles is 1.5e-8 m, so
-     * the weld tolerance (1e-6 of the model's diagonal, {@link VertexWelder}) stays over 100 double
-     * steps for any model wider than 1.5 m; the ray engine stores floats relative to the model's
-     * centre, so the absolute position costs it nothing.
-     */
-    public static final double MAX_COORDINATE_M = 1e8;
-    /**
-     * Largest extent along any axis of the vertices the faces use, metres (100 km). The ray engine
-     * stores triangles as floats relative to the model's centre: at 50 km from it a float resolves
-     * 2^-24 x 5e4 = 3 mm, and its ray offset (1e-5 of the diagonal) reaches 1.4 m, the size of a
-     * patch; a larger model is more likely in millimetres read as metres than a real study.
-     */
-    public static final double MAX_EXTENT_M = 1e5;
-
     /** A model and the warnings met while reading it (for the CLI to print). */
     public record Result(MassingModel model, List<String> warnings) {}
 
@@ -332,8 +315,11 @@ public final class ObjReader {
                 System.arraycopy(all, 3 * i, v, 3 * newIndex[i], 3);
                 vLine[newIndex[i]] = vertLine.get(i);
             }
-            checkRange(v, vLine);
-            if (kept < nv) unusedOutside(all, used, v);
+            CoordinateRange.check(v, vLine, name);
+            if (kept < nv) {
+                String stray = CoordinateRange.strayVertices(all, used, v, vertLine, name);
+                if (stray != null) warnings.add(stray);
+            }
             IntList tris = new IntList(nf * 2), tBlock = new IntList(nf * 2);
             IntList tMat = new IntList(nf * 2), tLine = new IntList(nf * 2);
             PolygonTriangulator tri = new PolygonTriangulator();
@@ -385,58 +371,6 @@ public final class ObjReader {
             warnings.addAll(Orientation.orient(m.vertices(), m.triangles(), m.triangleBlock(), m.triangleLine(),
                     m.blockNames(), name, VertexWelder.tolerance(diagonal)));
             return new Result(m, List.copyOf(warnings));
-        }
-
-        /** The supported coordinate range and extent ({@link #MAX_COORDINATE_M}, {@link #MAX_EXTENT_M}). */
-        private void checkRange(double[] v, int[] vLine) {
-            int n = v.length / 3;
-            int[] lo = new int[3], hi = new int[3];
-            for (int i = 0; i < n; i++) {
-                for (int k = 0; k < 3; k++) {
-                    double c = v[3 * i + k];
-                    if (Math.abs(c) > MAX_COORDINATE_M) {
-                        throw new InputException(at(vLine[i]), String.format(Locale.ROOT,
-                                "vertex at %s = %.3g m is outside the supported range of +-1e8 m (after the unit is"
-                                        + " applied); move the model near the origin (subtract a site origin) or check"
-                                        + " the unit (--unit)", "xyz".charAt(k), c));
-                    }
-                    if (c < v[3 * lo[k] + k]) lo[k] = i;
-                    if (c > v[3 * hi[k] + k]) hi[k] = i;
-                }
-            }
-            for (int k = 0; k < 3; k++) {
-                double span = v[3 * hi[k] + k] - v[3 * lo[k] + k];
-                if (span > MAX_EXTENT_M) {
-                    throw new InputException(at(vLine[hi[k]]), String.format(Locale.ROOT,
-                            "the faces span %.0f m along %s (from the vertex at line %d to this one); the supported"
-                                    + " extent is %.0f m along each axis: check the unit (--unit) or split the model",
-                            span, "xyz".charAt(k), vLine[lo[k]], MAX_EXTENT_M));
-                }
-            }
-        }
-
-        /** Warns when vertices that no face uses lie outside the box of those that are used. */
-        private void unusedOutside(double[] all, boolean[] used, double[] v) {
-            double[] b = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY,
-                    Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
-            for (int i = 0; i < v.length; i += 3) {
-                for (int k = 0; k < 3; k++) { b[k] = Math.min(b[k], v[i + k]); b[k + 3] = Math.max(b[k + 3], v[i + k]); }
-            }
-            int outside = 0, first = -1;
-            for (int i = 0; i < used.length; i++) {
-                if (used[i]) continue;
-                for (int k = 0; k < 3; k++) {
-                    double c = all[3 * i + k];
-                    if (c < b[k] || c > b[k + 3]) {
-                        if (outside++ == 0) first = i;
-                        break;
-                    }
-                }
-            }
-            if (outside > 0) {
-                warnings.add(at(vertLine.get(first)) + ": " + outside + " vertex(es) that no face uses lie outside the"
-                        + " faces' bounding box (the first on this line); ignored");
-            }
         }
     }
 
