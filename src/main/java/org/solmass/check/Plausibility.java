@@ -5,12 +5,16 @@ import org.solmass.climate.TimeBase;
 import org.solmass.climate.WeatherSeries;
 import org.solmass.model.MassingModel;
 import org.solmass.model.TriangleGeometry;
+import org.solmass.surface.HiddenFaces;
+import org.solmass.surface.Surface;
 import org.solmass.sun.SolarGeometry;
 import org.solmass.sun.Site;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
 /**
  * Checks for inputs that parse but are probably wrong. Thresholds are deliberately loose: a warning
@@ -57,7 +61,8 @@ public final class Plausibility {
                             + " probably in millimetres or centimetres read as metres: set model.unit (--unit) to %s",
                     dz, extent, unitAdvice(dz, extent))));
         }
-        double zBase = baseShare(m.vertices(), 2, b[2], dz), yBase = baseShare(m.vertices(), 1, b[1], dy);
+        boolean[] used = m.usedVertices();
+        double zBase = baseShare(m.vertices(), used, 2, b[2], dz), yBase = baseShare(m.vertices(), used, 1, b[1], dy);
         double[] area = orientationAreas(m);
         double vertical = area[0];
         // Blocks stand on a common ground plane (half the vertices of extruded blocks lie on it). As read,
@@ -69,6 +74,29 @@ public final class Plausibility {
                             + " stands vertical and the model is %.0f m tall on a %.0f m deep footprint: the blocks seem to stand"
                             + " on their side, as a model exported with y up looks when read as z up; set model.up (--up) to y",
                     100 * yBase, b[1], 100 * zBase, 100 * vertical / Math.max(1e-12, area[3]), dz, dy)));
+        }
+        return out;
+    }
+
+    /**
+     * A block written twice under two names: faces of two blocks in the same place facing the same
+     * way ({@link HiddenFaces#duplicates}); one warning per pair of blocks with their shared area.
+     */
+    public static List<Warning> surfaces(MassingModel m, List<Surface> surfaces) {
+        Map<String, double[]> perPair = new LinkedHashMap<>();
+        for (HiddenFaces.Duplicate d : HiddenFaces.duplicates(surfaces)) {
+            int a = surfaces.get(d.surfaceA()).block(), b = surfaces.get(d.surfaceB()).block();
+            String key = Math.min(a, b) + " " + Math.max(a, b);
+            perPair.computeIfAbsent(key, k -> new double[1])[0] += d.areaM2();
+        }
+        List<Warning> out = new ArrayList<>();
+        for (Map.Entry<String, double[]> e : perPair.entrySet()) {
+            String[] ab = e.getKey().split(" ");
+            String a = m.blockNames().get(Integer.parseInt(ab[0])), b = m.blockNames().get(Integer.parseInt(ab[1]));
+            out.add(new Warning("model-duplicate-block", String.format(Locale.ROOT,
+                    "blocks '%s' and '%s' have %.1f m2 of faces in the same place facing the same way, as a block"
+                            + " written twice under two names has: areas and totals count that part twice; remove one"
+                            + " copy from the model", a, b, e.getValue()[0])));
         }
         return out;
     }
@@ -85,12 +113,19 @@ public final class Plausibility {
         return ok.isEmpty() ? "the unit it was drawn in" : String.join(" or ", ok);
     }
 
-    /** Share of the vertices within {@link #BASE_TOLERANCE} of the lowest value along an axis. */
-    private static double baseShare(double[] v, int axis, double min, double size) {
-        int n = v.length / 3, on = 0;
+    /**
+     * Share of the used vertices (those of a face; a stray vertex says nothing of the base) within
+     * {@link #BASE_TOLERANCE} of the lowest value along an axis.
+     */
+    private static double baseShare(double[] v, boolean[] used, int axis, double min, double size) {
+        int n = v.length / 3, on = 0, count = 0;
         double tol = Math.max(1e-9, BASE_TOLERANCE * size);
-        for (int i = 0; i < n; i++) if (v[3 * i + axis] - min <= tol) on++;
-        return n == 0 ? 0 : on / (double) n;
+        for (int i = 0; i < n; i++) {
+            if (!used[i]) continue;
+            count++;
+            if (v[3 * i + axis] - min <= tol) on++;
+        }
+        return count == 0 ? 0 : on / (double) count;
     }
 
     /** Areas (m2): {vertical (|nz| < 0.3), facing up (nz > 0.7), facing +y (ny > 0.7), total}. */

@@ -125,6 +125,7 @@ public final class AnalysisRun {
                     + String.join("; ", warnings));
         }
         PatchSet patches = Patcher.build(model, new PatchOptions(study.patchM(), analysed, false));
+        for (Warning x : Plausibility.surfaces(model, patches.surfaces())) warnings.add(x.toString());
         double hidden = patches.hiddenAreaM2();
         if (hidden > 0.5) {
             warnings.add(String.format(java.util.Locale.ROOT, "%.0f m2 of analysed faces lie against a touching block "

@@ -33,24 +33,39 @@ public record MassingModel(Path source, List<String> blockNames, List<String> ma
         return new Vec3(vertices[i], vertices[i + 1], vertices[i + 2]);
     }
 
-    /** Lowest z of any vertex, metres. */
+    /**
+     * Lowest z of the vertices the triangles use, metres (a vertex no face uses does not count: it
+     * must not sink the ground level).
+     */
     public double minZ() {
         double m = Double.POSITIVE_INFINITY;
-        for (int i = 2; i < vertices.length; i += 3) m = Math.min(m, vertices[i]);
+        for (int i : triangles) m = Math.min(m, vertices[3 * i + 2]);
         return m;
     }
 
-    /** Axis-aligned bounds: {minX, minY, minZ, maxX, maxY, maxZ}. */
+    /**
+     * Axis-aligned bounds of the vertices the triangles use: {minX, minY, minZ, maxX, maxY, maxZ}.
+     * Tolerances (weld, plane), the ground level and the plausibility checks scale with these, so a
+     * stray vertex that no face uses changes none of them.
+     */
     public double[] bounds() {
         double[] b = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY,
                 Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
-        for (int i = 0; i < vertices.length; i += 3) {
+        for (int t : triangles) {
+            int i = 3 * t;
             for (int k = 0; k < 3; k++) {
                 b[k] = Math.min(b[k], vertices[i + k]);
                 b[k + 3] = Math.max(b[k + 3], vertices[i + k]);
             }
         }
         return b;
+    }
+
+    /** Which vertices at least one triangle uses, index = vertex id. */
+    public boolean[] usedVertices() {
+        boolean[] used = new boolean[vertexCount()];
+        for (int t : triangles) used[t] = true;
+        return used;
     }
 
     /** Flat x,y,z of the 3 corners of every triangle (9 floats per triangle), for the scene stage. */

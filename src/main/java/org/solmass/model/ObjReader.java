@@ -13,6 +13,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
 
@@ -31,12 +32,16 @@ import java.util.TreeMap;
  * most {@link #DEGENERATE_REL} times the square of its longest edge (its height is below that
  * fraction of its longest edge), or when its longest edge is zero.
  *
+ * <p>Vertices that no face uses are dropped (the rest keep their order), so a stray vertex changes no
+ * bounds, tolerance or ground level; the used ones must lie within {@link CoordinateRange#MAX_COORDINATE_M} of the
+ * origin and span at most {@link CoordinateRange#MAX_EXTENT_M}. A face whose edges cross (a bow-tie) is refused
+ * with its line. Last, the faces of every block are turned to face out of it ({@link Orientation}).
+ *
  * <p>Parsing is by hand (no regular expressions) so a 100k-triangle file reads in a fraction of a second.
  */
 public final class ObjReader {
     /** Relative height (height / longest edge) below which a triangle counts as degenerate. */
     public static final double DEGENERATE_REL = 1e-9;
-
     /** A model and the warnings met while reading it (for the CLI to print). */
     public record Result(MassingModel model, List<String> warnings) {}
 
@@ -106,6 +111,7 @@ public final class ObjReader {
         final double scale, cosN, sinN;
         final UpAxis up;
         final DoubleList verts = new DoubleList();
+        final IntList vertLine = new IntList();
         final IntList faceIdx = new IntList(1 << 12), faceStart = new IntList(), faceLine = new IntList();
         final IntList faceBlock = new IntList(), faceMat = new IntList();
         final Map<String, Integer> blocks = new LinkedHashMap<>();
@@ -215,6 +221,7 @@ public final class ObjReader {
             verts.add(m[0] * cosN - m[1] * sinN);
             verts.add(m[0] * sinN + m[1] * cosN);
             verts.add(m[2]);
+            vertLine.add(ln);
         }
 
         private void face(String s, int from, int ln) {
@@ -298,7 +305,36 @@ public final class ObjReader {
             if (nv == 0) throw new InputException(name, "the model has no vertices, expected v x y z lines");
             int nf = faceStart.size();
             if (nf == 0) throw new InputException(name, "the model has no faces, expected f lines");
-            double[] v = verts.toArray();
+            // Indices in range; only the vertices that faces use are kept (in their order), so that a stray
+            // vertex changes no bounds, tolerance or ground level.
+            boolean[] used = new boolean[nv];
+            for (int f = 0; f < nf; f++) {
+                int s = faceStart.get(f), e = f + 1 < nf ? faceStart.get(f + 1) : faceIdx.size();
+                for (int i = s; i < e; i++) {
+                    int vi = faceIdx.get(i);
+                    if (vi >= nv) {
+                        throw new InputException(at(faceLine.get(f)), "vertex index " + (vi + 1)
+                                + " is out of range, the model has " + nv + " vertices");
+                    }
+                    used[vi] = true;
+                }
+            }
+            double[] all = verts.toArray();
+            int[] newIndex = new int[nv];
+            int kept = 0;
+            for (int i = 0; i < nv; i++) newIndex[i] = used[i] ? kept++ : -1;
+            double[] v = new double[3 * kept];
+            int[] vLine = new int[kept];
+            for (int i = 0; i < nv; i++) {
+                if (!used[i]) continue;
+                System.arraycopy(all, 3 * i, v, 3 * newIndex[i], 3);
+                vLine[newIndex[i]] = vertLine.get(i);
+            }
+            CoordinateRange.check(v, vLine, name);
+            if (kept < nv) {
+                String stray = CoordinateRange.strayVertices(all, used, v, vertLine, name);
+                if (stray != null) warnings.add(stray);
+            }
             IntList tris = new IntList(nf * 2), tBlock = new IntList(nf * 2);
             IntList tMat = new IntList(nf * 2), tLine = new IntList(nf * 2);
             PolygonTriangulator tri = new PolygonTriangulator();
@@ -308,13 +344,13 @@ public final class ObjReader {
                 int s = faceStart.get(f), e = f + 1 < nf ? faceStart.get(f + 1) : faceIdx.size();
                 int k = e - s;
                 if (face.length < k) face = new int[Math.max(k, face.length * 2)];
-                for (int i = 0; i < k; i++) {
-                    int vi = faceIdx.get(s + i);
-                    if (vi >= nv) {
-                        throw new InputException(at(faceLine.get(f)), "vertex index " + (vi + 1)
-                                + " is out of range, the model has " + nv + " vertices");
-                    }
-                    face[i] = vi;
+                for (int i = 0; i < k; i++) face[i] = newIndex[faceIdx.get(s + i)];
+                int[] cross = PolygonTriangulator.crossingEdges(face, k, v);
+                if (cross != null) {
+                    throw new InputException(at(faceLine.get(f)), String.format(Locale.ROOT,
+                            "face is self-intersecting: its edge from corner %d to %d crosses the edge from corner %d"
+                                    + " to %d (a bow-tie); expected a simple polygon: reorder its corners or split it",
+                            cross[0] + 1, (cross[0] + 1) % k + 1, cross[1] + 1, (cross[1] + 1) % k + 1));
                 }
                 int before = tris.size();
                 int made = tri.triangulate(face, k, v, tris);
@@ -344,6 +380,11 @@ public final class ObjReader {
             MassingModel m = new MassingModel(source, List.copyOf(blocks.keySet()),
                     List.copyOf(materials.keySet()), v, tris.toArray(), tBlock.toArray(), tMat.toArray(),
                     tLine.toArray(), degenerate);
+            double[] b = m.bounds();
+            double diagonal = Math.sqrt((b[3] - b[0]) * (b[3] - b[0]) + (b[4] - b[1]) * (b[4] - b[1])
+                    + (b[5] - b[2]) * (b[5] - b[2]));
+            warnings.addAll(Orientation.orient(m.vertices(), m.triangles(), m.triangleBlock(), m.triangleLine(),
+                    m.blockNames(), name, VertexWelder.tolerance(diagonal)));
             return new Result(m, List.copyOf(warnings));
         }
     }

@@ -166,6 +166,62 @@ public final class PolygonTriangulator {
         return written + 1;
     }
 
+    /** Faces of more corners than this are not checked for crossing edges (quadratic cost). */
+    static final int MAX_CROSSING_CHECK = 4096;
+
+    /**
+     * The first pair of edges of a 3D face that cross each other (a bow-tie), or null for a face
+     * without crossing edges (or of more than {@link #MAX_CROSSING_CHECK} corners). Edge i runs from
+     * corner i to corner i + 1 (0-based, the last back to corner 0); returns {i, j} with i &lt; j.
+     * The face is projected along the axis on which its fan's cross products are largest (it works
+     * for a bow-tie, whose two lobes cancel in the Newell normal); a crossing is proper: the
+     * corners of each edge lie strictly on opposite sides of the other, beyond the collinear
+     * tolerance, so faces whose edges only touch or overlap (a bridge to a hole) pass.
+     */
+    static int[] crossingEdges(int[] face, int n, double[] v) {
+        if (n < 4 || n > MAX_CROSSING_CHECK) return null;
+        double sx = 0, sy = 0, sz = 0;
+        int a0 = face[0] * 3;
+        for (int i = 1; i + 1 < n; i++) {
+            int b = face[i] * 3, c = face[i + 1] * 3;
+            double ux = v[b] - v[a0], uy = v[b + 1] - v[a0 + 1], uz = v[b + 2] - v[a0 + 2];
+            double wx = v[c] - v[a0], wy = v[c + 1] - v[a0 + 1], wz = v[c + 2] - v[a0 + 2];
+            sx += Math.abs(uy * wz - uz * wy); sy += Math.abs(uz * wx - ux * wz); sz += Math.abs(ux * wy - uy * wx);
+        }
+        int drop = sz >= sx && sz >= sy ? 2 : (sy >= sx ? 1 : 0);
+        double[] x = new double[n], y = new double[n];
+        double minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY;
+        double minY = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < n; i++) {
+            int a = face[i] * 3;
+            x[i] = drop == 0 ? v[a + 1] : v[a];
+            y[i] = drop == 2 ? v[a + 1] : v[a + 2];
+            minX = Math.min(minX, x[i]); maxX = Math.max(maxX, x[i]);
+            minY = Math.min(minY, y[i]); maxY = Math.max(maxY, y[i]);
+        }
+        double size = Math.max(maxX - minX, maxY - minY);
+        double eps = COLLINEAR_REL * size * size;
+        for (int i = 0; i < n; i++) {
+            int i2 = (i + 1) % n;
+            for (int j = i + 2; j < n; j++) {
+                int j2 = (j + 1) % n;
+                if (j2 == i) continue; // adjacent through the closing edge
+                if (face[j] == face[i] || face[j] == face[i2] || face[j2] == face[i] || face[j2] == face[i2]) continue;
+                double d1 = orient(x, y, i, i2, j), d2 = orient(x, y, i, i2, j2);
+                double d3 = orient(x, y, j, j2, i), d4 = orient(x, y, j, j2, i2);
+                if (((d1 > eps && d2 < -eps) || (d1 < -eps && d2 > eps))
+                        && ((d3 > eps && d4 < -eps) || (d3 < -eps && d4 > eps))) {
+                    return new int[]{i, j};
+                }
+            }
+        }
+        return null;
+    }
+
+    private static double orient(double[] x, double[] y, int a, int b, int c) {
+        return (x[b] - x[a]) * (y[c] - y[a]) - (y[b] - y[a]) * (x[c] - x[a]);
+    }
+
     private void unlink(int i) {
         next[prev[i]] = next[i];
         prev[next[i]] = prev[i];

@@ -16,6 +16,9 @@ import java.util.List;
  * each covered by the other faces into solid mass and sees nothing. Those parts are not patched, so
  * they neither report zero sky view nor count in areas and totals.
  *
+ * <p>The same test with normals alike finds a block written twice under two names
+ * ({@link #duplicates}).
+ *
  * <p>Tolerances: normals opposite within {@link #ANGLE_TOL_DEG}, planes within
  * {@link #PLANE_TOL_M} (or 1e-6 of the surfaces' size, whichever is larger); overlaps under
  * {@link #MIN_OVERLAP_M2} are ignored.
@@ -34,21 +37,11 @@ public final class HiddenFaces {
     public static Geometry[] exposed(List<Surface> surfaces) {
         int n = surfaces.size();
         Geometry[] out = new Geometry[n];
-        double[][] box = new double[n][];
-        for (int i = 0; i < n; i++) box[i] = worldBox(surfaces.get(i));
-        double cosTol = Math.cos(Math.toRadians(180 - ANGLE_TOL_DEG));
+        List<List<Integer>> covering = coincident(surfaces, true);
         for (int i = 0; i < n; i++) {
             Surface a = surfaces.get(i);
             List<Geometry> covers = new ArrayList<>();
-            for (int j = 0; j < n; j++) {
-                if (i == j) continue;
-                Surface b = surfaces.get(j);
-                if (a.normal().dot(b.normal()) > cosTol) continue;                 // not opposite
-                double tol = Math.max(PLANE_TOL_M, 1e-6 * Math.max(box[i][6], box[j][6]));
-                if (Math.abs(a.planeOffsetM() + b.planeOffsetM()) > tol) continue;  // not the same plane
-                if (!overlap(box[i], box[j], tol)) continue;
-                covers.add(inFrameOf(a, b));
-            }
+            for (int j : covering.get(i)) covers.add(inFrameOf(a, surfaces.get(j)));
             Geometry poly = a.polygon();
             if (!covers.isEmpty()) {
                 Geometry cover = poly.getFactory().buildGeometry(covers).union();
@@ -56,6 +49,61 @@ public final class HiddenFaces {
                 if (inter.getArea() > MIN_OVERLAP_M2) poly = poly.difference(cover);
             }
             out[i] = poly;
+        }
+        return out;
+    }
+
+    /**
+     * Two surfaces of different blocks that lie in one plane and face the same way, and the area they
+     * share (over {@link #MIN_OVERLAP_M2}), square metres.
+     */
+    public record Duplicate(int surfaceA, int surfaceB, double areaM2) {}
+
+    /**
+     * Faces of two different blocks in the same place facing the same way: a block written twice
+     * under two names (its areas and totals would count twice). The same plane and overlap tests as
+     * {@link #exposed}, with normals alike instead of opposite; pairs in order of surface ids, a &lt; b.
+     */
+    public static List<Duplicate> duplicates(List<Surface> surfaces) {
+        List<List<Integer>> same = coincident(surfaces, false);
+        List<Duplicate> out = new ArrayList<>();
+        for (int i = 0; i < surfaces.size(); i++) {
+            Surface a = surfaces.get(i);
+            for (int j : same.get(i)) {
+                Surface b = surfaces.get(j);
+                if (j <= i || a.block() == b.block()) continue;
+                double area = a.polygon().intersection(inFrameOf(a, b)).getArea();
+                if (area > MIN_OVERLAP_M2) out.add(new Duplicate(i, j, area));
+            }
+        }
+        return out;
+    }
+
+    /**
+     * For every surface, the other surfaces in the same plane (within the tolerances) whose world
+     * boxes overlap it and whose normals are opposite ({@code opposite}) or alike.
+     */
+    private static List<List<Integer>> coincident(List<Surface> surfaces, boolean opposite) {
+        int n = surfaces.size();
+        double[][] box = new double[n][];
+        for (int i = 0; i < n; i++) box[i] = worldBox(surfaces.get(i));
+        double cosOpposite = Math.cos(Math.toRadians(180 - ANGLE_TOL_DEG)), cosAlike = Math.cos(Math.toRadians(ANGLE_TOL_DEG));
+        List<List<Integer>> out = new ArrayList<>(n);
+        for (int i = 0; i < n; i++) {
+            Surface a = surfaces.get(i);
+            List<Integer> found = new ArrayList<>();
+            for (int j = 0; j < n; j++) {
+                if (i == j) continue;
+                Surface b = surfaces.get(j);
+                double dot = a.normal().dot(b.normal());
+                if (opposite ? dot > cosOpposite : dot < cosAlike) continue;           // not opposite / not alike
+                double tol = Math.max(PLANE_TOL_M, 1e-6 * Math.max(box[i][6], box[j][6]));
+                double planeGap = opposite ? a.planeOffsetM() + b.planeOffsetM() : a.planeOffsetM() - b.planeOffsetM();
+                if (Math.abs(planeGap) > tol) continue;                                 // not the same plane
+                if (!overlap(box[i], box[j], tol)) continue;
+                found.add(j);
+            }
+            out.add(found);
         }
         return out;
     }

@@ -67,7 +67,7 @@ public final class Patcher {
             for (int k = 0; k < g.getNumGeometries(); k++) {
                 if (!(g.getGeometryN(k) instanceof Polygon part) || part.isEmpty()) continue;
                 List<Piece> pieces = mergeSlivers(cut(part, s), SLIVER_FRACTION * s * s);
-                for (Piece p : pieces) if (p.alive) ps.add(toPatch(ps.size(), model, sf, p, s));
+                for (Piece p : pieces) if (p.alive && hasArea(p.geom)) ps.add(toPatch(ps.size(), model, sf, p, s));
             }
             return ps;
         }).toList();
@@ -184,6 +184,17 @@ public final class Patcher {
             }
         }
         return pieces;
+    }
+
+    /**
+     * Whether a piece has a polygon of positive area: a cell that clips to a line or a point (a
+     * surface folded onto itself, found by GeometryFuzzTest) is no patch.
+     */
+    static boolean hasArea(Geometry g) {
+        for (int k = 0; k < g.getNumGeometries(); k++) {
+            if (g.getGeometryN(k) instanceof Polygon p && p.getArea() > 0) return true;
+        }
+        return false;
     }
 
     private static long cellKey(int i, int j) { return ((long) i << 32) ^ (j & 0xffffffffL); }

@@ -15,6 +15,7 @@ import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
 import org.solmass.model.IntList;
 import org.solmass.model.MassingModel;
 import org.solmass.model.TriangleGeometry;
+import org.solmass.model.VertexWelder;
 import org.solmass.model.Vec3;
 
 import java.util.ArrayList;
@@ -37,7 +38,8 @@ import java.util.stream.IntStream;
  * Holes narrower than the weld tolerance (mean width = 2 area / perimeter) are hairline gaps
  * between triangles, not openings, and are filled.
  *
- * <p>Tolerances scale with the model's bounding-box diagonal D: weld tolerance
+ * <p>Tolerances scale with the model's bounding-box diagonal D (of the vertices that faces use,
+ * {@link MassingModel#bounds()}): weld tolerance
  * {@code max(1e-6 D, 1e-9 m)}; plane distance tolerance {@code max(1e-5 D, 1 mm)}. A surface's plane
  * has the area-weighted mean normal of its triangles and passes through the first vertex of its
  * first triangle, which is also the origin of the frame used for the union, so axis-aligned faces
@@ -46,8 +48,8 @@ import java.util.stream.IntStream;
 public final class SurfaceBuilder {
     /** Maximum angle between the normals of coplanar triangles, degrees. */
     public static final double COPLANAR_ANGLE_DEG = 1.0;
-    /** Weld tolerance relative to the model's bounding-box diagonal. */
-    public static final double WELD_REL = 1e-6;
+    /** Weld tolerance relative to the model's bounding-box diagonal ({@link VertexWelder#WELD_REL}). */
+    public static final double WELD_REL = VertexWelder.WELD_REL;
     /** Plane distance tolerance relative to the model's bounding-box diagonal. */
     public static final double PLANE_REL = 1e-5;
     /** Smallest plane distance tolerance, metres. */
@@ -62,7 +64,7 @@ public final class SurfaceBuilder {
     private SurfaceBuilder() {}
 
     /** Weld tolerance for a model, metres. */
-    public static double weldTolerance(MassingModel m) { return Math.max(WELD_REL * diagonal(m), 1e-9); }
+    public static double weldTolerance(MassingModel m) { return VertexWelder.tolerance(diagonal(m)); }
 
     /** Plane distance tolerance for a model, metres. */
     public static double planeTolerance(MassingModel m) { return Math.max(PLANE_REL * diagonal(m), PLANE_MIN_M); }

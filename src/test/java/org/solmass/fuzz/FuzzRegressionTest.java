@@ -51,4 +51,18 @@ class FuzzRegressionTest {
         assertTrue(allocated < FuzzCheck.MAX_ALLOCATED_BYTES, allocated + " bytes allocated");
         return e.getMessage();
     }
+
+    /**
+     * Found by GeometryFuzzTest: a garbled two-block box file whose faces fold a surface onto itself;
+     * a grid cell clipped to a line (no polygon) reached Patcher.toPatch, which threw a
+     * NullPointerException. Cells without area are now no patch.
+     */
+    @Test
+    void aPatchCellClippedToALineIsNoPatch() throws IOException {
+        String found = resource("GeometryFuzzTestInputs/modelSurfacesAndPatchesOrAnInputError/regression-patch-cell-without-area.obj");
+        var m = org.solmass.model.ObjReader.parse(found, "f.obj", org.solmass.model.ModelOptions.defaults()).model();
+        var ps = org.solmass.surface.Patcher.build(m, new org.solmass.surface.PatchOptions(1.25, java.util.Set.of(), true));
+        assertFalse(ps.patches().isEmpty());
+        for (var p : ps.patches()) assertTrue(p.areaM2() > 0, p.id());
+    }
 }

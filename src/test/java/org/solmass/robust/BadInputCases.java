@@ -1,5 +1,7 @@
 package org.solmass.robust;
 
+import org.solmass.fixtures.Boxes;
+
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -81,6 +83,11 @@ final class BadInputCases {
         return "{\n  \"model\": {\"file\": \"m.obj\"},\n  \"site\": " + site + ",\n  \"rays\": 16" + extra + "\n}\n";
     }
 
+    /** The 10 m box stretched to {@code widthM} along x (one block "wide"). */
+    private static String scaledBox(double widthM) {
+        return Boxes.closed(0, 0, 0, 10, 10, 10).obj("wide").replace("v 10.0 ", "v " + widthM + " ");
+    }
+
     private static final String GOOD_SITE = "{\"latitude\": 51, \"longitude\": 10, \"zone\": \"Europe/Berlin\"}";
 
     static {
@@ -97,6 +104,11 @@ final class BadInputCases {
         obj("obj-face-two-vertices", "v 0 0 0\nv 1 0 0\nv 0 1 0\nf 1 2\n");
         obj("obj-face-index-not-integer", "v 0 0 0\nv 1 0 0\nv 0 1 0\nf 1 2 3.5\n");
         obj("obj-all-faces-degenerate", "v 0 0 0\nv 1 0 0\nv 2 0 0\nf 1 2 3\n");
+        obj("obj-box-far-from-origin", Boxes.closed(0, 0, 0, 10, 10, 10).obj("far").replace("v 0.0 ", "v 1.0E30 "));
+        obj("obj-box-1e200-m-wide", scaledBox(1e200));
+        obj("obj-box-wider-than-100-km", scaledBox(150_000));
+        obj("obj-bow-tie-roof", Boxes.closed(0, 0, 0, 10, 10, 10).obj("roof")   // the roof is the first face (line 6)
+                .replaceFirst("f -4 -3 -2 -1", "f -4 -3 -1 -2"));
         CASES.put("obj-only-context-blocks", new Case(Map.of("m.obj", MODEL), withSite("--context", "west,east")));
         CASES.put("obj-unknown-analysed-block", new Case(Map.of("m.obj", MODEL), withSite("--analyse", "north")));
         // "é" is the byte 0xE9 in ISO/IEC 8859-1 (Latin-1) and Windows-1252; in UTF-8 it starts a 3-byte sequence (RFC 3629)

@@ -1,6 +1,7 @@
 package org.solmass.surface;
 
 import org.junit.jupiter.api.Test;
+import org.solmass.model.VertexWelder;
 import org.solmass.model.MassingModel;
 import org.solmass.model.ModelOptions;
 import org.solmass.model.ObjReader;

@@ -1,6 +1,4 @@
-package org.solmass.surface;
-
-import org.solmass.model.IntList;
+package org.solmass.model;
 
 import java.util.HashMap;
 import java.util.Map;
@@ -10,12 +8,24 @@ import java.util.Map;
  * earlier representative vertex is replaced by that representative; the lowest-index
  * representative in reach wins, so the result depends only on the vertex order. Uses a uniform hash
  * grid of cell size {@code tol} and searches the 27 neighbouring cells (common practice).
+ *
+ * <p>The one weld of Solmass: the reader's orientation pass ({@link Orientation}) finds shared edges
+ * with it, and the surface stage merges coplanar triangles on welded corners. Its tolerance scales
+ * with the bounding-box diagonal D of the vertices the faces use: {@code max(1e-6 D, 1e-9 m)}.
  */
-final class VertexWelder {
+public final class VertexWelder {
+    /** Weld tolerance relative to the bounding-box diagonal of the used vertices. */
+    public static final double WELD_REL = 1e-6;
+    /** Smallest weld tolerance, metres. */
+    public static final double WELD_MIN_M = 1e-9;
+
     private VertexWelder() {}
 
+    /** Weld tolerance for a model whose used vertices span a box of diagonal {@code diagonalM}, metres. */
+    public static double tolerance(double diagonalM) { return Math.max(WELD_REL * diagonalM, WELD_MIN_M); }
+
     /** Representative vertex index for every vertex of the flat x,y,z array. */
-    static int[] weld(double[] v, double tol) {
+    public static int[] weld(double[] v, double tol) {
         int n = v.length / 3;
         int[] rep = new int[n];
         Map<Long, IntList> grid = new HashMap<>(Math.max(16, n * 2));
