@@ -216,10 +216,10 @@ final class ViewerBridge implements ViewerActions {
         if (last != null) {
             RunRecord run = RunRecord.of(Main.version(), last.study(), last.weather().timeBase().label(), last.counts(),
                     last.timingsS(), java.time.Instant.now());
-            SummaryWriter.write(file, shown, SummaryWriter.Spec.standard(study.outputs().thresholdsKwhM2()), run,
+            SummaryWriter.write(file, shown, SummaryWriter.Spec.standard(study.outputs().thresholdsKwhM2()).withStoreyHeight(study.outputs().storeyHeightM()), run,
                     List.of(Cautions.RESULTS));
         } else {
-            SummaryWriter.write(file, shown, SummaryWriter.Spec.standard(study.outputs().thresholdsKwhM2()), null,
+            SummaryWriter.write(file, shown, SummaryWriter.Spec.standard(study.outputs().thresholdsKwhM2()).withStoreyHeight(study.outputs().storeyHeightM()), null,
                     List.of(Cautions.RESULTS));
         }
     }

@@ -85,7 +85,8 @@ public final class ResultsFolder {
         }
         PvZones.Result pv = r.metrics().find(PvZonesMetric.Found.class).map(PvZonesMetric.Found::zones).orElse(null);
         if (pv != null) pub.write(ZoneCsvWriter.FILE_NAME, p -> ZoneCsvWriter.write(p, pv.zones()));
-        SummaryWriter.Spec spec = SummaryWriter.Spec.standard(o.thresholdsKwhM2()).with(r.metrics().summaryColumns());
+        SummaryWriter.Spec spec = SummaryWriter.Spec.standard(o.thresholdsKwhM2()).with(r.metrics().summaryColumns())
+                .withStoreyHeight(o.storeyHeightM());
         List<String> texts = new ArrayList<>(r.cautions());
         texts.addAll(r.metrics().notes());
         texts.addAll(r.notes());

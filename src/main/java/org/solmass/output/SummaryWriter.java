@@ -39,10 +39,24 @@ public final class SummaryWriter {
      * @param thresholdColumn the column the thresholds apply to (e.g. annual_kwh_m2); null for none
      * @param thresholds ascending thresholds in that column's unit
      */
-    public record Spec(List<String> columns, String thresholdColumn, List<Double> thresholds) {
+    public record Spec(List<String> columns, String thresholdColumn, List<Double> thresholds, double storeyHeightM) {
+        /** Storey height of the facade height bands when the study gives none, metres (common practice: 3 m floor to floor). */
+        public static final double DEFAULT_STOREY_HEIGHT_M = 3.0;
+
         public Spec {
             columns = List.copyOf(columns);
             thresholds = List.copyOf(thresholds);
+            if (!(storeyHeightM > 0)) throw new IllegalArgumentException("storey height must be > 0: " + storeyHeightM);
+        }
+
+        /** A spec with the default storey height. */
+        public Spec(List<String> columns, String thresholdColumn, List<Double> thresholds) {
+            this(columns, thresholdColumn, thresholds, DEFAULT_STOREY_HEIGHT_M);
+        }
+
+        /** The same with another storey height, metres. */
+        public Spec withStoreyHeight(double m) {
+            return new Spec(columns, thresholdColumn, thresholds, m);
         }
 
         /**
@@ -60,7 +74,7 @@ public final class SummaryWriter {
         public Spec with(List<String> more) {
             List<String> all = new java.util.ArrayList<>(columns);
             for (String c : more) if (!all.contains(c)) all.add(c);
-            return new Spec(all, thresholdColumn, thresholds);
+            return new Spec(all, thresholdColumn, thresholds, storeyHeightM);
         }
     }
 
@@ -129,10 +143,92 @@ public final class SummaryWriter {
             String name = blockNames.get(e.getKey());
             bn.set(bn.has(name) ? name + " (block " + e.getKey() + ")" : name, g);   // two blocks may share a name
         }
+        Breakdown br = Breakdown.of(patches, spec.storeyHeightM(), cols.size(), thr.length, values, thrValues, thr);
+        ObjectNode on = root.putObject("by_facade_orientation");
+        for (Map.Entry<String, Group> e : br.orientation.entrySet()) on.set(e.getKey(), emit.group(e.getValue()));
+        ObjectNode sn = root.putObject("by_facade_storey");
+        sn.put("storey_height_m", spec.storeyHeightM());
+        sn.put("base_z", round(br.baseZ, 3));
+        for (Map.Entry<Integer, Group> e : br.storey.entrySet()) {
+            sn.set(Breakdown.bandLabel(e.getKey(), spec.storeyHeightM()), emit.group(e.getValue()));
+        }
+        ObjectNode un = root.putObject("by_surface");
+        for (Map.Entry<String, Group> e : br.surface.entrySet()) {
+            ObjectNode g = JsonNodeFactory.instance.objectNode();
+            Patch first = br.surfaceFirst.get(e.getKey());
+            g.put("block", first.blockName());
+            g.put("kind", first.kind().label());
+            g.put("tilt_deg", round(first.tiltDeg(), 2));
+            g.put("azimuth_deg", round(first.azimuthDeg(), 2));
+            g.setAll(emit.group(e.getValue()));
+            un.set(e.getKey(), g);
+        }
         ArrayNode ca = root.putArray("cautions");
         for (String c : cautions) ca.add(c);
         if (run != null) root.set("run", run.toTree());
         return root;
+    }
+
+    /**
+     * The finer groups of summary.json: facade patches by compass sector of their azimuth (N, NE, ...,
+     * NW: 45 deg sectors centred on the eight directions) and by storey band (height of the centroid
+     * above the lowest point of all patches, in bands of the storey height: band k covers
+     * [k h, (k + 1) h)), and every patch by its surface ({@code B<block>-S<surface>}, the prefix of its
+     * patch ids).
+     */
+    static final class Breakdown {
+        static final String[] SECTORS = {"N", "NE", "E", "SE", "S", "SW", "W", "NW"};
+        final Map<String, Group> orientation = new java.util.LinkedHashMap<>();
+        final Map<Integer, Group> storey = new TreeMap<>();
+        final Map<String, Group> surface = new java.util.LinkedHashMap<>();
+        final Map<String, Patch> surfaceFirst = new java.util.HashMap<>();
+        double baseZ;
+
+        static Breakdown of(List<Patch> patches, double storeyM, int cols, int nThr, double[][] values, double[] thrValues,
+                            double[] thr) {
+            Breakdown b = new Breakdown();
+            b.baseZ = Double.POSITIVE_INFINITY;
+            for (Patch q : patches) {
+                double[] o = q.outline();
+                for (int k = 2; k < o.length; k += 3) b.baseZ = Math.min(b.baseZ, o[k]);
+                if (o.length == 0) b.baseZ = Math.min(b.baseZ, q.centroid().z());
+            }
+            if (!Double.isFinite(b.baseZ)) b.baseZ = 0;
+            for (String sct : SECTORS) b.orientation.put(sct, null);
+            double[] row = new double[cols];
+            for (int p = 0; p < patches.size(); p++) {
+                Patch q = patches.get(p);
+                for (int c = 0; c < cols; c++) row[c] = values[c][p];
+                double tv = thrValues == null ? Double.NaN : thrValues[p];
+                String sid = surfaceLabel(q);
+                b.surfaceFirst.putIfAbsent(sid, q);
+                b.surface.computeIfAbsent(sid, k -> new Group(cols, nThr)).add(q.areaM2(), row, tv, thr);
+                if (q.kind() != SurfaceKind.FACADE) continue;
+                String sct = sector(q.azimuthDeg());
+                if (b.orientation.get(sct) == null) b.orientation.put(sct, new Group(cols, nThr));
+                b.orientation.get(sct).add(q.areaM2(), row, tv, thr);
+                int band = (int) Math.floor((q.centroid().z() - b.baseZ) / storeyM + 1e-9);
+                b.storey.computeIfAbsent(band, k -> new Group(cols, nThr)).add(q.areaM2(), row, tv, thr);
+            }
+            b.orientation.values().removeIf(java.util.Objects::isNull);
+            return b;
+        }
+
+        /** The compass sector of an azimuth (degrees from north, clockwise): N for [337.5, 22.5), and so on. */
+        static String sector(double azimuthDeg) {
+            return SECTORS[(int) Math.floorMod(Math.round(azimuthDeg / 45.0), 8L)];
+        }
+
+        /** "B3-S12" of patch id "B3-S12-P0045". */
+        static String surfaceLabel(Patch q) {
+            int i = q.id().lastIndexOf("-P");
+            return i > 0 ? q.id().substring(0, i) : "B" + q.block() + "-S" + q.surface();
+        }
+
+        /** "3-6 m" for band 1 of 3 m storeys. */
+        static String bandLabel(int band, double h) {
+            return label(band * h) + "-" + label((band + 1) * h) + " m";
+        }
     }
 
     /** Running sums of one group of patches. */

@@ -255,14 +255,17 @@ public record Study(String name, String description, Path source, Model model, S
      * @param thresholdsKwhM2 annual irradiation thresholds for the "area at or above" figures of
      *                        summary.json, kWh/m2 per year, ascending
      * @param gltf write patches.gltf (glTF 2.0 mesh of the patches)
+     * @param storeyHeightM height of the facade storey bands of summary.json, metres
      */
     public record Outputs(Path folder, boolean monthHourCsv, boolean map, int mapWidthPx, int mapHeightPx,
-                          List<Double> thresholdsKwhM2, boolean gltf) {
+                          List<Double> thresholdsKwhM2, boolean gltf, double storeyHeightM) {
         public static final List<Double> DEFAULT_THRESHOLDS = List.of(300.0, 600.0, 900.0, 1200.0);
         public static final int DEFAULT_MAP_WIDTH = 2000, DEFAULT_MAP_HEIGHT = 1100;
         public static final boolean DEFAULT_GLTF = true;
+        /** Common practice: about 3 m floor to floor. */
+        public static final double DEFAULT_STOREY_HEIGHT_M = 3.0;
         public static final Outputs DEFAULTS = new Outputs(Path.of("results").toAbsolutePath(), false, true,
-                DEFAULT_MAP_WIDTH, DEFAULT_MAP_HEIGHT, DEFAULT_THRESHOLDS, DEFAULT_GLTF);
+                DEFAULT_MAP_WIDTH, DEFAULT_MAP_HEIGHT, DEFAULT_THRESHOLDS, DEFAULT_GLTF, DEFAULT_STOREY_HEIGHT_M);
 
         public Outputs {
             thresholdsKwhM2 = List.copyOf(thresholdsKwhM2);
@@ -271,7 +274,13 @@ public record Study(String name, String description, Path source, Model model, S
         /** Outputs with the default glTF setting. */
         public Outputs(Path folder, boolean monthHourCsv, boolean map, int mapWidthPx, int mapHeightPx,
                        List<Double> thresholdsKwhM2) {
-            this(folder, monthHourCsv, map, mapWidthPx, mapHeightPx, thresholdsKwhM2, DEFAULT_GLTF);
+            this(folder, monthHourCsv, map, mapWidthPx, mapHeightPx, thresholdsKwhM2, DEFAULT_GLTF, DEFAULT_STOREY_HEIGHT_M);
+        }
+
+        /** Outputs with the default storey height. */
+        public Outputs(Path folder, boolean monthHourCsv, boolean map, int mapWidthPx, int mapHeightPx,
+                       List<Double> thresholdsKwhM2, boolean gltf) {
+            this(folder, monthHourCsv, map, mapWidthPx, mapHeightPx, thresholdsKwhM2, gltf, DEFAULT_STOREY_HEIGHT_M);
         }
     }
 

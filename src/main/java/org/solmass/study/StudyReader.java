@@ -162,7 +162,8 @@ public final class StudyReader {
                 o.integer("map_width_px", Outputs.DEFAULT_MAP_WIDTH, 400, 8000),
                 o.integer("map_height_px", Outputs.DEFAULT_MAP_HEIGHT, 300, 8000),
                 o.ascendingNumbers("thresholds_kwh_m2", Outputs.DEFAULT_THRESHOLDS, 0, 100_000, 32),
-                o.bool("gltf", Outputs.DEFAULT_GLTF));
+                o.bool("gltf", Outputs.DEFAULT_GLTF),
+                o.positive("storey_height_m", Outputs.DEFAULT_STOREY_HEIGHT_M, 0, 100));
         o.finish();
         int threads = c.integer("threads", 0, 0, 4096);
         Study.SunHours sunHours = sunHours(c, climate.year());

@@ -90,6 +90,7 @@ public final class StudyWriter {
         ArrayNode t = o.putArray("thresholds_kwh_m2");
         for (double v : s.outputs().thresholdsKwhM2()) t.add(v);
         o.put("gltf", s.outputs().gltf());
+        o.put("storey_height_m", s.outputs().storeyHeightM());
         root.put("threads", s.threads());
 
         ObjectNode sh = root.putObject("sun_hours");
