@@ -36,8 +36,8 @@ class FuzzRegressionTest {
     @Test
     void hourlyFileWithAGapOfMillenniaIsAnInputErrorWithoutLargeAllocation() throws IOException {
         String found = resource("HourlyCsvClimateFuzzTestInputs/climateTextReadsOrFailsWithAnInputError/regression-last-row-in-year-9578.csv");
-        assertEquals("f.csv:7: missing steps (7 in a row) after this line, from 2025-01-01T06:00; set \"fill_gaps\": true"
-                + " in the study's climate object to interpolate short gaps", refusedWithSmallAllocation(found));
+        assertEquals("f.csv:7: the row has 7 cells but the header (line 1) has 4; a decimal comma in a comma-separated file"
+                + " splits numbers: separate the cells with ';' or quote the numbers", refusedWithSmallAllocation(found));
         String minimal = "time,ghi_wm2,dhi_wm2\n2025-01-01T00:00,0,0\n2025-01-01T01:00,0,0\n9578-01-02T23:00,0,0\n";
         assertTrue(refusedWithSmallAllocation(minimal).startsWith("f.csv:3: missing steps ("));
     }
