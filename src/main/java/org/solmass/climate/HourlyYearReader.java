@@ -63,7 +63,8 @@ final class HourlyYearReader {
         for (int i = 1; i < n0; i++) {
             if (!t[i].isAfter(t[i - 1])) {
                 throw new InputException(csv.at(csv.rows.get(i)), "timestamp " + LocalDateTime.ofInstant(t[i], off) + " is not after the previous row's "
-                        + LocalDateTime.ofInstant(t[i - 1], off) + "; rows must be in time order, one per interval");
+                        + LocalDateTime.ofInstant(t[i - 1], off) + "; rows must be in time order, one per interval"
+                        + clockHint(spec, calc.site().zone(), LocalDateTime.ofInstant(t[i], off)));
             }
         }
         long step = Duration.between(t[0], t[1]).getSeconds();
@@ -72,7 +73,7 @@ final class HourlyYearReader {
             throw new InputException(csv.at(csv.rows.get(1)), "the step (" + step + " s from the first two rows) must divide one hour");
         }
         double stepH = step / 3600.0;
-        checkGaps(csv, t, step, off, spec.fillGapsMaxSteps());
+        checkGaps(csv, t, step, off, spec.fillGapsMaxSteps(), spec, calc.site().zone());
         RowTimes.checkYears(csv, t, off);
         long span = Duration.between(t[0], t[n0 - 1]).getSeconds();
         int n = (int) (span / step) + 1;
@@ -166,7 +167,7 @@ final class HourlyYearReader {
      * Refuses a gap between two rows longer than the gaps that are filled, before any array of the
      * file's span is made: the span is then at most (rows x (maxRun + 1)) steps, whatever the timestamps.
      */
-    private static void checkGaps(ClimateTable csv, Instant[] t, long step, ZoneOffset off, int maxRun) {
+    private static void checkGaps(ClimateTable csv, Instant[] t, long step, ZoneOffset off, int maxRun, ClimateSpec spec, java.time.ZoneId zone) {
         for (int i = 1; i < t.length; i++) {
             long d = Duration.between(t[i - 1], t[i]).getSeconds();
             ClimateTable.Line l = csv.rows.get(i);
@@ -174,9 +175,22 @@ final class HourlyYearReader {
             long missing = d / step - 1;
             if (missing > maxRun) {
                 throw new InputException(csv.at(csv.rows.get(i - 1)), "missing step" + (missing > 1 ? "s (" + missing + " in a row)" : "")
-                        + " after this line, from " + LocalDateTime.ofInstant(t[i - 1].plusSeconds(step), off) + gapAdvice(maxRun));
+                        + " after this line, from " + LocalDateTime.ofInstant(t[i - 1].plusSeconds(step), off) + gapAdvice(maxRun)
+                        + clockHint(spec, zone, LocalDateTime.ofInstant(t[i - 1].plusSeconds(step), off)));
             }
         }
+    }
+
+    /**
+     * A hint when a local time read as standard time is one that clocks repeat (autumn) or skip
+     * (spring) in the zone: the file is probably clock time with daylight saving.
+     */
+    private static String clockHint(ClimateSpec spec, java.time.ZoneId zone, LocalDateTime local) {
+        if (spec.reading().clock() != ClimateSpec.Clock.STANDARD || zone.getRules().isFixedOffset()) return "";
+        int valid = zone.getRules().getValidOffsets(local).size();
+        if (valid == 1) return "";
+        return " (" + local + " is an hour the clocks of " + zone + (valid == 0 ? " skip in spring" : " repeat in autumn")
+                + ": if the file is in clock time with daylight saving, read it with --clock dst)";
     }
 
     private static String gapAdvice(int maxRun) {

@@ -79,7 +79,7 @@ final class RowTimes {
         if (reading.clock() == ClimateSpec.Clock.DST) {
             ZoneRules rules = zone.getRules();
             if (rules.isFixedOffset()) {
-                throw new InputException("clock", "clock time with daylight saving needs a zone that observes it (an IANA id such as Europe/Berlin), got " + zone);
+                throw new InputException("--clock", "clock time with daylight saving needs a zone that observes it (an IANA id such as Europe/Berlin), got " + zone);
             }
             clockTime(csv, local, given, rules, t, rep);
             layout += ", local clock time with daylight saving of " + zone + " converted to standard time UTC" + standard;
@@ -131,15 +131,20 @@ final class RowTimes {
             if (i > 0) {
                 ZoneOffsetTransition tr = rules.nextTransition(t[i - 1]);
                 if (tr != null && tr.isGap() && !tr.getInstant().isAfter(t[i])) {
-                    rep.note("clock skipped " + tr.getDateTimeBefore() + " to " + tr.getDateTimeAfter().toLocalTime()
+                    clock(rep, "clock skipped " + tr.getDateTimeBefore() + " to " + tr.getDateTimeAfter().toLocalTime()
                             + " (spring forward; no data missing) before " + where);
                 }
                 if (tr != null && tr.isOverlap() && !tr.getInstant().isAfter(t[i])) {
-                    rep.note("clock repeated " + tr.getDateTimeAfter() + " to " + tr.getDateTimeBefore().toLocalTime()
+                    clock(rep, "clock repeated " + tr.getDateTimeAfter() + " to " + tr.getDateTimeBefore().toLocalTime()
                             + " (autumn back) at " + where);
                 }
             }
         }
+    }
+
+    private static void clock(ClimateReport.Builder rep, String message) {
+        rep.note(message);
+        rep.warn(message);
     }
 
     /** Day-month order: the option, else the only one the data allow; all first two parts up to 12: error. */
@@ -160,19 +165,19 @@ final class RowTimes {
         }
         if (first.group(1).length() == 4) {
             if (option != null && option != ClimateSpec.DateOrder.YMD) {
-                throw new InputException("date-order", option.label() + " given, but the dates start with the year (" + cell(csv, 0, col) + "); use ymd");
+                throw new InputException("--date-order", option.label() + " given, but the dates start with the year (" + cell(csv, 0, col) + "); use ymd");
             }
             return ClimateSpec.DateOrder.YMD;
         }
         if (option != null) {
-            if (option == ClimateSpec.DateOrder.YMD) throw new InputException("date-order", "ymd given, but the dates end with the year (" + cell(csv, 0, col) + ")");
+            if (option == ClimateSpec.DateOrder.YMD) throw new InputException("--date-order", "ymd given, but the dates end with the year (" + cell(csv, 0, col) + ")");
             return option;
         }
         if (maxA > 12 && maxB <= 12) return ClimateSpec.DateOrder.DMY;
         if (maxB > 12 && maxA <= 12) return ClimateSpec.DateOrder.MDY;
         if (maxA <= 12 && maxB <= 12) {
             throw new InputException(csv.headerAt(), "dates like '" + cell(csv, 0, col) + "' can be day-month or month-day and no day above 12"
-                    + " tells which; give --date-order dmy or mdy");
+                    + " tells which; give --date-order dmy or mdy (study key climate.date_order)");
         }
         return ClimateSpec.DateOrder.DMY;   // both above 12 somewhere: the row that is no date says so
     }
