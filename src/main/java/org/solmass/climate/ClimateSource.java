@@ -83,7 +83,7 @@ public final class ClimateSource {
 
     /** Month-hour table: month,hour,ghi_wm2,dhi_wm2[,temp_c], 288 rows. */
     static WeatherSeries monthHour(SolarCalculator calc, ClimateTable csv, ClimateSpec spec) {
-        int cm = need(csv, "month"), ch = need(csv, "hour"), cg = need(csv, "ghi_wm2"), cd = need(csv, "dhi_wm2"), ct = csv.column("temp_c");
+        int cm = need(csv, "month"), ch = need(csv, "hour"), cg = need(csv, "ghi_wm2", "ghi"), cd = need(csv, "dhi_wm2", "dhi"), ct = csv.column("temp_c");
         IrradianceUnit ug = csv.irradianceUnit(cg, spec.reading().irradianceUnit()), ud = csv.irradianceUnit(cd, spec.reading().irradianceUnit());
         double[][][] v = new double[12][24][];
         String[][] where = new String[12][24];
@@ -218,8 +218,10 @@ public final class ClimateSource {
         return new WeatherSeries(steps, TimeBase.AVERAGE_DAYS, "monthly means " + csv.name, rep.build().complete(steps, TimeBase.AVERAGE_DAYS, null));
     }
 
-    static int need(ClimateTable csv, String name) {
+    /** The column of the first name the header has (a name with a unit in brackets counts); missing: error naming the first. */
+    static int need(ClimateTable csv, String name, String... otherNames) {
         int c = csv.column(name);
+        for (int i = 0; c < 0 && i < otherNames.length; i++) c = csv.column(otherNames[i]);
         if (c < 0) throw new InputException(InputException.at(csv.name, csv.header.number()), "missing column '" + name + "' in the header");
         return c;
     }

@@ -312,4 +312,14 @@ class ClimateDialectTest {
         InputException e = assertThrows(InputException.class, () -> ClimateSource.load(SITE, ClimateSpec.file(f)));
         assertTrue(e.getMessage().startsWith(f + ":3: not UTF-8 text"), e.getMessage());
     }
+
+    /** Issue 12: /dev/zero as a climate file ran out of memory; now the first 64 K characters without a line end stop it. */
+    @Test
+    void anEndlessSingleLineIsRefusedBeforeMemoryRunsOut() {
+        Path zero = Path.of("/dev/zero");
+        org.junit.jupiter.api.Assumptions.assumeTrue(Files.exists(zero), "no /dev/zero on this system");
+        InputException e = assertThrows(InputException.class, () -> ClimateSource.load(SITE, ClimateSpec.file(zero)));
+        assertEquals("/dev/zero:1: line longer than 65536 characters; a climate file has one row of a table per line (is this a CSV file?)",
+                e.getMessage());
+    }
 }
