@@ -66,8 +66,8 @@ public final class ClimateCommand implements Callable<Integer> {
         }
         ClimateReport.Period p = r.period();
         if (p != null) {
-            o.println(String.format(Locale.ROOT, "period       %s%d steps of %s min (%s)", p.first().isEmpty() ? "" : p.first() + " to " + p.last() + ", ",
-                    p.steps(), fmt(p.stepMinutes()), p.timeBase()));
+            o.println(String.format(Locale.ROOT, "period       %s%d steps of %s min (%s)%s", p.first().isEmpty() ? "" : p.first() + " to " + p.last() + ", ",
+                    p.steps(), fmt(p.stepMinutes()), p.timeBase(), p.filledSteps() > 0 ? ", " + p.filledSteps() + " missing steps filled" : ""));
         }
         for (String x : r.repairs()) o.println("repaired     " + x);
         for (String x : r.warnings()) o.println("warning      " + x);

@@ -59,8 +59,9 @@ public record ClimateReport(List<String> repairs, List<String> warnings, Reading
      * @param steps       number of steps
      * @param stepMinutes length of a step, minutes
      * @param timeBase    hourly-year or average-days
+     * @param filledSteps steps missing from the file and filled by interpolation (climate.fill_gaps)
      */
-    public record Period(String first, String last, int steps, double stepMinutes, String timeBase) {}
+    public record Period(String first, String last, int steps, double stepMinutes, String timeBase, int filledSteps) {}
 
     /**
      * Irradiation of a period, kWh/m2 (DNI: on a plane normal to the sun).
@@ -73,6 +74,11 @@ public record ClimateReport(List<String> repairs, List<String> warnings, Reading
 
     /** This report with the period and irradiation totals of the series' steps. */
     ClimateReport complete(List<Step> steps, TimeBase timeBase, java.time.ZoneOffset standard) {
+        return complete(steps, timeBase, standard, 0);
+    }
+
+    /** @param filledSteps steps missing from the file and filled by interpolation */
+    ClimateReport complete(List<Step> steps, TimeBase timeBase, java.time.ZoneOffset standard, int filledSteps) {
         double[][] m = new double[13][3];
         boolean[] seen = new boolean[13];
         for (Step s : steps) {
@@ -96,7 +102,7 @@ public record ClimateReport(List<String> repairs, List<String> warnings, Reading
             java.time.ZoneOffset off = standard == null ? java.time.ZoneOffset.UTC : standard;
             p = new Period(days ? "" : java.time.LocalDateTime.ofInstant(steps.get(0).start(), off).toString(),
                     days ? "" : java.time.LocalDateTime.ofInstant(steps.get(steps.size() - 1).start(), off).toString(),
-                    steps.size(), steps.get(0).durationH() * 60, days ? "average-days" : "hourly-year");
+                    steps.size(), steps.get(0).durationH() * 60, days ? "average-days" : "hourly-year", filledSteps);
         }
         return new ClimateReport(repairs, warnings, reading, p, months, new Totals(0, g, d, n));
     }

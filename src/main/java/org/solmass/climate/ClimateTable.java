@@ -68,6 +68,8 @@ final class ClimateTable {
     /** Largest climate file read, bytes: a year of 1-minute steps with a dozen columns is about 50 MB. */
     static final long MAX_FILE_BYTES = 256L * 1024 * 1024;
 
+    /** Put before decoded UTF-16 text so that the report can name the encoding (two byte-order marks never start a UTF-8 text that reads). */
+    private static final String UTF16_MARK = "\uFEFF\uFEFF";
     private static final Pattern COMMA_NUMBER = Pattern.compile("[-+]?\\d*,\\d+");
     private static final Pattern POINT_NUMBER = Pattern.compile("[-+]?\\d*\\.\\d+([eE][-+]?\\d+)?");
 
@@ -131,7 +133,7 @@ final class ClimateTable {
     /** UTF-8 (a byte-order mark is dropped), or UTF-16 when the file starts with its byte-order mark. */
     private static String decode(String name, byte[] b) {
         if (b.length >= 2 && ((b[0] == (byte) 0xFE && b[1] == (byte) 0xFF) || (b[0] == (byte) 0xFF && b[1] == (byte) 0xFE))) {
-            return "\uFEFF" + new String(b, StandardCharsets.UTF_16).replaceFirst("^\uFEFF", "");
+            return UTF16_MARK + new String(b, StandardCharsets.UTF_16).replaceFirst("^\uFEFF", "");
         }
         CharsetDecoder d = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
                 .onUnmappableCharacter(CodingErrorAction.REPORT);
@@ -151,7 +153,8 @@ final class ClimateTable {
     /** The rows of a climate text already read; {@code name} names it in messages. */
     static ClimateTable of(String name, String text) {
         String bom = "";
-        if (text.startsWith("\uFEFF")) { text = text.substring(1); bom = "UTF-8"; }
+        if (text.startsWith(UTF16_MARK)) { text = text.substring(UTF16_MARK.length()); bom = "UTF-16"; }
+        else if (text.startsWith("\uFEFF")) { text = text.substring(1); bom = "UTF-8"; }
         List<int[]> spans = new ArrayList<>();   // {start, end, line number} of each kept line
         String lineEnd = "";
         int lineNo = 1;

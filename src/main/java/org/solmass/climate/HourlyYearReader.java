@@ -24,6 +24,7 @@ import java.util.Set;
 final class HourlyYearReader {
     private HourlyYearReader() {}
 
+    private static final String FILLED_STEPS = "missing steps filled by linear interpolation";
     static final Set<String> ROLES = Set.copyOf(ClimateSpec.COLUMN_ROLES);
     static final List<String> TIME_NAMES = List.of("time", "timestamp", "datetime");
     private static final Map<String, List<String>> NAMES = Map.of(
@@ -101,7 +102,7 @@ final class HourlyYearReader {
         int[] cols = {cg, cd, cn, cT};
         String[] names = {"GHI", "DHI", "DNI", "temperature"};
         for (int c = 0; c < 4; c++) if (cols[c] >= 0) fill(v[c], names[c], missingAt, where, spec.fillGapsMaxSteps(), rep);
-        for (int k = 0; k < n; k++) if (missingAt[k] != null) rep.repair("missing steps filled by linear interpolation", missingAt[k]);
+        for (int k = 0; k < n; k++) if (missingAt[k] != null) rep.repair(FILLED_STEPS, missingAt[k]);
         double hours = n * step / 3600.0;
         if (Math.abs(hours - 8760) > 1e-6 && Math.abs(hours - 8784) > 1e-6) {
             rep.warn(String.format("the file covers %.1f h, not a whole year (8760 or 8784 h): sums are over the file's period", hours));
@@ -140,7 +141,7 @@ final class HourlyYearReader {
                 + spec.intervalLabel().name().toLowerCase(Locale.ROOT) + ", layout " + layout, rep.notes()));
         return new WeatherSeries(steps, TimeBase.HOURLY_YEAR, "hourly file " + csv.name + " (" + layout + ", "
                 + step / 60 + "-minute steps, labels at interval " + spec.intervalLabel().name().toLowerCase(Locale.ROOT) + ")",
-                rep.build().complete(steps, TimeBase.HOURLY_YEAR, off));
+                rep.build().complete(steps, TimeBase.HOURLY_YEAR, off, rep.count(FILLED_STEPS)));
     }
 
     /** Linear interpolation over runs of NaN no longer than maxRun with values on both sides; else an error. */

@@ -296,7 +296,7 @@ class ClimateDialectTest {
         assertTrue(r.reading().quoted());
         assertEquals("GHI (kJ/m2)", r.reading().columns().get("ghi"));
         assertEquals("kJ/m2 per step", r.reading().units().get("ghi"));
-        assertEquals(new ClimateReport.Period("2025-01-01T00:00", "2025-12-31T23:00", 8760, 60, "hourly-year"), r.period());
+        assertEquals(new ClimateReport.Period("2025-01-01T00:00", "2025-12-31T23:00", 8760, 60, "hourly-year", 0), r.period());
         assertEquals(12, r.months().size());
         // the annual total is the sum of the months, and GHI x 1 h summed over the clean file / 1000
         double sum = 0;
@@ -321,5 +321,14 @@ class ClimateDialectTest {
         InputException e = assertThrows(InputException.class, () -> ClimateSource.load(SITE, ClimateSpec.file(zero)));
         assertEquals("/dev/zero:1: line longer than 65536 characters; a climate file has one row of a table per line (is this a CSV file?)",
                 e.getMessage());
+    }
+
+    @Test
+    void aUtf16FileWithAByteOrderMarkReadsAsTheCleanFile(@TempDir Path tmp) throws Exception {
+        Path f = tmp.resolve("w.csv");
+        Files.write(f, clean.getBytes(StandardCharsets.UTF_16));   // Java's UTF-16 encoder writes a big-endian byte-order mark
+        WeatherSeries w = ClimateSource.load(SITE, ClimateSpec.file(f));
+        assertEquals(cleanSeries.steps(), w.steps());
+        assertEquals("UTF-16 (byte-order mark)", w.report().reading().encoding());
     }
 }
