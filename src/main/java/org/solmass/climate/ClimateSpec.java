@@ -70,7 +70,7 @@ public record ClimateSpec(Kind kind, Path file, Format format, TimeBase timeBase
     public enum Kind { CLEAR_SKY, FILE }
 
     /** Roles of the columns of an hourly file that {@code columns} can map. */
-    public static final java.util.List<String> COLUMN_ROLES = java.util.List.of("time", "ghi", "dhi", "dni", "temp", "year", "month", "day", "hour", "minute");
+    public static final java.util.List<String> COLUMN_ROLES = java.util.List.of("time", "ghi", "dhi", "dni", "temp", "date", "year", "month", "day", "hour", "minute");
 
     /**
      * Kind of climate file (docs/climate-formats.md). Written in lower case, '-' between words;

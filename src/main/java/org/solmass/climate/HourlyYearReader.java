@@ -27,19 +27,21 @@ final class HourlyYearReader {
     private static final String FILLED_STEPS = "missing steps filled by linear interpolation";
     static final Set<String> ROLES = Set.copyOf(ClimateSpec.COLUMN_ROLES);
     static final List<String> TIME_NAMES = List.of("time", "timestamp", "datetime");
-    private static final Map<String, List<String>> NAMES = Map.of(
-            "time", TIME_NAMES,
-            "ghi", List.of("ghi_wm2", "ghi"),
-            "dhi", List.of("dhi_wm2", "dhi"),
-            "dni", List.of("dni_wm2", "dni"),
-            "temp", List.of("temp_c", "dry_bulb_c", "temperature_c", "temp", "temperature"),
-            "year", List.of("year"), "month", List.of("month"), "day", List.of("day"), "hour", List.of("hour"),
-            "minute", List.of("minute"));
+    private static final Map<String, List<String>> NAMES = Map.ofEntries(
+            Map.entry("time", TIME_NAMES),
+            Map.entry("ghi", List.of("ghi_wm2", "ghi")),
+            Map.entry("dhi", List.of("dhi_wm2", "dhi")),
+            Map.entry("dni", List.of("dni_wm2", "dni")),
+            Map.entry("temp", List.of("temp_c", "dry_bulb_c", "temperature_c", "temp", "temperature")),
+            Map.entry("date", List.of("date")),
+            Map.entry("year", List.of("year")), Map.entry("month", List.of("month")), Map.entry("day", List.of("day")),
+            Map.entry("hour", List.of("hour")), Map.entry("minute", List.of("minute")));
     private static final Set<String> CELSIUS = Set.of("c", "°c", "degc", "deg_c", "celsius");
 
     static WeatherSeries read(SolarCalculator calc, ClimateTable csv, ClimateSpec spec) {
         int ct = column(csv, spec, "time"), cg = column(csv, spec, "ghi"), cd = column(csv, spec, "dhi"),
                 cn = column(csv, spec, "dni"), cT = column(csv, spec, "temp");
+        int cdate = column(csv, spec, "date");
         int[] split = {column(csv, spec, "year"), column(csv, spec, "month"), column(csv, spec, "day"), column(csv, spec, "hour"),
                 column(csv, spec, "minute")};
         String head = csv.headerAt();
@@ -57,7 +59,7 @@ final class HourlyYearReader {
             throw new InputException(head, "unknown temperature unit '" + csv.unit(cT) + "' in the header '" + csv.header.cells()[cT] + "'; expected C");
         }
         ClimateReport.Builder rep = new ClimateReport.Builder();
-        RowTimes.Result times = RowTimes.read(csv, splitTime ? -1 : ct, split, spec.reading(), calc.site().zone(), rep);
+        RowTimes.Result times = RowTimes.read(csv, splitTime ? -1 : ct, split, cdate, spec.reading(), calc.site().zone(), rep);
         ZoneOffset off = times.standard();
         int n0 = csv.rows.size();
         Instant[] t = times.instants();
@@ -131,11 +133,11 @@ final class HourlyYearReader {
         String layout = cg < 0 ? "DNI+DHI" : cd >= 0 ? "GHI+DHI" : cn >= 0 ? "GHI+DNI" : "GHI (Erbs decomposition)";
         if (spec.reading().clock() == ClimateSpec.Clock.STANDARD) ClockCheck.warnIfClockTime(steps, calc.site().zone(), rep);
         Map<String, String> mapped = new java.util.LinkedHashMap<>(), unitNames = new java.util.LinkedHashMap<>();
-        String[] roles = {"time", "year", "month", "day", "hour", "minute", "ghi", "dhi", "dni", "temp"};
-        int[] at = {splitTime ? -1 : ct, splitTime ? split[0] : -1, splitTime ? split[1] : -1, splitTime ? split[2] : -1,
+        String[] roles = {"date", "time", "year", "month", "day", "hour", "minute", "ghi", "dhi", "dni", "temp"};
+        int[] at = {times.dateJoined() ? cdate : -1, splitTime ? -1 : ct, splitTime ? split[0] : -1, splitTime ? split[1] : -1, splitTime ? split[2] : -1,
                 splitTime ? split[3] : -1, splitTime ? split[4] : -1, cg, cd, cn, cT};
         for (int r = 0; r < roles.length; r++) if (at[r] >= 0) mapped.put(roles[r], csv.header.cells()[at[r]]);
-        for (int c = 0; c < 3; c++) if (irr[c] >= 0) unitNames.put(roles[6 + c], units[c].label() + (units[c].perInterval() ? " per step" : ""));
+        for (int c = 0; c < 3; c++) if (irr[c] >= 0) unitNames.put(roles[7 + c], units[c].label() + (units[c].perInterval() ? " per step" : ""));
         if (cT >= 0) unitNames.put("temp", "C");
         rep.reading(csv.reading("hourly", mapped, unitNames, times.layout() + ", labels at interval "
                 + spec.intervalLabel().name().toLowerCase(Locale.ROOT) + ", layout " + layout, rep.notes()));

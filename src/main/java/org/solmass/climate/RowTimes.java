@@ -29,6 +29,7 @@ final class RowTimes {
     static final int FIRST_YEAR = 1, LAST_YEAR = 2999;
 
     private static final Pattern ISO = Pattern.compile("^\\d{4}-\\d{2}-\\d{2}([T ].*)?$");
+    private static final Pattern TIME_OF_DAY = Pattern.compile("^\\d{1,2}:\\d{2}(:\\d{2})?$");
     private static final Pattern DATE = Pattern.compile(
             "^(\\d{1,4})([./-])(\\d{1,2})\\2(\\d{1,4})[ T]+(\\d{1,2}):(\\d{2})(?::(\\d{2}))?$");
 
@@ -36,25 +37,35 @@ final class RowTimes {
      * @param instants  interval labels (start or end, as the file has them), in row order
      * @param layout    how the rows give their time, for the climate report
      * @param standard  the site's standard UTC offset in the first row's year
+     * @param dateJoined whether the date came from a date column beside a time-of-day column
      */
-    record Result(Instant[] instants, String layout, ZoneOffset standard) {}
+    record Result(Instant[] instants, String layout, ZoneOffset standard, boolean dateJoined) {}
 
     /**
      * @param timeCol the timestamp column, or -1 for split columns
      * @param split   year, month, day, hour, minute columns (minute may be -1) when timeCol is -1
+     * @param dateCol a date column that goes with a time column holding only the time of day, or -1
      */
-    static Result read(ClimateTable csv, int timeCol, int[] split, ClimateSpec.Reading reading, ZoneId zone, ClimateReport.Builder rep) {
+    static Result read(ClimateTable csv, int timeCol, int[] split, int dateCol, ClimateSpec.Reading reading, ZoneId zone, ClimateReport.Builder rep) {
         int n = csv.rows.size();
+        String[] stamp = new String[n];
+        boolean joined = timeCol >= 0 && dateCol >= 0 && TIME_OF_DAY.matcher(csv.rows.get(0).cells()[timeCol]).matches();
+        for (int i = 0; timeCol >= 0 && i < n; i++) {
+            String[] c = csv.rows.get(i).cells();
+            stamp[i] = joined ? c[dateCol] + " " + c[timeCol] : c[timeCol];
+        }
+        String column = timeCol < 0 ? "" : joined ? "columns '" + csv.header.cells()[dateCol] + "' and '" + csv.header.cells()[timeCol] + "'"
+                : "column '" + csv.header.cells()[timeCol] + "'";
         LocalDateTime[] local = new LocalDateTime[n];
         ZoneOffset[] given = new ZoneOffset[n];
         String layout;
         if (timeCol < 0) {
             for (int i = 0; i < n; i++) local[i] = fromColumns(csv, csv.rows.get(i), split);
             layout = "date and time in columns " + String.join(", ", splitNames(csv, split));
-        } else if (ISO.matcher(cell(csv, 0, timeCol)).matches()) {
+        } else if (ISO.matcher(stamp[0]).matches()) {
             for (int i = 0; i < n; i++) {
                 ClimateTable.Line l = csv.rows.get(i);
-                String s = l.cells()[timeCol];
+                String s = stamp[i];
                 String iso = s.length() > 10 && s.charAt(10) == ' ' ? s.substring(0, 10) + "T" + s.substring(11) : s;
                 try {
                     OffsetDateTime o = OffsetDateTime.parse(iso);
@@ -68,11 +79,11 @@ final class RowTimes {
                     }
                 }
             }
-            layout = "ISO-8601 timestamps in column '" + csv.header.cells()[timeCol] + "'";
+            layout = "ISO-8601 timestamps in " + column;
         } else {
-            ClimateSpec.DateOrder order = dateOrder(csv, timeCol, reading.dateOrder());
-            for (int i = 0; i < n; i++) local[i] = fromDate(csv, csv.rows.get(i), timeCol, order);
-            layout = "timestamps in column '" + csv.header.cells()[timeCol] + "', dates " + order.label();
+            ClimateSpec.DateOrder order = dateOrder(csv, stamp, reading.dateOrder());
+            for (int i = 0; i < n; i++) local[i] = fromDate(csv, csv.rows.get(i), stamp[i], order);
+            layout = "timestamps in " + column + ", dates " + order.label();
         }
         ZoneOffset standard = zone.getRules().getStandardOffset(LocalDateTime.of(local[0].getYear(), 1, 1, 0, 0).toInstant(ZoneOffset.UTC));
         Instant[] t = new Instant[n];
@@ -89,7 +100,7 @@ final class RowTimes {
             for (ZoneOffset o : given) anyGiven |= o != null;
             layout += anyGiven ? ", with UTC offsets" : ", local standard time UTC" + standard;
         }
-        return new Result(t, layout, standard);
+        return new Result(t, layout, standard, joined);
     }
 
     /**
@@ -148,42 +159,41 @@ final class RowTimes {
     }
 
     /** Day-month order: the option, else the only one the data allow; all first two parts up to 12: error. */
-    private static ClimateSpec.DateOrder dateOrder(ClimateTable csv, int col, ClimateSpec.DateOrder option) {
+    private static ClimateSpec.DateOrder dateOrder(ClimateTable csv, String[] stamp, ClimateSpec.DateOrder option) {
         int maxA = 0, maxB = 0;
         boolean yearFirst = false;
-        for (ClimateTable.Line l : csv.rows) {
-            Matcher m = DATE.matcher(l.cells()[col]);
+        for (String st : stamp) {
+            Matcher m = DATE.matcher(st);
             if (!m.matches()) continue;
             yearFirst = m.group(1).length() == 4;
             maxA = Math.max(maxA, Integer.parseInt(m.group(1)));
             maxB = Math.max(maxB, Integer.parseInt(m.group(3)));
         }
-        Matcher first = DATE.matcher(cell(csv, 0, col));
+        Matcher first = DATE.matcher(stamp[0]);
         if (!first.matches()) {
             throw new InputException(csv.at(csv.rows.get(0)), "expected a timestamp like 2025-01-31T13:00, 31.01.2025 13:00 or 2025/01/31 13:00, got '"
-                    + cell(csv, 0, col) + "'");
+                    + stamp[0] + "'");
         }
         if (first.group(1).length() == 4) {
             if (option != null && option != ClimateSpec.DateOrder.YMD) {
-                throw new InputException("--date-order", option.label() + " given, but the dates start with the year (" + cell(csv, 0, col) + "); use ymd");
+                throw new InputException("--date-order", option.label() + " given, but the dates start with the year (" + stamp[0] + "); use ymd");
             }
             return ClimateSpec.DateOrder.YMD;
         }
         if (option != null) {
-            if (option == ClimateSpec.DateOrder.YMD) throw new InputException("--date-order", "ymd given, but the dates end with the year (" + cell(csv, 0, col) + ")");
+            if (option == ClimateSpec.DateOrder.YMD) throw new InputException("--date-order", "ymd given, but the dates end with the year (" + stamp[0] + ")");
             return option;
         }
         if (maxA > 12 && maxB <= 12) return ClimateSpec.DateOrder.DMY;
         if (maxB > 12 && maxA <= 12) return ClimateSpec.DateOrder.MDY;
         if (maxA <= 12 && maxB <= 12) {
-            throw new InputException(csv.headerAt(), "dates like '" + cell(csv, 0, col) + "' can be day-month or month-day and no day above 12"
+            throw new InputException(csv.headerAt(), "dates like '" + stamp[0] + "' can be day-month or month-day and no day above 12"
                     + " tells which; give --date-order dmy or mdy (study key climate.date_order)");
         }
         return ClimateSpec.DateOrder.DMY;   // both above 12 somewhere: the row that is no date says so
     }
 
-    private static LocalDateTime fromDate(ClimateTable csv, ClimateTable.Line l, int col, ClimateSpec.DateOrder order) {
-        String s = l.cells()[col];
+    private static LocalDateTime fromDate(ClimateTable csv, ClimateTable.Line l, String s, ClimateSpec.DateOrder order) {
         Matcher m = DATE.matcher(s);
         String like = order == ClimateSpec.DateOrder.YMD ? "2025/01/31 13:00" : order == ClimateSpec.DateOrder.DMY ? "31.01.2025 13:00" : "01/31/2025 13:00";
         if (!m.matches() || (m.group(1).length() == 4) != (order == ClimateSpec.DateOrder.YMD)) {
@@ -215,8 +225,6 @@ final class RowTimes {
             throw new InputException(csv.at(l), "no such date and time '" + text + "': " + e.getMessage());
         }
     }
-
-    private static String cell(ClimateTable csv, int row, int col) { return csv.rows.get(row).cells()[col]; }
 
     private static List<String> splitNames(ClimateTable csv, int[] split) {
         java.util.List<String> out = new java.util.ArrayList<>();

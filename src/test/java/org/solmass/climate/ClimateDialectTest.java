@@ -53,7 +53,7 @@ class ClimateDialectTest {
     /**
      * How a variant writes the year.
      *
-     * @param time  iso, dmy (31.01.2025 13:00), ymd (2025/01/31 13:00), mdy (01/31/2025 13:00) or split (year..hour columns)
+     * @param time  iso, dmy (31.01.2025 13:00), dmy2 (31.01.2025 and 13:00 in two columns), ymd (2025/01/31 13:00), mdy (01/31/2025 13:00) or split (year..hour columns)
      * @param unit  irradiance unit written in the header ("" for none)
      * @param given irradiance unit given as an option, or null
      */
@@ -87,6 +87,7 @@ class ClimateDialectTest {
                 new Dialect("day-first dates with dots", ",", false, false, false, false, "dmy", "", "(", null, null),
                 new Dialect("year-first dates with slashes", ",", false, false, false, false, "ymd", "", "(", null, null),
                 new Dialect("month-first dates with slashes", ",", false, false, false, false, "mdy", "", "(", null, null),
+                new Dialect("date and time in two columns, day-first", ";", false, false, false, false, "dmy2", "", "(", null, null),
                 new Dialect("split year, month, day, hour columns", ",", false, false, false, false, "split", "", "(", null, null),
                 new Dialect("semicolon + decimal comma + CRLF + BOM + quoted header + kJ/m2 + day-first dates", ";", true, true, true, true, "dmy", "kJ/m2", "(", null, null),
                 new Dialect("tab + decimal comma + split date columns + J/cm2 option + CRLF", "\t", true, true, false, false, "split", "", "(", IrradianceUnit.J_CM2, null),
@@ -103,6 +104,7 @@ class ClimateDialectTest {
         String u = d.unit().isEmpty() ? "" : " " + d.bracket() + d.unit() + close;
         List<String> head = new ArrayList<>();
         if (d.time().equals("split")) head.addAll(List.of("Year", "Month", "Day", "Hour"));
+        else if (d.time().equals("dmy2")) head.addAll(List.of("Date", "Time"));
         else head.add("Timestamp");
         head.addAll(List.of("GHI" + u, "DHI" + u, "Temperature (C)"));
         b.append(String.join(d.sep(), head.stream().map(h -> d.quoted() ? "\"" + h + "\"" : h).toList())).append(nl);
@@ -137,6 +139,7 @@ class ClimateDialectTest {
     static List<String> time(Dialect d, LocalDateTime t) {
         return switch (d.time()) {
             case "dmy" -> List.of(DateTimeFormatter.ofPattern("dd.MM.yyyy HH:mm").format(t));
+            case "dmy2" -> List.of(DateTimeFormatter.ofPattern("dd.MM.yyyy").format(t), DateTimeFormatter.ofPattern("HH:mm").format(t));
             case "ymd" -> List.of(DateTimeFormatter.ofPattern("yyyy/MM/dd HH:mm").format(t));
             case "mdy" -> List.of(DateTimeFormatter.ofPattern("MM/dd/yyyy HH:mm").format(t));
             case "split" -> List.of(Integer.toString(t.getYear()), Integer.toString(t.getMonthValue()),
