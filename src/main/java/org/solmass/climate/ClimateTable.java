@@ -40,12 +40,19 @@ final class ClimateTable {
      * name {@code ghi}, unit {@code W/m2}; no brackets: unit null.
      */
     record HeaderName(String text, String name, String unit) {
-        private static final Pattern WITH_UNIT = Pattern.compile("^(.*?)\\s*[(\\[]\\s*([^()\\[\\]]*?)\\s*[)\\]]\\s*$");
-
+        /** Splits at the last opening bracket of a cell that ends in a closing one (linear in the cell's length). */
         static HeaderName of(String text) {
-            Matcher m = WITH_UNIT.matcher(text);
-            if (m.matches() && !m.group(1).isEmpty()) return new HeaderName(text, m.group(1).strip().toLowerCase(Locale.ROOT), m.group(2));
-            return new HeaderName(text, text.strip().toLowerCase(Locale.ROOT), null);
+            String t = text.strip();
+            char last = t.isEmpty() ? ' ' : t.charAt(t.length() - 1);
+            if (last == ')' || last == ']') {
+                int open = t.lastIndexOf(last == ')' ? '(' : '[');
+                String name = open > 0 ? t.substring(0, open).strip() : "";
+                String unit = open > 0 ? t.substring(open + 1, t.length() - 1).strip() : "";
+                if (!name.isEmpty() && unit.chars().noneMatch(c -> c == '(' || c == ')' || c == '[' || c == ']')) {
+                    return new HeaderName(text, name.toLowerCase(Locale.ROOT), unit);
+                }
+            }
+            return new HeaderName(text, t.toLowerCase(Locale.ROOT), null);
         }
     }
 
@@ -219,8 +226,8 @@ final class ClimateTable {
             if (line.indexOf('"') >= 0) quoted[0] = true;
             return records.get(0).values();
         } catch (IOException | UncheckedIOException | IllegalStateException e) {
-            throw new InputException(InputException.at(name, number), "unbalanced quotes (\") in this line; a quoted cell"
-                    + " must close on the same line");
+            throw new InputException(InputException.at(name, number), "a quote (\") in this line is not closed, or text follows"
+                    + " a closing quote; a quoted cell must close on the same line, before the next separator");
         }
     }
 

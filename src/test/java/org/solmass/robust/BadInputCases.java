@@ -94,6 +94,8 @@ final class BadInputCases {
         climate("climate-year-3001", "time,ghi_wm2\n3001-01-01T00:00,0\n3001-01-01T01:00,0\n");
         climate("climate-header-column-twice", "time,ghi,dhi,ghi\n2025-01-01T00:00,0,0,0\n2025-01-01T01:00,0,0,0\n");
         climate("climate-line-too-long", "time,ghi_wm2\n" + "0".repeat(70_000) + "\n");
+        climate("climate-row-fewer-cells-than-header", "time,ghi_wm2,dhi_wm2\n2025-01-01T00:00,0\n2025-01-01T01:00,0,0\n");
+        climate("climate-unclosed-quote", "time,ghi_wm2\n\"2025-01-01T00:00,0\n2025-01-01T01:00,0\n");
         climate("climate-mixed-decimal-marks", "time;ghi_wm2\n2025-01-01T00:00;0,5\n2025-01-01T01:00;0.5\n");
         CASES.put("climate-missing-file", new Case(Map.of("m.obj", MODEL), withSite("--climate", "@nowhere.csv")));
 
