@@ -334,4 +334,21 @@ class ClimateDialectTest {
         assertEquals(cleanSeries.steps(), w.steps());
         assertEquals("UTF-16 (byte-order mark)", w.report().reading().encoding());
     }
+
+    @Test
+    void theMonthHourTableInASemicolonDecimalCommaDialectWithUnitsReadsAsTheCleanTable() {
+        String table = DemoWeather.monthHourCsv(year, SITE, 1);
+        StringBuilder b = new StringBuilder("\uFEFF");
+        for (String line : table.split("\n")) {
+            if (line.startsWith("#")) { b.append(line).append("\r\n"); continue; }
+            String l = line.startsWith("month,") ? "\"Month\",\"Hour\",\"GHI (W/m2)\",\"DHI [Wh/m2]\",\"temp_c\"" : line;
+            b.append(String.join(";", java.util.Arrays.stream(l.split(",")).map(c -> c.replace('.', ',')).toList())).append("\r\n");
+        }
+        WeatherSeries a = read(table, ClimateSpec.Reading.DEFAULT), w = read(b.toString(), ClimateSpec.Reading.DEFAULT);
+        assertEquals(TimeBase.AVERAGE_DAYS, w.timeBase());
+        assertEquals(a.steps(), w.steps());
+        assertEquals(a.report().months(), w.report().months());
+        assertEquals("semicolon", w.report().reading().separator());
+        assertEquals("Wh/m2", w.report().reading().units().get("dhi"));
+    }
 }
