@@ -184,12 +184,12 @@ final class ClimateTable {
         char sep = separator(text.substring(h[0], h[1]));
         CSVFormat format = CSVFormat.DEFAULT.builder().setDelimiter(sep).setQuote('"').setTrim(true)
                 .setIgnoreSurroundingSpaces(true).get();
-        boolean[] quoted = new boolean[1];
-        Line header = new Line(h[2], cells(name, format, text.substring(h[0], h[1]), h[2], quoted));
+        List<String[]> all = cells(name, format, text, spans);
+        Line header = new Line(h[2], all.get(0));
         List<Line> rows = new ArrayList<>(spans.size() - 1);
         for (int k = 1; k < spans.size(); k++) {
             int[] s = spans.get(k);
-            String[] cells = cells(name, format, text.substring(s[0], s[1]), s[2], quoted);
+            String[] cells = all.get(k);
             if (cells.length != header.cells().length) {
                 String where = InputException.at(name, s[2]);
                 String counts = "the row has " + cells.length + " cells but the header (line " + header.number() + ") has " + header.cells().length;
@@ -203,7 +203,9 @@ final class ClimateTable {
             rows.add(new Line(s[2], cells));
         }
         boolean comma = decimalComma(name, rows);
-        return new ClimateTable(name, header, rows, new Dialect(sep, comma, bom, lineEnd, quoted[0]));
+        boolean quoted = false;
+        for (int[] sp : spans) quoted |= text.substring(sp[0], sp[1]).indexOf('"') >= 0;
+        return new ClimateTable(name, header, rows, new Dialect(sep, comma, bom, lineEnd, quoted));
     }
 
     /** The candidate (',', ';', tab) found most often outside quotes in the header line; ',' on a tie. */
@@ -219,16 +221,30 @@ final class ClimateTable {
         return ',';
     }
 
-    private static String[] cells(String name, CSVFormat format, String line, int number, boolean[] quoted) {
-        try (CSVParser p = CSVParser.parse(line, format)) {
-            List<CSVRecord> records = p.getRecords();
-            if (records.isEmpty()) return new String[] {""};
-            if (line.indexOf('"') >= 0) quoted[0] = true;
-            return records.get(0).values();
+    /**
+     * The cells of each kept line, in one pass of Commons CSV over the kept lines joined by LF. A
+     * record whose cell holds a line end began with a quote that did not close on its line.
+     */
+    private static List<String[]> cells(String name, CSVFormat format, String text, List<int[]> spans) {
+        StringBuilder kept = new StringBuilder(text.length() + 1);
+        for (int[] sp : spans) kept.append(text, sp[0], sp[1]).append('\n');
+        List<String[]> out = new ArrayList<>(spans.size());
+        try (CSVParser p = CSVParser.parse(kept.toString(), format)) {
+            for (CSVRecord r : p) {
+                String[] v = r.values();
+                for (String c : v) if (c.indexOf('\n') >= 0) throw quote(name, spans.get(out.size())[2]);
+                out.add(v);
+            }
         } catch (IOException | UncheckedIOException | IllegalStateException e) {
-            throw new InputException(InputException.at(name, number), "a quote (\") in this line is not closed, or text follows"
-                    + " a closing quote; a quoted cell must close on the same line, before the next separator");
+            throw quote(name, spans.get(Math.min(out.size(), spans.size() - 1))[2]);
         }
+        if (out.size() != spans.size()) throw quote(name, spans.get(Math.min(out.size(), spans.size() - 1))[2]);
+        return out;
+    }
+
+    private static InputException quote(String name, int line) {
+        return new InputException(InputException.at(name, line), "a quote (\") in this line is not closed, or text follows"
+                + " a closing quote; a quoted cell must close on the same line, before the next separator");
     }
 
     /**
