@@ -131,6 +131,10 @@ final class HourlyYearReader {
             steps.add(s.toStep(r[0], r[1], r[2], v[3][k]));
         }
         String layout = cg < 0 ? "DNI+DHI" : cd >= 0 ? "GHI+DHI" : cn >= 0 ? "GHI+DNI" : "GHI (Erbs decomposition)";
+        if (times.hour24() && spec.intervalLabel() == ClimateSpec.IntervalLabel.START) {
+            rep.warn("the file gives hours as 24:00, as files labelled by the end of each interval (hour ending) do, but its"
+                    + " timestamps are read as interval starts; if the values are for the hour before, read it with --interval-label end");
+        }
         if (spec.reading().clock() == ClimateSpec.Clock.STANDARD) ClockCheck.warnIfClockTime(steps, calc.site().zone(), rep);
         Map<String, String> mapped = new java.util.LinkedHashMap<>(), unitNames = new java.util.LinkedHashMap<>();
         String[] roles = {"date", "time", "year", "month", "day", "hour", "minute", "ghi", "dhi", "dni", "temp"};

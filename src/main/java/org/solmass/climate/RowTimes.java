@@ -38,8 +38,9 @@ final class RowTimes {
      * @param layout    how the rows give their time, for the climate report
      * @param standard  the site's standard UTC offset in the first row's year
      * @param dateJoined whether the date came from a date column beside a time-of-day column
+     * @param hour24    whether some row gives the hour as 24 (hour-ending files count 1 to 24)
      */
-    record Result(Instant[] instants, String layout, ZoneOffset standard, boolean dateJoined) {}
+    record Result(Instant[] instants, String layout, ZoneOffset standard, boolean dateJoined, boolean hour24) {}
 
     /**
      * @param timeCol the timestamp column, or -1 for split columns
@@ -49,6 +50,7 @@ final class RowTimes {
     static Result read(ClimateTable csv, int timeCol, int[] split, int dateCol, ClimateSpec.Reading reading, ZoneId zone, ClimateReport.Builder rep) {
         int n = csv.rows.size();
         String[] stamp = new String[n];
+        boolean[] saw24 = new boolean[1];
         boolean joined = timeCol >= 0 && dateCol >= 0 && TIME_OF_DAY.matcher(csv.rows.get(0).cells()[timeCol]).matches();
         for (int i = 0; timeCol >= 0 && i < n; i++) {
             String[] c = csv.rows.get(i).cells();
@@ -60,7 +62,7 @@ final class RowTimes {
         ZoneOffset[] given = new ZoneOffset[n];
         String layout;
         if (timeCol < 0) {
-            for (int i = 0; i < n; i++) local[i] = fromColumns(csv, csv.rows.get(i), split);
+            for (int i = 0; i < n; i++) local[i] = fromColumns(csv, csv.rows.get(i), split, saw24);
             layout = "date and time in columns " + String.join(", ", splitNames(csv, split));
         } else if (ISO.matcher(stamp[0]).matches()) {
             for (int i = 0; i < n; i++) {
@@ -82,7 +84,7 @@ final class RowTimes {
             layout = "ISO-8601 timestamps in " + column;
         } else {
             ClimateSpec.DateOrder order = dateOrder(csv, stamp, reading.dateOrder());
-            for (int i = 0; i < n; i++) local[i] = fromDate(csv, csv.rows.get(i), stamp[i], order);
+            for (int i = 0; i < n; i++) local[i] = fromDate(csv, csv.rows.get(i), stamp[i], order, saw24);
             layout = "timestamps in " + column + ", dates " + order.label();
         }
         ZoneOffset standard = zone.getRules().getStandardOffset(LocalDateTime.of(local[0].getYear(), 1, 1, 0, 0).toInstant(ZoneOffset.UTC));
@@ -100,7 +102,7 @@ final class RowTimes {
             for (ZoneOffset o : given) anyGiven |= o != null;
             layout += anyGiven ? ", with UTC offsets" : ", local standard time UTC" + standard;
         }
-        return new Result(t, layout, standard, joined);
+        return new Result(t, layout, standard, joined, saw24[0]);
     }
 
     /**
@@ -193,7 +195,7 @@ final class RowTimes {
         return ClimateSpec.DateOrder.DMY;   // both above 12 somewhere: the row that is no date says so
     }
 
-    private static LocalDateTime fromDate(ClimateTable csv, ClimateTable.Line l, String s, ClimateSpec.DateOrder order) {
+    private static LocalDateTime fromDate(ClimateTable csv, ClimateTable.Line l, String s, ClimateSpec.DateOrder order, boolean[] saw24) {
         Matcher m = DATE.matcher(s);
         String like = order == ClimateSpec.DateOrder.YMD ? "2025/01/31 13:00" : order == ClimateSpec.DateOrder.DMY ? "31.01.2025 13:00" : "01/31/2025 13:00";
         if (!m.matches() || (m.group(1).length() == 4) != (order == ClimateSpec.DateOrder.YMD)) {
@@ -204,22 +206,25 @@ final class RowTimes {
         int mo = order == ClimateSpec.DateOrder.MDY ? a : b;
         int d = order == ClimateSpec.DateOrder.YMD ? c : order == ClimateSpec.DateOrder.DMY ? a : b;
         int sec = m.group(7) == null ? 0 : Integer.parseInt(m.group(7));
-        return at(csv, l, s, y, mo, d, Integer.parseInt(m.group(5)), Integer.parseInt(m.group(6)), sec);
+        return at(csv, l, s, y, mo, d, Integer.parseInt(m.group(5)), Integer.parseInt(m.group(6)), sec, saw24);
     }
 
-    private static LocalDateTime fromColumns(ClimateTable csv, ClimateTable.Line l, int[] c) {
+    private static LocalDateTime fromColumns(ClimateTable csv, ClimateTable.Line l, int[] c, boolean[] saw24) {
         int y = ClimateSource.integer(csv, l, c[0], "year", 1, 9999);
         int mo = ClimateSource.integer(csv, l, c[1], "month", 1, 12);
         int d = ClimateSource.integer(csv, l, c[2], "day", 1, 31);
         int h = ClimateSource.integer(csv, l, c[3], "hour", 0, 24);
         int mi = c[4] < 0 ? 0 : ClimateSource.integer(csv, l, c[4], "minute", 0, 59);
-        return at(csv, l, y + "-" + mo + "-" + d + " " + h + ":" + mi, y, mo, d, h, mi, 0);
+        return at(csv, l, y + "-" + mo + "-" + d + " " + h + ":" + mi, y, mo, d, h, mi, 0, saw24);
     }
 
     /** A local date-time; hour 24 (minute 0) is 00:00 of the next day. */
-    private static LocalDateTime at(ClimateTable csv, ClimateTable.Line l, String text, int y, int mo, int d, int h, int mi, int sec) {
+    private static LocalDateTime at(ClimateTable csv, ClimateTable.Line l, String text, int y, int mo, int d, int h, int mi, int sec, boolean[] saw24) {
         try {
-            if (h == 24 && mi == 0 && sec == 0) return LocalDateTime.of(y, mo, d, 0, 0).plusDays(1);
+            if (h == 24 && mi == 0 && sec == 0) {
+                saw24[0] = true;
+                return LocalDateTime.of(y, mo, d, 0, 0).plusDays(1);
+            }
             return LocalDateTime.of(y, mo, d, h, mi, sec);
         } catch (DateTimeException e) {
             throw new InputException(csv.at(l), "no such date and time '" + text + "': " + e.getMessage());

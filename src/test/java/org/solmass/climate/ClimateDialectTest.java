@@ -351,4 +351,15 @@ class ClimateDialectTest {
         assertEquals("semicolon", w.report().reading().separator());
         assertEquals("Wh/m2", w.report().reading().units().get("dhi"));
     }
+
+    @Test
+    void hour24ReadAsIntervalStartIsWarnedAbout() {
+        String csv = "year,month,day,hour,ghi\n2025,1,1,23,0\n2025,1,1,24,0\n2025,1,2,1,0\n";
+        WeatherSeries start = read(csv, ClimateSpec.Reading.DEFAULT);
+        assertTrue(start.report().warnings().stream().anyMatch(w -> w.startsWith("the file gives hours as 24:00")), start.report().warnings().toString());
+        WeatherSeries end = ClimateSource.parse(CALC, ClimateSpec.file(Path.of("w.csv")).withIntervalLabel(ClimateSpec.IntervalLabel.END), "w.csv", csv);
+        assertTrue(end.report().warnings().stream().noneMatch(w -> w.startsWith("the file gives hours as 24:00")));
+        // 24:00 of 1 January is 00:00 of 2 January: three hourly steps in a row
+        assertEquals(3, end.size());
+    }
 }
