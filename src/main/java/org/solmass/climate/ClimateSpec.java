@@ -17,7 +17,7 @@ import java.util.Map;
  * @param year             calendar year of a clear-sky HOURLY_YEAR
  * @param stepMinutes      step of generated days/years (clear sky, monthly means), divides 60
  * @param intervalLabel    whether a timestamp of an hourly file labels its interval's start or end
- * @param columns          role (time, ghi, dhi, dni, temp) to header name or 1-based column number
+ * @param columns          role (time, ghi, dhi, dni, temp; date, year, month, day, hour, minute) to header name or 1-based column number
  * @param fillGapsMaxSteps longest run of missing steps/values filled by linear interpolation (0 = never)
  * @param reading          how to read dates, clock time and irradiance units of a file (docs/climate-formats.md)
  */
