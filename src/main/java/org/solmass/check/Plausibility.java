@@ -197,7 +197,8 @@ public final class Plausibility {
             out.add(new Warning("weather-irradiance-unit", String.format(Locale.ROOT,
                     "the highest GHI of %s is %.3g W/m2, only %.1f%% of the extraterrestrial peak %.0f W/m2 on the"
                             + " horizontal: the irradiance columns are probably not in W/m2 (kWh/m2 or kW/m2 give values"
-                            + " 1000 times too small, J/cm2 per hour 0.36 times); convert them to W/m2 averages over the interval",
+                            + " 1000 times too small, J/cm2 per hour 0.36 times); name the unit in the header, e.g. 'GHI (kWh/m2)', or give"
+                            + " --irradiance-unit (study key climate.irradiance_unit)",
                     w.source(), peak, 100 * peak / extraPeak, extraPeak)));
         }
         return out;

@@ -3,6 +3,7 @@ package org.solmass.cli;
 import org.solmass.InputException;
 import org.solmass.TextInput;
 import org.solmass.climate.ClimateSpec;
+import org.solmass.climate.IrradianceUnit;
 import org.solmass.climate.TimeBaseChoice;
 import org.solmass.study.Study;
 import org.solmass.study.StudyOverrides;
@@ -23,17 +24,28 @@ public final class ClimateOptions {
     @Option(names = "--step-minutes", paramLabel = "MIN", description = "step of generated days (clear sky, monthly means), divides 60 (default 60)") Integer stepMinutes;
     @Option(names = "--interval-label", paramLabel = "start|end", description = "hourly files: a timestamp labels its interval's start (default) or end") String intervalLabel;
     @Option(names = "--columns", paramLabel = "ROLE=COL,...", description = "hourly files: role=header or role=column number, e.g. time=1,ghi=GlobHor,dhi=4") String columns;
+    @Option(names = "--date-order", paramLabel = "dmy|mdy|ymd", description = "hourly files: order of day, month and year in dates like 01/02/2025 (default: from the data; an error when the data cannot tell)") String dateOrder;
+    @Option(names = "--clock", paramLabel = "standard|dst", description = "hourly files: local timestamps are standard time (default) or clock time with daylight saving of --zone") String clock;
+    @Option(names = "--irradiance-unit", paramLabel = "UNIT", description = "unit of irradiance columns whose header names none: W/m2 (default), kW/m2, Wh/m2, kWh/m2, kJ/m2, MJ/m2 or J/cm2 (energies per step)") String irradianceUnit;
     @Option(names = "--fill-gaps", paramLabel = "N", description = "hourly files: fill gaps of up to N steps (0 to 24) by linear interpolation (default 0: never)") Integer fillGaps;
 
     /** The flags as study keys (climate.*, time_base, step_minutes). */
     StudyOverrides applyTo(StudyOverrides ov) {
         return ov.climate(climate).climateFormat(format).timeBase(timeBase).climateYear(year).stepMinutes(stepMinutes)
-                .intervalLabel(intervalLabel).columns(columns).fillGaps(fillGaps);
+                .intervalLabel(intervalLabel).columns(columns).fillGaps(fillGaps)
+                .dateOrder(dateOrder).clock(clock).irradianceUnit(irradianceUnit);
     }
 
     /** The time base asked for (errors name {@code --time-base}). */
     TimeBaseChoice timeBaseChoice() {
         return timeBase == null ? TimeBaseChoice.AUTO : TimeBaseChoice.parse(timeBase, "--time-base");
+    }
+
+    /** Date order, clock and irradiance unit from the flags alone (errors name the flag). */
+    ClimateSpec.Reading reading() {
+        return new ClimateSpec.Reading(dateOrder == null ? null : ClimateSpec.DateOrder.parse(dateOrder, "--date-order"),
+                clock == null ? ClimateSpec.Clock.STANDARD : ClimateSpec.Clock.parse(clock, "--clock"),
+                irradianceUnit == null ? null : IrradianceUnit.parse(irradianceUnit, "--irradiance-unit"));
     }
 
     /** What the climate stage reads, from the flags alone (errors name the flag). */
@@ -60,6 +72,7 @@ public final class ClimateOptions {
                 .withIntervalLabel(intervalLabel == null ? ClimateSpec.IntervalLabel.START
                         : ClimateSpec.IntervalLabel.parse(intervalLabel, "--interval-label"))
                 .withColumns(ClimateSpec.parseColumns(columns, "--columns"))
-                .withFillGaps(fill);
+                .withFillGaps(fill)
+                .withReading(reading());
     }
 }

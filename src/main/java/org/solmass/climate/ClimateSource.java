@@ -7,7 +7,9 @@ import org.solmass.sun.Site;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * Turns a {@link ClimateSpec} into a {@link WeatherSeries} for a site. Formats: docs/climate-formats.md.
@@ -21,7 +23,7 @@ public final class ClimateSource {
 
     public static WeatherSeries load(SolarCalculator calc, ClimateSpec spec) {
         if (spec.kind() == ClimateSpec.Kind.CLEAR_SKY) return clearSky(calc, spec);
-        return fromLines(calc, spec, CsvLines.read(spec.file()));
+        return fromLines(calc, spec, ClimateTable.read(spec.file()));
     }
 
     /**
@@ -29,23 +31,29 @@ public final class ClimateSource {
      * names the text in messages). For tests and fuzzing.
      */
     public static WeatherSeries parse(SolarCalculator calc, ClimateSpec spec, String name, String text) {
-        return fromLines(calc, spec, CsvLines.of(name, text.lines().toList()));
+        return fromLines(calc, spec, ClimateTable.of(name, text));
     }
 
-    private static WeatherSeries fromLines(SolarCalculator calc, ClimateSpec spec, CsvLines csv) {
-        ClimateSpec.Format f = spec.format() == ClimateSpec.Format.AUTO ? detect(csv) : spec.format();
+    private static WeatherSeries fromLines(SolarCalculator calc, ClimateSpec spec, ClimateTable csv) {
+        ClimateSpec.Format f = spec.format() == ClimateSpec.Format.AUTO ? detect(csv, spec) : spec.format();
         switch (f) {
-            case MONTH_HOUR: return monthHour(calc, csv);
+            case MONTH_HOUR: return monthHour(calc, csv, spec);
             case MONTHLY_MEANS: return monthlyMeans(calc, csv, spec);
             default: return HourlyYearReader.read(calc, csv, spec);
         }
     }
 
-    /** Recognises the format from the header line. */
-    static ClimateSpec.Format detect(CsvLines csv) {
+    /**
+     * Recognises the format from the header line: month and hour without year or day make a
+     * month-hour table; year, month, day and hour columns or a time column an hourly file.
+     */
+    static ClimateSpec.Format detect(ClimateTable csv, ClimateSpec spec) {
         if (csv.column("ghi_kwh_m2_day") >= 0) return ClimateSpec.Format.MONTHLY_MEANS;
-        if (csv.column("month") >= 0 && csv.column("hour") >= 0) return ClimateSpec.Format.MONTH_HOUR;
-        for (String c : csv.header.cells()) if (HourlyYearReader.TIME_NAMES.contains(c.toLowerCase(java.util.Locale.ROOT))) return ClimateSpec.Format.HOURLY;
+        boolean dated = csv.column("year") >= 0 || csv.column("day") >= 0;
+        if (!dated && csv.column("month") >= 0 && csv.column("hour") >= 0) return ClimateSpec.Format.MONTH_HOUR;
+        if (dated && csv.column("month") >= 0 && csv.column("hour") >= 0) return ClimateSpec.Format.HOURLY;
+        if (spec.columns().containsKey("time")) return ClimateSpec.Format.HOURLY;
+        for (ClimateTable.HeaderName c : csv.names) if (HourlyYearReader.TIME_NAMES.contains(c.name())) return ClimateSpec.Format.HOURLY;
         throw new InputException(InputException.at(csv.name, csv.header.number()), "cannot recognise the climate format from the header "
                 + Arrays.toString(csv.header.cells()) + "; expected the headers of docs/climate-formats.md or give --climate-format");
     }
@@ -70,18 +78,19 @@ public final class ClimateSource {
         }
         String what = spec.timeBase() == TimeBase.AVERAGE_DAYS ? "average days" : "year " + spec.year();
         return new WeatherSeries(steps, spec.timeBase(), "clear sky (Hottel 1976 beam, Liu & Jordan 1960 diffuse), " + what,
-                new ClimateReport(List.of(), List.of()));
+                new ClimateReport(List.of(), List.of()).complete(steps, spec.timeBase(), site.standardOffset(spec.year())));
     }
 
     /** Month-hour table: month,hour,ghi_wm2,dhi_wm2[,temp_c], 288 rows. */
-    static WeatherSeries monthHour(SolarCalculator calc, CsvLines csv) {
-        int cm = need(csv, "month"), ch = need(csv, "hour"), cg = need(csv, "ghi_wm2"), cd = need(csv, "dhi_wm2"), ct = csv.column("temp_c");
+    static WeatherSeries monthHour(SolarCalculator calc, ClimateTable csv, ClimateSpec spec) {
+        int cm = need(csv, "month"), ch = need(csv, "hour"), cg = need(csv, "ghi_wm2", "ghi"), cd = need(csv, "dhi_wm2", "dhi"), ct = csv.column("temp_c");
+        IrradianceUnit ug = csv.irradianceUnit(cg, spec.reading().irradianceUnit()), ud = csv.irradianceUnit(cd, spec.reading().irradianceUnit());
         double[][][] v = new double[12][24][];
         String[][] where = new String[12][24];
-        for (CsvLines.Line l : csv.rows) {
+        for (ClimateTable.Line l : csv.rows) {
             int m = integer(csv, l, cm, "month", 1, 12), h = integer(csv, l, ch, "hour", 0, 23);
             if (v[m - 1][h] != null) throw new InputException(csv.at(l), "month " + m + " hour " + h + " given twice (first at " + where[m - 1][h] + ")");
-            v[m - 1][h] = new double[] {csv.number(l, cg, "ghi_wm2", false), csv.number(l, cd, "dhi_wm2", false),
+            v[m - 1][h] = new double[] {ug.toWm2(csv.number(l, cg, "ghi_wm2", false), 1), ud.toWm2(csv.number(l, cd, "dhi_wm2", false), 1),
                     ct >= 0 ? csv.number(l, ct, "temp_c", true) : Double.NaN};
             where[m - 1][h] = csv.at(l);
         }
@@ -110,7 +119,12 @@ public final class ClimateSource {
                 steps.add(s.toStep(r[0], r[1], r[2], v[m][h][2]));
             }
         }
-        return new WeatherSeries(steps, TimeBase.AVERAGE_DAYS, "month-hour table " + csv.name, rep.build());
+        Map<String, String> cols = new LinkedHashMap<>();
+        cols.put("month", csv.header.cells()[cm]); cols.put("hour", csv.header.cells()[ch]);
+        cols.put("ghi", csv.header.cells()[cg]); cols.put("dhi", csv.header.cells()[cd]);
+        if (ct >= 0) cols.put("temp", csv.header.cells()[ct]);
+        rep.reading(csv.reading("month-hour", cols, Map.of("ghi", ug.label(), "dhi", ud.label()), "", rep.notes()));
+        return new WeatherSeries(steps, TimeBase.AVERAGE_DAYS, "month-hour table " + csv.name, rep.build().complete(steps, TimeBase.AVERAGE_DAYS, null));
     }
 
     /**
@@ -143,11 +157,11 @@ public final class ClimateSource {
      * each rescaled so the day's steps sum exactly to the given daily totals; monthly diffuse from
      * Erbs et al. (1982) when not given.
      */
-    static WeatherSeries monthlyMeans(SolarCalculator calc, CsvLines csv, ClimateSpec spec) {
+    static WeatherSeries monthlyMeans(SolarCalculator calc, ClimateTable csv, ClimateSpec spec) {
         int cm = need(csv, "month"), cg = need(csv, "ghi_kwh_m2_day"), cd = csv.column("dhi_kwh_m2_day"), ct = csv.column("temp_c");
         double[][] v = new double[12][];
         String[] where = new String[12];
-        for (CsvLines.Line l : csv.rows) {
+        for (ClimateTable.Line l : csv.rows) {
             int m = integer(csv, l, cm, "month", 1, 12);
             if (v[m - 1] != null) throw new InputException(csv.at(l), "month " + m + " given twice");
             v[m - 1] = new double[] {csv.number(l, cg, "ghi_kwh_m2_day", false), cd >= 0 ? csv.number(l, cd, "dhi_kwh_m2_day", true) : Double.NaN,
@@ -196,16 +210,23 @@ public final class ClimateSource {
                 steps.add(s.toStep(r[0], r[1], r[2], v[m][2]));
             }
         }
-        return new WeatherSeries(steps, TimeBase.AVERAGE_DAYS, "monthly means " + csv.name, rep.build());
+        Map<String, String> cols = new LinkedHashMap<>();
+        cols.put("month", csv.header.cells()[cm]); cols.put("ghi", csv.header.cells()[cg]);
+        if (cd >= 0) cols.put("dhi", csv.header.cells()[cd]);
+        if (ct >= 0) cols.put("temp", csv.header.cells()[ct]);
+        rep.reading(csv.reading("monthly", cols, Map.of("ghi", "kWh/m2 per day", "dhi", "kWh/m2 per day"), "", rep.notes()));
+        return new WeatherSeries(steps, TimeBase.AVERAGE_DAYS, "monthly means " + csv.name, rep.build().complete(steps, TimeBase.AVERAGE_DAYS, null));
     }
 
-    static int need(CsvLines csv, String name) {
+    /** The column of the first name the header has (a name with a unit in brackets counts); missing: error naming the first. */
+    static int need(ClimateTable csv, String name, String... otherNames) {
         int c = csv.column(name);
+        for (int i = 0; c < 0 && i < otherNames.length; i++) c = csv.column(otherNames[i]);
         if (c < 0) throw new InputException(InputException.at(csv.name, csv.header.number()), "missing column '" + name + "' in the header");
         return c;
     }
 
-    static int integer(CsvLines csv, CsvLines.Line l, int col, String what, int lo, int hi) {
+    static int integer(ClimateTable csv, ClimateTable.Line l, int col, String what, int lo, int hi) {
         double x = csv.number(l, col, what, false);
         if (x != Math.rint(x) || x < lo || x > hi) throw new InputException(csv.at(l), what + " must be an integer in " + lo + ".." + hi + ", got " + l.cells()[col]);
         return (int) x;

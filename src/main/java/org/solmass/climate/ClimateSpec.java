@@ -17,16 +17,60 @@ import java.util.Map;
  * @param year             calendar year of a clear-sky HOURLY_YEAR
  * @param stepMinutes      step of generated days/years (clear sky, monthly means), divides 60
  * @param intervalLabel    whether a timestamp of an hourly file labels its interval's start or end
- * @param columns          role (time, ghi, dhi, dni, temp) to header name or 1-based column number
+ * @param columns          role (time, ghi, dhi, dni, temp; date, year, month, day, hour, minute) to header name or 1-based column number
  * @param fillGapsMaxSteps longest run of missing steps/values filled by linear interpolation (0 = never)
+ * @param reading          how to read dates, clock time and irradiance units of a file (docs/climate-formats.md)
  */
 public record ClimateSpec(Kind kind, Path file, Format format, TimeBase timeBase, int year, int stepMinutes,
-                          IntervalLabel intervalLabel, Map<String, String> columns, int fillGapsMaxSteps) {
+                          IntervalLabel intervalLabel, Map<String, String> columns, int fillGapsMaxSteps, Reading reading) {
+
+    /**
+     * What a file cannot say about itself, given by the user.
+     *
+     * @param dateOrder       order of day, month and year in dates like 01/02/2025; null: decided from the data
+     * @param clock           whether local timestamps are standard time or clock time with daylight saving
+     * @param irradianceUnit  unit of irradiance columns whose header names none; null: W/m2
+     */
+    public record Reading(DateOrder dateOrder, Clock clock, IrradianceUnit irradianceUnit) {
+        public static final Reading DEFAULT = new Reading(null, Clock.STANDARD, null);
+
+        public Reading {
+            clock = clock == null ? Clock.STANDARD : clock;
+        }
+    }
+
+    /** Order of the parts of a date written with '.', '/' or '-' between them. */
+    public enum DateOrder {
+        DMY, MDY, YMD;
+
+        public String label() { return name().toLowerCase(Locale.ROOT); }
+
+        /** @param where the flag or key named in the error message */
+        public static DateOrder parse(String s, String where) {
+            String t = s == null ? "" : s.trim();
+            for (DateOrder o : values()) if (o.label().equalsIgnoreCase(t)) return o;
+            throw new InputException(where, "expected one of dmy, mdy, ymd, got \"" + s + "\"");
+        }
+    }
+
+    /** Local timestamps without an offset: standard time all year, or clock time with daylight saving. */
+    public enum Clock {
+        STANDARD, DST;
+
+        public String label() { return name().toLowerCase(Locale.ROOT); }
+
+        /** @param where the flag or key named in the error message */
+        public static Clock parse(String s, String where) {
+            String t = s == null ? "" : s.trim();
+            for (Clock c : values()) if (c.label().equalsIgnoreCase(t)) return c;
+            throw new InputException(where, "expected one of standard, dst, got \"" + s + "\"");
+        }
+    }
 
     public enum Kind { CLEAR_SKY, FILE }
 
     /** Roles of the columns of an hourly file that {@code columns} can map. */
-    public static final java.util.List<String> COLUMN_ROLES = java.util.List.of("time", "ghi", "dhi", "dni", "temp");
+    public static final java.util.List<String> COLUMN_ROLES = java.util.List.of("time", "ghi", "dhi", "dni", "temp", "date", "year", "month", "day", "hour", "minute");
 
     /**
      * Kind of climate file (docs/climate-formats.md). Written in lower case, '-' between words;
@@ -70,12 +114,13 @@ public record ClimateSpec(Kind kind, Path file, Format format, TimeBase timeBase
 
     public ClimateSpec {
         columns = Map.copyOf(columns);
+        reading = reading == null ? Reading.DEFAULT : reading;
         if (fillGapsMaxSteps < 0) throw new InputException("fill-gaps", "must be >= 0, got " + fillGapsMaxSteps);
     }
 
     public static ClimateSpec clearSky() {
         return new ClimateSpec(Kind.CLEAR_SKY, null, Format.AUTO, TimeBase.AVERAGE_DAYS, StepGrid.AVERAGE_DAY_YEAR, 60,
-                IntervalLabel.START, Map.of(), 0);
+                IntervalLabel.START, Map.of(), 0, Reading.DEFAULT);
     }
 
     public static ClimateSpec clearSkyYear(int year) {
@@ -84,7 +129,7 @@ public record ClimateSpec(Kind kind, Path file, Format format, TimeBase timeBase
 
     public static ClimateSpec file(Path file) {
         return new ClimateSpec(Kind.FILE, file, Format.AUTO, TimeBase.HOURLY_YEAR, StepGrid.AVERAGE_DAY_YEAR, 60,
-                IntervalLabel.START, Map.of(), 0);
+                IntervalLabel.START, Map.of(), 0, Reading.DEFAULT);
     }
 
     /** "clear-sky" or a file path. */
@@ -93,13 +138,14 @@ public record ClimateSpec(Kind kind, Path file, Format format, TimeBase timeBase
         return file(Path.of(text));
     }
 
-    public ClimateSpec withFormat(Format f) { return new ClimateSpec(kind, file, f, timeBase, year, stepMinutes, intervalLabel, columns, fillGapsMaxSteps); }
-    public ClimateSpec withTimeBase(TimeBase t) { return new ClimateSpec(kind, file, format, t, year, stepMinutes, intervalLabel, columns, fillGapsMaxSteps); }
-    public ClimateSpec withYear(int y) { return new ClimateSpec(kind, file, format, timeBase, y, stepMinutes, intervalLabel, columns, fillGapsMaxSteps); }
-    public ClimateSpec withStepMinutes(int m) { return new ClimateSpec(kind, file, format, timeBase, year, m, intervalLabel, columns, fillGapsMaxSteps); }
-    public ClimateSpec withIntervalLabel(IntervalLabel l) { return new ClimateSpec(kind, file, format, timeBase, year, stepMinutes, l, columns, fillGapsMaxSteps); }
-    public ClimateSpec withColumns(Map<String, String> c) { return new ClimateSpec(kind, file, format, timeBase, year, stepMinutes, intervalLabel, c, fillGapsMaxSteps); }
-    public ClimateSpec withFillGaps(int maxSteps) { return new ClimateSpec(kind, file, format, timeBase, year, stepMinutes, intervalLabel, columns, maxSteps); }
+    public ClimateSpec withFormat(Format f) { return new ClimateSpec(kind, file, f, timeBase, year, stepMinutes, intervalLabel, columns, fillGapsMaxSteps, reading); }
+    public ClimateSpec withTimeBase(TimeBase t) { return new ClimateSpec(kind, file, format, t, year, stepMinutes, intervalLabel, columns, fillGapsMaxSteps, reading); }
+    public ClimateSpec withYear(int y) { return new ClimateSpec(kind, file, format, timeBase, y, stepMinutes, intervalLabel, columns, fillGapsMaxSteps, reading); }
+    public ClimateSpec withStepMinutes(int m) { return new ClimateSpec(kind, file, format, timeBase, year, m, intervalLabel, columns, fillGapsMaxSteps, reading); }
+    public ClimateSpec withIntervalLabel(IntervalLabel l) { return new ClimateSpec(kind, file, format, timeBase, year, stepMinutes, l, columns, fillGapsMaxSteps, reading); }
+    public ClimateSpec withColumns(Map<String, String> c) { return new ClimateSpec(kind, file, format, timeBase, year, stepMinutes, intervalLabel, c, fillGapsMaxSteps, reading); }
+    public ClimateSpec withReading(Reading r) { return new ClimateSpec(kind, file, format, timeBase, year, stepMinutes, intervalLabel, columns, fillGapsMaxSteps, r); }
+    public ClimateSpec withFillGaps(int maxSteps) { return new ClimateSpec(kind, file, format, timeBase, year, stepMinutes, intervalLabel, columns, maxSteps, reading); }
 
     /** Parses "ghi=GlobHor,time=1" (role=name or role=1-based column number). */
     public static Map<String, String> parseColumns(String text, String where) {

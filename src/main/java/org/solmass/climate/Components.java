@@ -103,7 +103,7 @@ public final class Components {
             if (s.sunUpFraction() <= 0 && v[i] > 0) {
                 if (v[i] > OFFSET_TOLERANCE_WM2) {
                     throw new InputException(where, names[i] + " = " + v[i] + " W/m2 while the sun is below the horizon for the whole interval"
-                            + " (check the time zone, the interval label start|end and the timestamps)");
+                            + " (check the time zone, the interval label start|end, clock time with daylight saving (--clock dst) and the timestamps)");
                 }
                 rep.repair("small night values set to 0", where);
                 v[i] = 0;

@@ -24,31 +24,50 @@ import java.util.Set;
 final class HourlyYearReader {
     private HourlyYearReader() {}
 
+    private static final String FILLED_STEPS = "missing steps filled by linear interpolation";
     static final Set<String> ROLES = Set.copyOf(ClimateSpec.COLUMN_ROLES);
     static final List<String> TIME_NAMES = List.of("time", "timestamp", "datetime");
-    private static final Map<String, List<String>> NAMES = Map.of(
-            "time", TIME_NAMES,
-            "ghi", List.of("ghi_wm2", "ghi"),
-            "dhi", List.of("dhi_wm2", "dhi"),
-            "dni", List.of("dni_wm2", "dni"),
-            "temp", List.of("temp_c", "dry_bulb_c", "temperature_c"));
+    private static final Map<String, List<String>> NAMES = Map.ofEntries(
+            Map.entry("time", TIME_NAMES),
+            Map.entry("ghi", List.of("ghi_wm2", "ghi")),
+            Map.entry("dhi", List.of("dhi_wm2", "dhi")),
+            Map.entry("dni", List.of("dni_wm2", "dni")),
+            Map.entry("temp", List.of("temp_c", "dry_bulb_c", "temperature_c", "temp", "temperature")),
+            Map.entry("date", List.of("date")),
+            Map.entry("year", List.of("year")), Map.entry("month", List.of("month")), Map.entry("day", List.of("day")),
+            Map.entry("hour", List.of("hour")), Map.entry("minute", List.of("minute")));
+    private static final Set<String> CELSIUS = Set.of("c", "°c", "degc", "deg_c", "celsius");
 
-    static WeatherSeries read(SolarCalculator calc, CsvLines csv, ClimateSpec spec) {
+    static WeatherSeries read(SolarCalculator calc, ClimateTable csv, ClimateSpec spec) {
         int ct = column(csv, spec, "time"), cg = column(csv, spec, "ghi"), cd = column(csv, spec, "dhi"),
                 cn = column(csv, spec, "dni"), cT = column(csv, spec, "temp");
-        String head = InputException.at(csv.name, csv.header.number());
-        if (ct < 0) throw new InputException(head, "no time column (header time, timestamp or datetime, or --columns time=N)");
+        int cdate = column(csv, spec, "date");
+        int[] split = {column(csv, spec, "year"), column(csv, spec, "month"), column(csv, spec, "day"), column(csv, spec, "hour"),
+                column(csv, spec, "minute")};
+        String head = csv.headerAt();
+        boolean splitTime = ct < 0 && split[0] >= 0 && split[1] >= 0 && split[2] >= 0 && split[3] >= 0;
+        if (ct < 0 && !splitTime) {
+            throw new InputException(head, "no time column (header time, timestamp or datetime, or columns year, month, day, hour, or --columns time=N)");
+        }
         if (cg < 0 && (cd < 0 || cn < 0)) throw new InputException(head, "need a ghi column (ghi_wm2), or both dni_wm2 and dhi_wm2");
         if (csv.rows.size() < 2) throw new InputException(csv.name, "an hourly file needs at least 2 rows");
-        int year = LocalDateTime.ofInstant(parseTime(csv, csv.rows.get(0), ct, ZoneOffset.UTC), ZoneOffset.UTC).getYear();
-        ZoneOffset off = calc.site().standardOffset(year);
+        IrradianceUnit option = spec.reading().irradianceUnit();
+        IrradianceUnit[] units = new IrradianceUnit[3];
+        int[] irr = {cg, cd, cn};
+        for (int c = 0; c < 3; c++) if (irr[c] >= 0) units[c] = csv.irradianceUnit(irr[c], option);
+        if (cT >= 0 && csv.unit(cT) != null && !CELSIUS.contains(csv.unit(cT).replace(" ", "").toLowerCase(Locale.ROOT))) {
+            throw new InputException(head, "unknown temperature unit '" + csv.unit(cT) + "' in the header '" + csv.header.cells()[cT] + "'; expected C");
+        }
+        ClimateReport.Builder rep = new ClimateReport.Builder();
+        RowTimes.Result times = RowTimes.read(csv, splitTime ? -1 : ct, split, cdate, spec.reading(), calc.site().zone(), rep);
+        ZoneOffset off = times.standard();
         int n0 = csv.rows.size();
-        Instant[] t = new Instant[n0];
-        for (int i = 0; i < n0; i++) {
-            t[i] = parseTime(csv, csv.rows.get(i), ct, off);
-            if (i > 0 && !t[i].isAfter(t[i - 1])) {
+        Instant[] t = times.instants();
+        for (int i = 1; i < n0; i++) {
+            if (!t[i].isAfter(t[i - 1])) {
                 throw new InputException(csv.at(csv.rows.get(i)), "timestamp " + LocalDateTime.ofInstant(t[i], off) + " is not after the previous row's "
-                        + LocalDateTime.ofInstant(t[i - 1], off) + "; rows must be in time order, one per interval");
+                        + LocalDateTime.ofInstant(t[i - 1], off) + "; rows must be in time order, one per interval"
+                        + clockHint(spec, calc.site().zone(), LocalDateTime.ofInstant(t[i], off)));
             }
         }
         long step = Duration.between(t[0], t[1]).getSeconds();
@@ -56,14 +75,16 @@ final class HourlyYearReader {
         if (step < 60 || (step <= 3600 ? 3600 % step != 0 : step != 3600)) {
             throw new InputException(csv.at(csv.rows.get(1)), "the step (" + step + " s from the first two rows) must divide one hour");
         }
-        checkGaps(csv, t, step, off, spec.fillGapsMaxSteps());
+        double stepH = step / 3600.0;
+        checkGaps(csv, t, step, off, spec.fillGapsMaxSteps(), spec, calc.site().zone());
+        RowTimes.checkYears(csv, t, off);
         long span = Duration.between(t[0], t[n0 - 1]).getSeconds();
         int n = (int) (span / step) + 1;
         double[][] v = new double[4][n];
         for (double[] a : v) Arrays.fill(a, Double.NaN);
         String[] where = new String[n];
         for (int i = 0; i < n0; i++) {
-            CsvLines.Line l = csv.rows.get(i);
+            ClimateTable.Line l = csv.rows.get(i);
             long d = Duration.between(t[0], t[i]).getSeconds();
             if (d % step != 0) throw new InputException(csv.at(l), "timestamp is not on the " + step / 60 + "-minute grid of the first rows");
             int k = (int) (d / step);
@@ -71,8 +92,8 @@ final class HourlyYearReader {
             int[] cols = {cg, cd, cn, cT};
             String[] names = {"ghi", "dhi", "dni", "temp"};
             for (int c = 0; c < 4; c++) if (cols[c] >= 0) v[c][k] = csv.number(l, cols[c], names[c], true);
+            for (int c = 0; c < 3; c++) if (cols[c] >= 0 && units[c] != IrradianceUnit.W_M2) v[c][k] = units[c].toWm2(v[c][k], stepH);
         }
-        ClimateReport.Builder rep = new ClimateReport.Builder();
         String[] missingAt = new String[n];
         for (int k = 0; k < n; k++) {
             if (where[k] == null) {
@@ -83,10 +104,15 @@ final class HourlyYearReader {
         int[] cols = {cg, cd, cn, cT};
         String[] names = {"GHI", "DHI", "DNI", "temperature"};
         for (int c = 0; c < 4; c++) if (cols[c] >= 0) fill(v[c], names[c], missingAt, where, spec.fillGapsMaxSteps(), rep);
-        for (int k = 0; k < n; k++) if (missingAt[k] != null) rep.repair("missing steps filled by linear interpolation", missingAt[k]);
+        for (int k = 0; k < n; k++) if (missingAt[k] != null) rep.repair(FILLED_STEPS, missingAt[k]);
         double hours = n * step / 3600.0;
         if (Math.abs(hours - 8760) > 1e-6 && Math.abs(hours - 8784) > 1e-6) {
             rep.warn(String.format("the file covers %.1f h, not a whole year (8760 or 8784 h): sums are over the file's period", hours));
+        }
+        int year0 = LocalDateTime.ofInstant(start(t[0], step, spec.intervalLabel()), off).getYear();
+        if (Math.abs(hours - 8784) <= 1e-6 && !java.time.Year.isLeap(year0)) {
+            rep.warn("the file covers 8784 h (a leap year) but starts in " + year0 + ", which has 8760 h: it runs into "
+                    + (year0 + 1) + "; check the timestamps (a leap year's rows stamped with another year?)");
         }
         List<Step> steps = new ArrayList<>(n);
         Instant first = start(t[0], step, spec.intervalLabel());
@@ -105,8 +131,23 @@ final class HourlyYearReader {
             steps.add(s.toStep(r[0], r[1], r[2], v[3][k]));
         }
         String layout = cg < 0 ? "DNI+DHI" : cd >= 0 ? "GHI+DHI" : cn >= 0 ? "GHI+DNI" : "GHI (Erbs decomposition)";
+        if (times.hour24() && spec.intervalLabel() == ClimateSpec.IntervalLabel.START) {
+            rep.warn("the file gives hours as 24:00, as files labelled by the end of each interval (hour ending) do, but its"
+                    + " timestamps are read as interval starts; if the values are for the hour before, read it with --interval-label end");
+        }
+        if (spec.reading().clock() == ClimateSpec.Clock.STANDARD) ClockCheck.warnIfClockTime(steps, calc.site().zone(), rep);
+        Map<String, String> mapped = new java.util.LinkedHashMap<>(), unitNames = new java.util.LinkedHashMap<>();
+        String[] roles = {"date", "time", "year", "month", "day", "hour", "minute", "ghi", "dhi", "dni", "temp"};
+        int[] at = {times.dateJoined() ? cdate : -1, splitTime ? -1 : ct, splitTime ? split[0] : -1, splitTime ? split[1] : -1, splitTime ? split[2] : -1,
+                splitTime ? split[3] : -1, splitTime ? split[4] : -1, cg, cd, cn, cT};
+        for (int r = 0; r < roles.length; r++) if (at[r] >= 0) mapped.put(roles[r], csv.header.cells()[at[r]]);
+        for (int c = 0; c < 3; c++) if (irr[c] >= 0) unitNames.put(roles[7 + c], units[c].label() + (units[c].perInterval() ? " per step" : ""));
+        if (cT >= 0) unitNames.put("temp", "C");
+        rep.reading(csv.reading("hourly", mapped, unitNames, times.layout() + ", labels at interval "
+                + spec.intervalLabel().name().toLowerCase(Locale.ROOT) + ", layout " + layout, rep.notes()));
         return new WeatherSeries(steps, TimeBase.HOURLY_YEAR, "hourly file " + csv.name + " (" + layout + ", "
-                + step / 60 + "-minute steps, labels at interval " + spec.intervalLabel().name().toLowerCase(Locale.ROOT) + ")", rep.build());
+                + step / 60 + "-minute steps, labels at interval " + spec.intervalLabel().name().toLowerCase(Locale.ROOT) + ")",
+                rep.build().complete(steps, TimeBase.HOURLY_YEAR, off, rep.count(FILLED_STEPS)));
     }
 
     /** Linear interpolation over runs of NaN no longer than maxRun with values on both sides; else an error. */
@@ -133,17 +174,30 @@ final class HourlyYearReader {
      * Refuses a gap between two rows longer than the gaps that are filled, before any array of the
      * file's span is made: the span is then at most (rows x (maxRun + 1)) steps, whatever the timestamps.
      */
-    private static void checkGaps(CsvLines csv, Instant[] t, long step, ZoneOffset off, int maxRun) {
+    private static void checkGaps(ClimateTable csv, Instant[] t, long step, ZoneOffset off, int maxRun, ClimateSpec spec, java.time.ZoneId zone) {
         for (int i = 1; i < t.length; i++) {
             long d = Duration.between(t[i - 1], t[i]).getSeconds();
-            CsvLines.Line l = csv.rows.get(i);
+            ClimateTable.Line l = csv.rows.get(i);
             if (d % step != 0) throw new InputException(csv.at(l), "timestamp is not on the " + step / 60 + "-minute grid of the first rows");
             long missing = d / step - 1;
             if (missing > maxRun) {
                 throw new InputException(csv.at(csv.rows.get(i - 1)), "missing step" + (missing > 1 ? "s (" + missing + " in a row)" : "")
-                        + " after this line, from " + LocalDateTime.ofInstant(t[i - 1].plusSeconds(step), off) + gapAdvice(maxRun));
+                        + " after this line, from " + LocalDateTime.ofInstant(t[i - 1].plusSeconds(step), off) + gapAdvice(maxRun)
+                        + clockHint(spec, zone, LocalDateTime.ofInstant(t[i - 1].plusSeconds(step), off)));
             }
         }
+    }
+
+    /**
+     * A hint when a local time read as standard time is one that clocks repeat (autumn) or skip
+     * (spring) in the zone: the file is probably clock time with daylight saving.
+     */
+    private static String clockHint(ClimateSpec spec, java.time.ZoneId zone, LocalDateTime local) {
+        if (spec.reading().clock() != ClimateSpec.Clock.STANDARD || zone.getRules().isFixedOffset()) return "";
+        int valid = zone.getRules().getValidOffsets(local).size();
+        if (valid == 1) return "";
+        return " (" + local + " is an hour the clocks of " + zone + (valid == 0 ? " skip in spring" : " repeat in autumn")
+                + ": if the file is in clock time with daylight saving, read it with --clock dst)";
     }
 
     private static String gapAdvice(int maxRun) {
@@ -151,7 +205,7 @@ final class HourlyYearReader {
                 : "; set \"fill_gaps\": true in the study's climate object to interpolate short gaps";
     }
 
-    private static int column(CsvLines csv, ClimateSpec spec, String role) {
+    private static int column(ClimateTable csv, ClimateSpec spec, String role) {
         String m = spec.columns().get(role);
         if (m != null) {
             if (m.matches("\\d+")) {
@@ -168,22 +222,6 @@ final class HourlyYearReader {
             if (c >= 0) return c;
         }
         return -1;
-    }
-
-    /** ISO timestamp ("2025-01-01T00:00", space allowed instead of T, optional offset), interval start. */
-    private static Instant parseTime(CsvLines csv, CsvLines.Line l, int col, ZoneOffset standard) {
-        if (col >= l.cells().length || l.cells()[col].isEmpty()) throw new InputException(csv.at(l), "missing timestamp");
-        String s = l.cells()[col];
-        String iso = s.length() > 10 && s.charAt(10) == ' ' ? s.substring(0, 10) + "T" + s.substring(11) : s;
-        try {
-            return OffsetDateTime.parse(iso).toInstant();
-        } catch (DateTimeParseException e) {
-            try {
-                return LocalDateTime.parse(iso).toInstant(standard);
-            } catch (DateTimeParseException e2) {
-                throw new InputException(csv.at(l), "expected an ISO timestamp like 2025-01-01T13:00 (local standard time) or 2025-01-01T13:00+01:00, got '" + s + "'");
-            }
-        }
     }
 
     /** Interval start from a label. */

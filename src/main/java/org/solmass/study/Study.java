@@ -86,7 +86,7 @@ public record Study(String name, String description, Path source, Model model, S
             spec = timeBase.clearSky(c.year());
         } else {
             spec = ClimateSpec.file(c.file()).withIntervalLabel(c.intervalLabel()).withFormat(c.format())
-                    .withColumns(c.columns()).withFillGaps(c.fillGapsMaxSteps());
+                    .withColumns(c.columns()).withFillGaps(c.fillGapsMaxSteps()).withReading(c.reading());
         }
         return spec.withStepMinutes(stepMinutes);
     }
@@ -170,9 +170,11 @@ public record Study(String name, String description, Path source, Model model, S
      *                         of failing (0 = never)
      * @param year calendar year of the clear-sky hourly year
      * @param columns hourly files: role (time, ghi, dhi, dni, temp) to header name or 1-based column number
+     * @param reading what a file cannot say about itself: date order, clock time, irradiance unit
+     *                (climate.date_order, climate.clock, climate.irradiance_unit)
      */
     public record Climate(Path file, ClimateSpec.Format format, ClimateSpec.IntervalLabel intervalLabel,
-                          int fillGapsMaxSteps, int year, Map<String, String> columns) {
+                          int fillGapsMaxSteps, int year, Map<String, String> columns, ClimateSpec.Reading reading) {
         public static final int DEFAULT_YEAR = 2025;
         /** Longest run of missing hourly steps filled for {@code "fill_gaps": true}. */
         public static final int FILL_GAPS_STEPS = 3;
@@ -183,6 +185,12 @@ public record Study(String name, String description, Path source, Model model, S
 
         public Climate {
             columns = Map.copyOf(columns);
+            reading = reading == null ? ClimateSpec.Reading.DEFAULT : reading;
+        }
+
+        public Climate(Path file, ClimateSpec.Format format, ClimateSpec.IntervalLabel intervalLabel,
+                       int fillGapsMaxSteps, int year, Map<String, String> columns) {
+            this(file, format, intervalLabel, fillGapsMaxSteps, year, columns, ClimateSpec.Reading.DEFAULT);
         }
 
         public boolean isClearSky() { return file == null; }

@@ -99,6 +99,10 @@ public final class StudyOverrides {
     /** Longest gap of an hourly file filled, steps (0 = never). */
     public StudyOverrides fillGaps(Integer maxSteps) { return set("--fill-gaps", "climate.fill_gaps", maxSteps); }
 
+    public StudyOverrides dateOrder(String order) { return set("--date-order", "climate.date_order", order); }
+    public StudyOverrides clock(String clock) { return set("--clock", "climate.clock", clock); }
+    public StudyOverrides irradianceUnit(String unit) { return set("--irradiance-unit", "climate.irradiance_unit", unit); }
+
     /** Column roles of an hourly file, "time=1,ghi=GlobHor" (role=header name or 1-based column number). */
     public StudyOverrides columns(String text) {
         if (text == null) return this;

@@ -234,7 +234,11 @@ public final class StudyReader {
                         ClimateSpec.IntervalLabel.START),
                 fillGaps(k),
                 k.integer("year", Climate.DEFAULT_YEAR, 1900, 2100),
-                columns(k));
+                columns(k),
+                new ClimateSpec.Reading(k.choice("date_order", ClimateSpec.DateOrder.values(), ClimateSpec.DateOrder::label, null),
+                        k.choice("clock", ClimateSpec.Clock.values(), ClimateSpec.Clock::label, ClimateSpec.Clock.STANDARD),
+                        k.choice("irradiance_unit", org.solmass.climate.IrradianceUnit.values(),
+                                org.solmass.climate.IrradianceUnit::label, null)));
         k.finish();
         return climate;
     }

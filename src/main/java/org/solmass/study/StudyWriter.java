@@ -66,6 +66,10 @@ public final class StudyWriter {
             ObjectNode columns = c.putObject("columns");
             new TreeMap<>(cl.columns()).forEach(columns::put);
         }
+        // the reading keys only when set, so that results of earlier versions compare byte for byte
+        if (cl.reading().dateOrder() != null) c.put("date_order", cl.reading().dateOrder().label());
+        if (cl.reading().clock() != org.solmass.climate.ClimateSpec.Clock.STANDARD) c.put("clock", cl.reading().clock().label());
+        if (cl.reading().irradianceUnit() != null) c.put("irradiance_unit", cl.reading().irradianceUnit().label());
 
         ObjectNode a = root.putObject("albedo");
         a.put("ground", s.albedo().ground());

@@ -134,6 +134,15 @@ final class BadInputCases {
         climate("climate-hourly-gap", "time,ghi_wm2\n2025-01-01T00:00,0\n2025-01-01T01:00,0\n2025-01-01T05:00,0\n");
         climate("climate-hourly-step-not-dividing-an-hour", "time,ghi_wm2\n2025-01-01T00:00,0\n2025-01-01T00:45,0\n");
         climate("climate-hourly-no-irradiance-column", "time,dhi_wm2\n2025-01-01T00:00,0\n2025-01-01T01:00,0\n");
+        climate("climate-row-more-cells-than-header", "time,ghi_wm2,dhi_wm2\n2025-01-01T00:00,0,0\n2025-01-01T01:00,0,5,0,0\n");
+        climate("climate-ambiguous-date-order", "time,ghi_wm2\n01/02/2025 00:00,0\n01/02/2025 01:00,0\n");
+        climate("climate-unknown-unit-in-header", "time,GHI (W/ft2)\n2025-01-01T00:00,0\n2025-01-01T01:00,0\n");
+        climate("climate-year-3001", "time,ghi_wm2\n3001-01-01T00:00,0\n3001-01-01T01:00,0\n");
+        climate("climate-header-column-twice", "time,ghi,dhi,ghi\n2025-01-01T00:00,0,0,0\n2025-01-01T01:00,0,0,0\n");
+        climate("climate-line-too-long", "time,ghi_wm2\n" + "0".repeat(70_000) + "\n");
+        climate("climate-row-fewer-cells-than-header", "time,ghi_wm2,dhi_wm2\n2025-01-01T00:00,0\n2025-01-01T01:00,0,0\n");
+        climate("climate-unclosed-quote", "time,ghi_wm2\n\"2025-01-01T00:00,0\n2025-01-01T01:00,0\n");
+        climate("climate-mixed-decimal-marks", "time;ghi_wm2\n2025-01-01T00:00;0,5\n2025-01-01T01:00;0.5\n");
         CASES.put("climate-missing-file", new Case(Map.of("m.obj", MODEL), withSite("--climate", "@nowhere.csv")));
 
         // study files
