@@ -40,6 +40,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class ShadowStudyTest {
     static final int YEAR = 2025;
     static final double W = 10, D = 14, H = 20, CELL = 0.5;
+    /** The ground grid: wide enough for the 21 December noon shadow (about 72 m to the north). */
+    static final double X0 = -70, Y0 = -70, X1 = 80, Y1 = 100;
     static final SolarCalculator CALC = new SolarCalculator(new Site(51.0, 10.0, 0, ZoneOffset.ofHours(1)));
     static final GeometryFactory GF = new GeometryFactory();
 
@@ -49,7 +51,7 @@ class ShadowStudyTest {
         MassingModel m = new Obj().block("box").box(0, 0, W, D, H).model();
         Scene scene = Scene.build(m, true, 0);
         List<Patch> blocks = Patcher.build(m, new PatchOptions(1.0, Set.of("box"), false)).patches();
-        List<Patch> ground = ShadowStudy.groundGrid(scene, m, null, -70, -70, 80, 84, 0, CELL, blocks.size());
+        List<Patch> ground = ShadowStudy.groundGrid(scene, m, null, X0, Y0, X1, Y1, 0, CELL, blocks.size());
         return new Box(m, scene, blocks, ground);
     }
 
@@ -67,7 +69,8 @@ class ShadowStudyTest {
         MultiPoint mp = GF.createMultiPointFromCoords(pts.toArray(new Coordinate[0]));
         Geometry footprint = GF.createPolygon(new Coordinate[] {new Coordinate(0, 0), new Coordinate(W, 0),
                 new Coordinate(W, D), new Coordinate(0, D), new Coordinate(0, 0)});
-        return mp.convexHull().difference(footprint);
+        Geometry grid = GF.toGeometry(new org.locationtech.jts.geom.Envelope(X0, X1, Y0, Y1));
+        return mp.convexHull().difference(footprint).intersection(grid);
     }
 
     @Test
@@ -82,8 +85,8 @@ class ShadowStudyTest {
             Geometry edge = shadow.getBoundary();
             double shadedArea = 0, tipAlong = Double.NEGATIVE_INFINITY;
             double len = H / Math.tan(Math.toRadians(sun.elevationDeg()));
-            double tx = (ux > 0 ? W : 0) + len * ux, ty = (uy > 0 ? D : 0) + len * uy, nearTip = Double.POSITIVE_INFINITY;
             double az = Math.toRadians(sun.azimuthDeg() + 180), ux = Math.sin(az), uy = Math.cos(az);
+            double tx = (ux > 0 ? W : 0) + len * ux, ty = (uy > 0 ? D : 0) + len * uy, nearTip = Double.POSITIVE_INFINITY;
             for (int i = 0; i < lit.length; i++) {
                 Patch p = b.ground().get(i);
                 var pt = GF.createPoint(new Coordinate(p.centroid().x(), p.centroid().y()));
@@ -96,8 +99,9 @@ class ShadowStudyTest {
                     nearTip = Math.min(nearTip, Math.hypot(p.centroid().x() - tx, p.centroid().y() - ty));
                 }
             }
-            // area: only cells within one patch of the outline may differ, a band of area perimeter x cell
-            assertEquals(shadow.getArea(), shadedArea, shadow.getLength() * CELL, mo + ": shadow area, m2");
+            // area: centre sampling misclassifies at most a strip of half a patch along each edge of the
+            // outline (the worst case, an edge parallel to the grid just short of the cell centres)
+            assertEquals(shadow.getArea(), shadedArea, shadow.getLength() * CELL / 2, mo + ": shadow area, m2");
             // tip (tx, ty): the shadow of the box's vertical edge farthest along azimuth + 180 deg, at
             // H / tan(elevation) from it. It is the vertex of a right-angled wedge of the shadow; the
             // grid's nearest centre inside such a wedge is at most one patch diagonal (CELL sqrt 2) away.
@@ -143,7 +147,7 @@ class ShadowStudyTest {
             boolean inside = p.centroid().x() > 0 && p.centroid().x() < W && p.centroid().y() > 0 && p.centroid().y() < D;
             assertFalse(inside, "ground cell under the box at " + p.centroid());
         }
-        assertEquals((150 * 154 - W * D) / (CELL * CELL), b.ground().size(), 1e-9, "grid cells of the rectangle less the footprint");
+        assertEquals(((X1 - X0) * (Y1 - Y0) - W * D) / (CELL * CELL), b.ground().size(), 1e-9, "grid cells of the rectangle less the footprint");
     }
 
     @Test
