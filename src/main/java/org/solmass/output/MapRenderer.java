@@ -225,7 +225,7 @@ public final class MapRenderer {
     }
 
     /** An arrow pointing to true north as seen in the view, with an N above its tip. */
-    private static void northArrow(Graphics2D g, MapView view, int cx, int cy) {
+    static void northArrow(Graphics2D g, MapView view, int cx, int cy) {
         double dx = view.right().y(), dy = -view.up().y();      // screen direction of +y (north)
         double len = Math.hypot(dx, dy);
         if (len < 1e-9) return;

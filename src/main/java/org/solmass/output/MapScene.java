@@ -93,10 +93,28 @@ final class MapScene {
         return (r << 16) | (g << 8) | b;
     }
 
-    /** Renders the scene in a view at w x h (supersampled) and returns the w/2 x h/2 image. */
-    int[] draw(MapView view, int w, int h) {
+    /**
+     * Points the views are fitted to besides the model's vertices (x,y,z triples, metres), e.g. a
+     * ground grid that reaches beyond the model; empty by default.
+     */
+    private double[] fitExtra = new double[0];
+
+    /** Sets {@link #fitExtra}; returns this scene. */
+    MapScene fitAlso(double[] points) {
+        fitExtra = points.clone();
+        return this;
+    }
+
+    /** How a view fits into a w x h (supersampled) image: pixels per metre, offsets and depth range. */
+    private record Fit(double scale, double ox, double oy, double minD, double maxD) {}
+
+    private Fit fit(MapView view, int w, int h) {
         Vec3 r = view.right(), u = view.up(), v = view.toViewer();
         double[] vx = model.vertices();
+        if (fitExtra.length > 0) {
+            vx = java.util.Arrays.copyOf(vx, vx.length + fitExtra.length);
+            System.arraycopy(fitExtra, 0, vx, model.vertices().length, fitExtra.length);
+        }
         double minR = Double.POSITIVE_INFINITY, maxR = Double.NEGATIVE_INFINITY, minU = minR, maxU = maxR, minD = minR, maxD = maxR;
         for (int pass = 0; pass < 2; pass++) {
             double[] pts = pass == 0 ? vx : ground;
@@ -121,7 +139,21 @@ final class MapScene {
         }
         double scale = Math.min(w * 0.92 / Math.max(1e-9, maxR - minR), h * 0.88 / Math.max(1e-9, maxU - minU));
         double ox = (w - (maxR - minR) * scale) / 2 - minR * scale, oy = (h - (maxU - minU) * scale) / 2 + maxU * scale;
-        Projector P = new Projector(r, u, v, scale, ox, oy, cx, cy, cz);
+        return new Fit(scale, ox, oy, minD, maxD);
+    }
+
+    /** Pixels per metre of the image {@link #draw} returns for this view at w x h (supersampled size). */
+    double pixelsPerMetre(MapView view, int w, int h) {
+        return fit(view, w, h).scale() / 2;
+    }
+
+    /** Renders the scene in a view at w x h (supersampled) and returns the w/2 x h/2 image. */
+    int[] draw(MapView view, int w, int h) {
+        Vec3 v = view.toViewer();
+        double[] vx = model.vertices();
+        Fit f = fit(view, w, h);
+        double scale = f.scale(), minD = f.minD(), maxD = f.maxD();
+        Projector P = new Projector(view.right(), view.up(), v, scale, f.ox(), f.oy(), cx, cy, cz);
         float bias = (float) (2e-4 * Math.max(1e-6, maxD - minD));
         Raster ras = new Raster(w, h, MapRenderer.BACKGROUND);
 
