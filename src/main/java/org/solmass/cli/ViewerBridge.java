@@ -17,6 +17,7 @@ import org.solmass.output.ComparedResults;
 import org.solmass.output.ResultsFolder;
 import org.solmass.output.RunRecord;
 import org.solmass.output.SummaryWriter;
+import org.solmass.output.VariantFolders;
 import org.solmass.study.Study;
 import org.solmass.sun.Site;
 import org.solmass.sun.SunPath;
@@ -46,12 +47,28 @@ import java.util.function.BooleanSupplier;
  * no physics.
  */
 final class ViewerBridge implements ViewerActions {
+    /** The study file written into each variant folder. */
+    static final String VARIANT_STUDY = "study.json";
     private Study study;
     private AnalysisRun.Outcome last;
     private ResultTable shown;
+    /** The study's first results folder; re-runs write variant folders beside it, never into it. */
+    private final Path firstResults;
+    private Path lastVariant;
+    private java.time.Clock clock = java.time.Clock.systemDefaultZone();
 
     ViewerBridge(Study study) {
+        this(study, study.outputs().folder());
+    }
+
+    private ViewerBridge(Study study, Path firstResults) {
         this.study = study;
+        this.firstResults = firstResults.toAbsolutePath().normalize();
+    }
+
+    /** The clock that stamps default variant names (tests fix it). */
+    void clock(java.time.Clock c) {
+        clock = c;
     }
 
     /** Runs the study, writes its results folder and returns what the viewer shows. */
@@ -109,7 +126,7 @@ final class ViewerBridge implements ViewerActions {
             }
         }
         WeatherSeries weather = AnalysisRun.loadWeather(study);
-        ViewerBridge b = new ViewerBridge(study);
+        ViewerBridge b = new ViewerBridge(study, folder);
         b.shown = table;
         bridgeOut[0] = b;
         return data(study, model, ps, table, monthHour, weather, warnings);
@@ -194,6 +211,12 @@ final class ViewerBridge implements ViewerActions {
         return org.solmass.sky.SkyModels.names();
     }
 
+    /**
+     * Re-runs the study with the request's options into a new variant folder beside the first results
+     * folder ({@link VariantFolders}); writes the variant's resolved study as study.json there first
+     * (so it can be run again from the command line), then the results. The first results and earlier
+     * variants are not touched.
+     */
     @Override
     public ViewerData rerun(RerunRequest r, ProgressSink progress, BooleanSupplier cancelled) {
         com.fasterxml.jackson.databind.node.ObjectNode t = org.solmass.study.StudyWriter.toTree(study);
@@ -201,9 +224,27 @@ final class ViewerBridge implements ViewerActions {
         t.put("sky", r.skyModel());
         com.fasterxml.jackson.databind.node.ObjectNode climate = t.putObject("climate");
         climate.put("source", r.climateSource());
-        Path base = study.source() != null ? study.source().getParent() : Path.of("").toAbsolutePath();
-        study = org.solmass.study.StudyReader.fromTree(t, study.source(), base, "re-run");
+        Path base = study.source() != null ? study.source().toAbsolutePath().getParent() : Path.of("").toAbsolutePath();
+        // resolve before creating the folder: a bad option makes no empty variant folder
+        org.solmass.study.StudyReader.fromTree(t.deepCopy(), study.source(), base, "re-run");
+        Path dir = VariantFolders.create(firstResults, r.variantName(), java.time.LocalDateTime.now(clock));
+        ((com.fasterxml.jackson.databind.node.ObjectNode) t.get("outputs")).put("folder", dir.toString());
+        Path studyFile = dir.resolve(VARIANT_STUDY);
+        Study variant = org.solmass.study.StudyReader.fromTree(t, studyFile, base, "re-run");
+        org.solmass.output.AtomicFiles.writeString(studyFile, org.solmass.study.StudyWriter.toJson(variant));
+        study = variant;
+        lastVariant = dir;
         return analyse(progress, cancelled);
+    }
+
+    @Override
+    public Path lastVariantFolder() {
+        return lastVariant;
+    }
+
+    @Override
+    public String defaultVariantName() {
+        return firstResults.getFileName() + VariantFolders.INFIX + "yyyyMMdd-HHmmss";
     }
 
     @Override

@@ -37,6 +37,7 @@ final class ControlColumn extends VBox {
     private final Spinner<Double> patchSize = new Spinner<>(0.25, 50, 1, 0.25);
     private final ComboBox<String> climate = new ComboBox<>();
     private final ComboBox<String> sky = new ComboBox<>();
+    private final TextField variantName = new TextField();
     private final ComboBox<String> pngScale = new ComboBox<>(FXCollections.observableArrayList("1\u00d7", "2\u00d7", "3\u00d7", "4\u00d7"));
     private ViewerData data;
     private ColourScale scale = new ColourScale(0, 1, false);
@@ -100,7 +101,13 @@ final class ControlColumn extends VBox {
         sky.setMaxWidth(Double.MAX_VALUE);
         Button run = new Button("Re-run analysis");
         run.setMaxWidth(Double.MAX_VALUE);
-        run.setOnAction(e -> win.rerun(new RerunRequest(patchSize.getValue(), climate.getValue(), sky.getValue())));
+        variantName.setId("variant-name");
+        String defaultName = actions.defaultVariantName();
+        variantName.setPromptText(defaultName != null ? defaultName : "new variant folder name");
+        run.setOnAction(e -> {
+            win.rerun(new RerunRequest(patchSize.getValue(), climate.getValue(), sky.getValue(), variantName.getText()));
+            variantName.clear();   // a name is used once: a second re-run under it would be refused
+        });
         pngScale.getSelectionModel().select(1);
 
         Button csv = new Button("CSV\u2026"), summary = new Button("Summary\u2026"), png = new Button("PNG\u2026");
@@ -111,7 +118,8 @@ final class ControlColumn extends VBox {
         getChildren().addAll(head("Colour by"), quantity, legend, caution, auto, ViewerWindow.row(min, new Label("to"), max),
                 head("Threshold"), thrOn, thr, thrArea,
                 head("View"), views, sunPath, zones, hint(),
-                head("Re-run"), label("Patch size (m)"), patchSize, label("Climate"), climate, label("Sky model"), sky, run,
+                head("Re-run"), label("Patch size (m)"), patchSize, label("Climate"), climate, label("Sky model"), sky,
+                label("Variant folder (empty: dated name)"), variantName, run,
                 head("Export"), ViewerWindow.row(csv, summary), ViewerWindow.row(png, pngScale));
     }
 

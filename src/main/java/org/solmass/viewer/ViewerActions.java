@@ -16,8 +16,17 @@ public interface ViewerActions {
     /** The sky model names offered in the re-run control. */
     default List<String> skyModels() { return List.of(currentOptions().skyModel()); }
 
-    /** Re-runs the analysis with changed options; returns the new data, or null when cancelled. */
+    /**
+     * Re-runs the analysis with changed options into a new variant folder (earlier results are never
+     * overwritten); returns the new data, or null when cancelled.
+     */
     ViewerData rerun(RerunRequest request, ProgressSink progress, BooleanSupplier cancelled) throws Exception;
+
+    /** The folder the last re-run wrote, for the status line; null when none. */
+    default Path lastVariantFolder() { return null; }
+
+    /** The default variant name offered in the re-run control (shown as the name field's prompt); null when none. */
+    default String defaultVariantName() { return null; }
 
     /** Writes the per-patch CSV of the data on show. */
     void exportCsv(Path file) throws Exception;

@@ -417,7 +417,10 @@ public final class ViewerWindow {
     public void setThreshold(double value) { controls.setThreshold(value); }
 
     void rerun(RerunRequest req) {
-        runBusy("Re-running the analysis\u2026", () -> actions.rerun(req, this::progress, cancelled::get), null, null);
+        runBusy("Re-running the analysis\u2026", () -> actions.rerun(req, this::progress, cancelled::get), w -> {
+            java.nio.file.Path variant = actions.lastVariantFolder();
+            if (variant != null) status.setText("Variant written to " + variant + " \u00b7 " + status.getText());
+        }, null);
     }
 
     Node root() { return root; }
