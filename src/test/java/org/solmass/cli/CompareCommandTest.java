@@ -35,10 +35,11 @@ class CompareCommandTest {
         System.setOut(new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8));
         try {
             List<String> args = new java.util.ArrayList<>(List.of("analyse", "--model", model.toString(), "--lon", "10",
-                    "--zone", "+01:00", "--rays", "64", "--patch", "2", "--time-base", "hourly-year", "--no-gltf", "--threads", "2",
+                    "--zone", "+01:00", "--rays", "64", "--patch", "2", "--no-gltf", "--threads", "2",
                     "--out", out.toString(), "-q"));
             args.addAll(List.of(extra));
             if (!args.contains("--lat")) args.addAll(List.of("--lat", "51"));
+            if (!args.contains("--time-base")) args.addAll(List.of("--time-base", "hourly-year"));
             assertEquals(0, Main.execute(args.toArray(String[]::new)));
         } finally {
             System.setOut(old);
@@ -174,5 +175,33 @@ class CompareCommandTest {
                 .readTree(out.resolve(CompareCommand.NOTE).toFile());
         assertEquals(0, note.get("differing_settings").size());
         assertEquals(org.solmass.output.PublishedRun.open(a).record().study().name(), note.get("a").get("study").asText());
+    }
+
+    /**
+     * The case that was reported: a clear-sky run and a run on a heavily overcast month-hour table
+     * (invented here: 80 W/m2 global, all of it diffuse, from 10:00 to 15:00 every month, nothing else)
+     * of one unchanged box. compare warns naming the climate and writes both sources into compare.json.
+     */
+    @Test
+    void aClearSkyRunComparedWithAnOvercastTableWarnsNamingTheClimate() throws Exception {
+        StringBuilder table = new StringBuilder("# INVENTED overcast table for a test, not measured data\nmonth,hour,ghi_wm2,dhi_wm2\n");
+        for (int m = 1; m <= 12; m++) {
+            for (int h = 0; h < 24; h++) {
+                int v = h >= 10 && h < 15 ? 80 : 0;
+                table.append(m).append(',').append(h).append(',').append(v).append(',').append(v).append('\n');
+            }
+        }
+        Path climate = dir.resolve("overcast-month-hour.csv");
+        Files.writeString(climate, table);
+        String box = org.solmass.fixtures.Boxes.onGround(0, 0, 10, 8, 12).obj("box");
+        Path a = analyse("clear", box, "--time-base", "average-days");
+        Path b = analyse("overcast", box, "--climate", climate.toString(), "--time-base", "average-days");
+        Path out = dir.resolve("ab");
+        assertEquals(0, compare(a, b, out));
+        assertTrue(err.contains("warning: climate differs (A clear-sky, B " + climate.toAbsolutePath().normalize()), err);
+        com.fasterxml.jackson.databind.JsonNode note = new com.fasterxml.jackson.databind.ObjectMapper()
+                .readTree(out.resolve(CompareCommand.NOTE).toFile());
+        assertEquals("climate", note.get("differing_settings").get(0).get("field").asText());
+        assertEquals(2, compare(a, b, dir.resolve("strict"), "--strict"));
     }
 }
