@@ -54,7 +54,8 @@ final class ViewerBridge implements ViewerActions {
     private ResultTable shown;
     /** The study's first results folder; re-runs write variant folders beside it, never into it. */
     private final Path firstResults;
-    private Path lastVariant;
+    /** The results folder of the data on show. */
+    private Path shownFolder;
     private java.time.Clock clock = java.time.Clock.systemDefaultZone();
 
     ViewerBridge(Study study) {
@@ -80,6 +81,7 @@ final class ViewerBridge implements ViewerActions {
         }
         last = o;
         shown = o.table();
+        shownFolder = o.study().outputs().folder().toAbsolutePath().normalize();
         return data(o.study(), o.model(), o.patches(), o.table(), o.result().monthHourWm2(), o.weather(), o.warnings());
     }
 
@@ -128,6 +130,7 @@ final class ViewerBridge implements ViewerActions {
         WeatherSeries weather = AnalysisRun.loadWeather(study);
         ViewerBridge b = new ViewerBridge(study, folder);
         b.shown = table;
+        b.shownFolder = folder.toAbsolutePath().normalize();
         bridgeOut[0] = b;
         return data(study, model, ps, table, monthHour, weather, warnings);
     }
@@ -233,13 +236,30 @@ final class ViewerBridge implements ViewerActions {
         Study variant = org.solmass.study.StudyReader.fromTree(t, studyFile, base, "re-run");
         org.solmass.output.AtomicFiles.writeString(studyFile, org.solmass.study.StudyWriter.toJson(variant));
         study = variant;
-        lastVariant = dir;
+        shownFolder = dir;
         return analyse(progress, cancelled);
     }
 
     @Override
-    public Path lastVariantFolder() {
-        return lastVariant;
+    public Path shownFolder() {
+        return shownFolder;
+    }
+
+    @Override
+    public List<Path> variants() {
+        return VariantFolders.list(firstResults, VARIANT_STUDY);
+    }
+
+    /** Reads a variant folder ({@link #fromFolder}); its study becomes the one later re-runs start from. */
+    @Override
+    public ViewerData openVariant(Path folder) {
+        ViewerBridge[] read = new ViewerBridge[1];
+        ViewerData d = fromFolder(folder, read);
+        study = read[0].study;
+        shown = read[0].shown;
+        shownFolder = folder.toAbsolutePath().normalize();
+        last = null;
+        return d;
     }
 
     @Override

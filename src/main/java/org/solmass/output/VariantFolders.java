@@ -8,7 +8,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDateTime;
 import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
 import java.util.Locale;
+import java.util.stream.Stream;
 
 /**
  * Variant folders of a study: each re-run writes a new results folder beside the study's first one
@@ -54,6 +58,32 @@ public final class VariantFolders {
             Path dir = parent.resolve(k == 1 ? base : base + "-" + k);
             if (make(dir)) return dir;
         }
+    }
+
+    /**
+     * The study's results folders: {@code resultsFolder} and the folders beside it that a re-run made
+     * (named {@code <results>-variant-...}, or holding a variant's {@code study.json}), each only when it
+     * holds a run.json; sorted by name, the first results folder first.
+     */
+    public static List<Path> list(Path resultsFolder, String variantStudyFile) {
+        Path first = resultsFolder.toAbsolutePath().normalize();
+        Path parent = first.getParent();
+        List<Path> out = new ArrayList<>();
+        if (Files.isRegularFile(first.resolve(RunRecord.FILE_NAME))) out.add(first);
+        if (parent == null || !Files.isDirectory(parent)) return out;
+        String prefix = first.getFileName() + INFIX;
+        List<Path> others = new ArrayList<>();
+        try (Stream<Path> s = Files.list(parent)) {
+            s.filter(Files::isDirectory).filter(d -> !d.equals(first))
+                    .filter(d -> d.getFileName().toString().startsWith(prefix) || Files.isRegularFile(d.resolve(variantStudyFile)))
+                    .filter(d -> Files.isRegularFile(d.resolve(RunRecord.FILE_NAME)))
+                    .forEach(others::add);
+        } catch (IOException e) {
+            throw new InputException(parent.toString(), "cannot list the variant folders: " + e.getMessage(), e);
+        }
+        others.sort(Comparator.comparing(d -> d.getFileName().toString()));
+        out.addAll(others);
+        return out;
     }
 
     /** Creates {@code dir}; false when something of that name exists. */

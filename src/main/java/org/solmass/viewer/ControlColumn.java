@@ -38,6 +38,8 @@ final class ControlColumn extends VBox {
     private final ComboBox<String> climate = new ComboBox<>();
     private final ComboBox<String> sky = new ComboBox<>();
     private final TextField variantName = new TextField();
+    private final ComboBox<String> variants = new ComboBox<>();
+    private List<java.nio.file.Path> variantFolders = List.of();
     private final ComboBox<String> pngScale = new ComboBox<>(FXCollections.observableArrayList("1\u00d7", "2\u00d7", "3\u00d7", "4\u00d7"));
     private ViewerData data;
     private ColourScale scale = new ColourScale(0, 1, false);
@@ -108,6 +110,15 @@ final class ControlColumn extends VBox {
             win.rerun(new RerunRequest(patchSize.getValue(), climate.getValue(), sky.getValue(), variantName.getText()));
             variantName.clear();   // a name is used once: a second re-run under it would be refused
         });
+        variants.setId("variants");
+        variants.setMaxWidth(Double.MAX_VALUE);
+        variants.setPromptText("no results folder yet");
+        Button open = new Button("Open");
+        open.setId("open-variant");
+        open.setOnAction(e -> {
+            int i = variants.getSelectionModel().getSelectedIndex();
+            if (i >= 0 && i < variantFolders.size()) win.openVariant(variantFolders.get(i));
+        });
         pngScale.getSelectionModel().select(1);
 
         Button csv = new Button("CSV\u2026"), summary = new Button("Summary\u2026"), png = new Button("PNG\u2026");
@@ -120,6 +131,7 @@ final class ControlColumn extends VBox {
                 head("View"), views, sunPath, zones, hint(),
                 head("Re-run"), label("Patch size (m)"), patchSize, label("Climate"), climate, label("Sky model"), sky,
                 label("Variant folder (empty: dated name)"), variantName, run,
+                label("Results of this study"), ViewerWindow.row(variants, open),
                 head("Export"), ViewerWindow.row(csv, summary), ViewerWindow.row(png, pngScale));
     }
 
@@ -168,6 +180,7 @@ final class ControlColumn extends VBox {
         patchSize.getValueFactory().setValue(opt.patchSizeM());
         climate.setValue(opt.climateSource());
         sky.setValue(opt.skyModel());
+        refreshVariants();
         List<Quantity> qs = Quantity.available(d.table());
         Quantity keep = quantity.getValue();
         quantity.setItems(FXCollections.observableArrayList(qs));
@@ -175,6 +188,22 @@ final class ControlColumn extends VBox {
         if (keep != null) for (Quantity q : qs) if (q.column().equals(keep.column())) pick = q;
         quantity.setValue(pick);
         refresh();
+    }
+
+    /** Lists the study's results folders (the first results and its variants) by folder name; selects the one on show. */
+    private void refreshVariants() {
+        try {
+            variantFolders = actions.variants();
+        } catch (RuntimeException e) {
+            variantFolders = List.of();
+        }
+        List<String> names = new java.util.ArrayList<>();
+        for (java.nio.file.Path f : variantFolders) names.add(String.valueOf(f.getFileName()));
+        variants.setItems(FXCollections.observableArrayList(names));
+        java.nio.file.Path onShow = actions.shownFolder();
+        int i = onShow == null ? -1 : variantFolders.indexOf(onShow);
+        if (i >= 0) variants.getSelectionModel().select(i);
+        else if (!names.isEmpty()) variants.getSelectionModel().select(names.size() - 1);
     }
 
     /** Picks out the patches at or above a value (NaN: threshold off), as the controls would. */

@@ -22,8 +22,16 @@ public interface ViewerActions {
      */
     ViewerData rerun(RerunRequest request, ProgressSink progress, BooleanSupplier cancelled) throws Exception;
 
-    /** The folder the last re-run wrote, for the status line; null when none. */
-    default Path lastVariantFolder() { return null; }
+    /** The results folder of the data on show (a re-run's variant folder, or the one opened); null when unknown. */
+    default Path shownFolder() { return null; }
+
+    /** The study's results folders holding a run (the first results, then the variants by name); empty when none. */
+    default List<Path> variants() { return List.of(); }
+
+    /** Opens one of {@link #variants()}: its data, read from the folder; later re-runs start from its options. */
+    default ViewerData openVariant(Path folder) throws Exception {
+        throw new UnsupportedOperationException("variants are not available for this data");
+    }
 
     /** The default variant name offered in the re-run control (shown as the name field's prompt); null when none. */
     default String defaultVariantName() { return null; }

@@ -80,7 +80,7 @@ class ViewerRerunVariantTest {
         assertSameFiles(before, snapshot(first));
         assertEquals(studyBefore, Files.readString(dir.resolve("study.json")), "the user's study file is not rewritten");
         Path variant = dir.resolve("results-variant-20261202-011530");
-        assertEquals(variant, bridge.lastVariantFolder());
+        assertEquals(variant, bridge.shownFolder());
         RunRecord run = RunRecord.read(variant);
         assertEquals(1.0, run.study().patchM(), 0.0);
         assertEquals(2.0, RunRecord.read(first).study().patchM(), 0.0);
@@ -105,7 +105,7 @@ class ViewerRerunVariantTest {
         bridge.rerun(new RerunRequest(2.0, "clear-sky", "isotropic"), (f, m) -> {}, () -> false);
         assertSameFiles(before, snapshot(v1));
         Path v2 = dir.resolve("results-variant-20261202-011530-2");
-        assertEquals(v2, bridge.lastVariantFolder());
+        assertEquals(v2, bridge.shownFolder());
         assertEquals("isotropic", RunRecord.read(v2).study().sky().name());
     }
 
@@ -125,5 +125,29 @@ class ViewerRerunVariantTest {
         assertEquals(1.0, RunRecord.read(dir.resolve("finer")).study().patchM(), 0.0);
         assertThrows(InputException.class,
                 () -> bridge.rerun(new RerunRequest(1.0, "clear-sky", "perez", "../elsewhere"), (f, m) -> {}, () -> false));
+    }
+
+    /**
+     * The study's results folders are listed (first results, then variants by name; an unrelated folder
+     * beside them with a run.json of another study's name pattern is not), and opening a variant shows
+     * its patches and makes its options the ones a further re-run starts from.
+     */
+    @Test
+    void variantsAreListedBesideTheFirstResultsAndOneCanBeOpened() throws Exception {
+        ViewerBridge bridge = new ViewerBridge(boxStudy(2.0));
+        bridge.clock(Clock.fixed(Instant.parse("2026-12-02T01:15:30Z"), ZoneOffset.UTC));
+        bridge.analyse((f, m) -> {}, () -> false);
+        bridge.rerun(new RerunRequest(4.0, "clear-sky", "perez"), (f, m) -> {}, () -> false);
+        bridge.rerun(new RerunRequest(1.0, "clear-sky", "isotropic", "finer"), (f, m) -> {}, () -> false);
+        Path other = Files.createDirectory(dir.resolve("other-results"));
+        Files.copy(dir.resolve("results").resolve(RunRecord.FILE_NAME), other.resolve(RunRecord.FILE_NAME));
+        Files.createDirectory(dir.resolve("results-variant-empty"));   // no run.json: not listed
+        assertEquals(java.util.List.of(dir.resolve("results"), dir.resolve("finer"), dir.resolve("results-variant-20261202-011530")),
+                bridge.variants());
+        org.solmass.viewer.ViewerData d = bridge.openVariant(dir.resolve("results-variant-20261202-011530"));
+        assertEquals(RunRecord.read(dir.resolve("results-variant-20261202-011530")).counts().get("patches").intValue(), d.patches().size());
+        assertEquals(4.0, bridge.currentOptions().patchSizeM(), 0.0);
+        assertEquals(dir.resolve("results-variant-20261202-011530"), bridge.shownFolder());
+        assertEquals("perez", bridge.currentOptions().skyModel());
     }
 }
