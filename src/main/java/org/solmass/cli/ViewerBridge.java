@@ -235,9 +235,14 @@ final class ViewerBridge implements ViewerActions {
         Path studyFile = dir.resolve(VARIANT_STUDY);
         Study variant = org.solmass.study.StudyReader.fromTree(t, studyFile, base, "re-run");
         org.solmass.output.AtomicFiles.writeString(studyFile, org.solmass.study.StudyWriter.toJson(variant));
+        Study before = study;
         study = variant;
-        shownFolder = dir;
-        return analyse(progress, cancelled);
+        try {
+            return analyse(progress, cancelled);
+        } catch (RuntimeException e) {   // cancelled or failed: the data on show, and its study, stay
+            study = before;
+            throw e;
+        }
     }
 
     @Override

@@ -150,4 +150,21 @@ class ViewerRerunVariantTest {
         assertEquals(dir.resolve("results-variant-20261202-011530"), bridge.shownFolder());
         assertEquals("perez", bridge.currentOptions().skyModel());
     }
+
+    /** A cancelled re-run leaves the data on show, its study and folder as they were; the first results stay byte-identical. */
+    @Test
+    void aCancelledRerunKeepsTheStudyOnShowAndTheFirstResults() throws Exception {
+        ViewerBridge bridge = new ViewerBridge(boxStudy(2.0));
+        bridge.analyse((f, m) -> {}, () -> false);
+        Path first = dir.resolve("results");
+        Map<String, byte[]> before = snapshot(first);
+        assertThrows(java.util.concurrent.CancellationException.class,
+                () -> bridge.rerun(new RerunRequest(1.0, "clear-sky", "isotropic", "cancelled"), (f, m) -> {}, () -> true));
+        assertSameFiles(before, snapshot(first));
+        assertEquals(2.0, bridge.currentOptions().patchSizeM(), 0.0);
+        assertEquals("perez", bridge.currentOptions().skyModel());
+        assertEquals(first, bridge.shownFolder());
+        assertTrue(!Files.exists(dir.resolve("cancelled").resolve(RunRecord.FILE_NAME)));
+        assertTrue(!bridge.variants().contains(dir.resolve("cancelled")), "a folder without a run is not listed");
+    }
 }
