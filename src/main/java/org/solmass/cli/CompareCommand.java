@@ -6,6 +6,7 @@ import org.solmass.model.ObjReader;
 import org.solmass.irradiation.IrradiationColumns;
 import org.solmass.metrics.PatchComparison;
 import org.solmass.output.ComparedResults;
+import org.solmass.output.ComparisonNote;
 import org.solmass.output.DeltaCsvWriter;
 import org.solmass.output.MapRenderer;
 import org.solmass.output.PatchCsvReader;
@@ -30,22 +31,29 @@ import java.util.concurrent.Callable;
 /**
  * {@code solmass compare A B}: two results folders of massing variants of one site, patch by patch.
  * Patches are matched by position and orientation ({@link PatchMatcher}); differences are B - A.
- * Writes delta.csv, delta-blocks.csv and delta-map.png (on B's geometry). See docs/metrics.md.
+ * Writes delta.csv, delta-blocks.csv, delta-map.png (on B's geometry) and compare.json (the two runs
+ * and the settings in which they differ, {@link ComparisonNote}). Runs that differ in site, zone,
+ * climate, sky model, time base or patch size are compared with a warning, or refused with
+ * {@code --strict}. See docs/metrics.md.
  */
 @Command(name = "compare", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Compares two results folders of massing variants of one site.",
                 "Patches are matched by position and orientation; the differences B - A",
                 "of annual irradiation, sun hours, sunshine hours and sky view factor",
                 "per patch and per block go to delta.csv and delta-blocks.csv, the",
-                "change in annual irradiation to delta-map.png."})
+                "change in annual irradiation to delta-map.png, the two runs and",
+                "the settings in which they differ to compare.json."})
 public final class CompareCommand implements Callable<Integer> {
-    public static final String DELTA = DeltaCsvWriter.DELTA, BLOCKS = DeltaCsvWriter.BLOCKS, MAP = "delta-map.png";
+    public static final String DELTA = DeltaCsvWriter.DELTA, BLOCKS = DeltaCsvWriter.BLOCKS, MAP = "delta-map.png",
+            NOTE = ComparisonNote.FILE_NAME;
 
     @Parameters(index = "0", paramLabel = "RESULTS-A", description = "results folder of variant A (the reference)") Path a;
     @Parameters(index = "1", paramLabel = "RESULTS-B", description = "results folder of variant B") Path b;
     @Option(names = "--out", paramLabel = "DIR", description = "output folder (default: RESULTS-B/compare)") Path out;
     @Option(names = "--max-angle", paramLabel = "DEG", description = "largest angle between matched normals (default 5)") Double maxAngle;
     @Option(names = "--no-map", description = "do not write delta-map.png") boolean noMap;
+    @Option(names = "--strict", description = {"refuse (exit 2) runs that differ in site, zone, climate, sky model,",
+            "time base or patch size instead of warning"}) boolean strict;
 
     @Override
     public Integer call() {
@@ -56,6 +64,14 @@ public final class CompareCommand implements Callable<Integer> {
         PublishedRun pa = PublishedRun.open(a), pb = PublishedRun.open(b);
         for (String w : pa.warnings()) System.err.println("solmass: warning: " + w);
         for (String w : pb.warnings()) System.err.println("solmass: warning: " + w);
+        ComparisonNote note = ComparisonNote.of(pa, pb);
+        for (ComparisonNote.Difference d : note.differences()) System.err.println("solmass: warning: " + d.message());
+        if (strict && note.hasDifferences()) {
+            System.err.println("solmass: compare refused (--strict): the runs differ in "
+                    + String.join(", ", note.differences().stream().map(ComparisonNote.Difference::field).toList())
+                    + "; nothing written");
+            return Main.EXIT_INPUT;
+        }
         RunRecord runB = pb.record();
         ComparedResults c = read(pa, pb, maxAngle != null ? maxAngle : PatchMatcher.DEFAULT_MAX_ANGLE_DEG);
         List<Path> written = new ArrayList<>();
@@ -65,6 +81,9 @@ public final class CompareCommand implements Callable<Integer> {
         Path blocks = dir.resolve(BLOCKS);
         DeltaCsvWriter.writeBlocks(blocks, c);
         written.add(blocks);
+        Path notePath = dir.resolve(NOTE);
+        note.write(notePath);
+        written.add(notePath);
         if (!noMap && c.comparison().quantities().contains(IrradiationColumns.ANNUAL)) {
             if (!runB.modelUnchanged()) {
                 System.err.println("solmass: warning: the model of " + b + " changed since its run; delta-map.png not written");
@@ -84,6 +103,10 @@ public final class CompareCommand implements Callable<Integer> {
             for (int r = 0; r < d.length; r++) if (Double.isFinite(d[r])) { s += d[r] * areaB[r]; ar += areaB[r]; }
             System.out.printf("  %s: area-weighted mean change %s%n", q.label(),
                     ar > 0 ? (q.format(s / ar) + " " + q.unit().symbol()).trim() : "no matched patch");
+        }
+        if (note.hasDifferences()) {
+            System.out.println("  caution: the runs differ in " + String.join(", ",
+                    note.differences().stream().map(ComparisonNote.Difference::field).toList()) + " (see " + NOTE + ")");
         }
         for (Path f : written) System.out.println("  wrote " + f);
         return Main.EXIT_OK;

@@ -17,6 +17,7 @@ import org.solmass.output.ComparedResults;
 import org.solmass.output.ResultsFolder;
 import org.solmass.output.RunRecord;
 import org.solmass.output.SummaryWriter;
+import org.solmass.output.VariantFolders;
 import org.solmass.study.Study;
 import org.solmass.sun.Site;
 import org.solmass.sun.SunPath;
@@ -46,12 +47,29 @@ import java.util.function.BooleanSupplier;
  * no physics.
  */
 final class ViewerBridge implements ViewerActions {
+    /** The study file written into each variant folder. */
+    static final String VARIANT_STUDY = "study.json";
     private Study study;
     private AnalysisRun.Outcome last;
     private ResultTable shown;
+    /** The study's first results folder; re-runs write variant folders beside it, never into it. */
+    private final Path firstResults;
+    /** The results folder of the data on show. */
+    private Path shownFolder;
+    private java.time.Clock clock = java.time.Clock.systemDefaultZone();
 
     ViewerBridge(Study study) {
+        this(study, study.outputs().folder());
+    }
+
+    private ViewerBridge(Study study, Path firstResults) {
         this.study = study;
+        this.firstResults = firstResults.toAbsolutePath().normalize();
+    }
+
+    /** The clock that stamps default variant names (tests fix it). */
+    void clock(java.time.Clock c) {
+        clock = c;
     }
 
     /** Runs the study, writes its results folder and returns what the viewer shows. */
@@ -63,6 +81,7 @@ final class ViewerBridge implements ViewerActions {
         }
         last = o;
         shown = o.table();
+        shownFolder = o.study().outputs().folder().toAbsolutePath().normalize();
         return data(o.study(), o.model(), o.patches(), o.table(), o.result().monthHourWm2(), o.weather(), o.warnings());
     }
 
@@ -109,8 +128,9 @@ final class ViewerBridge implements ViewerActions {
             }
         }
         WeatherSeries weather = AnalysisRun.loadWeather(study);
-        ViewerBridge b = new ViewerBridge(study);
+        ViewerBridge b = new ViewerBridge(study, folder);
         b.shown = table;
+        b.shownFolder = folder.toAbsolutePath().normalize();
         bridgeOut[0] = b;
         return data(study, model, ps, table, monthHour, weather, warnings);
     }
@@ -194,6 +214,12 @@ final class ViewerBridge implements ViewerActions {
         return org.solmass.sky.SkyModels.names();
     }
 
+    /**
+     * Re-runs the study with the request's options into a new variant folder beside the first results
+     * folder ({@link VariantFolders}); writes the variant's resolved study as study.json there first
+     * (so it can be run again from the command line), then the results. The first results and earlier
+     * variants are not touched.
+     */
     @Override
     public ViewerData rerun(RerunRequest r, ProgressSink progress, BooleanSupplier cancelled) {
         com.fasterxml.jackson.databind.node.ObjectNode t = org.solmass.study.StudyWriter.toTree(study);
@@ -201,9 +227,49 @@ final class ViewerBridge implements ViewerActions {
         t.put("sky", r.skyModel());
         com.fasterxml.jackson.databind.node.ObjectNode climate = t.putObject("climate");
         climate.put("source", r.climateSource());
-        Path base = study.source() != null ? study.source().getParent() : Path.of("").toAbsolutePath();
-        study = org.solmass.study.StudyReader.fromTree(t, study.source(), base, "re-run");
-        return analyse(progress, cancelled);
+        Path base = study.source() != null ? study.source().toAbsolutePath().getParent() : Path.of("").toAbsolutePath();
+        // resolve before creating the folder: a bad option makes no empty variant folder
+        org.solmass.study.StudyReader.fromTree(t.deepCopy(), study.source(), base, "re-run");
+        Path dir = VariantFolders.create(firstResults, r.variantName(), java.time.LocalDateTime.now(clock));
+        ((com.fasterxml.jackson.databind.node.ObjectNode) t.get("outputs")).put("folder", dir.toString());
+        Path studyFile = dir.resolve(VARIANT_STUDY);
+        Study variant = org.solmass.study.StudyReader.fromTree(t, studyFile, base, "re-run");
+        org.solmass.output.AtomicFiles.writeString(studyFile, org.solmass.study.StudyWriter.toJson(variant));
+        Study before = study;
+        study = variant;
+        try {
+            return analyse(progress, cancelled);
+        } catch (RuntimeException e) {   // cancelled or failed: the data on show, and its study, stay
+            study = before;
+            throw e;
+        }
+    }
+
+    @Override
+    public Path shownFolder() {
+        return shownFolder;
+    }
+
+    @Override
+    public List<Path> variants() {
+        return VariantFolders.list(firstResults, VARIANT_STUDY);
+    }
+
+    /** Reads a variant folder ({@link #fromFolder}); its study becomes the one later re-runs start from. */
+    @Override
+    public ViewerData openVariant(Path folder) {
+        ViewerBridge[] read = new ViewerBridge[1];
+        ViewerData d = fromFolder(folder, read);
+        study = read[0].study;
+        shown = read[0].shown;
+        shownFolder = folder.toAbsolutePath().normalize();
+        last = null;
+        return d;
+    }
+
+    @Override
+    public String defaultVariantName() {
+        return firstResults.getFileName() + VariantFolders.INFIX + "yyyyMMdd-HHmmss";
     }
 
     @Override

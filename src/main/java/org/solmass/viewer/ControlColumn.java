@@ -37,6 +37,9 @@ final class ControlColumn extends VBox {
     private final Spinner<Double> patchSize = new Spinner<>(0.25, 50, 1, 0.25);
     private final ComboBox<String> climate = new ComboBox<>();
     private final ComboBox<String> sky = new ComboBox<>();
+    private final TextField variantName = new TextField();
+    private final ComboBox<String> variants = new ComboBox<>();
+    private List<java.nio.file.Path> variantFolders = List.of();
     private final ComboBox<String> pngScale = new ComboBox<>(FXCollections.observableArrayList("1\u00d7", "2\u00d7", "3\u00d7", "4\u00d7"));
     private ViewerData data;
     private ColourScale scale = new ColourScale(0, 1, false);
@@ -100,7 +103,22 @@ final class ControlColumn extends VBox {
         sky.setMaxWidth(Double.MAX_VALUE);
         Button run = new Button("Re-run analysis");
         run.setMaxWidth(Double.MAX_VALUE);
-        run.setOnAction(e -> win.rerun(new RerunRequest(patchSize.getValue(), climate.getValue(), sky.getValue())));
+        variantName.setId("variant-name");
+        String defaultName = actions.defaultVariantName();
+        variantName.setPromptText(defaultName != null ? defaultName : "new variant folder name");
+        run.setOnAction(e -> {
+            win.rerun(new RerunRequest(patchSize.getValue(), climate.getValue(), sky.getValue(), variantName.getText()));
+            variantName.clear();   // a name is used once: a second re-run under it would be refused
+        });
+        variants.setId("variants");
+        variants.setMaxWidth(Double.MAX_VALUE);
+        variants.setPromptText("no results folder yet");
+        Button open = new Button("Open");
+        open.setId("open-variant");
+        open.setOnAction(e -> {
+            int i = variants.getSelectionModel().getSelectedIndex();
+            if (i >= 0 && i < variantFolders.size()) win.openVariant(variantFolders.get(i));
+        });
         pngScale.getSelectionModel().select(1);
 
         Button csv = new Button("CSV\u2026"), summary = new Button("Summary\u2026"), png = new Button("PNG\u2026");
@@ -111,7 +129,9 @@ final class ControlColumn extends VBox {
         getChildren().addAll(head("Colour by"), quantity, legend, caution, auto, ViewerWindow.row(min, new Label("to"), max),
                 head("Threshold"), thrOn, thr, thrArea,
                 head("View"), views, sunPath, zones, hint(),
-                head("Re-run"), label("Patch size (m)"), patchSize, label("Climate"), climate, label("Sky model"), sky, run,
+                head("Re-run"), label("Patch size (m)"), patchSize, label("Climate"), climate, label("Sky model"), sky,
+                label("Variant folder (empty: dated name)"), variantName, run,
+                label("Results of this study"), ViewerWindow.row(variants, open),
                 head("Export"), ViewerWindow.row(csv, summary), ViewerWindow.row(png, pngScale));
     }
 
@@ -160,6 +180,7 @@ final class ControlColumn extends VBox {
         patchSize.getValueFactory().setValue(opt.patchSizeM());
         climate.setValue(opt.climateSource());
         sky.setValue(opt.skyModel());
+        refreshVariants();
         List<Quantity> qs = Quantity.available(d.table());
         Quantity keep = quantity.getValue();
         quantity.setItems(FXCollections.observableArrayList(qs));
@@ -167,6 +188,22 @@ final class ControlColumn extends VBox {
         if (keep != null) for (Quantity q : qs) if (q.column().equals(keep.column())) pick = q;
         quantity.setValue(pick);
         refresh();
+    }
+
+    /** Lists the study's results folders (the first results and its variants) by folder name; selects the one on show. */
+    private void refreshVariants() {
+        try {
+            variantFolders = actions.variants();
+        } catch (RuntimeException e) {
+            variantFolders = List.of();
+        }
+        List<String> names = new java.util.ArrayList<>();
+        for (java.nio.file.Path f : variantFolders) names.add(String.valueOf(f.getFileName()));
+        variants.setItems(FXCollections.observableArrayList(names));
+        java.nio.file.Path onShow = actions.shownFolder();
+        int i = onShow == null ? -1 : variantFolders.indexOf(onShow);
+        if (i >= 0) variants.getSelectionModel().select(i);
+        else if (!names.isEmpty()) variants.getSelectionModel().select(names.size() - 1);
     }
 
     /** Picks out the patches at or above a value (NaN: threshold off), as the controls would. */

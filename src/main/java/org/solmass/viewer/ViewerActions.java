@@ -16,8 +16,25 @@ public interface ViewerActions {
     /** The sky model names offered in the re-run control. */
     default List<String> skyModels() { return List.of(currentOptions().skyModel()); }
 
-    /** Re-runs the analysis with changed options; returns the new data, or null when cancelled. */
+    /**
+     * Re-runs the analysis with changed options into a new variant folder (earlier results are never
+     * overwritten); returns the new data, or null when cancelled.
+     */
     ViewerData rerun(RerunRequest request, ProgressSink progress, BooleanSupplier cancelled) throws Exception;
+
+    /** The results folder of the data on show (a re-run's variant folder, or the one opened); null when unknown. */
+    default Path shownFolder() { return null; }
+
+    /** The study's results folders holding a run (the first results, then the variants by name); empty when none. */
+    default List<Path> variants() { return List.of(); }
+
+    /** Opens one of {@link #variants()}: its data, read from the folder; later re-runs start from its options. */
+    default ViewerData openVariant(Path folder) throws Exception {
+        throw new UnsupportedOperationException("variants are not available for this data");
+    }
+
+    /** The default variant name offered in the re-run control (shown as the name field's prompt); null when none. */
+    default String defaultVariantName() { return null; }
 
     /** Writes the per-patch CSV of the data on show. */
     void exportCsv(Path file) throws Exception;

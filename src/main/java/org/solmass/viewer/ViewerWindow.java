@@ -410,6 +410,9 @@ public final class ViewerWindow {
 
     void setStatus(String s) { status.setText(s); }
 
+    /** The status line's text. */
+    String statusText() { return status.getText(); }
+
     /** Colours the model by a column, as the selector would. */
     public void controlsSelect(String column) { controls.select(column); }
 
@@ -417,7 +420,17 @@ public final class ViewerWindow {
     public void setThreshold(double value) { controls.setThreshold(value); }
 
     void rerun(RerunRequest req) {
-        runBusy("Re-running the analysis\u2026", () -> actions.rerun(req, this::progress, cancelled::get), null, null);
+        runBusy("Re-running the analysis\u2026", () -> actions.rerun(req, this::progress, cancelled::get), w -> {
+            java.nio.file.Path variant = actions.shownFolder();
+            if (variant != null) status.setText("Variant written to " + variant + " \u00b7 " + status.getText());
+        }, null);
+    }
+
+    /** Opens one of the study's results folders (a variant) in place of the data on show. */
+    void openVariant(java.nio.file.Path folder) {
+        runBusy("Opening " + folder.getFileName() + "\u2026", () -> actions.openVariant(folder), w -> {
+            status.setText("Showing " + folder + " \u00b7 " + status.getText());
+        }, null);
     }
 
     Node root() { return root; }
