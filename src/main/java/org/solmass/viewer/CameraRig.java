@@ -25,17 +25,19 @@ public final class CameraRig {
     private final DoubleProperty heading = new SimpleDoubleProperty();
     private final javafx.beans.property.IntegerProperty moves = new javafx.beans.property.SimpleIntegerProperty();
     private final double radius;
-    private final double[] focus;
+    private final double[] focus, siteFocus;
     private double lastX, lastY;
     private double outsideRadiusM;
 
     /**
      * @param siteRadiusM half the diagonal of the whole model, metres (zoom limits, clipping)
-     * @param focus {x, y, z, radius} in the scene frame of what the fixed views frame
+     * @param focus {x, y, z, radius} in the scene frame of what the fixed views and "analysed" frame
+     * @param siteFocus the same for the whole model with its context, what the first 3D view frames
      */
-    public CameraRig(double siteRadiusM, double[] focus) {
+    public CameraRig(double siteRadiusM, double[] focus, double[] siteFocus) {
         this.radius = siteRadiusM;
         this.focus = focus.clone();
+        this.siteFocus = siteFocus.clone();
         camera.setFieldOfView(30);
         rig.getChildren().add(camera);
         camera.getTransforms().addAll(target, yaw, pitch, back);
@@ -44,7 +46,11 @@ public final class CameraRig {
 
     /** Distance at which a sphere of the focus radius fills the view height with a margin. */
     private double fit(double margin) {
-        return margin * focus[3] / Math.sin(Math.toRadians(camera.getFieldOfView() / 2));
+        return fit(margin, focus);
+    }
+
+    private double fit(double margin, double[] sphere) {
+        return margin * sphere[3] / Math.sin(Math.toRadians(camera.getFieldOfView() / 2));
     }
 
     public PerspectiveCamera camera() { return camera; }
@@ -92,8 +98,19 @@ public final class CameraRig {
         return Math.max(0, -b + Math.sqrt(Math.max(0, b * b - c)));
     }
 
-    /** Fixed views: "top" or the side looked from, "N", "E", "S", "W". */
+    /**
+     * Fixed views: "orbit" (the first view: the whole model with its context, from the south-west and
+     * above), "analysed" (the same direction, framing the analysed patches), "top" or the side looked
+     * from, "N", "E", "S", "W" (framing the analysed patches).
+     */
     public void preset(String which) {
+        if (which.equals("orbit")) {
+            target.setX(siteFocus[0]);
+            target.setY(siteFocus[1]);
+            target.setZ(siteFocus[2]);
+            setView(30, 38, fit(1.05, siteFocus));
+            return;
+        }
         target.setX(focus[0]);
         target.setY(focus[1]);
         target.setZ(focus[2]);
@@ -107,7 +124,7 @@ public final class CameraRig {
                 target.setY(-0.3 * 1.3 * radius);
                 setView(165, 24, 1.3 * radius * 1.3 / Math.sin(Math.toRadians(camera.getFieldOfView() / 2)));
                 break;
-            default: setView(30, 38, fit(1.3)); break;
+            default: setView(30, 38, fit(1.3)); break;   // "analysed"
         }
     }
 

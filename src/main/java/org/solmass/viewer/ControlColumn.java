@@ -90,6 +90,9 @@ final class ControlColumn extends VBox {
         views.add(view("From E", "E"), 0, 1);
         views.add(view("From S", "S"), 1, 1);
         views.add(view("From W", "W"), 2, 1);
+        Button fit = view("Fit analysed blocks", "analysed");
+        fit.setPrefWidth(3 * 74 + 2 * 4);
+        views.add(fit, 0, 2, 3, 1);
 
         RerunRequest opt = actions.currentOptions();
         patchSize.setEditable(true);

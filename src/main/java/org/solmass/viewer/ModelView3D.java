@@ -41,12 +41,12 @@ public final class ModelView3D {
     private final double liftM;
 
     /** Geometry prepared off the FX thread. */
-    public record Prepared(SceneFrame frame, double liftM, double[] focus, List<PatchMeshData> patches,
+    public record Prepared(SceneFrame frame, double liftM, double[] focus, double[] siteFocus, List<PatchMeshData> patches,
                            List<MassingMeshData> analysed, List<MassingMeshData> context) {
         public static Prepared of(ViewerData d) {
             SceneFrame f = SceneFrame.of(d.model().bounds());
             double lift = Math.max(0.01, Math.min(0.15, f.radiusM() * 2e-4));
-            return new Prepared(f, lift, ModelView3D.focus(d, f), PatchMeshData.build(d.patches(), f, lift),
+            return new Prepared(f, lift, ModelView3D.focus(d, f), sphere(d.model().bounds(), f), PatchMeshData.build(d.patches(), f, lift),
                     MassingMeshData.build(d.model(), f, d.blockAnalysed(), true),
                     MassingMeshData.build(d.model(), f, d.blockAnalysed(), false));
         }
@@ -69,6 +69,14 @@ public final class ModelView3D {
             }
         }
         if (d.patches().isEmpty()) b = d.model().bounds();
+        return sphere(b, f);
+    }
+
+    /**
+     * The sphere around a box {minX, minY, minZ, maxX, maxY, maxZ} (model coordinates) as {x, y, z,
+     * radius} in the scene frame: the whole model with its context, for the first view.
+     */
+    static double[] sphere(double[] b, SceneFrame f) {
         double dx = b[3] - b[0], dy = b[4] - b[1], dz = b[5] - b[2];
         double r = Math.max(1, 0.5 * Math.sqrt(dx * dx + dy * dy + dz * dz));
         return new double[] {f.fx((b[0] + b[3]) / 2), f.fy((b[2] + b[5]) / 2), f.fz((b[1] + b[4]) / 2), r};

@@ -235,7 +235,7 @@ public final class ViewerWindow {
         long t0 = System.nanoTime();
         view = new ModelView3D(d, prep);
         long t1 = System.nanoTime();
-        rig = new CameraRig(prep.frame().radiusM(), prep.focus());
+        rig = new CameraRig(prep.frame().radiusM(), prep.focus(), prep.siteFocus());
         javafx.scene.Group world = new javafx.scene.Group(view.node(), rig.node());
         SunPathView.Built sp = SunPathView.build(d.sunPath(), prep.frame().radiusM());
         view.sunPathGroup().getChildren().setAll(sp.group());

@@ -43,4 +43,18 @@ class SceneFrameTest {
         assertEquals(expected.getY(), actual.getY(), E);
         assertEquals(expected.getZ(), actual.getZ(), E);
     }
+
+    /** The first view frames a sphere that holds every vertex of the model (context blocks included). */
+    @Test
+    void firstViewSphereHoldsEveryVertexOfTheModel() {
+        ViewerData d = SyntheticViewerData.courtyard();
+        SceneFrame f = SceneFrame.of(d.model().bounds());
+        double[] s = ModelView3D.sphere(d.model().bounds(), f), a = ModelView3D.focus(d, f);
+        double[] v = d.model().vertices();
+        for (int i = 0; i < v.length; i += 3) {
+            double dx = f.fx(v[i]) - s[0], dy = f.fy(v[i + 2]) - s[1], dz = f.fz(v[i + 1]) - s[2];
+            assertEquals(true, Math.sqrt(dx * dx + dy * dy + dz * dz) <= s[3] + 1e-3, "vertex " + i / 3 + " outside the first view's sphere");
+        }
+        assertEquals(true, s[3] >= a[3], "the whole model is at least as large as its analysed part");
+    }
 }
