@@ -72,6 +72,7 @@ public final class CompareCommand implements Callable<Integer> {
                     + "; nothing written");
             return Main.EXIT_INPUT;
         }
+        org.solmass.output.FolderClaim.prepareWritable(dir, out != null ? "--out" : b.toString());   // before the matching
         RunRecord runB = pb.record();
         ComparedResults c = read(pa, pb, maxAngle != null ? maxAngle : PatchMatcher.DEFAULT_MAX_ANGLE_DEG);
         List<Path> written = new ArrayList<>();

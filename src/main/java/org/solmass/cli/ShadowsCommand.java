@@ -60,6 +60,10 @@ public final class ShadowsCommand implements Callable<Integer> {
         if (groundMargin != null && !(groundMargin >= 0)) throw new InputException("--ground-margin", "expected 0 or more metres, got " + groundMargin);
         if (threads < 0) throw new InputException("--threads", "expected 0 (all cores) or a positive count, got " + threads);
         Study study = StudyReader.read(studyFile, new StudyOverrides().out(out).patchM(patch));
+        // a folder of their own: the results folder holds one analyse run, published and verified as a whole
+        Path folder = out != null ? study.outputs().folder() : study.outputs().folder().resolve(FOLDER);
+        org.solmass.output.FolderClaim.prepareWritable(folder, out != null ? "--out"
+                : (study.source() == null ? "outputs.folder" : study.source() + ": outputs.folder"));   // before the work
         long t0 = System.nanoTime();
         ObjReader.Result read = AnalysisRun.loadModel(study);
         for (String w : read.warnings()) System.err.println("solmass: warning: " + w);
@@ -87,8 +91,6 @@ public final class ShadowsCommand implements Callable<Integer> {
         } finally {
             pool.shutdownNow();
         }
-        // a folder of their own: the results folder holds one analyse run, published and verified as a whole
-        Path folder = out != null ? study.outputs().folder() : study.outputs().folder().resolve(FOLDER);
         Path png = folder.resolve(SHEET), csv = folder.resolve(TABLE);
         ShadowTable.write(csv, ShadowStudy.areas(patches, frames, analysed));
         ShadowSheet.write(png, m, analysed, patches, frames, ts.size(), study.name());

@@ -51,6 +51,7 @@ public final class SkyViewCommand implements Callable<Integer> {
         if (!(patch > 0) || !Double.isFinite(patch)) throw new InputException("--patch", "expected a positive size in metres, got " + patch);
         if (rays < 1) throw new InputException("--rays", "expected a positive number of rays, got " + rays);
         if (threads < 0) throw new InputException("--threads", "expected 0 (all cores) or a positive count, got " + threads);
+        org.solmass.output.FolderClaim.prepareWritable(out, "--out");   // before the work
         long t0 = System.nanoTime();
         ObjReader.Result read = ObjReader.load(model, modelFlags.options());
         for (String w : read.warnings()) System.err.println("solmass: warning: " + w);

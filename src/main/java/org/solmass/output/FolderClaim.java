@@ -153,6 +153,26 @@ public final class FolderClaim implements AutoCloseable {
     }
 
     /**
+     * For commands that write their own files without publishing a run (sky-view, compare, shadows):
+     * the same checks as {@link #claim}, the folder created when missing and a file written and removed
+     * in it, all before any work, so a folder that cannot take the files is refused at once.
+     *
+     * @return the absolute folder
+     * @throws InputException naming {@code where} when the folder cannot take files
+     */
+    public static Path prepareWritable(Path folder, String where) {
+        Path dir = check(folder, where, null);
+        try {
+            Files.createDirectories(dir);
+            Path probe = Files.createTempFile(dir, ".solmass-probe-", ".tmp");
+            Files.delete(probe);
+        } catch (IOException e) {
+            throw refusal(dir, where, e);
+        }
+        return dir;
+    }
+
+    /**
      * Checks what can be checked without writing: the path is not {@code /}, not under a system
      * folder, no name is too long, it is not the study file, not a file. Returns the absolute folder.
      */

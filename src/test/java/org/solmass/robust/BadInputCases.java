@@ -201,6 +201,8 @@ final class BadInputCases {
         NOT_AS_ROOT.add("out-read-only-folder");
         CASES.put("out-in-use", new Case(Map.of("m.obj", MODEL), withSite()));
         SETUP.put("out-in-use", dir -> org.solmass.output.FolderClaim.claim(dir.resolve("out"), "--out", null, "another study"));
+        CASES.put("sky-view-out-is-a-file", new Case(Map.of("m.obj", MODEL, "out", "a file"),
+                new String[] {"sky-view", "-q", "@m.obj", "--out", "@out"}));
     }
 
     /** analyse with the two-box model and the invented site into {@code out}. */
