@@ -5,6 +5,9 @@ import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.LinearRing;
 import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.geom.TopologyException;
+import org.locationtech.jts.operation.overlayng.OverlayNG;
+import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
 import org.solmass.model.Vec3;
 
 import java.util.ArrayList;
@@ -44,13 +47,36 @@ public final class HiddenFaces {
             for (int j : covering.get(i)) covers.add(inFrameOf(a, surfaces.get(j)));
             Geometry poly = a.polygon();
             if (!covers.isEmpty()) {
-                Geometry cover = poly.getFactory().buildGeometry(covers).union();
-                Geometry inter = poly.intersection(cover);
-                if (inter.getArea() > MIN_OVERLAP_M2) poly = poly.difference(cover);
+                Geometry cover = union(poly.getFactory().buildGeometry(covers));
+                Geometry inter = overlay(poly, cover, OverlayNG.INTERSECTION);
+                if (inter.getArea() > MIN_OVERLAP_M2) poly = overlay(poly, cover, OverlayNG.DIFFERENCE);
             }
             out[i] = poly;
         }
         return out;
+    }
+
+    /**
+     * JTS's overlay, and where its classic noding fails on nearly coincident edges (a
+     * TopologyException, found by fuzzing faces that touch at 1e-13 m) the snapping overlay of
+     * OverlayNGRobust (JTS 1.18+), which is built for such input. The classic one stays first so
+     * ordinary models keep their exact results.
+     */
+    static Geometry overlay(Geometry a, Geometry b, int op) {
+        try {
+            return op == OverlayNG.INTERSECTION ? a.intersection(b) : a.difference(b);
+        } catch (TopologyException e) {
+            return OverlayNGRobust.overlay(a, b, op);
+        }
+    }
+
+    /** The union of a collection, with the same fallback as {@link #overlay}. */
+    static Geometry union(Geometry g) {
+        try {
+            return g.union();
+        } catch (TopologyException e) {
+            return OverlayNGRobust.union(g);
+        }
     }
 
     /**
@@ -72,7 +98,7 @@ public final class HiddenFaces {
             for (int j : same.get(i)) {
                 Surface b = surfaces.get(j);
                 if (j <= i || a.block() == b.block()) continue;
-                double area = a.polygon().intersection(inFrameOf(a, b)).getArea();
+                double area = overlay(a.polygon(), inFrameOf(a, b), OverlayNG.INTERSECTION).getArea();
                 if (area > MIN_OVERLAP_M2) out.add(new Duplicate(i, j, area));
             }
         }

@@ -66,4 +66,24 @@ class FuzzRegressionTest {
         assertFalse(ps.patches().isEmpty());
         for (var p : ps.patches()) assertTrue(p.areaM2() > 0, p.id());
     }
+
+    /**
+     * Found by GeometryFuzzTest: a garbled file whose faces touch along edges 1e-13 m apart; JTS's
+     * classic overlay in HiddenFaces threw a TopologyException ("found non-noded intersection").
+     * HiddenFaces now falls back to OverlayNGRobust there; the file gives surfaces and patches or an
+     * input error, as the fuzz target requires.
+     */
+    @Test
+    void nearlyCoincidentFacesDoNotBreakTheOverlay() throws IOException {
+        String found = resource("GeometryFuzzTestInputs/modelSurfacesAndPatchesOrAnInputError/nearly-coincident-faces-jts-topology");
+        try {
+            var m = org.solmass.model.ObjReader.parse(found, "f.obj", org.solmass.model.ModelOptions.defaults()).model();
+            double[] b = m.bounds();
+            double extent = Math.max(b[3] - b[0], Math.max(b[4] - b[1], b[5] - b[2]));
+            var ps = org.solmass.surface.Patcher.build(m, new org.solmass.surface.PatchOptions(Math.max(extent / 8, 1e-6), java.util.Set.of(), true));
+            for (var p : ps.patches()) assertTrue(p.areaM2() > 0 && Double.isFinite(p.areaM2()), p.id());
+        } catch (org.solmass.InputException e) {
+            // refusing the file with a message is as good as reading it
+        }
+    }
 }
