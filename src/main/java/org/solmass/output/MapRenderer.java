@@ -154,7 +154,7 @@ public final class MapRenderer {
         if (plPixels[0] == null) throw new IllegalStateException("the plan panel failed to render");
         panel(g, axoPixels, axo, MARGIN, panelTop, axoW, panelH, captionH,
                 String.format(java.util.Locale.ROOT, "View from the %s, %.0f\u00b0 above the horizon",
-                        compass(az), o.viewElevationDeg()));
+                        org.solmass.model.Compass.longName(az), o.viewElevationDeg()));
         panel(g, plPixels[0], plan, 2 * MARGIN + axoW, panelTop, planW, panelH, captionH, "Plan, north up");
 
         title(g, w, o.title(), label, unit);
@@ -321,9 +321,5 @@ public final class MapRenderer {
         return u.symbol().equals(unit) ? u.display() : unit;
     }
 
-    private static String compass(double az) {
-        String[] names = {"north", "north-east", "east", "south-east", "south", "south-west", "west", "north-west"};
-        int i = (int) Math.round(((az % 360) + 360) % 360 / 45.0) % 8;
-        return names[i];
-    }
+
 }

@@ -177,7 +177,6 @@ public final class SummaryWriter {
      * patch ids).
      */
     static final class Breakdown {
-        static final String[] SECTORS = {"N", "NE", "E", "SE", "S", "SW", "W", "NW"};
         final Map<String, Group> orientation = new java.util.LinkedHashMap<>();
         final Map<Integer, Group> storey = new TreeMap<>();
         final Map<String, Group> surface = new java.util.LinkedHashMap<>();
@@ -194,7 +193,7 @@ public final class SummaryWriter {
                 if (o.length == 0) b.baseZ = Math.min(b.baseZ, q.centroid().z());
             }
             if (!Double.isFinite(b.baseZ)) b.baseZ = 0;
-            for (String sct : SECTORS) b.orientation.put(sct, null);
+            for (String sct : org.solmass.model.Compass.shortNames()) b.orientation.put(sct, null);
             double[] row = new double[cols];
             for (int p = 0; p < patches.size(); p++) {
                 Patch q = patches.get(p);
@@ -214,9 +213,9 @@ public final class SummaryWriter {
             return b;
         }
 
-        /** The compass sector of an azimuth (degrees from north, clockwise): N for [337.5, 22.5), and so on. */
+        /** The compass sector of an azimuth ({@link org.solmass.model.Compass}). */
         static String sector(double azimuthDeg) {
-            return SECTORS[(int) Math.floorMod(Math.round(azimuthDeg / 45.0), 8L)];
+            return org.solmass.model.Compass.shortName(azimuthDeg);
         }
 
         /** "B3-S12" of patch id "B3-S12-P0045". */

@@ -120,7 +120,7 @@ final class PatchPanel extends VBox {
         r = row(r, "Surface", Integer.toString(pt.surface()));
         r = row(r, "Kind", pt.kind().label());
         r = row(r, "Tilt", fmt(pt.tiltDeg(), 0) + "\u00b0");
-        r = row(r, "Azimuth", pt.tiltDeg() < 1 ? "(horizontal)" : fmt(pt.azimuthDeg(), 0) + "\u00b0 " + compass(pt.azimuthDeg()));
+        r = row(r, "Azimuth", pt.tiltDeg() < 1 ? "(horizontal)" : fmt(pt.azimuthDeg(), 0) + "\u00b0 " + org.solmass.model.Compass.shortName(pt.azimuthDeg()));
         r = row(r, "Area", fmt(pt.areaM2(), 2) + " m\u00b2");
         r = value(r, t, p, IrradiationColumns.SKY_VIEW_FACTOR, null, 2);
         r = value(r, t, p, IrradiationColumns.ANNUAL, null, 0);
@@ -191,8 +191,5 @@ final class PatchPanel extends VBox {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%,." + dec + "f", v) : "n/a";
     }
 
-    static String compass(double az) {
-        String[] c = {"N", "NE", "E", "SE", "S", "SW", "W", "NW"};
-        return c[(int) Math.floorMod(Math.round(az / 45.0), 8)];
-    }
+
 }
