@@ -117,6 +117,8 @@ final class ControlColumn extends VBox {
         variants.setMaxWidth(Double.MAX_VALUE);
         variants.setPromptText("no results folder yet");
         Button open = new Button("Open");
+        open.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);   // a long variant name shortens the list, not the button
+        variants.setPrefWidth(150);
         open.setId("open-variant");
         open.setOnAction(e -> {
             int i = variants.getSelectionModel().getSelectedIndex();

@@ -132,6 +132,7 @@ final class PatchPanel extends VBox {
         boolean cautioned = pt.kind() == org.solmass.surface.SurfaceKind.ROOF;
         for (Column c : t.columns()) {   // the metrics' columns, sunshine hours and differences, by their own labels
             if (PANEL_SKIPS.contains(c.name()) || IrradiationColumns.MONTHLY.match(c.name()).isPresent()) continue;
+            if (!Double.isFinite(t.column(c.name())[p])) continue;   // e.g. no VSC on a roof, no zone: no row
             r = value(r, t, p, c, null, 1);
             cautioned |= c.cautioned();
         }
@@ -174,6 +175,8 @@ final class PatchPanel extends VBox {
         Label kl = new Label(k), vl = new Label(v);
         kl.getStyleClass().add("fact-key");
         vl.getStyleClass().add("fact-value");
+        kl.setWrapText(true);                                    // a long label wraps ...
+        vl.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE); // ... the value is never cut
         vl.setId("fact-" + k.trim().toLowerCase(Locale.ROOT).replace(' ', '-'));
         facts.addRow(r, kl, vl);
         return r + 1;
@@ -184,11 +187,13 @@ final class PatchPanel extends VBox {
         if (!t.has(col.name())) return r;
         Column c = t.def(col.name());
         String u = c.unit().display();
-        return row(r, label != null ? label : c.label(), fmt(t.column(c.name())[p], c.kind().whole() ? 0 : dec) + (u.isEmpty() ? "" : " " + u));
+        double v = t.column(c.name())[p];
+        String text = Double.isFinite(v) ? fmt(v, c.kind().whole() ? 0 : dec) + (u.isEmpty() ? "" : " " + u) : "no value";
+        return row(r, label != null ? label : c.label(), text);
     }
 
     static String fmt(double v, int dec) {
-        return Double.isFinite(v) ? String.format(Locale.ROOT, "%,." + dec + "f", v) : "n/a";
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%,." + dec + "f", v) : "no value";
     }
 
 
