@@ -47,11 +47,13 @@ public record IncidenceAngleModifier(double ar) {
         return -Math.expm1(-c / ar) / -Math.expm1(-1 / ar);
     }
 
-    /** IAM of the isotropic sky diffuse on a plane tilted tiltDeg from horizontal (0..180). */
+    /**
+     * IAM of the isotropic sky diffuse on a plane tilted tiltDeg from horizontal (0..180); by symmetry
+     * it equals {@link #groundReflected} at 180 - tilt ((pi - b - sin b) / (1 + cos b) is the ground
+     * term at pi - b), which also gives the limit 0 for a plane facing straight down.
+     */
     public double skyDiffuse(double tiltDeg) {
-        double b = Math.toRadians(tiltDeg), s = Math.sin(b);
-        double t = s + (Math.PI - b - s) / (1 + Math.cos(b));
-        return closedForm(t);
+        return groundReflected(180 - tiltDeg);
     }
 
     /**
@@ -59,11 +61,14 @@ public record IncidenceAngleModifier(double ar) {
      * the limit at tilt 0 (a plane that sees no ground) is 0.
      */
     public double groundReflected(double tiltDeg) {
-        double b = Math.toRadians(tiltDeg), s = Math.sin(b);
+        return closedForm(trigTerm(Math.toRadians(tiltDeg)));
+    }
+
+    /** sin b + (b - sin b) / (1 - cos b), with its limit at b -> 0 (series b^3/6 over b^2/2 gives b / 3). */
+    static double trigTerm(double b) {
+        double s = Math.sin(b);
         double oneMinusCos = 2 * Math.sin(b / 2) * Math.sin(b / 2);
-        // (b - sin b) / (1 - cos b) -> b / 3 as b -> 0 (series b^3/6 over b^2/2)
-        double t = s + (b < 1e-4 ? b / 3 : (b - s) / oneMinusCos);
-        return closedForm(t);
+        return s + (b < 1e-4 ? b / 3 : (b - s) / oneMinusCos);
     }
 
     private double closedForm(double t) {
