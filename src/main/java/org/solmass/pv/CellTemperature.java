@@ -61,6 +61,18 @@ public record CellTemperature(double u0WPerM2K, double u1WsPerM3K) {
     }
 
     /**
+     * Air temperature per climate step with the gaps filled as {@link #fillAir}: the step's dry-bulb
+     * temperature, else its month's mean, else {@link #DEFAULT_AIR_C}. (Wind needs no filling: pass
+     * {@code step.windMs()}, NaN takes {@link #DEFAULT_WIND_MS}.)
+     */
+    public static double[] airPerStep(java.util.List<org.solmass.climate.Step> steps) {
+        double[] air = new double[steps.size()];
+        int[] month = new int[steps.size()];
+        for (int i = 0; i < air.length; i++) { air[i] = steps.get(i).dryBulbC(); month[i] = steps.get(i).month(); }
+        return fillAir(air, month);
+    }
+
+    /**
      * Air temperature per step with the gaps filled: a step's own value when known, else the mean of
      * the known values of its month, else {@link #DEFAULT_AIR_C}.
      *

@@ -14,8 +14,9 @@ package org.solmass.pv;
  * @param beamWm2         beam (and circumsolar) irradiance per substring, W/m2, after obstruction
  * @param skyWm2          sky diffuse (isotropic and horizon parts) per substring, W/m2, after obstruction
  * @param reflectedWm2    light reflected by the ground and other surfaces per substring, W/m2
- * @param unobstructedWm2 total irradiance the same plane would get with no obstruction, W/m2
- *                        (module mean; at least the obstructed mean in a physical case)
+ * @param unobstructedWm2 total irradiance the same plane would get with no obstruction, W/m2 (module
+ *                        mean); light reflected by the site's surfaces can make the obstructed mean
+ *                        larger, and the shading loss is then negative (a gain)
  * @param incidenceDeg    angle between the sun and the module normal, degrees (beam incidence)
  * @param tiltDeg         module tilt from horizontal, degrees, 0..180
  */

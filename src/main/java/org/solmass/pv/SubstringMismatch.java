@@ -1,7 +1,5 @@
 package org.solmass.pv;
 
-import java.util.Arrays;
-
 /**
  * Power of a module whose bypass-diode substrings see different irradiance (partial shading).
  *
@@ -31,11 +29,14 @@ public final class SubstringMismatch {
     public static double equivalentWm2(double[] substringWm2) {
         int n = substringWm2.length;
         if (n == 0) throw new IllegalArgumentException("a module has at least one substring");
-        if (n == 1) return Math.max(0, substringWm2[0]);
-        double[] g = substringWm2.clone();
-        Arrays.sort(g);   // ascending: g[n - k] is the k-th brightest
+        // for each substring as the current-setting one: k = substrings at least as bright (no sort, no allocation)
         double best = 0;
-        for (int k = 1; k <= n; k++) best = Math.max(best, k * Math.max(0, g[n - k]) / n);
+        for (int i = 0; i < n; i++) {
+            double gi = Math.max(0, substringWm2[i]);
+            int k = 0;
+            for (int j = 0; j < n; j++) if (Math.max(0, substringWm2[j]) >= gi) k++;
+            best = Math.max(best, k * gi / n);
+        }
         return best;
     }
 

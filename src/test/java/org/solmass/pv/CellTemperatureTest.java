@@ -62,4 +62,16 @@ class CellTemperatureTest {
         double[] f = CellTemperature.fillAir(air, month);
         assertArrayEquals(new double[] {10, 12, 14, CellTemperature.DEFAULT_AIR_C}, f, 0);
     }
+
+    /** Climate steps: the dry-bulb temperature where given, the month mean of the file where not. */
+    @Test
+    void airPerStepReadsTheStepsDryBulbTemperature() {
+        java.util.List<org.solmass.climate.Step> steps = java.util.List.of(step(3, 8), step(3, Double.NaN), step(4, Double.NaN));
+        assertArrayEquals(new double[] {8, 8, CellTemperature.DEFAULT_AIR_C}, CellTemperature.airPerStep(steps), 0);
+    }
+
+    private static org.solmass.climate.Step step(int month, double airC) {
+        return new org.solmass.climate.Step(java.time.Instant.EPOCH, 1, month, 80, 12, new org.solmass.sun.SunPosition(180, 45), 1,
+                500, 400, 200, 1360, airC, 1);
+    }
 }
