@@ -185,8 +185,8 @@ public final class StudyReader {
     private static TerrainSpec terrain(JsonCursor c, Path base) {
         if (c.raw("terrain") == null) return TerrainSpec.NONE;
         JsonCursor k = c.object("terrain");
-        Path horizon = k.has("horizon") ? path(k, "horizon", null, base) : null;
-        Path dem = k.has("dem") ? path(k, "dem", null, base) : null;
+        Path horizon = k.raw("horizon") != null ? path(k, "horizon", null, base) : null;
+        Path dem = k.raw("dem") != null ? path(k, "dem", null, base) : null;
         int epsg = k.integer("dem_epsg", 0, 1024, 999_999);
         double e = k.number("origin_east_m", 0.0, -1e8, 1e8), n = k.number("origin_north_m", 0.0, -1e8, 1e8);
         double r = k.number("near_radius_m", TerrainSpec.DEFAULT_NEAR_RADIUS_M, 0, 50_000);
