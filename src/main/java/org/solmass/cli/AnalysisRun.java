@@ -150,7 +150,6 @@ public final class AnalysisRun {
             int nm = albedo.length;
             albedo = java.util.Arrays.copyOf(albedo, nm + terrain.triangleCount());
             java.util.Arrays.fill(albedo, nm, albedo.length, (float) study.albedo().ground());
-            counts.put("terrain_triangles", (long) terrain.triangleCount());
         }
         warnings.addAll(terrain.notes());
         IrradiationSetup.Options o = new IrradiationSetup.Options(study.patchM(), study.rays(),
@@ -182,6 +181,7 @@ public final class AnalysisRun {
         counts.put("steps", (long) weather.size());
         counts.put("sun_directions", (long) r.sunDirections());
         counts.put("rays_per_patch", (long) org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()));
+        if (terrain.triangleCount() > 0) counts.put("terrain_triangles", (long) terrain.triangleCount());
         return new Outcome(study, model, patches, weather, r, table, warnings, counts, t, metrics);
     }
 
