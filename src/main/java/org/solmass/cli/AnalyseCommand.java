@@ -33,6 +33,7 @@ public final class AnalyseCommand implements Callable<Integer> {
     @Option(names = "--context", paramLabel = "BLOCK", split = ",", description = "blocks that only obstruct") List<String> context;
     @Mixin SiteOptions site = new SiteOptions();
     @Mixin ClimateOptions climate = new ClimateOptions();
+    @Mixin TerrainFlags terrain = new TerrainFlags();
     @Option(names = "--patch", paramLabel = "M", description = "patch size, metres (default 1)") Double patch;
     @Option(names = "--rays", paramLabel = "N", description = "hemisphere rays per patch (default 1024)") Integer rays;
     @Mixin SkyFlag sky = new SkyFlag();
@@ -67,6 +68,7 @@ public final class AnalyseCommand implements Callable<Integer> {
         modelFlags.applyTo(ov);
         site.applyTo(ov);
         climate.applyTo(ov);
+        terrain.applyTo(ov);
         if (studyFile == null && model == null) {
             throw new InputException("analyse", "give a study file, or --model with --lat, --lon and --zone");
         }

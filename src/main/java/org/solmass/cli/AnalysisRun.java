@@ -19,6 +19,7 @@ import org.solmass.model.MassingModel;
 import org.solmass.model.ObjReader;
 import org.solmass.scene.Scene;
 import org.solmass.study.Study;
+import org.solmass.terrain.SiteTerrain;
 import org.solmass.surface.PatchOptions;
 import org.solmass.surface.PatchSet;
 import org.solmass.surface.Patcher;
@@ -142,8 +143,15 @@ public final class AnalysisRun {
         t.put("patches", seconds(t1));
 
         long t2 = System.nanoTime();
-        Scene scene = Scene.build(model, !patches.hasGroundFaces(), patches.groundLevelZ());
+        SiteTerrain terrain = siteTerrain(study, patches);
+        Scene scene = scene(model, patches, terrain);
         float[] albedo = study.albedo().perTriangle(model, Surface.groundTriangles(patches.surfaces(), model.triangleCount()));
+        if (terrain.triangleCount() > 0) { // terrain triangles follow the model's: ground, with the ground albedo
+            int nm = albedo.length;
+            albedo = java.util.Arrays.copyOf(albedo, nm + terrain.triangleCount());
+            java.util.Arrays.fill(albedo, nm, albedo.length, (float) study.albedo().ground());
+        }
+        warnings.addAll(terrain.notes());
         IrradiationSetup.Options o = new IrradiationSetup.Options(study.patchM(), study.rays(),
                 study.albedo().ground(), study.groundIrradiance() == Study.GroundIrradiance.SHADED,
                 weather.timeBase() == TimeBase.AVERAGE_DAYS ? IrradiationSetup.SunSampling.EXACT
@@ -173,7 +181,41 @@ public final class AnalysisRun {
         counts.put("steps", (long) weather.size());
         counts.put("sun_directions", (long) r.sunDirections());
         counts.put("rays_per_patch", (long) org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()));
+        if (terrain.triangleCount() > 0) counts.put("terrain_triangles", (long) terrain.triangleCount());
         return new Outcome(study, model, patches, weather, r, table, warnings, counts, t, metrics);
+    }
+
+    /**
+     * The study's terrain placed about the analysed patches: site centre = centre of their bounding
+     * box in x and y; the far horizon of a DEM is seen from their mean centroid height.
+     */
+    static SiteTerrain siteTerrain(Study study, PatchSet patches) {
+        if (study.terrain().isNone()) return SiteTerrain.NONE;
+        double x0 = Double.POSITIVE_INFINITY, x1 = Double.NEGATIVE_INFINITY, y0 = x0, y1 = x1, z = 0;
+        for (org.solmass.surface.Patch p : patches.patches()) {
+            x0 = Math.min(x0, p.centroid().x());
+            x1 = Math.max(x1, p.centroid().x());
+            y0 = Math.min(y0, p.centroid().y());
+            y1 = Math.max(y1, p.centroid().y());
+            z += p.centroid().z();
+        }
+        double g = patches.groundLevelZ();
+        double eye = Math.max(0, z / Math.max(1, patches.patchCount()) - g);
+        return SiteTerrain.build(study.terrain(), (x0 + x1) / 2, (y0 + y1) / 2, g, eye);
+    }
+
+    /**
+     * The scene: the model's triangles, then the terrain's (ground); the ground plane (at the model's
+     * ground level, or with terrain at the lowest point of the terrain mesh) and the far horizon.
+     */
+    static Scene scene(MassingModel model, PatchSet patches, SiteTerrain terrain) {
+        if (terrain.triangleCount() == 0) {
+            return Scene.build(model, !patches.hasGroundFaces(), patches.groundLevelZ()).withHorizon(terrain.horizon());
+        }
+        float[] m = model.triangleSoup(), t = terrain.soup();
+        float[] soup = java.util.Arrays.copyOf(m, m.length + t.length);
+        System.arraycopy(t, 0, soup, m.length, t.length);
+        return Scene.build(soup, true, Math.min(terrain.lowestZ(), patches.groundLevelZ())).withHorizon(terrain.horizon());
     }
 
     /**

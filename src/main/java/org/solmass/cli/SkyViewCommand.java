@@ -43,6 +43,8 @@ public final class SkyViewCommand implements Callable<Integer> {
     @Option(names = "--rays", paramLabel = "N", defaultValue = "1024", description = "hemisphere rays per patch, rounded to a square grid (default ${DEFAULT-VALUE})") int rays;
     @Option(names = "--analyse", paramLabel = "BLOCK", split = ",", description = "blocks to analyse (default all)") List<String> analyse;
     @Option(names = "--threads", paramLabel = "N", defaultValue = "0", description = "worker threads (default: all cores)") int threads;
+    @Option(names = "--horizon", paramLabel = "FILE.csv",
+            description = "far horizon: CSV of azimuth_deg,elevation_deg; rays it stops count as obstruction") Path horizon;
     @Option(names = "--out", paramLabel = "DIR", required = true, description = "output folder") Path out;
     @Option(names = {"-q", "--quiet"}, description = "no progress on stderr") boolean quiet;
 
@@ -52,12 +54,14 @@ public final class SkyViewCommand implements Callable<Integer> {
         if (rays < 1) throw new InputException("--rays", "expected a positive number of rays, got " + rays);
         if (threads < 0) throw new InputException("--threads", "expected 0 (all cores) or a positive count, got " + threads);
         org.solmass.output.FolderClaim.prepareWritable(out, "--out");   // before the work
+        org.solmass.scene.HorizonProfile far = horizon == null ? org.solmass.scene.HorizonProfile.NONE
+                : org.solmass.terrain.HorizonCsv.read(horizon);
         long t0 = System.nanoTime();
         ObjReader.Result read = ObjReader.load(model, modelFlags.options());
         for (String w : read.warnings()) System.err.println("solmass: warning: " + w);
         MassingModel m = read.model();
         PatchSet ps = Patcher.build(m, new PatchOptions(patch, analyse == null ? java.util.Set.of() : new LinkedHashSet<>(analyse), false));
-        Scene scene = Scene.build(m, !ps.hasGroundFaces(), ps.groundLevelZ());
+        Scene scene = Scene.build(m, !ps.hasGroundFaces(), ps.groundLevelZ()).withHorizon(far);
         boolean[] ground = Surface.groundTriangles(ps.surfaces(), m.triangleCount());
         double tSetup = AnalysisRun.seconds(t0);
         long t1 = System.nanoTime();

@@ -46,15 +46,17 @@ public final class IrradiationSetup {
      * @param surfaces every surface of the model (from the patcher); patches refer to them by id
      * @param analysed analysed patches, index order
      * @param context coarse patches of context blocks (reflectors only), may be empty
-     * @param triangleAlbedo albedo of every model triangle
+     * @param triangleAlbedo albedo of every triangle of the scene: the model's, then the terrain's
+     *                       (triangles of the scene beyond the model's count as ground and have no receiver)
      */
     public static ShadedIrradiation.Inputs build(Scene scene, MassingModel model, List<Surface> surfaces,
                                                  List<Patch> analysed, List<Patch> context, float[] triangleAlbedo,
                                                  WeatherSeries weather, SkyModel sky, Options o) {
-        int nt = model.triangleCount();
+        int nt = scene.triangleCount(); // the model's triangles, then any terrain's
         int[] triangleSurface = new int[nt];
         java.util.Arrays.fill(triangleSurface, -1);
         boolean[] isGround = Surface.groundTriangles(surfaces, nt);
+        java.util.Arrays.fill(isGround, model.triangleCount(), nt, true); // terrain triangles are ground
         SurfaceFrame[] frames = new SurfaceFrame[surfaces.size()];
         for (Surface s : surfaces) {
             frames[s.id()] = s.frame();

@@ -79,7 +79,8 @@ public final class BundleTracer {
     /**
      * For rays {@code s < count} from the common origin o (world coordinates, metres) along unit
      * directions {@code dir[3s..3s+2]}: {@code out[s]} = whether anything (a triangle from either side,
-     * or the ground plane) lies on the ray at {@code 0 < t < tMax[s]}; {@code tMax == null} means
+     * or the ground plane) lies on the ray at {@code 0 < t < tMax[s]}, or the far horizon obstructs a
+     * ray with no limit (decided before the tree is walked); {@code tMax == null} means
      * +infinity for every ray. Equal to {@link Tracer#occluded} for each ray.
      */
     public void occluded(double ox, double oy, double oz, double[] dir, double[] tMax, int count, boolean[] out) {
@@ -113,6 +114,11 @@ public final class BundleTracer {
                 lim[s] = RETIRED;
                 return 0;
             }
+        }
+        if (tMax == Double.POSITIVE_INFINITY && scene.escapeBlocked(ddx, ddy, ddz)) { // far horizon: as Tracer
+            out[s] = true;
+            lim[s] = RETIRED;
+            return 0;
         }
         out[s] = false;
         float fx = (float) ddx, fy = (float) ddy, fz = (float) ddz;
@@ -207,7 +213,7 @@ public final class BundleTracer {
     /**
      * Closest hit of rays {@code s < count} from the common origin o along unit directions
      * {@code dir[3s..3s+2]}, with no distance limit: {@code tri[s]} = as {@link Tracer#closestHit}
-     * (original triangle index, {@link Tracer#GROUND} or {@link Tracer#MISS}) and {@code dist[s]} =
+     * (original triangle index, {@link Tracer#GROUND}, {@link Tracer#HORIZON} or {@link Tracer#MISS}) and {@code dist[s]} =
      * its {@link Tracer#t()}. The same distance as one ray at a time; when two triangles meet the ray
      * at exactly the same distance (a shared edge) either may be reported, as for the single ray.
      * With the SIMD kernel the rays go through the tree together; otherwise one at a time.
@@ -250,7 +256,7 @@ public final class BundleTracer {
                 tri[s] = Tracer.GROUND;
                 dist[s] = groundT[s];
             } else {
-                tri[s] = Tracer.MISS;
+                tri[s] = scene.escapeBlocked(dir[3 * s], dir[3 * s + 1], dir[3 * s + 2]) ? Tracer.HORIZON : Tracer.MISS;
                 dist[s] = Double.POSITIVE_INFINITY;
             }
         }

@@ -26,7 +26,8 @@ import org.solmass.surface.Patch;
  * SKY if it escapes with dz >= 0; GROUND if it first meets the infinite ground plane, or a triangle
  * flagged in {@code triangleIsGround}, or escapes with dz &lt; 0 (possible only without a ground
  * plane, where the model's own ground faces stand for the ground and the rest of the lower world is
- * taken as ground too); BLOCK if it first meets any other triangle.
+ * taken as ground too); BLOCK if it first meets any other triangle, or escapes upwards at or below
+ * the scene's far horizon ({@link Scene#withHorizon}: distant terrain counts as an obstruction).
  *
  * <p>Determinism: the jitter of a patch comes from a SplitMix64 stream (the generator behind
  * {@code java.util.SplittableRandom}) seeded with {@link #patchSeed(String, long)} of its id and the
@@ -167,6 +168,7 @@ public final class HemisphereSampler {
     public static int classOf(int hit, double dz, boolean[] triangleIsGround) {
         if (hit >= 0) return triangleIsGround != null && triangleIsGround[hit] ? GROUND : BLOCK;
         if (hit == Tracer.GROUND) return GROUND;
+        if (hit == Tracer.HORIZON) return BLOCK; // far terrain: an obstruction, not sky
         return dz < 0 ? GROUND : SKY;
     }
 

@@ -18,6 +18,8 @@ public final class HorizonProfile {
     private final double[] elevationDeg;
     private final double stepDeg;
     private final double maxDeg;
+    /** tan of {@link #maxDeg}: directions steeper than this need no azimuth lookup. */
+    private final double tanMax;
 
     /**
      * @param elevationDeg elevation angle at azimuths {@code i 360/n}, degrees, each in [0, 90)
@@ -35,6 +37,7 @@ public final class HorizonProfile {
         }
         this.stepDeg = 360.0 / elevationDeg.length;
         this.maxDeg = max;
+        this.tanMax = Math.tan(Math.toRadians(max));
     }
 
     /** The same elevation in every direction. */
@@ -73,7 +76,7 @@ public final class HorizonProfile {
         if (dz <= 0) return true;
         if (maxDeg == 0) return false;
         double h = Math.hypot(dx, dy);
-        if (dz >= h * Math.tan(Math.toRadians(maxDeg))) return false; // above the highest point: no lookup
+        if (dz > h * tanMax) return false; // above the highest point: no lookup
         double az = Math.toDegrees(Math.atan2(dx, dy));
         return dz <= h * Math.tan(Math.toRadians(elevationDegAt(az)));
     }

@@ -49,6 +49,10 @@ public final class Scene {
     private final double diagonal;
     private final double epsilon;
     private final int triangleCount;
+    /** The far horizon; rays that leave the scene at or below it are obstructed ({@link #withHorizon}). */
+    final HorizonProfile horizon;
+    /** {@code !horizon.isNone()}: the one test the kernels make per escaping ray when there is none. */
+    final boolean farHorizon;
 
     private Scene(BvhBuilder.Result r, double[] bounds, double[] shift, boolean groundPlane, double groundZ,
                   int triangleCount) {
@@ -67,6 +71,50 @@ public final class Scene {
         double d = Math.sqrt(ex * ex + ey * ey + ez * ez);
         this.diagonal = Double.isFinite(d) ? d : 0;
         this.epsilon = Math.max(MIN_EPSILON_M, EPSILON_PER_DIAGONAL * diagonal);
+        this.horizon = HorizonProfile.NONE;
+        this.farHorizon = false;
+    }
+
+    /** The same tree and ground plane with another far horizon (arrays shared, nothing copied). */
+    private Scene(Scene s, HorizonProfile horizon) {
+        this.nodes = s.nodes;
+        this.tris = s.tris;
+        this.triOriginal = s.triOriginal;
+        this.maxDepth = s.maxDepth;
+        this.nodeCount = s.nodeCount;
+        this.shiftX = s.shiftX;
+        this.shiftY = s.shiftY;
+        this.shiftZ = s.shiftZ;
+        this.groundPlane = s.groundPlane;
+        this.groundZ = s.groundZ;
+        this.triangleCount = s.triangleCount;
+        this.diagonal = s.diagonal;
+        this.epsilon = s.epsilon;
+        this.horizon = horizon;
+        this.farHorizon = !horizon.isNone();
+    }
+
+    /**
+     * This scene with a far horizon: every ray that leaves the scene (hits no triangle and not the
+     * ground plane, with no distance limit) going up at or below {@code horizon}'s elevation for its
+     * azimuth is obstructed ({@link HorizonProfile#obstructs}): {@link Tracer#occluded} is true and
+     * {@link Tracer#closestHit} returns {@link Tracer#HORIZON}. Rays going down are left as they are
+     * (they meet the ground plane, or count as ground without one). {@link HorizonProfile#NONE}
+     * gives the scene without a far horizon.
+     */
+    public Scene withHorizon(HorizonProfile horizon) {
+        return new Scene(this, horizon == null ? HorizonProfile.NONE : horizon);
+    }
+
+    /** The far horizon ({@link HorizonProfile#NONE} unless set by {@link #withHorizon}). */
+    public HorizonProfile horizon() { return horizon; }
+
+    /**
+     * Whether a ray from anywhere along unit (or any-length) direction d that leaves the scene is
+     * obstructed by the far horizon: false without one and for rays that do not go up.
+     */
+    boolean escapeBlocked(double dx, double dy, double dz) {
+        return farHorizon && dz > 0 && horizon.obstructs(dx, dy, dz);
     }
 
     /** Relative ray-origin offset: {@value} x the scene's bounding-box diagonal. */

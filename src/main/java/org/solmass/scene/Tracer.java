@@ -20,6 +20,12 @@ public final class Tracer {
     public static final int MISS = -1;
     /** {@link #closestHit} result when the ray's first hit is the infinite ground plane. */
     public static final int GROUND = -2;
+    /**
+     * {@link #closestHit} result when the ray leaves the scene (no triangle, no ground plane, no
+     * distance limit) and the scene's far horizon ({@link Scene#withHorizon}) obstructs its
+     * direction; {@link #t()} is then +infinity.
+     */
+    public static final int HORIZON = -3;
 
     private static final float TINY_DIR = 1e-20f;
 
@@ -62,10 +68,12 @@ public final class Tracer {
 
     /**
      * Whether anything (a triangle from either side, or the ground plane) lies on the ray at
-     * {@code 0 < t < tMax}. Stops at the first hit found.
+     * {@code 0 < t < tMax}, or, with {@code tMax} infinite, the far horizon obstructs its direction
+     * ({@link Scene#withHorizon}). Stops at the first hit found.
      */
     public boolean occluded(double ox, double oy, double oz, double dx, double dy, double dz, double tMax) {
         if (groundT(oz, dz) < tMax) return true;
+        if (tMax == Double.POSITIVE_INFINITY && scene.escapeBlocked(dx, dy, dz)) return true; // far horizon
         if (scene.nodeCount == 0) return false;
         return anyHit((float) (ox - scene.shiftX), (float) (oy - scene.shiftY), (float) (oz - scene.shiftZ),
                 (float) dx, (float) dy, (float) dz, (float) Math.min(tMax, Float.MAX_VALUE));
@@ -73,8 +81,8 @@ public final class Tracer {
 
     /**
      * The first thing on the ray at {@code 0 < t < tMax}: the ORIGINAL index of the triangle hit
-     * (index into the model's triangles), {@link #GROUND} for the infinite ground plane, or
-     * {@link #MISS}. Distance and barycentrics are then in {@link #t()}, {@link #u()}, {@link #v()}.
+     * (index into the model's triangles), {@link #GROUND} for the infinite ground plane,
+     * {@link #HORIZON} for the far horizon (only with {@code tMax} infinite), or {@link #MISS}. Distance and barycentrics are then in {@link #t()}, {@link #u()}, {@link #v()}.
      */
     public int closestHit(double ox, double oy, double oz, double dx, double dy, double dz, double tMax) {
         double tg = groundT(oz, dz);
@@ -92,6 +100,8 @@ public final class Tracer {
         } else if (tg < tMax) {
             hitTriangle = GROUND;
             hitT = tg;
+        } else if (tMax == Double.POSITIVE_INFINITY && scene.escapeBlocked(dx, dy, dz)) {
+            hitTriangle = HORIZON;
         }
         return hitTriangle;
     }
@@ -245,7 +255,7 @@ public final class Tracer {
             hitTriangle = GROUND;
             hitT = tg;
         } else {
-            hitTriangle = MISS;
+            hitTriangle = tMax == Double.POSITIVE_INFINITY && scene.escapeBlocked(dx, dy, dz) ? HORIZON : MISS;
             hitT = Double.POSITIVE_INFINITY;
         }
         return hitTriangle;

@@ -17,7 +17,9 @@ import jdk.incubator.vector.VectorSpecies;
  * all of them, and each packet pays one vector slab test of both child boxes. A leaf is tested
  * lane-wise against the lanes that hit its box. Uses the incubating Vector API of the JDK (JEP 414);
  * {@link BundleTracer} uses it only when the module {@code jdk.incubator.vector} is present and falls
- * back to its scalar ray-stream loop otherwise.
+ * back to its scalar ray-stream loop otherwise. The far horizon ({@link Scene#withHorizon}) is
+ * decided before this kernel, in {@code BundleTracer.load} (any hit: a ray it stops never enters) and
+ * after it (closest hit: a ray that hits nothing is checked), so the kernel itself does not change.
  *
  * <p>Lane arithmetic is the arithmetic of {@code Tracer} operation for operation (IEEE single
  * precision, no fused multiply-add, the int-domain slab test), so every lane gives the single-ray

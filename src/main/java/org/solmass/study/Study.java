@@ -8,6 +8,7 @@ import org.solmass.model.ModelOptions;
 import org.solmass.model.UpAxis;
 import org.solmass.sky.SkyModel;
 import org.solmass.sun.Site;
+import org.solmass.terrain.TerrainSpec;
 
 import java.nio.file.Path;
 import java.util.List;
@@ -41,11 +42,12 @@ import java.util.Map;
  * @param threads worker threads, 0 = all cores
  * @param sunHours sun hours on given dates (key {@code sun_hours})
  * @param pv PV roof zones (key {@code pv})
+ * @param terrain far horizon and DEM terrain (key {@code terrain}; {@link TerrainSpec#NONE}: flat, open)
  */
 public record Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
                     GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
                     TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads,
-                    SunHours sunHours, Pv pv) {
+                    SunHours sunHours, Pv pv, TerrainSpec terrain) {
 
     public static final double DEFAULT_PATCH_M = 1.0;
     public static final int DEFAULT_RAYS = 1024;
@@ -59,6 +61,16 @@ public record Study(String name, String description, Path source, Model model, S
         climate = climate == null ? Climate.CLEAR_SKY : climate;
         sunHours = sunHours == null ? SunHours.DEFAULTS : sunHours;
         pv = pv == null ? Pv.DEFAULTS : pv;
+        terrain = terrain == null ? TerrainSpec.NONE : terrain;
+    }
+
+    /** A study without terrain (flat ground, open horizon). */
+    public Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
+                 GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
+                 TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads,
+                 SunHours sunHours, Pv pv) {
+        this(name, description, source, model, site, climate, albedo, groundIrradiance, patchM, rays, sky, timeBase,
+                sunBins, stepMinutes, outputs, threads, sunHours, pv, TerrainSpec.NONE);
     }
 
     /** A study with the default sun-hour and PV settings. */
@@ -66,7 +78,7 @@ public record Study(String name, String description, Path source, Model model, S
                  GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
                  TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads) {
         this(name, description, source, model, site, climate, albedo, groundIrradiance, patchM, rays, sky, timeBase,
-                sunBins, stepMinutes, outputs, threads, SunHours.DEFAULTS, Pv.DEFAULTS);
+                sunBins, stepMinutes, outputs, threads, SunHours.DEFAULTS, Pv.DEFAULTS, TerrainSpec.NONE);
     }
 
     /** The metrics' settings from the study's {@code sun_hours} and {@code pv} keys. */

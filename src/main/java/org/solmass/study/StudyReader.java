@@ -21,6 +21,7 @@ import org.solmass.study.Study.Climate;
 import org.solmass.study.Study.GroundIrradiance;
 import org.solmass.study.Study.Outputs;
 import org.solmass.sun.Site;
+import org.solmass.terrain.TerrainSpec;
 
 import java.io.IOException;
 import java.nio.file.NoSuchFileException;
@@ -168,11 +169,30 @@ public final class StudyReader {
         int threads = c.integer("threads", 0, 0, 4096);
         Study.SunHours sunHours = sunHours(c, climate.year());
         Study.Pv pv = pv(c);
+        TerrainSpec terrain = terrain(c, base);
+        if (terrain.dem() != null && ground == GroundIrradiance.SHADED) {
+            throw c.error("ground_irradiance", "\"shaded\" samples the flat ground plane and cannot be combined with a DEM"
+                    + " (terrain.dem); use \"unshaded\" (the terrain then reflects the ground albedo x GHI)");
+        }
         c.finish();
 
         if (name == null || name.isBlank()) name = baseName(source != null ? source : modelFile);
         return new Study(name, description, source, model, site, climate, albedo, ground, patchM, rays, sky,
-                timeBase, sunBins, step, outputs, threads, sunHours, pv);
+                timeBase, sunBins, step, outputs, threads, sunHours, pv, terrain);
+    }
+
+    /** The {@code terrain} section: far-horizon file, DEM and its placement (docs/study-file.md). */
+    private static TerrainSpec terrain(JsonCursor c, Path base) {
+        if (c.raw("terrain") == null) return TerrainSpec.NONE;
+        JsonCursor k = c.object("terrain");
+        Path horizon = k.raw("horizon") != null ? path(k, "horizon", null, base) : null;
+        Path dem = k.raw("dem") != null ? path(k, "dem", null, base) : null;
+        int epsg = k.integer("dem_epsg", 0, 1024, 999_999);
+        double e = k.number("origin_east_m", 0.0, -1e8, 1e8), n = k.number("origin_north_m", 0.0, -1e8, 1e8);
+        double r = k.number("near_radius_m", TerrainSpec.DEFAULT_NEAR_RADIUS_M, 0, 50_000);
+        boolean fromDem = k.bool("far_horizon_from_dem", true);
+        k.finish();
+        return new TerrainSpec(horizon, dem, epsg, e, n, r, fromDem);
     }
 
     /** The {@code sun_hours} section: dates as "MM-DD" (valid in the study's year), step and minimum elevation. */

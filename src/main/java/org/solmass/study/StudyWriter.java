@@ -108,6 +108,18 @@ public final class StudyWriter {
         pv.put("min_zone_m2", s.pv().minZoneM2());
         pv.put("module_efficiency", s.pv().moduleEfficiency());
         pv.put("performance_ratio", s.pv().performanceRatio());
+
+        org.solmass.terrain.TerrainSpec tr = s.terrain();
+        if (!tr.isNone()) { // left out without terrain, so that results of earlier versions compare byte for byte
+            ObjectNode te = root.putObject("terrain");
+            if (tr.horizonCsv() != null) te.put("horizon", path(tr.horizonCsv()));
+            if (tr.dem() != null) te.put("dem", path(tr.dem()));
+            if (tr.demEpsg() > 0) te.put("dem_epsg", tr.demEpsg());
+            te.put("origin_east_m", tr.originEastM());
+            te.put("origin_north_m", tr.originNorthM());
+            te.put("near_radius_m", tr.nearRadiusM());
+            te.put("far_horizon_from_dem", tr.farHorizonFromDem());
+        }
         return root;
     }
 

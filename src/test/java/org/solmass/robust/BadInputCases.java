@@ -205,6 +205,25 @@ final class BadInputCases {
         SETUP.put("out-in-use", dir -> org.solmass.output.FolderClaim.claim(dir.resolve("out"), "--out", null, "another study"));
         CASES.put("sky-view-out-is-a-file", new Case(Map.of("m.obj", MODEL, "out", "a file"),
                 new String[] {"sky-view", "-q", "@m.obj", "--out", "@out"}));
+
+        // terrain: far-horizon files and DEMs (GeoTIFFs written with the NGA TIFF library, invented heights)
+        horizon("horizon-azimuth-not-increasing", "azimuth_deg,elevation_deg\n0,1\n100,2\n90,3\n");
+        horizon("horizon-elevation-out-of-range", "azimuth_deg,elevation_deg\n0,1\n100,95\n200,3\n");
+        horizon("horizon-too-few-rows", "azimuth_deg,elevation_deg\n0,1\n180,2\n");
+        dem("dem-not-covering-site", new org.solmass.terrain.GeoTiffFixture().grid(10, 10, 1000, 1100, 10).bytes());
+        dem("dem-no-georeferencing", new org.solmass.terrain.GeoTiffFixture().grid(10, 10, 1000, 1100, 10).noGeoreferencing().bytes());
+        dem("dem-nodata-at-site", new org.solmass.terrain.GeoTiffFixture().grid(70, 70, -340, 340, 10).nodata(-9999)
+                .heights((x, y) -> Math.hypot(x - 45, y - 5) < 8 ? Double.NaN : 2.0).bytes());
+        study("study-dem-with-shaded-ground", studyJson(GOOD_SITE,
+                ",\n  \"ground_irradiance\": \"shaded\",\n  \"terrain\": {\"dem\": \"d.tif\"}"));
+    }
+
+    private static void horizon(String id, String csv) {
+        CASES.put(id, new Case(Map.of("m.obj", MODEL, "h.csv", csv), withSite("--rays", "16", "--horizon", "@h.csv")));
+    }
+
+    private static void dem(String id, byte[] tif) {
+        CASES.put(id, new Case(Map.of("m.obj", MODEL), withSite("--rays", "16", "--dem", "@d.tif"), Map.of("d.tif", tif)));
     }
 
     /** analyse with the two-box model and the invented site into {@code out}. */
