@@ -203,6 +203,7 @@ final class BadInputCases {
         SETUP.put("out-in-use", dir -> org.solmass.output.FolderClaim.claim(dir.resolve("out"), "--out", null, "another study"));
         CASES.put("sky-view-out-is-a-file", new Case(Map.of("m.obj", MODEL, "out", "a file"),
                 new String[] {"sky-view", "-q", "@m.obj", "--out", "@out"}));
+        CASES.put("report-out-not-pdf", new Case(Map.of(), new String[] {"report", "@", "--out", "@r.txt"}));
     }
 
     /** analyse with the two-box model and the invented site into {@code out}. */

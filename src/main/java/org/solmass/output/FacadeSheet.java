@@ -1,0 +1,225 @@
+package org.solmass.output;
+
+import org.solmass.Cautions;
+import org.solmass.model.Compass;
+import org.solmass.model.Vec3;
+import org.solmass.surface.Patch;
+
+import javax.imageio.ImageIO;
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.FontMetrics;
+import java.awt.Graphics2D;
+import java.awt.image.BufferedImage;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * A page of facade elevations of one block ({@link FacadeLayout}): every facade surface seen straight
+ * on, side by side at one scale, its patches coloured by a per-patch quantity with the sequential ramp
+ * ({@link ColourRamp}); above each panel its number, compass sector ({@link Compass}), surface label
+ * and width; a title (study, block, quantity, unit, period), a colour bar, a scale bar, a key plan of
+ * the block with the panel numbers and a north arrow, and the results caution. Rendered by the
+ * map's software rasteriser ({@link Raster}, 2 x 2 supersampled), so it needs no display.
+ */
+public final class FacadeSheet {
+    static final int MARGIN = 16, TITLE_H = 76, FOOTER_H = 150, LABEL_H = 40, MIN_SLOT = 96, GAP = 22;
+
+    /**
+     * What the page shows.
+     *
+     * @param widthPx page width, pixels
+     * @param heightPx page height, pixels
+     * @param study study name (first part of the title)
+     * @param block block name
+     * @param label quantity label
+     * @param unit unit symbol
+     * @param period what the values cover (e.g. the year and climate), shown under the title
+     * @param lo low end of the colour range
+     * @param hi high end of the colour range
+     */
+    public record Options(int widthPx, int heightPx, String study, String block, String label, String unit,
+                          String period, double lo, double hi) {}
+
+    private FacadeSheet() {}
+
+    /** The panels' placement on a page of this size (the area between title and footer). */
+    public static FacadeLayout.Placement placement(FacadeLayout layout, int widthPx, int heightPx) {
+        return layout.place(widthPx - 2 * MARGIN, heightPx - TITLE_H - FOOTER_H, MIN_SLOT, GAP, LABEL_H);
+    }
+
+    /**
+     * Renders the page.
+     *
+     * @param values per patch value indexed by {@link Patch#index()}; NaN for none
+     */
+    public static BufferedImage render(FacadeLayout layout, double[] values, Options o) {
+        int w = o.widthPx(), h = o.heightPx();
+        BufferedImage img = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = PageMarks.begin(img);
+        FacadeLayout.Placement pl = placement(layout, w, h);
+        double s = pl.scalePxPerM();
+        List<FacadeLayout.Panel> panels = layout.panels();
+        for (int i = 0; i < panels.size(); i++) {
+            FacadeLayout.Panel p = panels.get(i);
+            int ox = MARGIN + pl.x()[i], oy = TITLE_H + pl.y()[i];
+            double rowH = pl.rowHeightM()[pl.row()[i]];
+            int tw = (int) Math.ceil(p.widthM() * s) + 2, th = (int) Math.ceil(rowH * s) + 2;
+            Raster r = new Raster(2 * tw, 2 * th, MapRenderer.BACKGROUND);
+            for (int k = 0; k < p.patches().size(); k++) {
+                Patch patch = p.patches().get(k);
+                double v = values[patch.index()];
+                int colour = ColourRamp.sequential(Double.isNaN(v) ? Double.NaN : ColourRamp.normalise(v, o.lo(), o.hi()));
+                fillPatch(r, p.uv().get(k), patch.triangles(), 2 * s, rowH, colour);
+            }
+            for (double[] uv : p.uv()) {   // faint patch edges
+                int m = uv.length / 2;
+                for (int c = 0; c < m; c++) {
+                    int d = (c + 1) % m;
+                    r.line(2 * s * uv[2 * c], 2 * s * (rowH - uv[2 * c + 1]), 0, 2 * s * uv[2 * d], 2 * s * (rowH - uv[2 * d + 1]), 0,
+                            MapRenderer.EDGE, 0.14, 1f);
+                }
+            }
+            BufferedImage tile = new BufferedImage(tw, th, BufferedImage.TYPE_INT_RGB);
+            tile.setRGB(0, 0, tw, th, r.downsample2(), 0, tw);
+            g.drawImage(tile, ox, oy, null);
+            g.setColor(new Color(0x888888));
+            g.setStroke(new BasicStroke(1f));
+            int base = (int) Math.round(oy + rowH * s);
+            g.drawLine(ox - 4, base, ox + (int) Math.round(p.widthM() * s) + 4, base);   // the common base line
+            panelLabel(g, i + 1, p, ox + p.widthM() * s / 2, oy - 6 + (int) Math.round((rowH - p.heightM()) * s));
+        }
+        title(g, o, s);
+        footer(g, layout, o, s, w, h);
+        g.dispose();
+        return img;
+    }
+
+    /** Renders and writes the PNG atomically. */
+    public static void write(Path file, FacadeLayout layout, double[] values, Options o) {
+        BufferedImage img = render(layout, values, o);
+        AtomicFiles.write(file, out -> {
+            if (!ImageIO.write(img, "png", out)) throw new java.io.IOException("no PNG writer available");
+        });
+    }
+
+    /**
+     * Fills one patch into a panel's raster: (u, w) metres to pixels at {@code pxPerM}, w measured down
+     * from the row's top at {@code rowH} metres.
+     */
+    static void fillPatch(Raster r, double[] uv, int[] triangles, double pxPerM, double rowH, int colour) {
+        int m = uv.length / 2;
+        double[] xs = new double[m], ys = new double[m], zs = new double[m];
+        for (int c = 0; c < m; c++) {
+            xs[c] = uv[2 * c] * pxPerM;
+            ys[c] = (rowH - uv[2 * c + 1]) * pxPerM;
+        }
+        r.polygon(xs, ys, zs, triangles, colour, 1f);
+    }
+
+    private static void panelLabel(Graphics2D g, int number, FacadeLayout.Panel p, double cx, int bottom) {
+        String head = number + "  " + p.compass();
+        String sub = String.format(Locale.ROOT, "%s, %.1f m", p.label(), p.widthM());
+        g.setColor(new Color(0x1E1E1E));
+        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 14));
+        FontMetrics fm = g.getFontMetrics();
+        g.drawString(head, (float) (cx - fm.stringWidth(head) / 2.0), bottom - 17);
+        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
+        fm = g.getFontMetrics();
+        g.setColor(new Color(0x444444));
+        g.drawString(sub, (float) (cx - fm.stringWidth(sub) / 2.0), bottom - 3);
+    }
+
+    private static void title(Graphics2D g, Options o, double s) {
+        g.setColor(new Color(0x1E1E1E));
+        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 24));
+        String unit = MapRenderer.display(o.unit());
+        g.drawString((o.study() == null || o.study().isBlank() ? "" : o.study() + " \u2014 ") + "Facade elevations of "
+                + o.block() + " \u2014 " + o.label() + (unit.isEmpty() ? "" : " (" + unit + ")"), MARGIN, 34);
+        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 14));
+        g.setColor(new Color(0x555555));
+        g.drawString((o.period() == null || o.period().isBlank() ? "" : o.period() + ". ")
+                + "Each facade seen straight on from outside, unrolled from the south with the block on the left; "
+                + String.format(Locale.ROOT, "one scale for the page: %.2f px per metre", s), MARGIN, 56);
+    }
+
+    private static void footer(Graphics2D g, FacadeLayout layout, Options o, double s, int w, int h) {
+        int top = h - FOOTER_H, bx = MARGIN + 4, barW = Math.min(700, (int) (w * 0.4));
+        String unit = MapRenderer.display(o.unit());
+        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 15));
+        g.setColor(new Color(0x222222));
+        g.drawString(o.label() + (unit.isEmpty() ? "" : ", " + unit), bx, top + 22);
+        PageMarks.colourBar(g, bx, top + 32, barW, 20, o.lo(), o.hi(), false);
+        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
+        g.setColor(new Color(0x444444));
+        g.drawString("Range as in map.png; values beyond it take the end colours", bx, top + 96);
+        g.setColor(new Color(ColourRamp.sequential(Double.NaN)));
+        int nx = bx + g.getFontMetrics().stringWidth("Range as in map.png; values beyond it take the end colours") + 24;
+        g.fillRect(nx, top + 85, 16, 12);
+        g.setColor(new Color(0x444444));
+        g.drawString("No value", nx + 22, top + 96);
+        PageMarks.scaleBar(g, s, bx + barW + 60, top + 60, Math.min(600, w / 3));
+        keyPlan(g, layout, w - MARGIN - 300, top + 6, 200, FOOTER_H - 42);
+        MapRenderer.northArrow(g, MapView.looking(Vec3.UP), w - MARGIN - 48, top + 52);
+        int size = 13;   // one line: the font shrinks until the caution fits the page
+        String caution = Cautions.RESULTS;
+        do g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, size--));
+        while (size > 8 && g.getFontMetrics().stringWidth(caution) > w - 2 * MARGIN);
+        g.setColor(new Color(0x555555));
+        g.drawString(caution, MARGIN, h - 10);
+    }
+
+    /** The block's facades in plan (north up), each marked with its panel number, fitted into a box. */
+    private static void keyPlan(Graphics2D g, FacadeLayout layout, int x, int y, int bw, int bh) {
+        double minX = Double.POSITIVE_INFINITY, minY = minX, maxX = Double.NEGATIVE_INFINITY, maxY = maxX;
+        for (FacadeLayout.Panel p : layout.panels()) {
+            for (Patch q : p.patches()) {
+                double[] o = q.outline();
+                for (int k = 0; k + 2 < o.length; k += 3) {
+                    minX = Math.min(minX, o[k]); maxX = Math.max(maxX, o[k]);
+                    minY = Math.min(minY, o[k + 1]); maxY = Math.max(maxY, o[k + 1]);
+                }
+            }
+        }
+        if (!(maxX >= minX)) return;
+        int pad = 16;
+        double sc = Math.min((bw - 2 * pad) / Math.max(1e-9, maxX - minX), (bh - 2 * pad) / Math.max(1e-9, maxY - minY));
+        double cx = x + bw / 2.0, cy = y + bh / 2.0, mx = (minX + maxX) / 2, my = (minY + maxY) / 2;
+        g.setColor(new Color(0xF4F3EF));
+        g.fillRect(x, y, bw, bh);
+        g.setColor(new Color(0xB0B0B0));
+        g.drawRect(x, y, bw, bh);
+        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 11));
+        FontMetrics fm = g.getFontMetrics();
+        List<FacadeLayout.Panel> panels = layout.panels();
+        for (int i = 0; i < panels.size(); i++) {
+            FacadeLayout.Panel p = panels.get(i);
+            double ax = Double.NaN, ay = 0, bxp = 0, byp = 0, lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
+            double ux = -Math.cos(Math.toRadians(p.azimuthDeg())), uy = Math.sin(Math.toRadians(p.azimuthDeg()));
+            for (Patch q : p.patches()) {
+                double[] o = q.outline();
+                for (int k = 0; k + 2 < o.length; k += 3) {
+                    double t = o[k] * ux + o[k + 1] * uy;
+                    if (t < lo) { lo = t; ax = o[k]; ay = o[k + 1]; }
+                    if (t > hi) { hi = t; bxp = o[k]; byp = o[k + 1]; }
+                }
+            }
+            if (Double.isNaN(ax)) continue;
+            g.setColor(new Color(0x333333));
+            g.setStroke(new BasicStroke(2f));
+            int x0 = (int) Math.round(cx + (ax - mx) * sc), y0 = (int) Math.round(cy - (ay - my) * sc);
+            int x1 = (int) Math.round(cx + (bxp - mx) * sc), y1 = (int) Math.round(cy - (byp - my) * sc);
+            g.drawLine(x0, y0, x1, y1);
+            double nx = Math.sin(Math.toRadians(p.azimuthDeg())), ny = Math.cos(Math.toRadians(p.azimuthDeg()));
+            String n = Integer.toString(i + 1);
+            double lx = (x0 + x1) / 2.0 + nx * 9, ly = (y0 + y1) / 2.0 - ny * 9;
+            g.setColor(new Color(0x00665E));
+            g.drawString(n, (float) (lx - fm.stringWidth(n) / 2.0), (float) (ly + fm.getAscent() / 2.0 - 1));
+        }
+        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
+        g.setColor(new Color(0x444444));
+        g.drawString("Key plan, north up", x + 4, y + bh + 14);
+    }
+}
