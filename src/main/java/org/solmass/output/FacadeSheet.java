@@ -56,10 +56,11 @@ public final class FacadeSheet {
      * @param values per patch value indexed by {@link Patch#index()}; NaN for none
      */
     public static BufferedImage render(FacadeLayout layout, double[] values, Options o) {
-        int w = o.widthPx(), h = o.heightPx();
+        int w = o.widthPx();
+        FacadeLayout.Placement pl = placement(layout, w, o.heightPx());
+        int h = height(pl, o.heightPx());
         BufferedImage img = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
         Graphics2D g = PageMarks.begin(img);
-        FacadeLayout.Placement pl = placement(layout, w, h);
         double s = pl.scalePxPerM();
         List<FacadeLayout.Panel> panels = layout.panels();
         for (int i = 0; i < panels.size(); i++) {
@@ -95,6 +96,18 @@ public final class FacadeSheet {
         footer(g, layout, o, s, w, h);
         g.dispose();
         return img;
+    }
+
+    /**
+     * Height of the page: the requested height, or less when the panels at their scale leave room
+     * (a wide block's single row of facades), so no band of white is left between panels and legend.
+     */
+    public static int height(FacadeLayout.Placement pl, int heightPx) {
+        int used = 0;
+        for (int i = 0; i < pl.x().length; i++) {
+            used = Math.max(used, pl.y()[i] + (int) Math.ceil(pl.rowHeightM()[pl.row()[i]] * pl.scalePxPerM()) + 2);
+        }
+        return Math.min(heightPx, TITLE_H + used + 28 + FOOTER_H);
     }
 
     /** Renders and writes the PNG atomically. */
