@@ -74,7 +74,8 @@ public final class ElevationsCommand implements Callable<Integer> {
         String name = column != null ? column : ResultsFolder.MAIN_COLUMN.name();
         double[] values = geo.values(name);
         Column def = geo.table().def(name);
-        double[] range = MapRenderer.autoRange(values);
+        boolean diverging = def.kind() == org.solmass.table.ColumnKind.DIVERGING;
+        double[] range = diverging ? MapRenderer.symmetricRange(values) : MapRenderer.autoRange(values);
         List<String> blocks = geo.model().blockNames();
         List<Page> out = new ArrayList<>();
         for (int b = 0; b < blocks.size(); b++) {
@@ -85,7 +86,7 @@ public final class ElevationsCommand implements Callable<Integer> {
             if (layout.panels().isEmpty()) continue;
             int n = layout.panels().stream().mapToInt(x -> x.patches().size()).sum();
             FacadeSheet.Options o = new FacadeSheet.Options(widthPx, heightPx, geo.study().name(), blocks.get(b), def.label(),
-                    def.unit().symbol(), RunPeriod.of(geo.run().record()), range[0], range[1]);
+                    def.unit().symbol(), RunPeriod.of(geo.run().record()), range[0], range[1], diverging, FacadeSheet.Options.MAP_RANGE);
             out.add(new Page(blocks.get(b), FacadeSheet.render(layout, values, o), n));
         }
         return out;

@@ -39,9 +39,23 @@ public final class FacadeSheet {
      * @param period what the values cover (e.g. the year and climate), shown under the title
      * @param lo low end of the colour range
      * @param hi high end of the colour range
+     * @param diverging colour by {@link ColourRamp#diverging} (neutral at zero, signed differences)
+     *                  instead of the sequential ramp
+     * @param rangeNote how the range was chosen, shown under the colour bar
      */
     public record Options(int widthPx, int heightPx, String study, String block, String label, String unit,
-                          String period, double lo, double hi) {}
+                          String period, double lo, double hi, boolean diverging, String rangeNote) {
+        /** The note of the range elevations share with map.png. */
+        public static final String MAP_RANGE = "Range as in map.png (2nd to 98th percentile of the analysed patches); "
+                + "values beyond it take the end colours";
+    }
+
+    /** sRGB colour of a value on the page's ramp. */
+    static int colour(double v, Options o) {
+        if (Double.isNaN(v)) return ColourRamp.sequential(Double.NaN);
+        double t = ColourRamp.normalise(v, o.lo(), o.hi());
+        return o.diverging() ? ColourRamp.diverging(2 * t - 1) : ColourRamp.sequential(t);
+    }
 
     private FacadeSheet() {}
 
@@ -72,7 +86,7 @@ public final class FacadeSheet {
             for (int k = 0; k < p.patches().size(); k++) {
                 Patch patch = p.patches().get(k);
                 double v = values[patch.index()];
-                int colour = ColourRamp.sequential(Double.isNaN(v) ? Double.NaN : ColourRamp.normalise(v, o.lo(), o.hi()));
+                int colour = colour(v, o);
                 fillPatch(r, p.uv().get(k), patch.triangles(), 2 * s, rowH, colour);
             }
             for (double[] uv : p.uv()) {   // faint patch edges
@@ -92,7 +106,7 @@ public final class FacadeSheet {
             g.drawLine(ox - 4, base, ox + (int) Math.round(p.widthM() * s) + 4, base);   // the common base line
             panelLabel(g, i + 1, p, ox + p.widthM() * s / 2, oy - 6 + (int) Math.round((rowH - p.heightM()) * s));
         }
-        title(g, o, s);
+        title(g, o, s, w);
         footer(g, layout, o, s, w, h);
         g.dispose();
         return img;
@@ -145,43 +159,45 @@ public final class FacadeSheet {
         g.drawString(sub, (float) (cx - fm.stringWidth(sub) / 2.0), bottom - 3);
     }
 
-    private static void title(Graphics2D g, Options o, double s) {
+    private static void title(Graphics2D g, Options o, double s, int w) {
         g.setColor(new Color(0x1E1E1E));
-        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 24));
         String unit = MapRenderer.display(o.unit());
-        g.drawString((o.study() == null || o.study().isBlank() ? "" : o.study() + " \u2014 ") + "Facade elevations of "
-                + o.block() + " \u2014 " + o.label() + (unit.isEmpty() ? "" : " (" + unit + ")"), MARGIN, 34);
-        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 14));
+        String t = (o.study() == null || o.study().isBlank() ? "" : o.study() + " \u2014 ") + "Facade elevations of "
+                + o.block() + " \u2014 " + o.label() + (unit.isEmpty() ? "" : " (" + unit + ")");
+        PageMarks.fitFont(g, t, Font.BOLD, 24, w - 2 * MARGIN);
+        g.drawString(t, MARGIN, 34);
         g.setColor(new Color(0x555555));
-        g.drawString((o.period() == null || o.period().isBlank() ? "" : o.period() + ". ")
+        String sub = (o.period() == null || o.period().isBlank() ? "" : o.period() + ". ")
                 + "Each facade seen straight on from outside, unrolled from the south with the block on the left; "
-                + String.format(Locale.ROOT, "one scale for the page: %.2f px per metre", s), MARGIN, 56);
+                + String.format(Locale.ROOT, "one scale for the page: %.2f px per metre", s);
+        PageMarks.fitFont(g, sub, Font.PLAIN, 14, w - 2 * MARGIN);
+        g.drawString(sub, MARGIN, 56);
     }
 
     private static void footer(Graphics2D g, FacadeLayout layout, Options o, double s, int w, int h) {
-        int top = h - FOOTER_H, bx = MARGIN + 4, barW = Math.min(700, (int) (w * 0.4));
+        int top = h - FOOTER_H, bx = MARGIN + 4, barW = Math.min(700, (int) (w * 0.32)), keyX = w - MARGIN - 300;
         String unit = MapRenderer.display(o.unit());
-        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 15));
         g.setColor(new Color(0x222222));
-        g.drawString(o.label() + (unit.isEmpty() ? "" : ", " + unit), bx, top + 22);
-        PageMarks.colourBar(g, bx, top + 32, barW, 20, o.lo(), o.hi(), false);
-        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
+        String label = o.label() + (unit.isEmpty() ? "" : ", " + unit);
+        PageMarks.fitFont(g, label, Font.BOLD, 15, keyX - bx - 20);
+        g.drawString(label, bx, top + 22);
+        PageMarks.colourBar(g, bx, top + 32, barW, 20, o.lo(), o.hi(), o.diverging());
         g.setColor(new Color(0x444444));
-        g.drawString("Range as in map.png; values beyond it take the end colours", bx, top + 96);
+        String note = o.rangeNote() == null ? "" : o.rangeNote();
+        PageMarks.fitFont(g, note, Font.PLAIN, 13, keyX - bx - 120);
+        g.drawString(note, bx, top + 96);
         g.setColor(new Color(ColourRamp.sequential(Double.NaN)));
-        int nx = bx + g.getFontMetrics().stringWidth("Range as in map.png; values beyond it take the end colours") + 24;
+        int nx = bx + g.getFontMetrics().stringWidth(note) + 24;
         g.fillRect(nx, top + 85, 16, 12);
         g.setColor(new Color(0x444444));
+        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
         g.drawString("No value", nx + 22, top + 96);
-        PageMarks.scaleBar(g, s, bx + barW + 60, top + 60, Math.min(600, w / 3));
-        keyPlan(g, layout, w - MARGIN - 300, top + 6, 200, FOOTER_H - 42);
+        PageMarks.scaleBar(g, s, bx + barW + 40, top + 60, Math.min(600, w / 3));
+        keyPlan(g, layout, keyX, top + 6, 200, FOOTER_H - 42);
         MapRenderer.northArrow(g, MapView.looking(Vec3.UP), w - MARGIN - 48, top + 52);
-        int size = 13;   // one line: the font shrinks until the caution fits the page
-        String caution = Cautions.RESULTS;
-        do g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, size--));
-        while (size > 8 && g.getFontMetrics().stringWidth(caution) > w - 2 * MARGIN);
         g.setColor(new Color(0x555555));
-        g.drawString(caution, MARGIN, h - 10);
+        PageMarks.fitFont(g, Cautions.RESULTS, Font.PLAIN, 13, w - 2 * MARGIN);   // one line: the font shrinks to fit
+        g.drawString(Cautions.RESULTS, MARGIN, h - 10);
     }
 
     /** The block's facades in plan (north up), each marked with its panel number, fitted into a box. */

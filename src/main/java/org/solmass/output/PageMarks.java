@@ -24,6 +24,13 @@ final class PageMarks {
         return g;
     }
 
+    /** Sets the largest sans-serif font of {@code style} from {@code size} down to 8 points in which {@code text} fits {@code maxW} pixels. */
+    static void fitFont(Graphics2D g, String text, int style, int size, int maxW) {
+        int s = size;
+        do g.setFont(new Font(Font.SANS_SERIF, style, s--));
+        while (s >= 8 && g.getFontMetrics().stringWidth(text) > maxW);
+    }
+
     /**
      * A colour bar of {@code barW x barH} pixels at (bx, by) with ticks and their labels below it.
      *

@@ -148,7 +148,7 @@ class FacadeLayoutTest {
         for (Patch p : all) v[p.index()] = p.kind() == SurfaceKind.FACADE ? p.azimuthDeg() : Double.NaN;
         FacadeLayout l = FacadeLayout.of(all);
         BufferedImage img = FacadeSheet.render(l, v, new FacadeSheet.Options(2000, 1200, "box (invented)", "box",
-                "Test value", "", "", 0, 360));
+                "Test value", "", "", 0, 360, false, ""));
         FacadeLayout.Placement pl = FacadeSheet.placement(l, 2000, 1200);
         for (int i = 0; i < 4; i++) {
             FacadeLayout.Panel p = l.panels().get(i);
