@@ -9,6 +9,6 @@ final class Commands {
     static List<Object> all() {
         return List.of(new AnalyseCommand(), new SkyViewCommand(), new SunCommand(), new PlaneCommand(),
                 new MakeWeatherCommand(), new BenchCommand(), new BenchAnalysisCommand(), new ViewCommand(),
-                new CompareCommand(), new ClimateCommand(), new ShadowsCommand());
+                new CompareCommand(), new ClimateCommand(), new ShadowsCommand(), new ElevationsCommand(), new ReportCommand());
     }
 }

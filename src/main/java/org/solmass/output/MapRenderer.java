@@ -11,7 +11,6 @@ import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.Rectangle;
-import java.awt.RenderingHints;
 import java.awt.geom.Path2D;
 import java.awt.image.BufferedImage;
 import java.nio.file.Path;
@@ -44,15 +43,22 @@ public final class MapRenderer {
      *                       for automatic: the diagonal view (from NE, SE, SW or NW) that shows the most
      *                       analysed patch area ({@link #bestViewAzimuth})
      * @param viewElevationDeg elevation of the axonometric view above the horizon, degrees
+     * @param period what the values cover (e.g. "Year of monthly-average days, climate FILE",
+     *               {@link RunPeriod}), shown under the title; empty for none
      */
     public record Options(int widthPx, int heightPx, String title, double rangeLo, double rangeHi,
-                          double viewAzimuthDeg, double viewElevationDeg) {
+                          double viewAzimuthDeg, double viewElevationDeg, String period) {
         public static Options of(int widthPx, int heightPx, String title) {
-            return new Options(widthPx, heightPx, title, Double.NaN, Double.NaN, Double.NaN, 30);
+            return new Options(widthPx, heightPx, title, Double.NaN, Double.NaN, Double.NaN, 30, "");
         }
 
         public Options withRange(double lo, double hi) {
-            return new Options(widthPx, heightPx, title, lo, hi, viewAzimuthDeg, viewElevationDeg);
+            return new Options(widthPx, heightPx, title, lo, hi, viewAzimuthDeg, viewElevationDeg, period);
+        }
+
+        /** These options with the period shown under the title. */
+        public Options withPeriod(String text) {
+            return new Options(widthPx, heightPx, title, rangeLo, rangeHi, viewAzimuthDeg, viewElevationDeg, text == null ? "" : text);
         }
     }
 
@@ -127,11 +133,7 @@ public final class MapRenderer {
 
         int w = o.widthPx(), h = o.heightPx();
         BufferedImage img = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
-        Graphics2D g = img.createGraphics();
-        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-        g.setColor(new Color(BACKGROUND));
-        g.fillRect(0, 0, w, h);
+        Graphics2D g = PageMarks.begin(img);
 
         Rectangle planTile = planTile(w, h);
         int captionH = CAPTION_H, tileH = planTile.height, panelTop = TITLE_H, panelH = tileH + captionH;
@@ -152,12 +154,13 @@ public final class MapRenderer {
             throw new IllegalStateException("interrupted while rendering the map", e);
         }
         if (plPixels[0] == null) throw new IllegalStateException("the plan panel failed to render");
-        panel(g, axoPixels, axo, MARGIN, panelTop, axoW, panelH, captionH,
+        panel(g, axoPixels, axo, MARGIN, panelTop, axoW, panelH, captionH, Double.NaN,
                 String.format(java.util.Locale.ROOT, "View from the %s, %.0f\u00b0 above the horizon",
                         org.solmass.model.Compass.longName(az), o.viewElevationDeg()));
-        panel(g, plPixels[0], plan, 2 * MARGIN + axoW, panelTop, planW, panelH, captionH, "Plan, north up");
+        panel(g, plPixels[0], plan, 2 * MARGIN + axoW, panelTop, planW, panelH, captionH,
+                scene.pixelsPerMetre(plan, planW * 2, tileH * 2), "Plan, north up");
 
-        title(g, w, o.title(), label, unit);
+        title(g, w, o.title(), label, unit, o.period());
         legend(g, w, h - LEGEND_H, lo, hi, label, unit, auto, scene.hasMissing(), x);
         g.dispose();
         return img;
@@ -211,7 +214,9 @@ public final class MapRenderer {
         return new double[] {-r, r};
     }
 
-    private static void panel(Graphics2D g, int[] pixels, MapView view, int x, int y, int pw, int ph, int captionH, String caption) {
+    /** A view's picture with its caption and north arrow, and a scale bar when {@code pxPerM} is a number (plans). */
+    private static void panel(Graphics2D g, int[] pixels, MapView view, int x, int y, int pw, int ph, int captionH, double pxPerM,
+                              String caption) {
         BufferedImage tile = new BufferedImage(pw, ph - captionH, BufferedImage.TYPE_INT_RGB);
         tile.setRGB(0, 0, pw, ph - captionH, pixels, 0, pw);
         g.drawImage(tile, x, y + captionH, null);
@@ -222,6 +227,7 @@ public final class MapRenderer {
         g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 15));
         g.drawString(caption, x + 2, y + 17);
         northArrow(g, view, x + pw - 50, y + captionH + 50);
+        if (!Double.isNaN(pxPerM)) PageMarks.scaleBar(g, pxPerM, x + 12, y + ph - 14, pw);
     }
 
     /** An arrow pointing to true north as seen in the view, with an N above its tip. */
@@ -253,14 +259,15 @@ public final class MapRenderer {
         g.drawString("N", (float) (lx - fm.stringWidth("N") / 2.0), (float) (ly + fm.getAscent() / 2.0 - 2));
     }
 
-    private static void title(Graphics2D g, int w, String study, String label, String unit) {
+    private static void title(Graphics2D g, int w, String study, String label, String unit, String period) {
         g.setColor(new Color(0x1E1E1E));
         g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 24));
         String t = (study == null || study.isBlank() ? "" : study + " \u2014 ") + label + (display(unit).isEmpty() ? "" : " (" + display(unit) + ")");
         g.drawString(t, MARGIN, 36);
         g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 14));
         g.setColor(new Color(0x555555));
-        g.drawString("Analysed surfaces coloured by value; context blocks in grey", MARGIN, 58);
+        g.drawString((period == null || period.isBlank() ? "" : period + ". ")
+                + "Analysed surfaces coloured by value; context blocks in grey", MARGIN, 58);
     }
 
     private static void legend(Graphics2D g, int w, int top, double lo, double hi, String label, String unit,
@@ -269,24 +276,9 @@ public final class MapRenderer {
         g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 15));
         g.setColor(new Color(0x222222));
         g.drawString(label + (display(unit).isEmpty() ? "" : ", " + display(unit)), bx, top + 24);
-        for (int i = 0; i < barW; i++) {
-            double t = i / (barW - 1.0);
-            g.setColor(new Color(x.diverging() ? ColourRamp.diverging(2 * t - 1) : ColourRamp.sequential(t)));
-            g.fillRect(bx + i, by, 1, barH);
-        }
-        g.setColor(new Color(0x666666));
-        g.setStroke(new BasicStroke(1f));
-        g.drawRect(bx, by, barW, barH);
-        double step = LegendTicks.step(lo, hi, 8);
+        PageMarks.colourBar(g, bx, by, barW, barH, lo, hi, x.diverging());
         g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
         FontMetrics fm = g.getFontMetrics();
-        for (double t : LegendTicks.ticks(lo, hi, 8)) {
-            int tx = bx + (int) Math.round(ColourRamp.normalise(t, lo, hi) * barW);
-            g.setColor(new Color(0x333333));
-            g.drawLine(tx, by + barH, tx, by + barH + 6);
-            String s = LegendTicks.label(t, step);
-            g.drawString(s, tx - fm.stringWidth(s) / 2, by + barH + 20);
-        }
         int nx = bx + barW + 40;
         g.setColor(new Color(0x444444));
         g.drawString(!auto ? "Range: set by the user" : x.diverging() ? "Range: \u00b1 98th percentile of |difference|, grey at zero"

@@ -99,7 +99,7 @@ public final class ResultsFolder {
             if (pv != null) for (PvZones.Zone z : pv.zones()) outlines.addAll(z.outlines());
             pub.write(MAP, p -> MapRenderer.write(p, r.model(), r.study().model().analysedMask(r.model().blockNames()), r.table().patches(),
                     r.table().column(col.name()), col.label(), col.unit().symbol(),
-                    MapRenderer.Options.of(o.mapWidthPx(), o.mapHeightPx(), r.study().name()),
+                    MapRenderer.Options.of(o.mapWidthPx(), o.mapHeightPx(), r.study().name()).withPeriod(RunPeriod.of(r.run())),
                     new MapRenderer.Extras(false, outlines, "PV roof zone (zones.csv)")));
         }
         if (o.gltf() && r.table().has(MAIN_COLUMN.name()) && r.table().size() > 0) {

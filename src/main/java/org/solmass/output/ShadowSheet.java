@@ -14,7 +14,6 @@ import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.Rectangle;
-import java.awt.RenderingHints;
 import java.awt.image.BufferedImage;
 import java.nio.file.Path;
 import java.time.format.DateTimeFormatter;
@@ -67,11 +66,7 @@ public final class ShadowSheet {
         int rows = frames.size() / times;
         int w = width(times), h = height(rows);
         BufferedImage img = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
-        Graphics2D g = img.createGraphics();
-        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-        g.setColor(new Color(MapRenderer.BACKGROUND));
-        g.fillRect(0, 0, w, h);
+        Graphics2D g = PageMarks.begin(img);
         double[] extent = outlinePoints(patches);
         MapView plan = MapView.looking(Vec3.UP);
         DateTimeFormatter day = DateTimeFormatter.ofPattern("d MMM", Locale.ROOT);
@@ -102,7 +97,7 @@ public final class ShadowSheet {
                     ? String.format(Locale.ROOT, "   sun azimuth %.0f\u00b0, elevation %.1f\u00b0", fr.sun().azimuthDeg(), fr.sun().elevationDeg())
                     : String.format(Locale.ROOT, "   sun below the horizon (elevation %.1f\u00b0)", fr.sun().elevationDeg()), wx, r.y - 7);
             MapRenderer.northArrow(g, plan, r.x + r.width - 48, r.y + 48);
-            scaleBar(g, scene.pixelsPerMetre(plan, 2 * PANEL_W, 2 * PANEL_H), r.x + 12, r.y + r.height - 14);
+            PageMarks.scaleBar(g, scene.pixelsPerMetre(plan, 2 * PANEL_W, 2 * PANEL_H), r.x + 12, r.y + r.height - 14, PANEL_W);
         }
         title(g, title);
         footer(g, w, h - FOOTER_H);
@@ -135,24 +130,6 @@ public final class ShadowSheet {
         }
         if (!(b[0] <= b[2])) return new double[0];
         return new double[] {b[0], b[1], z, b[2], b[3], z};
-    }
-
-    /** A scale bar of a 1-2-5 length near 1/4 of the panel width, with its length in metres. */
-    private static void scaleBar(Graphics2D g, double pxPerM, int x, int y) {
-        if (!(pxPerM > 0)) return;
-        double target = PANEL_W / 4.0 / pxPerM, len = LegendTicks.step(0, target * 2.5, 2);
-        while (len * pxPerM > PANEL_W / 3.0) len /= 2;
-        int px = (int) Math.round(len * pxPerM);
-        g.setColor(new Color(255, 255, 255, 215));
-        g.fillRect(x - 6, y - 22, px + 36, 30);
-        g.setColor(new Color(0x222222));
-        g.fillRect(x, y - 4, px / 2, 5);
-        g.setStroke(new BasicStroke(1.2f));
-        g.drawRect(x, y - 4, px, 5);
-        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
-        g.drawString("0", x - 3, y - 8);
-        String s = LegendTicks.label(len, len) + " m";
-        g.drawString(s, x + px - g.getFontMetrics().stringWidth(s) / 2, y - 8);
     }
 
     private static void title(Graphics2D g, String study) {

@@ -43,6 +43,7 @@ final class ControlColumn extends VBox {
     private final ComboBox<String> pngScale = new ComboBox<>(FXCollections.observableArrayList("1\u00d7", "2\u00d7", "3\u00d7", "4\u00d7"));
     private ViewerData data;
     private ColourScale scale = new ColourScale(0, 1, false);
+    private final javafx.beans.property.SimpleLongProperty colouring = new javafx.beans.property.SimpleLongProperty();
 
     ControlColumn(ViewerWindow win, ViewerActions actions) {
         super(8);
@@ -249,7 +250,11 @@ final class ControlColumn extends VBox {
         caution.setVisible(pv);
         caution.setManaged(pv);
         win.applyColours(scale, scale.indices(v, t));
+        colouring.set(colouring.get() + 1);
     }
+
+    /** Counts the colourings (quantity or range chosen): views that follow the colours listen to it. */
+    javafx.beans.value.ObservableValue<Number> colouringProperty() { return colouring; }
 
     private static double parse(String s, double dflt) {
         try {

@@ -54,6 +54,8 @@ public final class ViewerWindow {
     private final StackPane viewStack = new StackPane();
     private final PatchPanel panel = new PatchPanel();
     private final ClimatePane climate = new ClimatePane();
+    private final ElevationPane elevations;
+    private final StatisticsPane statistics;
     private final ControlColumn controls;
     private final Label hover = new Label();
     private final Label status = new Label();
@@ -74,6 +76,8 @@ public final class ViewerWindow {
         this.stage = stage;
         this.actions = actions;
         this.controls = new ControlColumn(this, actions);
+        this.elevations = new ElevationPane(controls::quantity, controls::scale);
+        this.statistics = new StatisticsPane(controls::quantity);
         hover.getStyleClass().add("hover");
         hover.setVisible(false);
         hover.setMouseTransparent(true);
@@ -98,8 +102,18 @@ public final class ViewerWindow {
         StackPane.setMargin(north, new Insets(14));
         StackPane.setAlignment(hover, Pos.TOP_LEFT);
         viewStack.setMinSize(0, 0);
-        tabs = new TabPane(new Tab("Model", viewStack), new Tab("Climate at a glance", new ScrollPane(climate)));
+        Tab elevationTab = new Tab("Facade elevations", elevations), statisticsTab = new Tab("Statistics", statistics);
+        tabs = new TabPane(new Tab("Model", viewStack), new Tab("Climate at a glance", new ScrollPane(climate)), elevationTab,
+                statisticsTab);
         tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        tabs.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            elevations.setActive(b == elevationTab);
+            statistics.setActive(b == statisticsTab);
+        });
+        controls.colouringProperty().addListener((o, a, b) -> {
+            elevations.redraw();
+            statistics.redraw();
+        });
         ScrollPane right = new ScrollPane(panel);
         right.setFitToWidth(true);
         right.setPrefWidth(350);
@@ -278,6 +292,8 @@ public final class ViewerWindow {
         climate.show(d);
         long t3 = System.nanoTime();
         controls.setData(d);
+        elevations.setData(d);
+        statistics.setData(d);
         long t4 = System.nanoTime();
         if (Boolean.getBoolean("solmass.viewer.timing")) {
             System.err.printf("viewer: meshes %.2f s, scene %.2f s, panels %.2f s, colours %.2f s%n",
@@ -296,6 +312,8 @@ public final class ViewerWindow {
         if (v != null) rig.preset(v);
         if (v != null && v.startsWith("sun")) controls.setSunPath(true);
         if ("climate".equals(v)) tabs.getSelectionModel().select(1);
+        if ("elevations".equals(v)) tabs.getSelectionModel().select(2);
+        if ("statistics".equals(v)) tabs.getSelectionModel().select(3);
         if (v != null && v.startsWith("patch")) selectPatch(Math.min(d.patches().size() - 1, d.patches().size() / 3));
         shownAtNanos = System.nanoTime();
         if (Boolean.getBoolean("solmass.viewer.timing")) System.err.printf("viewer: data on show at %.2f%n", shownAtNanos / 1e9 % 1000);

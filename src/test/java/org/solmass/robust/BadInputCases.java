@@ -206,6 +206,8 @@ final class BadInputCases {
         CASES.put("sky-view-out-is-a-file", new Case(Map.of("m.obj", MODEL, "out", "a file"),
                 new String[] {"sky-view", "-q", "@m.obj", "--out", "@out"}));
 
+        CASES.put("report-out-not-pdf", new Case(Map.of(), new String[] {"report", "@", "--out", "@r.txt"}));
+
         // terrain: far-horizon files and DEMs (GeoTIFFs written with the NGA TIFF library, invented heights)
         horizon("horizon-azimuth-not-increasing", "azimuth_deg,elevation_deg\n0,1\n100,2\n90,3\n");
         horizon("horizon-elevation-out-of-range", "azimuth_deg,elevation_deg\n0,1\n100,95\n200,3\n");
