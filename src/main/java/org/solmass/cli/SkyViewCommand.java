@@ -2,7 +2,6 @@ package org.solmass.cli;
 
 import org.solmass.InputException;
 import org.solmass.model.MassingModel;
-import org.solmass.model.ObjReader;
 import org.solmass.output.PatchCsvWriter;
 import org.solmass.irradiation.IrradiationColumns;
 import org.solmass.table.ResultTable;
@@ -53,7 +52,7 @@ public final class SkyViewCommand implements Callable<Integer> {
         if (threads < 0) throw new InputException("--threads", "expected 0 (all cores) or a positive count, got " + threads);
         org.solmass.output.FolderClaim.prepareWritable(out, "--out");   // before the work
         long t0 = System.nanoTime();
-        ObjReader.Result read = ObjReader.load(model, modelFlags.options());
+        org.solmass.geo.GeoModel read = org.solmass.geo.ModelFiles.load(model, modelFlags.options(), modelFlags.geoOptions());
         for (String w : read.warnings()) System.err.println("solmass: warning: " + w);
         MassingModel m = read.model();
         PatchSet ps = Patcher.build(m, new PatchOptions(patch, analyse == null ? java.util.Set.of() : new LinkedHashSet<>(analyse), false));

@@ -79,17 +79,17 @@ public final class GeoJsonReader {
             String gt = g.path("type").asText("");
             if (!gt.equals("Polygon") && !gt.equals("MultiPolygon")) { skipped++; continue; }
             JsonNode props = f.path("properties");
-            String where = name + ": feature " + number;
+            String block = blockName(f, props, options, number, b);
+            String where = name + ": feature " + number + " (\"" + block + "\")";
             double height = height(props, options, where);
             double base = number(props, options.baseProperty(), where, 0.0);
-            String block = blockName(f, props, options, number, b);
             List<JsonNode> polys = new ArrayList<>();
             if (gt.equals("Polygon")) polys.add(g.path("coordinates"));
             else g.path("coordinates").forEach(polys::add);
             int id = b.block(block);
             for (JsonNode p : polys) {
                 List<Coordinate[]> rings = rings(p, where, crs);
-                checkValid(rings, where, block);
+                checkValid(rings, where);
                 extrude(b, id, number, rings, base / zUnit, (base + height) / zUnit);
             }
         }
@@ -179,7 +179,7 @@ public final class GeoJsonReader {
     }
 
     /** Refuses a footprint that is not a valid polygon (JTS IsValidOp: self-intersection, holes outside, ...). */
-    private static void checkValid(List<Coordinate[]> rings, String where, String block) {
+    private static void checkValid(List<Coordinate[]> rings, String where) {
         LinearRing shell = GF.createLinearRing(rings.get(0));
         LinearRing[] holes = new LinearRing[rings.size() - 1];
         for (int i = 1; i < rings.size(); i++) holes[i - 1] = GF.createLinearRing(rings.get(i));
@@ -187,7 +187,7 @@ public final class GeoJsonReader {
         TopologyValidationError e = new IsValidOp(p).getValidationError();
         if (e != null) {
             Coordinate c = e.getCoordinate();
-            throw new InputException(where + " (\"" + block + "\")", String.format(Locale.ROOT,
+            throw new InputException(where, String.format(Locale.ROOT,
                     "footprint is not a valid polygon: %s at (%s, %s); expected a simple ring (edges that do not"
                             + " cross) with holes inside it", e.getMessage(), plain(c.x), plain(c.y)));
         }
