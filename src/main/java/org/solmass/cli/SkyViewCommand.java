@@ -36,7 +36,7 @@ public final class SkyViewCommand implements Callable<Integer> {
     /** The table this command writes: patch columns and the four view-factor columns (not analyse's patches.csv). */
     public static final String FILE_NAME = "sky-view.csv";
 
-    @Parameters(paramLabel = "MODEL.obj", description = "massing model (OBJ)") Path model;
+    @Parameters(paramLabel = "MODEL", description = "massing model: OBJ, GeoJSON footprints or CityGML (see --format)") Path model;
     @Mixin ModelFlags modelFlags = new ModelFlags();
     @Option(names = "--patch", paramLabel = "METRES", defaultValue = "1", description = "patch size (default ${DEFAULT-VALUE} m)") double patch;
     @Option(names = "--rays", paramLabel = "N", defaultValue = "1024", description = "hemisphere rays per patch, rounded to a square grid (default ${DEFAULT-VALUE})") int rays;
