@@ -63,7 +63,11 @@ public final class CityGmlReader {
         int[] buildings = {0};
         try (var in = Files.newInputStream(file)) {
             CityGMLContext context = CityGMLContext.newInstance(CityGmlReader.class.getClassLoader());
-            try (CityGMLReader reader = context.createCityGMLInputFactory().createCityGMLReader(in)) {
+            // no DTDs and no external entities: a model file cannot make the reader fetch or include other files
+            javax.xml.stream.XMLInputFactory xml = javax.xml.stream.XMLInputFactory.newFactory();
+            xml.setProperty(javax.xml.stream.XMLInputFactory.SUPPORT_DTD, false);
+            xml.setProperty(javax.xml.stream.XMLInputFactory.IS_SUPPORTING_EXTERNAL_ENTITIES, false);
+            try (CityGMLReader reader = context.createCityGMLInputFactory(xml).createCityGMLReader(in)) {
                 while (reader.hasNext()) {
                     AbstractFeature f = reader.next();
                     if (f instanceof CityModel cm) {
