@@ -69,6 +69,12 @@ final class GeoModelBuilder {
      */
     void polygon(int block, SemanticKind kind, int feature, List<double[]> rings) {
         for (double[] r : rings) {
+            for (double c : r) {
+                if (!Double.isFinite(c)) {
+                    throw new InputException(name + ": feature " + feature, "coordinate " + c
+                            + " is not a finite number, expected finite decimal numbers");
+                }
+            }
             for (int i = 0; i + 2 < r.length; i += 3) {
                 minX = Math.min(minX, r[i]); maxX = Math.max(maxX, r[i]);
                 minY = Math.min(minY, r[i + 1]); maxY = Math.max(maxY, r[i + 1]);
@@ -88,7 +94,7 @@ final class GeoModelBuilder {
         GeoReference ref = GeoReference.around(crs, minX, minY, maxX, maxY);
         DoubleList v = new DoubleList();
         IntList vFeature = new IntList(), tris = new IntList(), tBlock = new IntList(), tLine = new IntList();
-        List<Byte> kinds = new ArrayList<>();
+        java.io.ByteArrayOutputStream kinds = new java.io.ByteArrayOutputStream();
         int degenerate = 0;
         for (Face f : faces) {
             List<double[]> local = new ArrayList<>(f.rings.size());
@@ -98,21 +104,26 @@ final class GeoModelBuilder {
                 for (double c : r) v.add(c);
                 for (int i = 0; i < r.length / 3; i++) vFeature.add(f.feature);
             }
-            int[] t = triangulate(local);
+            int[] t;
+            try {
+                t = triangulate(local);
+            } catch (RuntimeException e) {   // JTS on a polygon whose holes cross its shell
+                throw new InputException(name + ": feature " + f.feature, "a polygon with holes could not be"
+                        + " triangulated (" + e.getMessage() + "); expected holes inside their shell that do not cross it");
+            }
             double[] all = v.raw();
             for (int i = 0; i < t.length; i += 3) {
                 int a = base + t[i], b = base + t[i + 1], c = base + t[i + 2];
                 if (ObjReader.isDegenerate(all, a, b, c)) { degenerate++; continue; }
                 tris.add(a); tris.add(b); tris.add(c);
-                tBlock.add(f.block); tLine.add(f.feature); kinds.add(f.kind.code());
+                tBlock.add(f.block); tLine.add(f.feature); kinds.write(f.kind.code());
             }
         }
         if (tris.size() == 0) throw new InputException(name, "every polygon of the file is degenerate (zero area)");
         if (degenerate > 0) warnings.add(name + ": dropped " + degenerate + " degenerate (zero-area) triangle(s)");
         double[] verts = v.toArray();
         CoordinateRange.check(verts, vFeature.toArray(), name);
-        byte[] tk = new byte[kinds.size()];
-        for (int i = 0; i < tk.length; i++) tk[i] = kinds.get(i);
+        byte[] tk = kinds.toByteArray();
         int[] ti = tris.toArray(), tb = tBlock.toArray(), tl = tLine.toArray();
         int[] mat = new int[tb.length];
         java.util.Arrays.fill(mat, -1);

@@ -44,4 +44,19 @@ class GeoSiteTest {
         assertNotNull(w);
         assertTrue(w.contains("2.2 km"), w);   // 0.0194 deg x 111.2 km/deg (1 deg of arc on a 6371 km sphere)
     }
+
+    @Test
+    void geoKeysSurviveTheResolvedStudy() throws Exception {
+        Path model = Path.of("sample-geo/footprints.geojson").toAbsolutePath();
+        Path f = dir.resolve("g.json");
+        Files.writeString(f, "{\"model\": {\"file\": \"" + model + "\", \"format\": \"geojson\", \"epsg\": 32632,"
+                + " \"footprints\": {\"storey_height_m\": 3.5, \"name_property\": \"label\"}},"
+                + " \"site\": {\"zone\": \"Europe/Berlin\"}}");
+        Study s = StudyReader.read(f);
+        assertEquals(32632, s.model().geo().epsg());
+        assertEquals(3.5, s.model().geo().storeyHeightM(), 0.0);
+        Study back = StudyReader.fromTree(org.solmass.study.StudyWriter.toTree(s), null, dir, "run.json");
+        assertEquals(s.model().geo(), back.model().geo());
+        assertEquals(s.site(), back.site(), "the site taken from the model is written out");
+    }
 }
