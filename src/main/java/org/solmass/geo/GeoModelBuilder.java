@@ -83,11 +83,6 @@ final class GeoModelBuilder {
         faces.add(new Face(block, kind, feature, rings));
     }
 
-    boolean isEmpty() { return faces.isEmpty(); }
-
-    /** File-coordinate bounds {minX, minY, maxX, maxY} of the polygons so far. */
-    double[] bounds() { return new double[]{minX, minY, maxX, maxY}; }
-
     /** The model and its reference; {@code warnings} receives the reader's warnings. */
     GeoModel build(Crs crs, List<String> warnings) {
         if (faces.isEmpty()) throw new InputException(name, "the file has no building polygons to read");
