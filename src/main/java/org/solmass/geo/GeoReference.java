@@ -6,7 +6,8 @@ import java.util.Locale;
  * How a geo-referenced model sits in its coordinate reference system: the file's CRS, the projected
  * CRS in metres the model is built in, the local origin and the north angle. A reader turns every
  * file coordinate into the Solmass frame with {@link #toLocal}; a writer turns a Solmass point back
- * with {@link #toFile} (the file's CRS) or {@link #toWgs84}.
+ * with {@link #toFile} (the file's CRS) or {@link #toWgs84}; another input in its own CRS (a terrain
+ * model) comes in with {@link #toLocal(Crs, double, double, double)}.
  *
  * <p>The Solmass frame: {@code (x, y)} = the working CRS's easting and northing minus the origin,
  * rotated anticlockwise by {@link #northDeg()} about the origin (as {@code model.ModelOptions}
@@ -79,16 +80,25 @@ public record GeoReference(Crs file, Crs work, double originX, double originY, d
 
     /** The Solmass point (x, y, z; metres, true north = +y) of a file coordinate. */
     public double[] toLocal(double fx, double fy, double fz) {
-        double ex = fx, ny = fy;
-        if (work != file) {
-            double[] ll = file.toWgs84(fx, fy);
+        return toLocal(file, fx, fy, fz * zMetresPerUnit);
+    }
+
+    /**
+     * The Solmass point of a coordinate in another CRS, e.g. a terrain model's cell centre: through
+     * WGS84 into the working CRS unless it is the working CRS, then as {@link #toLocal}; {@code z}
+     * metres.
+     */
+    public double[] toLocal(Crs crs, double x, double y, double z) {
+        double ex = x, ny = y;
+        if (crs.epsg() != work.epsg()) {
+            double[] ll = crs.toWgs84(x, y);
             double[] p = work.fromWgs84(ll[0], ll[1]);
             ex = p[0];
             ny = p[1];
         }
         double dx = ex - originX, dy = ny - originY;
         double a = Math.toRadians(northDeg), c = Math.cos(a), s = Math.sin(a);
-        return new double[]{dx * c - dy * s, dx * s + dy * c, fz * zMetresPerUnit};
+        return new double[]{dx * c - dy * s, dx * s + dy * c, z};
     }
 
     /** The working CRS's easting, northing and height (metres) of a Solmass point. */

@@ -93,5 +93,11 @@ class GeoJsonFootprintsTest {
         assertEquals(5330020.0, back[1], 1e-6);
         assertEquals(24.0, back[2], 0.0);
         assertEquals(Math.hypot(40, 4), Math.hypot(local[0], local[1]), 1e-9, "the rotation keeps distances from the origin");
+        // the same corner given in WGS84 longitude/latitude (as a terrain model in another CRS would) lands within 1 mm
+        Crs wgs = Crs.epsg(Crs.WGS84, "test");
+        double[] ll = ref.work().toWgs84(560060.0, 5330020.0);
+        double[] viaWgs = ref.toLocal(wgs, ll[0], ll[1], 24.0);
+        assertEquals(local[0], viaWgs[0], 1e-3);
+        assertEquals(local[1], viaWgs[1], 1e-3);
     }
 }
