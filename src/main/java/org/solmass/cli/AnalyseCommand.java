@@ -27,7 +27,7 @@ public final class AnalyseCommand implements Callable<Integer> {
     @Parameters(arity = "0..1", paramLabel = "STUDY.json", description = "study file (docs/study-file.md)")
     Path studyFile;
 
-    @Option(names = "--model", paramLabel = "MODEL.obj", description = "massing model (OBJ)") Path model;
+    @Option(names = "--model", paramLabel = "MODEL", description = "massing model: OBJ, GeoJSON footprints or CityGML (see --format)") Path model;
     @Mixin ModelFlags modelFlags = new ModelFlags();
     @Option(names = "--analyse", paramLabel = "BLOCK", split = ",", description = "blocks to analyse (default all not in --context)") List<String> analyse;
     @Option(names = "--context", paramLabel = "BLOCK", split = ",", description = "blocks that only obstruct") List<String> context;

@@ -16,7 +16,9 @@ import org.solmass.irradiation.ShadedIrradiation;
 import org.solmass.metrics.MetricContext;
 import org.solmass.metrics.Metrics;
 import org.solmass.model.MassingModel;
-import org.solmass.model.ObjReader;
+import org.solmass.geo.GeoModel;
+import org.solmass.geo.GeoReference;
+import org.solmass.geo.ModelFiles;
 import org.solmass.scene.Scene;
 import org.solmass.study.Study;
 import org.solmass.terrain.SiteTerrain;
@@ -47,14 +49,33 @@ public final class AnalysisRun {
 
     private AnalysisRun() {}
 
-    /** Everything an analysis produced. */
+    /**
+     * Everything an analysis produced.
+     *
+     * @param geo where a geo-referenced model stands in its CRS, or null for an OBJ model
+     */
     public record Outcome(Study study, MassingModel model, PatchSet patches, WeatherSeries weather,
                           IrradiationResult result, ResultTable table, List<String> warnings,
-                          Map<String, Long> counts, Map<String, Double> timingsS, Metrics.Outcome metrics) {}
+                          Map<String, Long> counts, Map<String, Double> timingsS, Metrics.Outcome metrics,
+                          GeoReference geo) {}
 
-    /** The model read with the study's options, with the reader's warnings. */
-    public static ObjReader.Result loadModel(Study study) {
-        return ObjReader.load(study.model().file(), study.model().options());
+    /** A study site farther than this from a geo-referenced model's centre gives a warning, metres. */
+    static final double SITE_MISMATCH_M = 1000;
+
+    /** The model read with the study's options (any format, {@link ModelFiles}), with the reader's warnings. */
+    public static GeoModel loadModel(Study study) {
+        return ModelFiles.load(study.model().file(), study.model().options(), study.model().geo());
+    }
+
+    /** The warning when the study's site lies more than {@link #SITE_MISMATCH_M} from a geo-referenced model's centre, or null. */
+    static String siteMismatch(Study study, GeoReference geo) {
+        if (geo == null) return null;
+        double d = ModelFiles.distanceM(study.site().latitudeDeg(), study.site().longitudeDeg(), geo.latitudeDeg(), geo.longitudeDeg());
+        if (d <= SITE_MISMATCH_M) return null;
+        return String.format(java.util.Locale.ROOT, "site.latitude/longitude (%.6f, %.6f) lie %.1f km from the"
+                        + " geo-referenced model's centre (%.6f, %.6f); the sun is computed for the study's site:"
+                        + " leave both out to take the model's", study.site().latitudeDeg(), study.site().longitudeDeg(),
+                d / 1000, geo.latitudeDeg(), geo.longitudeDeg());
     }
 
     /** Names of the analysed blocks; checks that every named block exists. */
@@ -103,9 +124,11 @@ public final class AnalysisRun {
         long t0 = System.nanoTime();
 
         progress.begin("load", 0);
-        ObjReader.Result read = loadModel(study);
+        GeoModel read = loadModel(study);
         MassingModel model = read.model();
         warnings.addAll(read.warnings());
+        String mismatch = siteMismatch(study, read.reference());
+        if (mismatch != null) warnings.add(mismatch);
         WeatherSeries weather = loadWeather(study);
         for (String x : weather.report().repairs()) warnings.add("climate repaired: " + x);
         for (String x : weather.report().warnings()) warnings.add("climate: " + x);
@@ -182,7 +205,7 @@ public final class AnalysisRun {
         counts.put("sun_directions", (long) r.sunDirections());
         counts.put("rays_per_patch", (long) org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()));
         if (terrain.triangleCount() > 0) counts.put("terrain_triangles", (long) terrain.triangleCount());
-        return new Outcome(study, model, patches, weather, r, table, warnings, counts, t, metrics);
+        return new Outcome(study, model, patches, weather, r, table, warnings, counts, t, metrics, read.reference());
     }
 
     /**

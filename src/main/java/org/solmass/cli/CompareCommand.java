@@ -2,7 +2,6 @@ package org.solmass.cli;
 
 import org.solmass.InputException;
 import org.solmass.metrics.PatchMatcher;
-import org.solmass.model.ObjReader;
 import org.solmass.irradiation.IrradiationColumns;
 import org.solmass.metrics.PatchComparison;
 import org.solmass.output.ComparedResults;
@@ -126,7 +125,7 @@ public final class CompareCommand implements Callable<Integer> {
 
     /** delta-map.png: B's geometry rebuilt from its run record, patches coloured by the annual difference. */
     static void writeMap(Path file, ComparedResults c, Study studyB) {
-        ObjReader.Result read = AnalysisRun.loadModel(studyB);
+        org.solmass.geo.GeoModel read = AnalysisRun.loadModel(studyB);
         PatchSet ps = Patcher.build(read.model(), new PatchOptions(studyB.patchM(),
                 AnalysisRun.analysedBlocks(studyB, read.model()), false));
         Column q = PatchComparison.delta(IrradiationColumns.ANNUAL);

@@ -44,6 +44,6 @@ public final class ResultFiles {
         List<String> notes = new java.util.ArrayList<>();
         for (String w : o.warnings()) notes.add("warning: " + w); // the warnings analyse printed, kept with the results
         return ResultsFolder.write(new ResultsFolder.Results(o.study(), o.model(), o.table(),
-                o.result().monthHourWm2(), run, List.of(Cautions.RESULTS), o.metrics(), notes), claim);
+                o.result().monthHourWm2(), run, List.of(Cautions.RESULTS), o.metrics(), notes, o.geo()), claim);
     }
 }

@@ -2,7 +2,6 @@ package org.solmass.cli;
 
 import org.solmass.InputException;
 import org.solmass.model.MassingModel;
-import org.solmass.model.ObjReader;
 import org.solmass.output.PatchCsvReader;
 import org.solmass.output.PublishedRun;
 import org.solmass.output.ResultsFolder;
@@ -41,7 +40,7 @@ record RunGeometry(PublishedRun run, Study study, MassingModel model, boolean[] 
                     + " (its size or SHA-256 differs from run.json); run analyse again");
         }
         PatchCsvReader.Table table = run.read(ResultsFolder.PATCHES, PatchCsvReader::read);
-        ObjReader.Result read = AnalysisRun.loadModel(study);
+        org.solmass.geo.GeoModel read = AnalysisRun.loadModel(study);
         MassingModel m = read.model();
         PatchSet ps = Patcher.build(m, new PatchOptions(study.patchM(), AnalysisRun.analysedBlocks(study, m), false));
         if (ps.patches().size() != table.size() || (table.size() > 0 && table.row(ps.patches().get(0).id()) != 0)) {

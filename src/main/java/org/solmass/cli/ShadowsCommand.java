@@ -3,7 +3,6 @@ package org.solmass.cli;
 import org.solmass.InputException;
 import org.solmass.metrics.ShadowStudy;
 import org.solmass.model.MassingModel;
-import org.solmass.model.ObjReader;
 import org.solmass.output.ShadowSheet;
 import org.solmass.output.ShadowTable;
 import org.solmass.scene.Scene;
@@ -65,7 +64,7 @@ public final class ShadowsCommand implements Callable<Integer> {
         org.solmass.output.FolderClaim.prepareWritable(folder, out != null ? "--out"
                 : (study.source() == null ? "outputs.folder" : study.source() + ": outputs.folder"));   // before the work
         long t0 = System.nanoTime();
-        ObjReader.Result read = AnalysisRun.loadModel(study);
+        org.solmass.geo.GeoModel read = AnalysisRun.loadModel(study);
         for (String w : read.warnings()) System.err.println("solmass: warning: " + w);
         MassingModel m = read.model();
         boolean[] analysed = study.model().analysedMask(m.blockNames());

@@ -2,7 +2,6 @@ package org.solmass.cli;
 
 import org.solmass.InputException;
 import org.solmass.model.MassingModel;
-import org.solmass.model.ObjReader;
 import org.solmass.output.PatchCsvWriter;
 import org.solmass.irradiation.IrradiationColumns;
 import org.solmass.table.ResultTable;
@@ -37,7 +36,7 @@ public final class SkyViewCommand implements Callable<Integer> {
     /** The table this command writes: patch columns and the four view-factor columns (not analyse's patches.csv). */
     public static final String FILE_NAME = "sky-view.csv";
 
-    @Parameters(paramLabel = "MODEL.obj", description = "massing model (OBJ)") Path model;
+    @Parameters(paramLabel = "MODEL", description = "massing model: OBJ, GeoJSON footprints or CityGML (see --format)") Path model;
     @Mixin ModelFlags modelFlags = new ModelFlags();
     @Option(names = "--patch", paramLabel = "METRES", defaultValue = "1", description = "patch size (default ${DEFAULT-VALUE} m)") double patch;
     @Option(names = "--rays", paramLabel = "N", defaultValue = "1024", description = "hemisphere rays per patch, rounded to a square grid (default ${DEFAULT-VALUE})") int rays;
@@ -57,7 +56,7 @@ public final class SkyViewCommand implements Callable<Integer> {
         org.solmass.scene.HorizonProfile far = horizon == null ? org.solmass.scene.HorizonProfile.NONE
                 : org.solmass.terrain.HorizonCsv.read(horizon);
         long t0 = System.nanoTime();
-        ObjReader.Result read = ObjReader.load(model, modelFlags.options());
+        org.solmass.geo.GeoModel read = org.solmass.geo.ModelFiles.load(model, modelFlags.options(), modelFlags.geoOptions());
         for (String w : read.warnings()) System.err.println("solmass: warning: " + w);
         MassingModel m = read.model();
         PatchSet ps = Patcher.build(m, new PatchOptions(patch, analyse == null ? java.util.Set.of() : new LinkedHashSet<>(analyse), false));

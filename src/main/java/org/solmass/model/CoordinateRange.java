@@ -28,8 +28,12 @@ public final class CoordinateRange {
 
     private CoordinateRange() {}
 
-    /** Refuses used vertices beyond {@link #MAX_COORDINATE_M} or spanning more than {@link #MAX_EXTENT_M}. */
-    static void check(double[] v, int[] vLine, String name) {
+    /**
+     * Refuses used vertices beyond {@link #MAX_COORDINATE_M} or spanning more than {@link #MAX_EXTENT_M}.
+     *
+     * @param vLine the line (or, for a geo-referenced model, the feature number) of each vertex, for messages
+     */
+    public static void check(double[] v, int[] vLine, String name) {
         int n = v.length / 3;
         int[] lo = new int[3], hi = new int[3];
         for (int i = 0; i < n; i++) {

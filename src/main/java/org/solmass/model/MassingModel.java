@@ -18,10 +18,25 @@ import java.util.List;
  * @param triangleMaterial material id per triangle, -1 where none was set
  * @param triangleLine OBJ line number of the face each triangle came from (1-based), 0 if synthetic
  * @param degenerateDropped number of zero-area triangles dropped on import
+ * @param triangleKind what the file declares each triangle to be ({@link SemanticKind#code()}), or null
+ *                     when it declares nothing (OBJ): then every triangle is {@link SemanticKind#NONE}
  */
 public record MassingModel(Path source, List<String> blockNames, List<String> materialNames,
                            double[] vertices, int[] triangles, int[] triangleBlock,
-                           int[] triangleMaterial, int[] triangleLine, int degenerateDropped) {
+                           int[] triangleMaterial, int[] triangleLine, int degenerateDropped, byte[] triangleKind) {
+
+    /** A model whose file declares no kind of face (OBJ). */
+    public MassingModel(Path source, List<String> blockNames, List<String> materialNames,
+                        double[] vertices, int[] triangles, int[] triangleBlock,
+                        int[] triangleMaterial, int[] triangleLine, int degenerateDropped) {
+        this(source, blockNames, materialNames, vertices, triangles, triangleBlock, triangleMaterial, triangleLine,
+                degenerateDropped, null);
+    }
+
+    /** What the file declares triangle {@code t} to be; {@link SemanticKind#NONE} when it declares nothing. */
+    public SemanticKind semanticKind(int t) {
+        return triangleKind == null ? SemanticKind.NONE : SemanticKind.of(triangleKind[t]);
+    }
 
     public int triangleCount() { return triangles.length / 3; }
 

@@ -393,7 +393,7 @@ public final class ObjReader {
      * True when twice the triangle's area is at most {@link #DEGENERATE_REL} times its longest edge
      * squared (a zero-area or needle triangle).
      */
-    static boolean isDegenerate(double[] v, int a, int b, int c) {
+    public static boolean isDegenerate(double[] v, int a, int b, int c) {
         double[] cr = new double[3];
         TriangleGeometry.cross(v, a, b, c, cr);
         double twiceArea = TriangleGeometry.length(cr);

@@ -25,7 +25,7 @@ public final class ResultsFolder {
             MONTH_HOUR = "month-hour.csv";
     /** Every output a run may write (run.json apart): what a results folder holds. */
     public static final List<String> OUTPUT_NAMES = List.of(PATCHES, MONTH_HOUR, ZoneCsvWriter.FILE_NAME, SUMMARY, MAP,
-            GltfWriter.FILE_NAME);
+            GltfWriter.FILE_NAME, GeoJsonWriter.PATCHES, GeoJsonWriter.ZONES);
     /** The column the map, glTF colours and the thresholds use. */
     public static final Column MAIN_COLUMN = IrradiationColumns.ANNUAL;
 
@@ -42,13 +42,22 @@ public final class ResultsFolder {
      * @param cautions texts for summary.json (the caution first)
      * @param metrics what the metrics found (PV zones for zones.csv and the map, notes, summary sections)
      * @param notes further notes for summary.json (e.g. the warnings of the run)
+     * @param geo where a geo-referenced model stands (patches.geojson, zones.geojson and summary.json's
+     *            "geo_reference" are written), or null for a model in local coordinates
      */
     public record Results(Study study, MassingModel model, ResultTable table, float[] monthHourWm2,
-                          RunRecord run, List<String> cautions, Metrics.Outcome metrics, List<String> notes) {
+                          RunRecord run, List<String> cautions, Metrics.Outcome metrics, List<String> notes,
+                          org.solmass.geo.GeoReference geo) {
         public Results {
             cautions = List.copyOf(cautions);
             notes = List.copyOf(notes);
             if (metrics == null) metrics = new Metrics.Outcome(List.of());
+        }
+
+        /** Results of a model in local coordinates. */
+        public Results(Study study, MassingModel model, ResultTable table, float[] monthHourWm2,
+                       RunRecord run, List<String> cautions, Metrics.Outcome metrics, List<String> notes) {
+            this(study, model, table, monthHourWm2, run, cautions, metrics, notes, null);
         }
 
         /** Results without metrics or notes. */
@@ -92,6 +101,11 @@ public final class ResultsFolder {
         texts.addAll(r.notes());
         com.fasterxml.jackson.databind.node.ObjectNode tree = SummaryWriter.toTree(r.table(), spec, r.run(), texts);
         for (Metric.Findings f : r.metrics().findings()) if (f.summarySection() != null) tree.set(f.summaryKey(), f.summarySection());
+        if (r.geo() != null) {
+            tree.set("geo_reference", geoSection(r.geo()));
+            pub.write(GeoJsonWriter.PATCHES, p -> GeoJsonWriter.writePatches(p, r.table(), r.geo(), r.cautions()));
+            if (pv != null) pub.write(GeoJsonWriter.ZONES, p -> GeoJsonWriter.writeZones(p, pv.zones(), r.geo(), r.cautions()));
+        }
         pub.write(SUMMARY, p -> AtomicFiles.writeString(p, org.solmass.study.StudyWriter.pretty(tree)));
         if (o.map() && !r.table().names().isEmpty()) {
             Column col = r.table().has(MAIN_COLUMN.name()) ? MAIN_COLUMN : r.table().columns().get(0);
@@ -106,5 +120,26 @@ public final class ResultsFolder {
             pub.write(GltfWriter.FILE_NAME, p -> GltfWriter.write(p, r.table(), MAIN_COLUMN.name(),
                     "Solmass " + r.run().solmassVersion(), r.cautions()));
         }
+    }
+
+    /**
+     * summary.json's "geo_reference": the model's CRS, the local origin and north angle, and how a
+     * patches.csv x, y turns back into the CRS: E = origin_x + x cos(a) + y sin(a),
+     * N = origin_y - x sin(a) + y cos(a), with a = north_deg (docs/geo.md).
+     */
+    static com.fasterxml.jackson.databind.node.ObjectNode geoSection(org.solmass.geo.GeoReference g) {
+        var o = com.fasterxml.jackson.databind.node.JsonNodeFactory.instance.objectNode();
+        o.put("crs", g.file().name());
+        o.put("crs_definition", g.file().definition());
+        o.put("working_crs", g.work().name());
+        o.put("origin_x", g.originX());
+        o.put("origin_y", g.originY());
+        o.put("north_deg", g.northDeg());
+        o.put("latitude", g.latitudeDeg());
+        o.put("longitude", g.longitudeDeg());
+        o.put("patches_csv_xy", "local: x, y in metres from the origin, rotated by north_deg so that +y is true north;"
+                + " E = origin_x + x cos(north_deg) + y sin(north_deg), N = origin_y - x sin(north_deg) + y cos(north_deg)"
+                + " in working_crs; patches.geojson gives each patch in WGS84 and in crs");
+        return o;
     }
 }

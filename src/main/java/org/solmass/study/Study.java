@@ -147,12 +147,20 @@ public record Study(String name, String description, Path source, Model model, S
      * @param northDeg angle from the model's +north axis to true north, degrees clockwise
      * @param analyse names of the blocks to analyse; empty = every block not listed in {@code context}
      * @param context names of blocks that only obstruct (never analysed)
+     * @param geo the file's format and CRS and how GeoJSON footprints are extruded (keys
+     *            {@code model.format}, {@code model.epsg}, {@code model.footprints}; docs/geo.md)
      */
     public record Model(Path file, UpAxis up, LengthUnit unit, double northDeg, List<String> analyse,
-                        List<String> context) {
+                        List<String> context, org.solmass.geo.GeoOptions geo) {
         public Model {
             analyse = List.copyOf(analyse);
             context = List.copyOf(context);
+            if (geo == null) geo = org.solmass.geo.GeoOptions.defaults();
+        }
+
+        /** A model whose format is detected and whose CRS, if any, comes from the file. */
+        public Model(Path file, UpAxis up, LengthUnit unit, double northDeg, List<String> analyse, List<String> context) {
+            this(file, up, unit, northDeg, analyse, context, null);
         }
 
         /** How the model reader turns the file into metres, x east, y north, z up. */

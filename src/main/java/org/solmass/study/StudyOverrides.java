@@ -78,6 +78,10 @@ public final class StudyOverrides {
     public StudyOverrides up(String axis) { return set("--up", "model.up", axis); }
     public StudyOverrides unit(String unit) { return set("--unit", "model.unit", unit); }
     public StudyOverrides northDeg(Double deg) { return set("--north", "model.north_deg", deg); }
+    /** The model file's format: auto, obj, geojson or citygml. */
+    public StudyOverrides modelFormat(String format) { return set("--format", "model.format", format); }
+    /** EPSG code of the model file's coordinates. */
+    public StudyOverrides epsg(Integer code) { return set("--epsg", "model.epsg", code); }
     public StudyOverrides analyse(List<String> blocks) { return set("--analyse", "model.analyse", blocks); }
     public StudyOverrides context(List<String> blocks) { return set("--context", "model.context", blocks); }
     public StudyOverrides latitude(Double deg) { return set("--lat", "site.latitude", deg); }

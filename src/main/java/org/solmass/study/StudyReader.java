@@ -12,6 +12,9 @@ import org.solmass.InputException;
 import org.solmass.TextInput;
 import org.solmass.climate.ClimateSpec;
 import org.solmass.climate.TimeBaseChoice;
+import org.solmass.geo.GeoOptions;
+import org.solmass.geo.GeoReference;
+import org.solmass.geo.ModelFiles;
 import org.solmass.model.LengthUnit;
 import org.solmass.model.UpAxis;
 import org.solmass.sky.SkyModel;
@@ -117,7 +120,8 @@ public final class StudyReader {
                 m.choice("unit", LengthUnit.values(), Study.Named::labelOf, LengthUnit.M),
                 m.number("north_deg", 0.0, -360, 360),
                 m.strings("analyse"),
-                m.strings("context"));
+                m.strings("context"),
+                geoOptions(m));
         for (int i = 0; i < model.context().size(); i++) {
             if (model.analyse().contains(model.context().get(i))) {
                 throw m.error("context[" + i + "]", "block \"" + model.context().get(i)
@@ -127,8 +131,17 @@ public final class StudyReader {
         m.finish();
 
         JsonCursor s = c.object("site");
-        double lat = s.number("latitude", null, -90, 90);
-        double lon = s.number("longitude", null, -180, 180);
+        double lat, lon;
+        if (!s.has("latitude") && !s.has("longitude") && modelFile != null
+                && ModelFiles.isGeoReferenced(modelFile, model.geo().format())) {
+            // a geo-referenced model stands where its centre is (docs/geo.md)
+            GeoReference ref = ModelFiles.load(modelFile, model.options(), model.geo()).reference();
+            lat = ref.latitudeDeg();
+            lon = ref.longitudeDeg();
+        } else {
+            lat = s.number("latitude", null, -90, 90);
+            lon = s.number("longitude", null, -180, 180);
+        }
         double elev = s.number("elevation_m", 0.0, -500, 9000);
         String zone = s.string("zone", null);
         ZoneId zoneId;
@@ -193,6 +206,20 @@ public final class StudyReader {
         boolean fromDem = k.bool("far_horizon_from_dem", true);
         k.finish();
         return new TerrainSpec(horizon, dem, epsg, e, n, r, fromDem);
+    }
+
+    /** {@code model.format}, {@code model.epsg} and the {@code model.footprints} section. */
+    private static GeoOptions geoOptions(JsonCursor m) {
+        GeoOptions.ModelFormat format = m.choice("format", GeoOptions.ModelFormat.values(), GeoOptions.ModelFormat::label,
+                GeoOptions.ModelFormat.AUTO);
+        int epsg = m.integer("epsg", 0, 1, 999_999);
+        JsonCursor f = m.object("footprints");
+        GeoOptions o = new GeoOptions(format, epsg, f.string("height_property", GeoOptions.DEFAULT_HEIGHT),
+                f.string("storeys_property", GeoOptions.DEFAULT_STOREYS),
+                f.positive("storey_height_m", GeoOptions.DEFAULT_STOREY_HEIGHT_M, 0, 100),
+                f.string("base_property", GeoOptions.DEFAULT_BASE), f.string("name_property", GeoOptions.DEFAULT_NAME));
+        f.finish();
+        return o;
     }
 
     /** The {@code sun_hours} section: dates as "MM-DD" (valid in the study's year), step and minimum elevation. */

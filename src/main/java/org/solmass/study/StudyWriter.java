@@ -44,6 +44,7 @@ public final class StudyWriter {
         m.put("north_deg", s.model().northDeg());
         strings(m.putArray("analyse"), s.model().analyse());
         strings(m.putArray("context"), s.model().context());
+        geo(m, s.model().geo());
 
         ObjectNode site = root.putObject("site");
         site.put("latitude", s.site().latitudeDeg());
@@ -145,5 +146,19 @@ public final class StudyWriter {
 
     private static void numbers(ObjectNode o, Map<String, Double> values) {
         for (Map.Entry<String, Double> e : new TreeMap<>(values).entrySet()) o.put(e.getKey(), e.getValue());
+    }
+
+    /** model.format, model.epsg and model.footprints, each only when not the default (an OBJ study writes none). */
+    private static void geo(ObjectNode m, org.solmass.geo.GeoOptions g) {
+        org.solmass.geo.GeoOptions d = org.solmass.geo.GeoOptions.defaults();
+        if (g.format() != d.format()) m.put("format", g.format().label());
+        if (g.epsg() != 0) m.put("epsg", g.epsg());
+        if (g.equals(d.with(g.format(), g.epsg()))) return;
+        ObjectNode f = m.putObject("footprints");
+        f.put("height_property", g.heightProperty());
+        f.put("storeys_property", g.storeysProperty());
+        f.put("storey_height_m", g.storeyHeightM());
+        f.put("base_property", g.baseProperty());
+        f.put("name_property", g.nameProperty());
     }
 }

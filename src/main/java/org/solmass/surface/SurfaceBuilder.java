@@ -14,6 +14,7 @@ import org.locationtech.jts.geom.util.AffineTransformation;
 import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
 import org.solmass.model.IntList;
 import org.solmass.model.MassingModel;
+import org.solmass.model.SemanticKind;
 import org.solmass.model.TriangleGeometry;
 import org.solmass.model.VertexWelder;
 import org.solmass.model.Vec3;
@@ -43,7 +44,9 @@ import java.util.stream.IntStream;
  * {@code max(1e-6 D, 1e-9 m)}; plane distance tolerance {@code max(1e-5 D, 1 mm)}. A surface's plane
  * has the area-weighted mean normal of its triangles and passes through the first vertex of its
  * first triangle, which is also the origin of the frame used for the union, so axis-aligned faces
- * keep exact local coordinates.
+ * keep exact local coordinates. Triangles the file declares as different kinds (a roof and a wall,
+ * {@link MassingModel#semanticKind}) never share a surface, and a declared kind is kept
+ * ({@link SurfaceClassifier#classify(SemanticKind, Vec3, double, double)}).
  */
 public final class SurfaceBuilder {
     /** Maximum angle between the normals of coplanar triangles, degrees. */
@@ -103,6 +106,7 @@ public final class SurfaceBuilder {
         double tol = planeTolerance(m);
         double[] v = m.vertices();
         int[] tri = m.triangles(), tb = m.triangleBlock();
+        byte[] tk = m.triangleKind();
         List<IntList> groups = new ArrayList<>();
         List<double[]> planes = new ArrayList<>(); // nx, ny, nz, d of each group's first triangle
         Map<Long, IntList> buckets = new HashMap<>();
@@ -111,7 +115,8 @@ public final class SurfaceBuilder {
         for (int t = 0; t < nt; t++) {
             if (!TriangleGeometry.unitNormal(v, tri, t, n)) continue; // zero-area triangle (only in synthetic models)
             int found = -1;
-            if (last >= 0 && tb[groups.get(last).get(0)] == tb[t] && matches(planes.get(last), n, v, tri, t, tol)) {
+            if (last >= 0 && tb[groups.get(last).get(0)] == tb[t] && sameKind(tk, groups.get(last).get(0), t)
+                    && matches(planes.get(last), n, v, tri, t, tol)) {
                 found = last;
             } else {
                 int bx = (int) Math.floor(n[0] / BUCKET), by = (int) Math.floor(n[1] / BUCKET);
@@ -121,7 +126,8 @@ public final class SurfaceBuilder {
                     if (cand == null) continue;
                     for (int c = 0; c < cand.size(); c++) {
                         int g = cand.get(c);
-                        if (matches(planes.get(g), n, v, tri, t, tol) && (found < 0 || g < found)) found = g;
+                        if (sameKind(tk, groups.get(g).get(0), t) && matches(planes.get(g), n, v, tri, t, tol)
+                                && (found < 0 || g < found)) found = g;
                     }
                 }
             }
@@ -140,6 +146,9 @@ public final class SurfaceBuilder {
         }
         return groups;
     }
+
+    /** Whether two triangles are declared the same kind (a roof and a wall never share a surface). */
+    private static boolean sameKind(byte[] kinds, int a, int b) { return kinds == null || kinds[a] == kinds[b]; }
 
     private static long key(int block, int bx, int by, int bz) {
         return ((long) block << 24) ^ ((long) (bx + 128) << 16) ^ ((long) (by + 128) << 8) ^ (bz + 128);
@@ -249,7 +258,7 @@ public final class SurfaceBuilder {
             for (Coordinate c : local.getExteriorRing().getCoordinates()) {
                 maxZ = Math.max(maxZ, frame.toWorld(c.x, c.y).z());
             }
-            SurfaceKind kind = SurfaceClassifier.classify(normal, maxZ, groundZ);
+            SurfaceKind kind = SurfaceClassifier.classify(m.semanticKind(group.get(0)), normal, maxZ, groundZ);
             out.add(new Draft(block, kind, local.getArea(), offset, ts.toArray(), local, frame));
         }
         return out;

@@ -1,5 +1,6 @@
 package org.solmass.surface;
 
+import org.solmass.model.SemanticKind;
 import org.solmass.model.Vec3;
 
 /**
@@ -33,6 +34,21 @@ public final class SurfaceClassifier {
         if (Math.abs(nz) <= FACADE_MAX_ABS_NZ) return SurfaceKind.FACADE;
         if (nz < 0) return SurfaceKind.UNDERSIDE;
         return maxZ <= groundLevelZ + GROUND_TOLERANCE_M ? SurfaceKind.GROUND : SurfaceKind.ROOF;
+    }
+
+    /**
+     * The kind of a surface whose file declares what it is ({@link SemanticKind}): a roof (and an
+     * outside floor such as a terrace) is ROOF, a wall FACADE, the building's floor on the ground and
+     * an outside ceiling UNDERSIDE (they face down), whatever their tilt; a surface with nothing
+     * declared is classified by its normal ({@link #classify(Vec3, double, double)}).
+     */
+    public static SurfaceKind classify(SemanticKind declared, Vec3 normal, double maxZ, double groundLevelZ) {
+        return switch (declared) {
+            case ROOF, OUTER_FLOOR -> SurfaceKind.ROOF;
+            case WALL -> SurfaceKind.FACADE;
+            case GROUND, OUTER_CEILING -> SurfaceKind.UNDERSIDE;
+            case NONE -> classify(normal, maxZ, groundLevelZ);
+        };
     }
 
     /** Tilt from horizontal, degrees: 0 faces up, 90 vertical, 180 faces down. */

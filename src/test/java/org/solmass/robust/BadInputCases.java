@@ -91,6 +91,7 @@ final class BadInputCases {
     private static final String GOOD_SITE = "{\"latitude\": 51, \"longitude\": 10, \"zone\": \"Europe/Berlin\"}";
 
     static {
+        GeoBadInputCases.addTo(CASES);   // geo-referenced models
         // OBJ files
         CASES.put("obj-missing-file", new Case(Map.of(), withSite()));
         obj("obj-empty", "");
