@@ -147,7 +147,7 @@ public final class StudyReader {
                 a.numberMap("blocks", 0, 1), a.numberMap("materials", 0, 1));
         a.finish();
 
-        GroundIrradiance ground = c.choice("ground_irradiance", GroundIrradiance.class, GroundIrradiance.UNSHADED);
+        GroundIrradiance ground = c.choice("ground_irradiance", GroundIrradiance.class, GroundIrradiance.SHADED);
         double patchM = c.positive("patch_m", Study.DEFAULT_PATCH_M, 0, 100);
         int rays = c.integer("rays", Study.DEFAULT_RAYS, 1, 1 << 20);
         SkyModel sky = SkyModels.byName(c.oneOf("sky", SkyModels.names(), SkyModels.standard().name()), "sky");
