@@ -23,9 +23,13 @@ import java.util.stream.IntStream;
  * all slots) is at most {@code tolerance} times the reflected total so far, or at {@code maxBounces}.
  * With a geometric decay of ratio q the part left out is about q / (1 - q) times the last bounce.
  *
- * <p>Memory: besides the first pass ({@code double[total x 288]}) two {@code float[total x 288]}
- * arrays hold the current and the next bounce (floats: a bounce is a small correction, 7 digits are
- * ample), so the peak of the slot arrays is twice the one-bounce pass ({@link MemoryEstimate}).
+ * <p>Bounce 1 is summed slot by slot (288 month-hour slots); the later bounces month by month
+ * (12 values): W is the same for every slot, so the month sums of {@code W D} are W times the month
+ * sums of D and monthly and annual results are exact; only the month-hour table spreads the later
+ * bounces over a month's hours in proportion to bounce 1. Memory: besides the first pass
+ * ({@code double[total x 288]}) two {@code double[total x 12]} hold the current and the next bounce,
+ * so the peak stays that of the one-bounce pass plus under 10 % ({@link MemoryEstimate}); time: the
+ * later bounces cost 1/24 of bounce 1 each.
  *
  * <p>Determinism: each receiver's bounce is summed in its list's order into its own slots, and the
  * energy sums run in receiver order after the parallel part, so nothing depends on the thread count.
@@ -68,8 +72,9 @@ final class Reflection {
     static Outcome solve(double[] firstPass, Lists l, int analysed, StepTable st, double tolerance, int maxBounces,
                          boolean keepMonthHour, PhaseProgress progress) {
         int total = l.idx().length, n = analysed;
-        float[] cur = new float[total * SLOTS], next = new float[total * SLOTS];
+        double[] cur = new double[total * 12], next = new double[total * 12];
         double[][] reflMonth = new double[12][n];
+        double[] firstBounceMonth = keepMonthHour ? new double[n * 12] : null;
         float[] monthHour = keepMonthHour ? new float[n * SLOTS] : null;
         double[] totalAnnual = new double[total];
         double[] added = new double[total];
@@ -86,42 +91,48 @@ final class Reflection {
         boolean converged = false;
         progress.begin("reflection", maxBounces);
         for (int b = 0; b < maxBounces; b++) {
-            final boolean first = b == 0;
-            final float[] src = cur, dst = next;
-            IntStream.range(0, total).parallel().forEach(r -> {
-                double[] acc = new double[SLOTS];
-                int[] idx = l.idx()[r];
-                float[] wt = l.w()[r];
-                for (int i = 0; i < idx.length; i++) {
-                    int base = idx[i] * SLOTS;
-                    double wr = wt[i];
-                    if (first) for (int k = 0; k < SLOTS; k++) acc[k] += wr * firstPass[base + k];
-                    else for (int k = 0; k < SLOTS; k++) acc[k] += wr * src[base + k];
-                }
-                if (first) {
+            final double[] src = cur, dst = next;
+            if (b == 0) { // bounce 1, slot by slot: the month-hour table needs its profile
+                IntStream.range(0, total).parallel().forEach(r -> {
+                    double[] acc = new double[SLOTS];
+                    int[] idx = l.idx()[r];
+                    float[] wt = l.w()[r];
+                    for (int i = 0; i < idx.length; i++) {
+                        int base = idx[i] * SLOTS;
+                        double wr = wt[i];
+                        for (int k = 0; k < SLOTS; k++) acc[k] += wr * firstPass[base + k];
+                    }
                     double g = l.ghiW()[r];
                     for (int k = 0; k < SLOTS; k++) acc[k] += g * st.ghiWh[k];
-                }
-                int base = r * SLOTS;
-                double sum = 0;
-                for (int k = 0; k < SLOTS; k++) {
-                    float v = (float) acc[k];
-                    dst[base + k] = v;
-                    sum += v;
-                    if (r < n) {
-                        reflMonth[slotMonth[k]][r] += v;
-                        if (monthHour != null) monthHour[base + k] += v;
+                    int m0 = r * 12;
+                    for (int m = 0; m < 12; m++) dst[m0 + m] = 0;
+                    for (int k = 0; k < SLOTS; k++) dst[m0 + slotMonth[k]] += acc[k];
+                    if (r < n && monthHour != null) {
+                        for (int k = 0; k < SLOTS; k++) monthHour[r * SLOTS + k] = (float) acc[k];
+                        System.arraycopy(dst, m0, firstBounceMonth, m0, 12);
                     }
-                }
-                added[r] = sum;
-                totalAnnual[r] += sum;
-            });
+                    finish(r, n, dst, reflMonth, added, totalAnnual);
+                });
+            } else { // later bounces month by month: W acts on every slot alike, so month sums are exact
+                IntStream.range(0, total).parallel().forEach(r -> {
+                    int[] idx = l.idx()[r];
+                    float[] wt = l.w()[r];
+                    int m0 = r * 12;
+                    for (int m = 0; m < 12; m++) dst[m0 + m] = 0;
+                    for (int i = 0; i < idx.length; i++) {
+                        int base = idx[i] * 12;
+                        double wr = wt[i];
+                        for (int m = 0; m < 12; m++) dst[m0 + m] += wr * src[base + m];
+                    }
+                    finish(r, n, dst, reflMonth, added, totalAnnual);
+                });
+            }
             double add = 0;
             for (int r = 0; r < n; r++) add += added[r];
             reflected += add;
             bounceWh[b] = add;
             used = b + 1;
-            float[] t = cur;
+            double[] t = cur;
             cur = next;
             next = t;
             progress.advance(used);
@@ -130,7 +141,46 @@ final class Reflection {
                 break;
             }
         }
+        if (monthHour != null) laterBouncesIntoSlots(firstPass, n, reflMonth, firstBounceMonth, monthHour, slotMonth, st);
         return new Outcome(reflMonth, monthHour, totalAnnual, java.util.Arrays.copyOf(bounceWh, used), converged);
+    }
+
+    private static void finish(int r, int n, double[] dst, double[][] reflMonth, double[] added, double[] totalAnnual) {
+        double sum = 0;
+        int m0 = r * 12;
+        for (int m = 0; m < 12; m++) {
+            sum += dst[m0 + m];
+            if (r < n) reflMonth[m][r] += dst[m0 + m];
+        }
+        added[r] = sum;
+        totalAnnual[r] += sum;
+    }
+
+    /**
+     * The month-hour table of the analysed patches: bounce 1 is known per slot; the later bounces'
+     * month sums are spread over the month's slots in proportion to bounce 1 (they are its light
+     * reflected again), else to the first pass, else to the hours. An approximation of the table
+     * only: monthly and annual sums are exact.
+     */
+    private static void laterBouncesIntoSlots(double[] firstPass, int n, double[][] reflMonth, double[] firstBounceMonth,
+                                              float[] monthHour, int[] slotMonth, StepTable st) {
+        IntStream.range(0, n).parallel().forEach(p -> {
+            double[] later = new double[12], fpMonth = new double[12], hoursMonth = new double[12];
+            for (int m = 0; m < 12; m++) later[m] = reflMonth[m][p] - firstBounceMonth[p * 12 + m];
+            int base = p * SLOTS;
+            for (int k = 0; k < SLOTS; k++) {
+                fpMonth[slotMonth[k]] += firstPass[base + k];
+                hoursMonth[slotMonth[k]] += st.hours[k];
+            }
+            for (int k = 0; k < SLOTS; k++) {
+                int m = slotMonth[k];
+                if (!(later[m] > 0)) continue;
+                double share = firstBounceMonth[p * 12 + m] > 0 ? monthHour[base + k] / firstBounceMonth[p * 12 + m]
+                        : fpMonth[m] > 0 ? firstPass[base + k] / fpMonth[m]
+                        : hoursMonth[m] > 0 ? st.hours[k] / hoursMonth[m] : 0;
+                monthHour[base + k] += (float) (later[m] * share);
+            }
+        });
     }
 
     /**
