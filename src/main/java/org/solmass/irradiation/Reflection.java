@@ -93,8 +93,10 @@ final class Reflection {
         for (int b = 0; b < maxBounces; b++) {
             final double[] src = cur, dst = next;
             if (b == 0) { // bounce 1, slot by slot: the month-hour table needs its profile
+                ThreadLocal<double[]> scratch = ThreadLocal.withInitial(() -> new double[SLOTS]);
                 IntStream.range(0, total).parallel().forEach(r -> {
-                    double[] acc = new double[SLOTS];
+                    double[] acc = scratch.get();
+                    java.util.Arrays.fill(acc, 0);
                     int[] idx = l.idx()[r];
                     float[] wt = l.w()[r];
                     for (int i = 0; i < idx.length; i++) {

@@ -221,7 +221,8 @@ public final class ShadedIrradiation {
             hs.sample(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), dir, cls, tri, dist);
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
             collectReflectors(hs.rayCount(), ox, oy, oz); // every receiver: reflectors reflect what they receive
-            horizonVis = horizonVisibility(ox, oy, oz, nx, ny, nz);
+            // a horizontal reflector-only receiver (ground probe) weights the horizon band by sin(tilt) = 0
+            horizonVis = analysed || rc.sinTilt(r) > 0 ? horizonVisibility(ox, oy, oz, nx, ny, nz) : 0;
             sunVisibility(ox, oy, oz, nx, ny, nz);
             accumulate(nx, ny, nz, rc.cosTilt(r), rc.sinTilt(r), analysed);
         }
