@@ -290,7 +290,8 @@ public final class SummaryWriter {
                     s.put("mean", round(g.sumVA[c] / g.valueArea[c], d));
                     s.put("min", round(g.min[c], d));
                     s.put("max", round(g.max[c], d));
-                    if (def.unit() == Unit.KWH_M2) s.put("total_kwh", round(g.sumVA[c], 1));
+                    boolean spread = def.equals(IrradiationColumns.ANNUAL_STD_ERROR); // an error's area sum means nothing
+                    if (def.unit() == Unit.KWH_M2 && !spread) s.put("total_kwh", round(g.sumVA[c], 1));
                     int se = cols.indexOf(IrradiationColumns.ANNUAL_STD_ERROR.name());
                     if (cols.get(c).equals(IrradiationColumns.ANNUAL.name()) && se >= 0 && g.valueArea[se] > 0) {
                         s.put("mean_ci95_kwh_m2", round(Z95 * Math.sqrt(g.sumSqVA[se]) / g.valueArea[se], d));
