@@ -83,6 +83,10 @@ public final class AnalyseCommand implements Callable<Integer> {
         AreaStats a = AreaStats.of(o.patches().patches(), o.result().annual());
         System.out.printf("  annual irradiation: area-weighted mean %.0f kWh/m2, min %.0f, max %.0f, total %.0f MWh on %.0f m2%n",
                 a.mean(), a.min(), a.max(), a.valueTimesAreaSum() / 1000, a.areaM2());
+        org.solmass.irradiation.IrradiationResult.Bounces b = o.result().bounces();
+        System.out.printf(java.util.Locale.ROOT, "  reflection: %d bounce%s, %s%n", b.used(), b.used() == 1 ? "" : "s",
+                b.converged() ? String.format(java.util.Locale.ROOT, "the last added under %.1f %% of the reflected total", 100 * b.tolerance())
+                        : "stopped at the maximum before the last bounce fell under " + 100 * b.tolerance() + " %");
         printMetrics(o);
         System.out.println("  " + org.solmass.Cautions.RESULTS);
         System.out.printf("  time %.1f s (%s)%n", seconds, timings(o.timingsS()));

@@ -205,6 +205,8 @@ public final class AnalysisRun {
         counts.put("sun_directions", (long) r.sunDirections());
         counts.put("rays_per_patch", (long) org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()));
         if (terrain.triangleCount() > 0) counts.put("terrain_triangles", (long) terrain.triangleCount());
+        counts.put("reflection_bounces", (long) r.bounces().used());
+        counts.put("reflection_max_bounces", (long) r.bounces().maxBounces());
         return new Outcome(study, model, patches, weather, r, table, warnings, counts, t, metrics, read.reference());
     }
 

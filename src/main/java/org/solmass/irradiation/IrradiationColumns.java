@@ -28,6 +28,11 @@ public final class IrradiationColumns {
             "Obstruction view factor", "Share that reaches blocks of the model (sky-view only).");
     public static final Column SVF_STD_ERROR = Column.of("svf_std_error", Unit.RATIO, "Sky view factor standard error",
             "Standard error of the sky view factor from the ray sampling.");
+    public static final Column ANNUAL_STD_ERROR = Column.of("annual_std_error_kwh_m2", Unit.KWH_M2,
+            "Annual irradiation standard error",
+            "Standard error of annual_kwh_m2 from the ray sampling (sky hemisphere and reflection rays; sun and horizon"
+                    + " band rays are a fixed grid). An upper bound: it treats the stratified rays as independent"
+                    + " (docs/method.md).");
     public static final Column ANNUAL = Column.of("annual_kwh_m2", Unit.KWH_M2, "Annual irradiation",
             "Annual irradiation on the patch, all components, with obstruction.");
     public static final Column BEAM = Column.of("beam_kwh_m2", Unit.KWH_M2, "Annual beam (direct) irradiation",
@@ -60,7 +65,7 @@ public final class IrradiationColumns {
 
     private static List<ColumnFamily> families() {
         List<ColumnFamily> out = new ArrayList<>(ColumnFamily.of(SKY_VIEW_FACTOR, GROUND_VIEW_FACTOR, SVF_STD_ERROR,
-                ANNUAL, BEAM, DIFFUSE, REFLECTED, UNSHADED, SHADING_LOSS, ANNUAL_KWH));
+                ANNUAL_STD_ERROR, ANNUAL, BEAM, DIFFUSE, REFLECTED, UNSHADED, SHADING_LOSS, ANNUAL_KWH));
         out.add(MONTHLY);
         out.addAll(ColumnFamily.of(SUNSHINE_H, SUNSHINE_SHARE, OBSTRUCTION_VIEW_FACTOR));
         return List.copyOf(out);
@@ -83,6 +88,7 @@ public final class IrradiationColumns {
         tb.put(SKY_VIEW_FACTOR, r.skyViewFactor());
         tb.put(GROUND_VIEW_FACTOR, r.groundViewFactor());
         tb.put(SVF_STD_ERROR, r.skyViewStdError());
+        tb.put(ANNUAL_STD_ERROR, r.annualStdError());
         tb.put(ANNUAL, r.annual());
         tb.put(BEAM, r.beam());
         tb.put(DIFFUSE, r.diffuse());

@@ -20,12 +20,28 @@ package org.solmass.irradiation;
  * @param sunshineHours hours per year with DNI at or above 120 W/m2 (WMO) while the patch sees the sun
  * @param siteSunshineHours the site's sunshine hours over the same period (unobstructed)
  * @param sunDirections number of sun directions rays were cast to per patch
+ * @param annualStdError standard error of {@code annual} from the hemisphere ray sampling, kWh/m2
+ *                       ({@link Reflection#stdErrorWh})
+ * @param bounces how the reflection series ended
  */
 public record IrradiationResult(double[] skyViewFactor, double[] groundViewFactor, double[] obstructionViewFactor,
                                 double[] skyViewStdError, double[] horizonVisibility,
                                 double[] annual, double[] beam, double[] diffuse, double[] reflected,
                                 double[] unshaded, double[][] monthly, float[] monthHourWm2, double[] sunshineHours,
-                                double siteSunshineHours, int sunDirections) {
+                                double siteSunshineHours, int sunDirections, double[] annualStdError,
+                                Bounces bounces) {
+
+    /**
+     * The reflection bounces used ({@link Reflection}).
+     *
+     * @param addedKwhM2 irradiation each bounce added, summed over the analysed patches, kWh/m2
+     * @param converged whether the last bounce added at most {@code tolerance} of the reflected total
+     * @param tolerance the stopping fraction
+     * @param maxBounces the largest number of bounces allowed
+     */
+    public record Bounces(double[] addedKwhM2, boolean converged, double tolerance, int maxBounces) {
+        public int used() { return addedKwhM2.length; }
+    }
 
     public int size() { return annual.length; }
 

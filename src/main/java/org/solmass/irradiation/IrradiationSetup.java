@@ -38,9 +38,31 @@ public final class IrradiationSetup {
      * @param sunBins cells of the sky subdivision when binned
      * @param runSeed seed mixed into every ray stream
      * @param keepMonthHour keep the 12 x 24 mean irradiance of every patch
+     * @param bounceTolerance reflection stops after the bounce that adds at most this share of the
+     *                        reflected total ({@link Reflection})
+     * @param maxBounces reflection stops after this many bounces at the latest (1: one bounce)
      */
     public record Options(double patchSizeM, int raysPerPatch, double groundAlbedo, boolean shadedGround, SunSampling sunSampling,
-                          int sunBins, long runSeed, boolean keepMonthHour) {}
+                          int sunBins, long runSeed, boolean keepMonthHour, double bounceTolerance, int maxBounces) {
+
+        /** With the default bounce tolerance (0.5 %) and maximum (20). */
+        public Options(double patchSizeM, int raysPerPatch, double groundAlbedo, boolean shadedGround, SunSampling sunSampling,
+                       int sunBins, long runSeed, boolean keepMonthHour) {
+            this(patchSizeM, raysPerPatch, groundAlbedo, shadedGround, sunSampling, sunBins, runSeed, keepMonthHour,
+                    DEFAULT_BOUNCE_TOLERANCE, DEFAULT_MAX_BOUNCES);
+        }
+
+        /** The same options with another bounce limit. */
+        public Options withBounces(double tolerance, int max) {
+            return new Options(patchSizeM, raysPerPatch, groundAlbedo, shadedGround, sunSampling, sunBins, runSeed,
+                    keepMonthHour, tolerance, max);
+        }
+    }
+
+    /** Default share of the reflected total below which one more bounce stops the series (our choice). */
+    public static final double DEFAULT_BOUNCE_TOLERANCE = Reflection.DEFAULT_TOLERANCE;
+    /** Default largest number of reflection bounces (our choice). */
+    public static final int DEFAULT_MAX_BOUNCES = Reflection.DEFAULT_MAX_BOUNCES;
 
     /**
      * @param surfaces every surface of the model (from the patcher); patches refer to them by id
@@ -111,7 +133,7 @@ public final class IrradiationSetup {
         StepTable steps = new StepTable(weather, dirs, sky);
         return new ShadedIrradiation.Inputs(receivers, index, isGround, triangleAlbedo, o.groundAlbedo(),
                 o.shadedGround(), steps, dirs, o.raysPerPatch(), Math.min(o.raysPerPatch(), REFLECTOR_RAYS),
-                o.keepMonthHour());
+                o.keepMonthHour(), o.bounceTolerance(), o.maxBounces());
     }
 
     /**

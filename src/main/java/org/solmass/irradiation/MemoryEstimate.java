@@ -12,11 +12,15 @@ import java.util.Locale;
  * <ul>
  * <li>per receiver (analysed patch, context patch or ground probe): the first-pass month-hour slot
  *     sums, {@code double[288]} (8 bytes a slot: they are the sums later weighted into other patches'
- *     reflection, so they stay doubles), its ground view factor, origin, normal, seed, surface and
- *     reflector index entries;</li>
- * <li>per analysed patch: up to one reflector reference (int + float) per hemisphere ray, about 40
- *     per-patch result doubles (components, 3 x 12 months) and the result table's columns, and the
- *     month-hour table {@code float[288]} when it is kept;</li>
+ *     reflection, so they stay doubles), the current and the next reflection bounce as month sums,
+ *     {@code 2 x double[12]} ({@link Reflection}: the same whatever the number of bounces), its
+ *     annual total and last-bounce sum, origin, normal, seed, surface and
+ *     reflector index entries, and its reflector list with its GHI weight; a reflector-only receiver's
+ *     list holds up to one reference (int + float) per reflector ray;</li>
+ * <li>per analysed patch: up to one reflector reference (int + float + the float of squared albedo for
+ *     the standard error) per hemisphere ray, about 40 per-patch result doubles (components, standard
+ *     error, 3 x 12 months, the reflected months) and the result table's columns, and the month-hour
+ *     table {@code float[288]} with bounce 1's month sums {@code double[12]} when it is kept;</li>
  * <li>per worker thread: the ray scratch arrays; per sun-up step: the step table ({@link StepTable}:
  *     sun vector, direction, slot, beam, circumsolar, cos zenith and sunshine entries).</li>
  * </ul>
@@ -26,9 +30,11 @@ import java.util.Locale;
  * @param countBytes     the part that scales with the number of receivers and patches
  */
 public record MemoryEstimate(long bytes, long countBytes) {
-    static final long PER_RECEIVER = StepTable.SLOTS * 8L + 16 + 8 + 48 + 8 + 4 + 24;
-    static final long PER_PATCH_FIXED = 40 * 8 + 36 * 8 + 2 * 16 + 30 * 8;
-    static final long PER_PATCH_PER_RAY = 4 + 4;
+    static final long PER_RECEIVER = StepTable.SLOTS * 8L + 16 + 2 * 12 * 8 + 8 + 8 + 48 + 8 + 4 + 24
+            + 2 * 16 + 4 + 16;
+    static final long PER_REFLECTOR_ONLY_PER_RAY = 4 + 4;
+    static final long PER_PATCH_FIXED = 40 * 8 + 36 * 8 + 2 * 16 + 30 * 8 + 12 * 8 + 8 + 16 + 4;
+    static final long PER_PATCH_PER_RAY = 4 + 4 + 4;
     static final long PER_THREAD_PER_RAY = 24 + 4 + 4 + 8 + 4 + 4 + 8;
     static final long PER_STEP = 3 * 4 + 4 + 4 + 8 + 8 + 4 + 8;
     /** Share of the free heap the estimate may use: the rest is for what the estimate leaves out. */
@@ -45,7 +51,8 @@ public record MemoryEstimate(long bytes, long countBytes) {
     public static MemoryEstimate of(long receivers, long analysed, int raysPerPatch, int steps,
                                     boolean keepMonthHour, int threads) {
         long counts = receivers * PER_RECEIVER
-                + analysed * (PER_PATCH_FIXED + PER_PATCH_PER_RAY * raysPerPatch + (keepMonthHour ? StepTable.SLOTS * 4L : 0));
+                + (receivers - analysed) * PER_REFLECTOR_ONLY_PER_RAY * Math.min(raysPerPatch, IrradiationSetup.REFLECTOR_RAYS)
+                + analysed * (PER_PATCH_FIXED + PER_PATCH_PER_RAY * raysPerPatch + (keepMonthHour ? StepTable.SLOTS * 4L + 12 * 8 : 0));
         long fixed = (long) threads * raysPerPatch * PER_THREAD_PER_RAY + (long) steps * PER_STEP;
         return new MemoryEstimate(counts + fixed, counts);
     }

@@ -25,15 +25,16 @@ import java.util.stream.IntStream;
  * circumsolar ratio of {@link org.solmass.sky.SkyModel#circumsolarRatio}, SVF the obstructed
  * sky view factor, {@code V_hor} the visible share of the Perez horizon band (0 to 6.5 degrees
  * elevation), weighted by {@code cos theta};</li>
- * <li>reflected, one bounce of Lambertian reflection: {@code sum over hemisphere rays (1/N) rho_hit
- * E_hit}, the cosine-weighted Monte Carlo form of {@code sum_j F_pj rho_j E_j} (Howell, Menguc and
- * Siegel, Thermal Radiation Heat Transfer, 6th ed., 2016, ch. 7), where {@code E_hit} is GHI for
- * unshaded ground and otherwise the hit receiver's first-pass irradiance (beam + sky diffuse +
- * ground-reflected GHI).</li>
+ * <li>reflected, Lambertian reflection over as many bounces as needed: {@code sum over hemisphere
+ * rays (1/N) rho_hit E_hit}, the cosine-weighted Monte Carlo form of {@code sum_j F_pj rho_j E_j}
+ * (Howell, Menguc and Siegel, Thermal Radiation Heat Transfer, 6th ed., 2016, ch. 7), where
+ * {@code E_hit} is GHI for unshaded ground and otherwise the hit receiver's total irradiance, itself
+ * first pass plus reflection ({@link Reflection}: the Neumann series, bounce by bounce).</li>
  * </ul>
  * Because every term is linear in the step weights, it is enough to keep per receiver the sums per
  * month-hour slot ({@link MonthHour}, 288 values), and reflection becomes a sparse weighted sum of other receivers' slot
- * sums, computed after all first passes are known.
+ * sums, computed after all first passes are known; every receiver (context patches and ground probes
+ * too) keeps its reflector list for the later bounces.
  *
  * <p>The sky diffuse of a slot is the sky package's three-part sum {@link DiffuseParts#sum} of the
  * slot's parts (kept at or above zero: the Perez horizon term may be negative); the clamp acts on
@@ -54,19 +55,18 @@ public final class ShadedIrradiation {
     public record Inputs(Receivers receivers, ReflectorIndex reflectors, boolean[] triangleIsGround,
                          float[] triangleAlbedo, double groundAlbedo, boolean shadedGround,
                          StepTable steps, SunDirections sun, int raysPerPatch, int reflectorRays,
-                         boolean keepMonthHour) {}
+                         boolean keepMonthHour, double bounceTolerance, int maxBounces) {}
 
     public static IrradiationResult run(org.solmass.scene.Scene scene, Inputs in, PhaseProgress progress) {
         Receivers rc = in.receivers();
         int n = rc.analysed, total = rc.count;
         double[] firstPass = new double[total * SLOTS];
-        double[] gvfAll = new double[total];
         double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
         double[][] beamM = new double[12][n], diffM = new double[12][n];
         double[] unshaded = new double[n], sunshine = new double[n];
-        int[][] refIdx = new int[n][];
-        float[][] refW = new float[n][];
-        float[] ghiAlbedo = new float[n];
+        int[][] refIdx = new int[total][];
+        float[][] refW = new float[total][], refW2 = new float[n][];
+        float[] ghiAlbedo = new float[total], ghiAlbedo2 = new float[n];
 
         progress.begin("visibility", total);
         AtomicLong done = new AtomicLong();
@@ -76,7 +76,9 @@ public final class ShadedIrradiation {
             Worker w = workers.get();
             w.firstPass(r, r < n);
             System.arraycopy(w.slotTotal, 0, firstPass, r * SLOTS, SLOTS);
-            gvfAll[r] = w.vf.ground();
+            refIdx[r] = Arrays.copyOf(w.refIdx, w.refCount);
+            refW[r] = Arrays.copyOf(w.refW, w.refCount);
+            ghiAlbedo[r] = (float) w.ghiAlbedo;
             if (r < n) {
                 svf[r] = w.vf.sky();
                 gvf[r] = w.vf.ground();
@@ -89,49 +91,47 @@ public final class ShadedIrradiation {
                 }
                 unshaded[r] = w.unshadedTotal;
                 sunshine[r] = w.sunshineHours;
-                refIdx[r] = Arrays.copyOf(w.refIdx, w.refCount);
-                refW[r] = Arrays.copyOf(w.refW, w.refCount);
-                ghiAlbedo[r] = (float) w.ghiAlbedo;
+                refW2[r] = Arrays.copyOf(w.refW2, w.refCount);
+                ghiAlbedo2[r] = (float) w.ghiAlbedo2;
             }
             long d = done.incrementAndGet();
             if (d % every == 0 || d == total) progress.advance(d);
         });
 
+        StepTable st = in.steps();
+        Reflection.Lists lists = new Reflection.Lists(refIdx, refW, refW2, ghiAlbedo, ghiAlbedo2,
+                HemisphereSampler.roundedRayCount(in.raysPerPatch()));
+        Reflection.Outcome ro = Reflection.solve(firstPass, lists, n, st, in.bounceTolerance(), in.maxBounces(),
+                in.keepMonthHour(), progress);
+
         progress.begin("irradiation", n);
         done.set(0);
-        StepTable st = in.steps();
-        double ga = in.groundAlbedo();
+        double background = 0, ghi = 0;
+        for (int k = 0; k < SLOTS; k++) {
+            background += st.backgroundWh[k];
+            ghi += st.ghiWh[k];
+        }
         double[] annual = new double[n], beam = new double[n], diffuse = new double[n], reflected = new double[n];
+        double[] annualSe = new double[n];
         double[][] monthly = new double[12][n];
-        float[] monthHour = in.keepMonthHour() ? new float[n * SLOTS] : null;
+        float[] monthHour = ro.monthHourWh();
+        double bgAnnual = background, ghiAnnual = ghi;
         long everyB = Math.max(1, n / 200);
         IntStream.range(0, n).parallel().forEach(p -> {
-            double[] refl = new double[SLOTS];
-            double g = ghiAlbedo[p];
-            int[] idx = refIdx[p];
-            float[] wt = refW[p];
-            for (int i = 0; i < idx.length; i++) {
-                int r = idx[i], base = r * SLOTS;
-                double wr = wt[i];
-                g += wr * ga * gvfAll[r]; // the reflector's own ground-reflected GHI, as a GHI weight
-                for (int k = 0; k < SLOTS; k++) refl[k] += wr * firstPass[base + k];
-            }
-            for (int k = 0; k < SLOTS; k++) refl[k] += g * st.ghiWh[k];
-            double[] reflMonth = new double[12];
             int base = p * SLOTS;
-            for (int k = 0; k < SLOTS; k++) {
-                reflMonth[MonthHour.month(k) - 1] += refl[k];
-                if (monthHour != null) {
-                    double t = firstPass[base + k] + refl[k]; // first pass of p: its beam + sky diffuse
+            if (monthHour != null) {
+                for (int k = 0; k < SLOTS; k++) {
+                    double t = firstPass[base + k] + monthHour[base + k]; // first pass of p: its beam + sky diffuse
                     monthHour[base + k] = st.hours[k] > 0 ? (float) (t / st.hours[k]) : 0f;
                 }
             }
             double b = 0, dfs = 0, ref = 0;
             for (int m = 0; m < 12; m++) {
-                monthly[m][p] = (beamM[m][p] + diffM[m][p] + reflMonth[m]) / 1000;
+                double rm = ro.reflMonthWh()[m][p];
+                monthly[m][p] = (beamM[m][p] + diffM[m][p] + rm) / 1000;
                 b += beamM[m][p];
                 dfs += diffM[m][p];
-                ref += reflMonth[m];
+                ref += rm;
             }
             beam[p] = b / 1000;
             diffuse[p] = dfs / 1000;
@@ -139,12 +139,16 @@ public final class ShadedIrradiation {
             double tot = 0;
             for (int m = 0; m < 12; m++) tot += monthly[m][p];
             annual[p] = tot;
+            annualSe[p] = Reflection.stdErrorWh(p, lists, svf[p], bgAnnual, ghiAnnual, ro.totalAnnualWh()) / 1000;
             long d = done.incrementAndGet();
             if (d % everyB == 0 || d == n) progress.advance(d);
         });
         for (int p = 0; p < n; p++) unshaded[p] /= 1000;
+        double[] bounceKwh = new double[ro.bounces()];
+        for (int b = 0; b < bounceKwh.length; b++) bounceKwh[b] = ro.bounceWh()[b] / 1000;
         return new IrradiationResult(svf, gvf, obs, se, hv, annual, beam, diffuse, reflected, unshaded,
-                monthly, monthHour, sunshine, st.siteSunshineHours, in.sun().count());
+                monthly, monthHour, sunshine, st.siteSunshineHours, in.sun().count(), annualSe,
+                new IrradiationResult.Bounces(bounceKwh, ro.converged(), in.bounceTolerance(), in.maxBounces()));
     }
 
     /** Per-thread state: samplers, scratch arrays; no allocation per ray or per step. */
@@ -166,12 +170,12 @@ public final class ShadedIrradiation {
         final double[] slotTotal = new double[SLOTS];
         final double[] beamMonth = new double[12], diffMonth = new double[12];
         final int[] refIdx;
-        final float[] refW;
+        final float[] refW, refW2;
         final long[] refKey;
         final double[] horizonDir = new double[3 * HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
         final double[] horizonCosElev = new double[HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
         ViewFactors vf;
-        double horizonVis, unshadedTotal, ghiAlbedo, sunshineHours;
+        double horizonVis, unshadedTotal, ghiAlbedo, ghiAlbedo2, sunshineHours;
         int refCount;
 
         Worker(org.solmass.scene.Scene scene, Inputs in) {
@@ -193,6 +197,7 @@ public final class ShadedIrradiation {
             vis = new byte[in.sun().count()];
             refIdx = new int[maxRays];
             refW = new float[maxRays];
+            refW2 = new float[maxRays];
             refKey = new long[maxRays];
             int h = 0;
             for (int e = 0; e < HORIZON_ELEVATIONS; e++) {
@@ -215,8 +220,9 @@ public final class ShadedIrradiation {
             HemisphereSampler hs = analysed ? sampler : reflectorSampler;
             hs.sample(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), dir, cls, tri, dist);
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
-            if (analysed) collectReflectors(hs.rayCount(), ox, oy, oz);
-            horizonVis = horizonVisibility(ox, oy, oz, nx, ny, nz);
+            collectReflectors(hs.rayCount(), ox, oy, oz); // every receiver: reflectors reflect what they receive
+            // a horizontal reflector-only receiver (ground probe) weights the horizon band by sin(tilt) = 0
+            horizonVis = analysed || rc.sinTilt(r) > 0 ? horizonVisibility(ox, oy, oz, nx, ny, nz) : 0;
             sunVisibility(ox, oy, oz, nx, ny, nz);
             accumulate(nx, ny, nz, rc.cosTilt(r), rc.sinTilt(r), analysed);
         }
@@ -227,7 +233,7 @@ public final class ShadedIrradiation {
             boolean shaded = in.shadedGround();
             double ga = in.groundAlbedo();
             int c = 0;
-            double ghi = 0;
+            double ghi = 0, ghi2 = 0;
             for (int s = 0; s < rays; s++) {
                 int k = cls[s];
                 if (k == HemisphereSampler.SKY) continue;
@@ -236,6 +242,7 @@ public final class ShadedIrradiation {
                 if (t >= 0) {
                     if (k == HemisphereSampler.GROUND && !shaded) {
                         ghi += albedo[t];
+                        ghi2 += albedo[t] * albedo[t];
                         continue;
                     }
                     int rec = idx.onTriangle(t, hx, hy, hz);
@@ -243,9 +250,13 @@ public final class ShadedIrradiation {
                 } else if (t == Tracer.GROUND && shaded) {
                     int probe = idx.probeAt(hx, hy);
                     if (probe >= 0) refKey[c++] = ((long) probe << 32) | Float.floatToRawIntBits((float) ga);
-                    else ghi += ga;
+                    else {
+                        ghi += ga;
+                        ghi2 += ga * ga;
+                    }
                 } else {
                     ghi += ga; // ground plane (unshaded mode) or a downward ray leaving a model without one
+                    ghi2 += ga * ga;
                 }
             }
             Arrays.sort(refKey, 0, c);
@@ -254,17 +265,21 @@ public final class ShadedIrradiation {
             for (int i = 0; i < c; ) {
                 long key = refKey[i];
                 int rec = (int) (key >>> 32);
-                double w = 0;
+                double w = 0, w2 = 0;
                 while (i < c && (int) (refKey[i] >>> 32) == rec) {
-                    w += Float.intBitsToFloat((int) refKey[i]) * inv;
+                    double rho = Float.intBitsToFloat((int) refKey[i]);
+                    w += rho * inv;
+                    w2 += rho * rho * inv;
                     i++;
                 }
                 refIdx[m] = rec;
                 refW[m] = (float) w;
+                refW2[m] = (float) w2;
                 m++;
             }
             refCount = m;
             ghiAlbedo = ghi * inv;
+            ghiAlbedo2 = ghi2 * inv;
         }
 
         private double horizonVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {

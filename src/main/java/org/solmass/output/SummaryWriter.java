@@ -66,7 +66,8 @@ public final class SummaryWriter {
         public static Spec standard(List<Double> thresholds) {
             return new Spec(java.util.stream.Stream.of(IrradiationColumns.ANNUAL, IrradiationColumns.BEAM,
                     IrradiationColumns.DIFFUSE, IrradiationColumns.REFLECTED, IrradiationColumns.UNSHADED,
-                    IrradiationColumns.SHADING_LOSS, IrradiationColumns.SKY_VIEW_FACTOR, IrradiationColumns.SUNSHINE_H)
+                    IrradiationColumns.SHADING_LOSS, IrradiationColumns.SKY_VIEW_FACTOR, IrradiationColumns.SUNSHINE_H,
+                    IrradiationColumns.ANNUAL_STD_ERROR)
                     .map(Column::name).toList(), IrradiationColumns.ANNUAL.name(), thresholds);
         }
 
@@ -234,12 +235,13 @@ public final class SummaryWriter {
     static final class Group {
         int patches;
         double area;
-        final double[] valueArea, sumVA, min, max, aboveArea;
+        final double[] valueArea, sumVA, sumSqVA, min, max, aboveArea;
         final int[] missing;
 
         Group(int cols, int thresholds) {
             valueArea = new double[cols];
             sumVA = new double[cols];
+            sumSqVA = new double[cols];
             min = new double[cols];
             max = new double[cols];
             missing = new int[cols];
@@ -258,12 +260,21 @@ public final class SummaryWriter {
                 }
                 valueArea[c] += a;
                 sumVA[c] += v[c] * a;
+                sumSqVA[c] += v[c] * a * v[c] * a;
                 min[c] = Math.min(min[c], v[c]);
                 max[c] = Math.max(max[c], v[c]);
             }
             for (int t = 0; t < thr.length; t++) if (thresholdValue >= thr[t]) aboveArea[t] += a;
         }
     }
+
+    /**
+     * Two-sided 95 % quantile of the standard normal distribution (1.959964, rounded as commonly
+     * tabulated). The half-width of an area-weighted mean of patches with independent sampling errors
+     * se_p is Z95 sqrt(sum (a_p se_p)^2) / sum a_p (variance of a weighted sum of independent
+     * estimates; each patch draws its rays from its own seed).
+     */
+    static final double Z95 = 1.96;
 
     /** Turns groups into JSON with the documented rounding. */
     private record Emit(List<String> cols, ResultTable table, double[] thr, boolean thresholds) {
@@ -279,7 +290,12 @@ public final class SummaryWriter {
                     s.put("mean", round(g.sumVA[c] / g.valueArea[c], d));
                     s.put("min", round(g.min[c], d));
                     s.put("max", round(g.max[c], d));
-                    if (def.unit() == Unit.KWH_M2) s.put("total_kwh", round(g.sumVA[c], 1));
+                    boolean spread = def.equals(IrradiationColumns.ANNUAL_STD_ERROR); // an error's area sum means nothing
+                    if (def.unit() == Unit.KWH_M2 && !spread) s.put("total_kwh", round(g.sumVA[c], 1));
+                    int se = cols.indexOf(IrradiationColumns.ANNUAL_STD_ERROR.name());
+                    if (cols.get(c).equals(IrradiationColumns.ANNUAL.name()) && se >= 0 && g.valueArea[se] > 0) {
+                        s.put("mean_ci95_kwh_m2", round(Z95 * Math.sqrt(g.sumSqVA[se]) / g.valueArea[se], d));
+                    }
                 } else {
                     s.putNull("mean");
                     s.putNull("min");

@@ -161,7 +161,8 @@ public final class StudyReader {
                 a.numberMap("blocks", 0, 1), a.numberMap("materials", 0, 1));
         a.finish();
 
-        GroundIrradiance ground = c.choice("ground_irradiance", GroundIrradiance.class, GroundIrradiance.UNSHADED);
+        boolean groundGiven = c.has("ground_irradiance");
+        GroundIrradiance ground = c.choice("ground_irradiance", GroundIrradiance.class, GroundIrradiance.SHADED);
         double patchM = c.positive("patch_m", Study.DEFAULT_PATCH_M, 0, 100);
         int rays = c.integer("rays", Study.DEFAULT_RAYS, 1, 1 << 20);
         SkyModel sky = SkyModels.byName(c.oneOf("sky", SkyModels.names(), SkyModels.standard().name()), "sky");
@@ -183,6 +184,8 @@ public final class StudyReader {
         Study.SunHours sunHours = sunHours(c, climate.year());
         Study.Pv pv = pv(c);
         TerrainSpec terrain = terrain(c, base);
+        // shaded ground samples the flat plane: with a DEM the default is unshaded; asking for shaded is an error
+        if (terrain.dem() != null && !groundGiven) ground = GroundIrradiance.UNSHADED;
         if (terrain.dem() != null && ground == GroundIrradiance.SHADED) {
             throw c.error("ground_irradiance", "\"shaded\" samples the flat ground plane and cannot be combined with a DEM"
                     + " (terrain.dem); use \"unshaded\" (the terrain then reflects the ground albedo x GHI)");

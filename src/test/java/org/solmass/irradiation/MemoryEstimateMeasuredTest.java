@@ -19,7 +19,8 @@ import static org.junit.jupiter.api.Assertions.*;
 /**
  * The memory estimate against the heap the visibility and irradiation phase really holds: the JVM's
  * own count of the heap in use (MemoryMXBean, after a full collection), measured before the inputs
- * are built and at the end of the last phase, while every array of the run is still reachable.
+ * are built and at the end of each reflection bounce and of the last phase (the larger), while the
+ * run's arrays are still reachable.
  */
 class MemoryEstimateMeasuredTest {
     /**
@@ -44,10 +45,14 @@ class MemoryEstimateMeasuredTest {
                 List.of(), albedo, w, Perez.INSTANCE, o);
         int n = in.receivers().analysed;
         long[] peak = {-1};
-        PhaseProgress atTheEnd = new PhaseProgress() {
-            boolean last;
-            @Override public void begin(String phase, long total) { last = phase.equals("irradiation"); }
-            @Override public void advance(long done) { if (last && done == n) peak[0] = usedAfterGc(mx); }
+        PhaseProgress atTheEnd = new PhaseProgress() { // the ends of the bounces and of the last phase
+            String phase = "";
+            @Override public void begin(String phase, long total) { this.phase = phase; }
+            @Override public void advance(long done) {
+                if (phase.equals("reflection") || (phase.equals("irradiation") && done == n)) {
+                    peak[0] = Math.max(peak[0], usedAfterGc(mx));
+                }
+            }
         };
         IrradiationResult r = ShadedIrradiation.run(f.scene, in, atTheEnd);
         assertEquals(n, r.annual().length);

@@ -20,9 +20,11 @@ class MemoryEstimateTest {
         MemoryEstimate a = MemoryEstimate.of(1000, 800, 256, 288, false, 4), b = MemoryEstimate.of(2000, 800, 256, 288, false, 4);
         MemoryEstimate c = MemoryEstimate.of(3000, 800, 256, 288, false, 4);
         assertEquals(b.bytes() - a.bytes(), c.bytes() - b.bytes());
-        assertEquals(800L * 288 * 4, MemoryEstimate.of(1000, 800, 256, 288, true, 4).bytes() - a.bytes());
-        // reflector lists: one int and one float per ray and analysed patch
-        assertEquals(800L * 8 * 256, MemoryEstimate.of(1000, 800, 512, 288, false, 0).bytes()
+        // the month-hour table and bounce 1's month sums, which spread the later bounces over it
+        assertEquals(800L * (288 * 4 + 12 * 8), MemoryEstimate.of(1000, 800, 256, 288, true, 4).bytes() - a.bytes());
+        // reflector lists: one int, one float and one float of squared albedo per ray and analysed patch
+        // (reflector-only receivers keep at most 256 rays either way)
+        assertEquals(800L * 12 * 256, MemoryEstimate.of(1000, 800, 512, 288, false, 0).bytes()
                 - MemoryEstimate.of(1000, 800, 256, 288, false, 0).bytes());
     }
 

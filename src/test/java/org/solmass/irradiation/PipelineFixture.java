@@ -31,10 +31,19 @@ final class PipelineFixture {
 
     /** Runs on a subset of the analysed patches (re-indexed 0..n-1 in the given order). */
     IrradiationResult run(List<Patch> subset, WeatherSeries weather, SkyModel sky, IrradiationSetup.Options o) {
-        float[] albedo = new float[model.triangleCount()];
-        Arrays.fill(albedo, 0.3f);
-        ShadedIrradiation.Inputs in = IrradiationSetup.build(scene, model, patches.surfaces(), subset, List.of(),
-                albedo, weather, sky, o);
+        return run(subset, List.of(), 0.3f, weather, sky, o);
+    }
+
+    /**
+     * Runs on the given analysed patches (re-indexed 0..n-1) with other patches as reflector-only
+     * context receivers, every triangle of the given albedo.
+     */
+    IrradiationResult run(List<Patch> subset, List<Patch> context, float albedo, WeatherSeries weather, SkyModel sky,
+                          IrradiationSetup.Options o) {
+        float[] a = new float[model.triangleCount()];
+        Arrays.fill(a, albedo);
+        ShadedIrradiation.Inputs in = IrradiationSetup.build(scene, model, patches.surfaces(), subset, context,
+                a, weather, sky, o);
         return ShadedIrradiation.run(scene, in, PhaseProgress.NONE);
     }
 

@@ -119,7 +119,7 @@ class StudyReaderTest {
         assertEquals(Climate.DEFAULT_YEAR, s.climate().year());
         assertEquals(0.2, s.albedo().ground());
         assertEquals(0.3, s.albedo().blocksDefault());
-        assertEquals(GroundIrradiance.UNSHADED, s.groundIrradiance());
+        assertEquals(GroundIrradiance.SHADED, s.groundIrradiance(), "docs/study-file.md: shaded ground by default");
         assertEquals(1.0, s.patchM());
         assertEquals(1024, s.rays());
         assertEquals(Perez.INSTANCE, s.sky());

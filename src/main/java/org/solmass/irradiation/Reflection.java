@@ -1,0 +1,218 @@
+package org.solmass.irradiation;
+
+import java.util.stream.IntStream;
+
+/**
+ * Multi-bounce Lambertian reflection between receivers, month-hour slot by slot, and the sampling
+ * standard error of each analysed patch's annual irradiation.
+ *
+ * <p>Every receiver r (analysed patch, context patch or ground probe) carries a sparse reflector
+ * list from its own hemisphere rays: receivers j with weight {@code w_rj = (1/N) sum over the rays
+ * that hit j of rho_hit} (the cosine-weighted Monte Carlo estimate of {@code F_rj rho_j}), and a
+ * weight {@code g_r} of hits whose irradiance is GHI (unshaded ground, ground outside the probe grid,
+ * rays leaving a model without ground plane downward). The irradiance then satisfies the Lambertian
+ * exchange (radiosity) equation
+ * <pre>  E_r = F_r + g_r GHI + sum_j w_rj E_j</pre>
+ * with F_r the first pass (beam + sky diffuse). Its solution is the Neumann series
+ * {@code E = sum_k W^k (F + g GHI)} (Howell, Menguc and Siegel, Thermal Radiation Heat Transfer,
+ * 6th ed., 2016, ch. 7 for the exchange between diffuse surfaces and ch. 9 for its solution by
+ * successive substitution / Monte Carlo), which converges because every row sum of W is at most the
+ * largest albedo (below 1). Term k is bounce k:
+ * <pre>  D_1 = W F + g GHI,   D_(k+1) = W D_k,   reflected = sum_k D_k</pre>
+ * The series stops after the first bounce whose added energy (summed over the analysed patches,
+ * all slots) is at most {@code tolerance} times the reflected total so far, or at {@code maxBounces}.
+ * With a geometric decay of ratio q the part left out is about q / (1 - q) times the last bounce.
+ *
+ * <p>Bounce 1 is summed slot by slot (288 month-hour slots); the later bounces month by month
+ * (12 values): W is the same for every slot, so the month sums of {@code W D} are W times the month
+ * sums of D and monthly and annual results are exact; only the month-hour table spreads the later
+ * bounces over a month's hours in proportion to bounce 1. Memory: besides the first pass
+ * ({@code double[total x 288]}) two {@code double[total x 12]} hold the current and the next bounce,
+ * so the peak stays that of the one-bounce pass plus under 10 % ({@link MemoryEstimate}); time: the
+ * later bounces cost 1/24 of bounce 1 each.
+ *
+ * <p>Determinism: each receiver's bounce is summed in its list's order into its own slots, and the
+ * energy sums run in receiver order after the parallel part, so nothing depends on the thread count.
+ */
+final class Reflection {
+    static final int SLOTS = StepTable.SLOTS;
+    /** Default stopping fraction: the last bounce adds at most 0.5 % of the reflected total (our choice). */
+    static final double DEFAULT_TOLERANCE = 0.005;
+    /** Default largest number of bounces (our choice: at albedo 0.5 in an H/W 2 canyon, 4-6 suffice). */
+    static final int DEFAULT_MAX_BOUNCES = 20;
+
+    /**
+     * Reflector lists of every receiver.
+     *
+     * @param idx receivers hit, ascending, per receiver
+     * @param w weights {@code (1/N) sum rho} per entry
+     * @param w2 {@code (1/N) sum rho^2} per entry, analysed patches only (for the standard error)
+     * @param ghiW weight of hits lit by GHI, per receiver
+     * @param ghiW2 {@code (1/N) sum rho^2} of those hits, analysed patches only
+     * @param rays hemisphere rays N per receiver kind: analysed patches
+     */
+    record Lists(int[][] idx, float[][] w, float[][] w2, float[] ghiW, float[] ghiW2, int rays) {}
+
+    /**
+     * The outcome for the analysed patches.
+     *
+     * @param reflMonthWh reflected irradiation per month [12][analysed], Wh/m2
+     * @param monthHourWh reflected irradiation per analysed patch and slot (patch x 288), Wh/m2; null unless kept
+     * @param totalAnnualWh first pass + reflected, annual, of every receiver, Wh/m2
+     * @param bounceWh energy added by each bounce used, summed over the analysed patches, Wh/m2
+     * @param converged whether the last bounce met the tolerance (false: stopped at the maximum)
+     */
+    record Outcome(double[][] reflMonthWh, float[] monthHourWh, double[] totalAnnualWh, double[] bounceWh,
+                   boolean converged) {
+        int bounces() { return bounceWh.length; }
+    }
+
+    private Reflection() {}
+
+    static Outcome solve(double[] firstPass, Lists l, int analysed, StepTable st, double tolerance, int maxBounces,
+                         boolean keepMonthHour, PhaseProgress progress) {
+        int total = l.idx().length, n = analysed;
+        double[] cur = new double[total * 12], next = new double[total * 12];
+        double[][] reflMonth = new double[12][n];
+        double[] firstBounceMonth = keepMonthHour ? new double[n * 12] : null;
+        float[] monthHour = keepMonthHour ? new float[n * SLOTS] : null;
+        double[] totalAnnual = new double[total];
+        double[] added = new double[total];
+        for (int r = 0; r < total; r++) {
+            double s = 0;
+            for (int k = 0; k < SLOTS; k++) s += firstPass[r * SLOTS + k];
+            totalAnnual[r] = s;
+        }
+        int[] slotMonth = new int[SLOTS];
+        for (int k = 0; k < SLOTS; k++) slotMonth[k] = org.solmass.climate.MonthHour.month(k) - 1;
+        double[] bounceWh = new double[Math.max(1, maxBounces)];
+        double reflected = 0;
+        int used = 0;
+        boolean converged = false;
+        progress.begin("reflection", maxBounces);
+        for (int b = 0; b < maxBounces; b++) {
+            final double[] src = cur, dst = next;
+            if (b == 0) { // bounce 1, slot by slot: the month-hour table needs its profile
+                ThreadLocal<double[]> scratch = ThreadLocal.withInitial(() -> new double[SLOTS]);
+                IntStream.range(0, total).parallel().forEach(r -> {
+                    double[] acc = scratch.get();
+                    java.util.Arrays.fill(acc, 0);
+                    int[] idx = l.idx()[r];
+                    float[] wt = l.w()[r];
+                    for (int i = 0; i < idx.length; i++) {
+                        int base = idx[i] * SLOTS;
+                        double wr = wt[i];
+                        for (int k = 0; k < SLOTS; k++) acc[k] += wr * firstPass[base + k];
+                    }
+                    double g = l.ghiW()[r];
+                    for (int k = 0; k < SLOTS; k++) acc[k] += g * st.ghiWh[k];
+                    int m0 = r * 12;
+                    for (int m = 0; m < 12; m++) dst[m0 + m] = 0;
+                    for (int k = 0; k < SLOTS; k++) dst[m0 + slotMonth[k]] += acc[k];
+                    if (r < n && monthHour != null) {
+                        for (int k = 0; k < SLOTS; k++) monthHour[r * SLOTS + k] = (float) acc[k];
+                        System.arraycopy(dst, m0, firstBounceMonth, m0, 12);
+                    }
+                    finish(r, n, dst, reflMonth, added, totalAnnual);
+                });
+            } else { // later bounces month by month: W acts on every slot alike, so month sums are exact
+                IntStream.range(0, total).parallel().forEach(r -> {
+                    int[] idx = l.idx()[r];
+                    float[] wt = l.w()[r];
+                    int m0 = r * 12;
+                    for (int m = 0; m < 12; m++) dst[m0 + m] = 0;
+                    for (int i = 0; i < idx.length; i++) {
+                        int base = idx[i] * 12;
+                        double wr = wt[i];
+                        for (int m = 0; m < 12; m++) dst[m0 + m] += wr * src[base + m];
+                    }
+                    finish(r, n, dst, reflMonth, added, totalAnnual);
+                });
+            }
+            double add = 0;
+            for (int r = 0; r < n; r++) add += added[r];
+            reflected += add;
+            bounceWh[b] = add;
+            used = b + 1;
+            double[] t = cur;
+            cur = next;
+            next = t;
+            progress.advance(used);
+            if (add <= tolerance * reflected) {
+                converged = true;
+                break;
+            }
+        }
+        if (monthHour != null) laterBouncesIntoSlots(firstPass, n, reflMonth, firstBounceMonth, monthHour, slotMonth, st);
+        return new Outcome(reflMonth, monthHour, totalAnnual, java.util.Arrays.copyOf(bounceWh, used), converged);
+    }
+
+    private static void finish(int r, int n, double[] dst, double[][] reflMonth, double[] added, double[] totalAnnual) {
+        double sum = 0;
+        int m0 = r * 12;
+        for (int m = 0; m < 12; m++) {
+            sum += dst[m0 + m];
+            if (r < n) reflMonth[m][r] += dst[m0 + m];
+        }
+        added[r] = sum;
+        totalAnnual[r] += sum;
+    }
+
+    /**
+     * The month-hour table of the analysed patches: bounce 1 is known per slot; the later bounces'
+     * month sums are spread over the month's slots in proportion to bounce 1 (they are its light
+     * reflected again), else to the first pass, else to the hours. An approximation of the table
+     * only: monthly and annual sums are exact.
+     */
+    private static void laterBouncesIntoSlots(double[] firstPass, int n, double[][] reflMonth, double[] firstBounceMonth,
+                                              float[] monthHour, int[] slotMonth, StepTable st) {
+        IntStream.range(0, n).parallel().forEach(p -> {
+            double[] later = new double[12], fpMonth = new double[12], hoursMonth = new double[12];
+            for (int m = 0; m < 12; m++) later[m] = reflMonth[m][p] - firstBounceMonth[p * 12 + m];
+            int base = p * SLOTS;
+            for (int k = 0; k < SLOTS; k++) {
+                fpMonth[slotMonth[k]] += firstPass[base + k];
+                hoursMonth[slotMonth[k]] += st.hours[k];
+            }
+            for (int k = 0; k < SLOTS; k++) {
+                int m = slotMonth[k];
+                if (!(later[m] > 0)) continue;
+                double share = firstBounceMonth[p * 12 + m] > 0 ? monthHour[base + k] / firstBounceMonth[p * 12 + m]
+                        : fpMonth[m] > 0 ? firstPass[base + k] / fpMonth[m]
+                        : hoursMonth[m] > 0 ? st.hours[k] / hoursMonth[m] : 0;
+                monthHour[base + k] += (float) (later[m] * share);
+            }
+        });
+    }
+
+    /**
+     * Standard error of an analysed patch's annual irradiation from its hemisphere rays, Wh/m2.
+     * Each ray s is one sample {@code Y_s} of the hemisphere part of the annual sum: the sky
+     * background per unit sky view factor {@code B} when it reaches the sky, {@code rho E_j} when it
+     * hits receiver j (E_j its annual total after all bounces), {@code rho GHI} for GHI-lit hits, 0
+     * otherwise; the estimate is their mean. The sample variance over N rays gives
+     * {@code SE = sqrt(s^2 / N)}, {@code s^2 = N/(N-1) (mean(Y^2) - mean(Y)^2)}, with mean(Y^2)
+     * taken from the lists ({@code sum_j w2_j E_j^2}). This treats the rays as independent: the
+     * sampler stratifies them, whose variance is never larger (stratified sampling, e.g. Owen,
+     * Monte Carlo theory, methods and examples, 2013, ch. 8), so the value is an upper bound in
+     * expectation. Left out: the noise of the E_j themselves (their own rays, independent, weighted
+     * by w_j^2) and the nearest-patch discretisation (a bias, not noise). Sun and horizon band rays
+     * are a fixed quadrature, without sampling noise.
+     */
+    static double stdErrorWh(int p, Lists l, double skyShare, double backgroundAnnualWh, double ghiAnnualWh,
+                             double[] totalAnnualWh) {
+        int rays = l.rays();
+        if (rays < 2) return Double.NaN;
+        double mean = skyShare * backgroundAnnualWh + l.ghiW()[p] * ghiAnnualWh;
+        double sq = skyShare * backgroundAnnualWh * backgroundAnnualWh + l.ghiW2()[p] * ghiAnnualWh * ghiAnnualWh;
+        int[] idx = l.idx()[p];
+        float[] w = l.w()[p], w2 = l.w2()[p];
+        for (int i = 0; i < idx.length; i++) {
+            double e = totalAnnualWh[idx[i]];
+            mean += w[i] * e;
+            sq += w2[i] * e * e;
+        }
+        double var = Math.max(0, sq - mean * mean) * rays / (rays - 1.0);
+        return Math.sqrt(var / rays);
+    }
+}
