@@ -37,7 +37,10 @@ import java.util.stream.IntStream;
  *
  * <p>The sky diffuse of a slot is the sky package's three-part sum {@link DiffuseParts#sum} of the
  * slot's parts (kept at or above zero: the Perez horizon term may be negative); the clamp acts on
- * slot sums.
+ * slot sums. With a radiance distribution ({@link org.solmass.sky.SkyDistribution}) it is instead the
+ * dot product of the receiver's visible sky-patch shares ({@link SkyPatchView}, from the same
+ * hemisphere rays) with the slot's radiance vector ({@link StepTable#skyWh}); no separate
+ * circumsolar or horizon term.
  *
  * <p>Determinism: receivers are computed in parallel, each from its own ray seed into its own
  * array slots, so results do not depend on the thread count.
@@ -170,6 +173,8 @@ public final class ShadedIrradiation {
         final long[] refKey;
         final double[] horizonDir = new double[3 * HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
         final double[] horizonCosElev = new double[HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
+        /** A radiance distribution's per-patch view of the sky, or null for a three-part sky model. */
+        final SkyPatchView skyView;
         ViewFactors vf;
         double horizonVis, unshadedTotal, ghiAlbedo, sunshineHours;
         int refCount;
@@ -194,6 +199,7 @@ public final class ShadedIrradiation {
             refIdx = new int[maxRays];
             refW = new float[maxRays];
             refKey = new long[maxRays];
+            skyView = in.steps().skyPatches != null ? new SkyPatchView(in.steps().skyPatches) : null;
             int h = 0;
             for (int e = 0; e < HORIZON_ELEVATIONS; e++) {
                 double el = Math.toRadians((e + 0.5) * HORIZON_BAND_DEG / HORIZON_ELEVATIONS);
@@ -215,6 +221,7 @@ public final class ShadedIrradiation {
             HemisphereSampler hs = analysed ? sampler : reflectorSampler;
             hs.sample(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), dir, cls, tri, dist);
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
+            if (skyView != null) skyView.measure(nx, ny, nz, dir, cls, hs.rayCount());
             if (analysed) collectReflectors(hs.rayCount(), ox, oy, oz);
             horizonVis = horizonVisibility(ox, oy, oz, nx, ny, nz);
             sunVisibility(ox, oy, oz, nx, ny, nz);
@@ -331,12 +338,14 @@ public final class ShadedIrradiation {
             Arrays.fill(diffMonth, 0);
             double unshadedSum = 0, ga = in.groundAlbedo();
             for (int k = 0; k < SLOTS; k++) {
-                double diff = DiffuseParts.sum(st.backgroundWh[k], svf, circSlot[k], st.horizonWh[k], hz);
+                double diff = skyView == null ? DiffuseParts.sum(st.backgroundWh[k], svf, circSlot[k], st.horizonWh[k], hz)
+                        : st.dhiWh[k] > 0 ? skyView.diffuse(skyView.visible, st.skyWh, k) : 0;
                 slotTotal[k] = beamSlot[k] + diff;
                 if (analysed) {
                     beamMonth[MonthHour.month(k) - 1] += beamSlot[k];
                     diffMonth[MonthHour.month(k) - 1] += diff;
-                    double diffU = DiffuseParts.sum(st.backgroundWh[k], svfU, circUSlot[k], st.horizonWh[k], sinTilt);
+                    double diffU = skyView == null ? DiffuseParts.sum(st.backgroundWh[k], svfU, circUSlot[k], st.horizonWh[k], sinTilt)
+                            : st.dhiWh[k] > 0 ? skyView.diffuse(skyView.unobstructed, st.skyWh, k) : 0;
                     unshadedSum += beamUSlot[k] + diffU + ga * gvfU * st.ghiWh[k];
                 }
             }

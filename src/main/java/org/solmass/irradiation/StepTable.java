@@ -4,7 +4,9 @@ import org.solmass.climate.MonthHour;
 import org.solmass.climate.Step;
 import org.solmass.climate.WeatherSeries;
 import org.solmass.sky.DiffuseParts;
+import org.solmass.sky.SkyDistribution;
 import org.solmass.sky.SkyModel;
+import org.solmass.sky.SkyPatches;
 
 /**
  * The weather series flattened for the per-patch kernel: one entry per sun-up step with the sun
@@ -50,6 +52,15 @@ final class StepTable {
     final double[] dhiWh = new double[SLOTS];
     /** Per slot: weighted hours (days x hours the slot stands for). */
     final double[] hours = new double[SLOTS];
+    /** A radiance distribution's sky patches ({@link SkyPatches#TREGENZA}), or null for a three-part sky model. */
+    final SkyPatches skyPatches;
+    /**
+     * A radiance distribution only (else null): per slot and sky patch, the step's normalised patch
+     * radiance ({@link SkyDistribution#patchRadiance}) x weighted hours, summed over the slot's steps,
+     * Wh/m2 per unit cosine-weighted patch share; index {@code slot x patches + patch}. The slot's
+     * whole sky diffuse on a patch is the dot product with the patch's visible shares.
+     */
+    final double[] skyWh;
 
     StepTable(WeatherSeries series, SunDirections dirs, SkyModel sky) {
         int n = 0;
@@ -64,6 +75,11 @@ final class StepTable {
         circumsolarWh = new double[n];
         cosZenith = new float[n];
         sunshineHours = new double[n];
+        SkyDistribution dist = sky instanceof SkyDistribution d ? d : null;
+        skyPatches = dist != null ? SkyPatches.TREGENZA : null;
+        int np = dist != null ? skyPatches.count() : 0;
+        skyWh = dist != null ? new double[SLOTS * np] : null;
+        double[] radiance = new double[np];
         double site = 0;
         int k = 0;
         for (int s = 0; s < series.size(); s++) {
@@ -73,7 +89,11 @@ final class StepTable {
             hours[sl] += wh;
             ghiWh[sl] += st.ghiWm2() * wh;
             dhiWh[sl] += st.dhiWm2() * wh;
-            DiffuseParts parts = sky.parts(st);
+            DiffuseParts parts = dist != null ? DiffuseParts.NONE : sky.parts(st);
+            if (dist != null && st.dhiWm2() > 0) {
+                dist.patchRadiance(st, skyPatches, radiance);
+                for (int p = 0; p < np; p++) skyWh[sl * np + p] += radiance[p] * wh;
+            }
             if (parts != DiffuseParts.NONE) {
                 backgroundWh[sl] += parts.backgroundPerSvf() * wh;
                 horizonWh[sl] += parts.horizon() * wh;
