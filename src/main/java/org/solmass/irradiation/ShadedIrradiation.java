@@ -199,7 +199,7 @@ public final class ShadedIrradiation {
             refIdx = new int[maxRays];
             refW = new float[maxRays];
             refKey = new long[maxRays];
-            skyView = in.steps().skyPatches != null ? new SkyPatchView(in.steps().skyPatches) : null;
+            skyView = in.steps().skyPatches != null ? new SkyPatchView(in.steps().skyPatches, bundle) : null;
             int h = 0;
             for (int e = 0; e < HORIZON_ELEVATIONS; e++) {
                 double el = Math.toRadians((e + 0.5) * HORIZON_BAND_DEG / HORIZON_ELEVATIONS);
@@ -221,7 +221,7 @@ public final class ShadedIrradiation {
             HemisphereSampler hs = analysed ? sampler : reflectorSampler;
             hs.sample(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), dir, cls, tri, dist);
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
-            if (skyView != null) skyView.measure(nx, ny, nz, dir, cls, hs.rayCount());
+            if (skyView != null) skyView.measure(ox, oy, oz, nx, ny, nz, dir, cls, hs.rayCount());
             if (analysed) collectReflectors(hs.rayCount(), ox, oy, oz);
             horizonVis = horizonVisibility(ox, oy, oz, nx, ny, nz);
             sunVisibility(ox, oy, oz, nx, ny, nz);

@@ -146,6 +146,29 @@ public final class SkyPatches {
         }
     }
 
+    /**
+     * A direction into patch p in front of the plane of unit normal n: the mean direction of the
+     * patch's cell with the largest {@code n . V} (its most heavily weighted cell), into
+     * {@code out[3s..3s+2]}; false when no cell of the patch lies in front.
+     */
+    public boolean frontDirection(int p, double nx, double ny, double nz, double[] out, int s) {
+        int best = -1;
+        double bv = 0;
+        for (int c = patchFirstCell[p]; c < patchFirstCell[p + 1]; c++) {
+            double v = nx * cellV[3 * c] + ny * cellV[3 * c + 1] + nz * cellV[3 * c + 2];
+            double d = nx * cellDir[3 * c] + ny * cellDir[3 * c + 1] + nz * cellDir[3 * c + 2];
+            if (v > bv && d > 0) {
+                bv = v;
+                best = c;
+            }
+        }
+        if (best < 0) return false;
+        out[3 * s] = cellDir[3 * best];
+        out[3 * s + 1] = cellDir[3 * best + 1];
+        out[3 * s + 2] = cellDir[3 * best + 2];
+        return true;
+    }
+
     /** Cosine-weighted share of patch p seen by an unobstructed horizontal plane (the shares sum to 1). */
     public double horizontalShare(int p) { return horizontalShare[p]; }
 
