@@ -107,12 +107,14 @@ public final class CieSky implements SkyDistribution {
 
     @Override
     public Radiance radiance(Step step) {
-        if (type == 0) return (dx, dy, dz) -> overcastRelative(dz);
-        var s = step.sun().direction();
-        double sx = s.x(), sy = s.y(), sz = s.z();
-        return (dx, dy, dz) -> {
-            double cc = Math.max(-1, Math.min(1, dx * sx + dy * sy + dz * sz));
-            return gradation(dz) * indicatrix(Math.acos(cc)); // the constant denominator cancels in the normalisation
+        return new Radiance() { // the constant denominator f(Zs) phi(0) cancels in the normalisation
+            @Override public double gradation(double cosZenith) {
+                return type == 0 ? overcastRelative(cosZenith) : CieSky.this.gradation(cosZenith);
+            }
+
+            @Override public double indicatrix(double cosToSun) {
+                return type == 0 ? 1 : CieSky.this.indicatrix(Math.acos(Math.max(-1, Math.min(1, cosToSun))));
+            }
         };
     }
 }

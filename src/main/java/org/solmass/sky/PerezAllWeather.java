@@ -68,8 +68,15 @@ public final class PerezAllWeather implements SkyDistribution {
 
     /** Relative luminance of eq. 1 for coefficients {a..e}, cos of the element's zenith angle and its angle to the sun (radians). */
     public static double luminance(double[] k, double cosZeta, double gammaRad) {
-        double cg = Math.cos(gammaRad);
-        return (1 + k[0] * Math.exp(k[1] / Math.max(MIN_COS_ZETA, cosZeta))) * (1 + k[2] * Math.exp(k[3] * gammaRad) + k[4] * cg * cg);
+        return gradation(k, cosZeta) * indicatrix(k, Math.cos(gammaRad), gammaRad);
+    }
+
+    private static double gradation(double[] k, double cosZeta) {
+        return 1 + k[0] * Math.exp(k[1] / Math.max(MIN_COS_ZETA, cosZeta));
+    }
+
+    private static double indicatrix(double[] k, double cosGamma, double gammaRad) {
+        return 1 + k[2] * Math.exp(k[3] * gammaRad) + k[4] * cosGamma * cosGamma;
     }
 
     @Override
@@ -81,11 +88,13 @@ public final class PerezAllWeather implements SkyDistribution {
         double z = Math.toRadians(zenithDeg);
         double delta = Perez.airMass(zenithDeg) * dhi / step.extraNormalWm2();
         double[] k = coefficients(Perez.bin(Perez.clearness(dhi, dni, z)), delta, z);
-        var s = step.sun().direction();
-        double sx = s.x(), sy = s.y(), sz = s.z();
-        return (dx, dy, dz) -> {
-            double c = Math.max(-1, Math.min(1, dx * sx + dy * sy + dz * sz));
-            return luminance(k, dz, Math.acos(c));
+        return new Radiance() {
+            @Override public double gradation(double cosZenith) { return PerezAllWeather.gradation(k, cosZenith); }
+
+            @Override public double indicatrix(double cosToSun) {
+                double c = Math.max(-1, Math.min(1, cosToSun));
+                return PerezAllWeather.indicatrix(k, c, Math.acos(c));
+            }
         };
     }
 }

@@ -16,10 +16,18 @@ import org.solmass.climate.Step;
  */
 public interface SkyDistribution extends SkyModel {
 
-    /** Relative radiance of the sky in a direction (unit vector; x east, y north, z up, dz >= 0); any positive scale. */
-    @FunctionalInterface
+    /**
+     * Relative radiance of the sky (any positive scale) as the product of a gradation, a function of
+     * the sky element's zenith angle, and an indicatrix, a function of its angle to the sun: the form
+     * of Perez et al. (1993) eq. 1 and of ISO 15469. {@link SkyPatches#normalised} evaluates the
+     * gradation once per row of cells and the indicatrix once per cell.
+     */
     interface Radiance {
-        double at(double dx, double dy, double dz);
+        /** The gradation factor for a sky element with this cos(zenith angle), in [0, 1]. */
+        double gradation(double cosZenith);
+
+        /** The indicatrix factor for a sky element at this cos(angle to the sun), in [-1, 1]; 1 for skies without one. */
+        double indicatrix(double cosToSun);
     }
 
     /**
@@ -44,6 +52,7 @@ public interface SkyDistribution extends SkyModel {
             java.util.Arrays.fill(out, 0, patches.count(), 0);
             return;
         }
-        patches.normalised(step.sun().cosZenith() > 0 ? radiance(step) : null, dhi, out);
+        var sun = step.sun().direction();
+        patches.normalised(step.sun().cosZenith() > 0 ? radiance(step) : null, sun.x(), sun.y(), sun.z(), dhi, out);
     }
 }

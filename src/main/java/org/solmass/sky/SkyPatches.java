@@ -39,6 +39,9 @@ public final class SkyPatches {
     /** Per cell: exact vector integral (x, y, z), solid angle, mean direction; cells of a patch are contiguous. */
     private final double[] cellV, cellW, cellDir;
     private final int[] patchFirstCell;
+    /** Per cell: index of its row of cells (cells of a row share their elevation range, so their cos zenith); per row: cos zenith. */
+    private final int[] cellRow;
+    private final double[] rowCosZenith;
     private final double[] horizontalShare;
 
     /** @param split m >= 1: every Tregenza band cut into m bands of m times as many patches */
@@ -66,6 +69,8 @@ public final class SkyPatches {
         cellW = new double[cells];
         cellDir = new double[3 * cells];
         patchFirstCell = new int[count + 1];
+        cellRow = new int[cells];
+        rowCosZenith = new double[rows * q + q];
         int c = 0;
         for (int r = 0; r < rows; r++) {
             double e0 = Math.toRadians(r * BAND_DEG / split), e1 = Math.toRadians((r + 1) * BAND_DEG / split);
@@ -75,6 +80,7 @@ public final class SkyPatches {
                 double a0 = 2 * Math.PI * k / n, a1 = 2 * Math.PI * (k + 1) / n;
                 for (int i = 0; i < q; i++) {
                     for (int j = 0; j < q; j++) {
+                        cellRow[c] = r * q + i;
                         cell(c++, e0 + (e1 - e0) * i / q, e0 + (e1 - e0) * (i + 1) / q,
                                 a0 + (a1 - a0) * j / q, a0 + (a1 - a0) * (j + 1) / q);
                     }
@@ -85,11 +91,13 @@ public final class SkyPatches {
         double c0 = Math.toRadians(CAP_FROM_DEG);
         for (int i = 0; i < q; i++) {
             for (int j = 0; j < capSectors; j++) {
+                cellRow[c] = rows * q + i;
                 cell(c++, c0 + (Math.PI / 2 - c0) * i / q, c0 + (Math.PI / 2 - c0) * (i + 1) / q,
                         2 * Math.PI * j / capSectors, 2 * Math.PI * (j + 1) / capSectors);
             }
         }
         patchFirstCell[count] = c;
+        for (int k = 0; k < c; k++) rowCosZenith[cellRow[k]] = cellDir[3 * k + 2];
         horizontalShare = new double[count];
         cosineShares(0, 0, 1, horizontalShare);
     }
@@ -183,16 +191,22 @@ public final class SkyPatches {
      * The radiance of every patch, normalised so that an unobstructed horizontal plane receives
      * {@code horizontalWm2}: {@code out[p] = horizontalWm2 x Lmean_p / sum_q (h_q Lmean_q)}, with
      * Lmean_p the patch's solid-angle-weighted mean of {@code radiance} and h_q
-     * {@link #horizontalShare}. A plane then receives {@code sum_p share_p out[p]}. A radiance
-     * function that is 0 everywhere (or null) gives the uniform sky.
+     * {@link #horizontalShare}. A plane then receives {@code sum_p share_p out[p]}. The radiance
+     * of a cell is {@code max(0, gradation x indicatrix)} at its mean direction, (sx, sy, sz) the sun's
+     * unit vector. A radiance that is 0 everywhere (or null) gives the uniform sky. Allocates one
+     * array of row gradations.
      */
-    public void normalised(SkyDistribution.Radiance radiance, double horizontalWm2, double[] out) {
+    public void normalised(SkyDistribution.Radiance radiance, double sx, double sy, double sz, double horizontalWm2,
+                           double[] out) {
+        double[] g = new double[rowCosZenith.length];
+        if (radiance != null) for (int r = 0; r < g.length; r++) g[r] = radiance.gradation(rowCosZenith[r]);
         double total = 0;
         for (int p = 0; p < count; p++) {
             double s = 0, w = 0;
             if (radiance != null) {
                 for (int c = patchFirstCell[p]; c < patchFirstCell[p + 1]; c++) {
-                    s += cellW[c] * Math.max(0, radiance.at(cellDir[3 * c], cellDir[3 * c + 1], cellDir[3 * c + 2]));
+                    double cg = sx * cellDir[3 * c] + sy * cellDir[3 * c + 1] + sz * cellDir[3 * c + 2];
+                    s += cellW[c] * Math.max(0, g[cellRow[c]] * radiance.indicatrix(cg));
                     w += cellW[c];
                 }
             }
