@@ -167,6 +167,8 @@ public final class ShadedIrradiation {
         final double[] beamSlot = new double[SLOTS], circSlot = new double[SLOTS];
         final double[] beamUSlot = new double[SLOTS], circUSlot = new double[SLOTS];
         final double[] slotTotal = new double[SLOTS];
+        /** Sky diffuse per slot from a radiance distribution, shaded and unshaded (scratch). */
+        final double[] skySlot = new double[SLOTS], skyUSlot = new double[SLOTS];
         final double[] beamMonth = new double[12], diffMonth = new double[12];
         final int[] refIdx;
         final float[] refW;
@@ -337,15 +339,19 @@ public final class ShadedIrradiation {
             Arrays.fill(beamMonth, 0);
             Arrays.fill(diffMonth, 0);
             double unshadedSum = 0, ga = in.groundAlbedo();
+            if (skyView != null) {
+                skyView.slotSums(skyView.visible, st.skyWh, skySlot);
+                if (analysed) skyView.slotSums(skyView.unobstructed, st.skyWh, skyUSlot);
+            }
             for (int k = 0; k < SLOTS; k++) {
                 double diff = skyView == null ? DiffuseParts.sum(st.backgroundWh[k], svf, circSlot[k], st.horizonWh[k], hz)
-                        : st.dhiWh[k] > 0 ? skyView.diffuse(skyView.visible, st.skyWh, k) : 0;
+                        : Math.max(0, skySlot[k]);
                 slotTotal[k] = beamSlot[k] + diff;
                 if (analysed) {
                     beamMonth[MonthHour.month(k) - 1] += beamSlot[k];
                     diffMonth[MonthHour.month(k) - 1] += diff;
                     double diffU = skyView == null ? DiffuseParts.sum(st.backgroundWh[k], svfU, circUSlot[k], st.horizonWh[k], sinTilt)
-                            : st.dhiWh[k] > 0 ? skyView.diffuse(skyView.unobstructed, st.skyWh, k) : 0;
+                            : Math.max(0, skyUSlot[k]);
                     unshadedSum += beamUSlot[k] + diffU + ga * gvfU * st.ghiWh[k];
                 }
             }

@@ -19,9 +19,9 @@ import java.util.Arrays;
  * Unobstructed, every fraction is 1 and the receiver gets the distribution's exact value on its
  * plane (an unobstructed horizontal patch: DHI to rounding).
  *
- * <p>Per slot the sky diffuse is then one dot product with the slot's radiance vector
- * ({@link StepTable#skyWh}), {@code max(0, sum_p visible_p skyWh[slot, p])}. Per thread; allocates
- * nothing per receiver.
+ * <p>Per slot the sky diffuse is then {@code max(0, sum_p visible_p skyWh[p, slot])} with the slot's
+ * radiance vector ({@link StepTable#skyWh}), summed for all slots at once ({@link #slotSums}). Per
+ * thread; allocates nothing per receiver.
  */
 final class SkyPatchView {
     private final SkyPatches patches;
@@ -76,11 +76,19 @@ final class SkyPatchView {
         }
     }
 
-    /** Sky diffuse of slot k on these shares, Wh/m2, >= 0. */
-    double diffuse(double[] shares, double[] skyWh, int k) {
-        int base = k * np;
-        double v = 0;
-        for (int p = 0; p < np; p++) v += shares[p] * skyWh[base + p];
-        return Math.max(0, v);
+    /**
+     * Sky diffuse of every slot on these shares into {@code out} (Wh/m2, not yet clamped):
+     * {@code out[k] = sum_p shares[p] skyWh[p, k]}, patch by patch (an axpy over the slots the JIT
+     * vectorises; patches with share 0 skipped).
+     */
+    void slotSums(double[] shares, double[] skyWh, double[] out) {
+        int slots = out.length;
+        Arrays.fill(out, 0);
+        for (int p = 0; p < np; p++) {
+            double w = shares[p];
+            if (w == 0) continue;
+            int base = p * slots;
+            for (int k = 0; k < slots; k++) out[k] += w * skyWh[base + k];
+        }
     }
 }

@@ -57,8 +57,9 @@ final class StepTable {
     /**
      * A radiance distribution only (else null): per slot and sky patch, the step's normalised patch
      * radiance ({@link SkyDistribution#patchRadiance}) x weighted hours, summed over the slot's steps,
-     * Wh/m2 per unit cosine-weighted patch share; index {@code slot x patches + patch}. The slot's
-     * whole sky diffuse on a patch is the dot product with the patch's visible shares.
+     * Wh/m2 per unit cosine-weighted patch share; index {@code patch x SLOTS + slot} (patch-major, so
+     * that a receiver adds one patch's row to all its slots in one vectorisable loop). The slot's
+     * whole sky diffuse on a patch is the sum over patches of the patch's visible share times this.
      */
     final double[] skyWh;
 
@@ -92,7 +93,7 @@ final class StepTable {
             DiffuseParts parts = dist != null ? DiffuseParts.NONE : sky.parts(st);
             if (dist != null && st.dhiWm2() > 0) {
                 dist.patchRadiance(st, skyPatches, radiance);
-                for (int p = 0; p < np; p++) skyWh[sl * np + p] += radiance[p] * wh;
+                for (int p = 0; p < np; p++) skyWh[p * SLOTS + sl] += radiance[p] * wh;
             }
             if (parts != DiffuseParts.NONE) {
                 backgroundWh[sl] += parts.backgroundPerSvf() * wh;
