@@ -36,6 +36,8 @@ public final class SkyPatches {
     /** Per row of patches: sin of its lower edge, its first patch and its patch count; the cap is the last patch. */
     private final double[] rowSinLow;
     private final int[] rowFirst, rowCount;
+    /** Per row: cos and sin of the azimuth boundaries 2 pi k / n, k = 0 .. n/2 (every row's count is even). */
+    private final double[][] rowBoundCos, rowBoundSin;
     /** Per cell: exact vector integral (x, y, z), solid angle, mean direction; cells of a patch are contiguous. */
     private final double[] cellV, cellW, cellDir;
     private final int[] patchFirstCell;
@@ -59,6 +61,17 @@ public final class SkyPatches {
             rowFirst[r] = p;
             rowCount[r] = TREGENZA_BAND[r / split] * split;
             p += rowCount[r];
+        }
+        rowBoundCos = new double[rows][];
+        rowBoundSin = new double[rows][];
+        for (int r = 0; r < rows; r++) {
+            int half = rowCount[r] / 2;
+            rowBoundCos[r] = new double[half];
+            rowBoundSin[r] = new double[half];
+            for (int k = 0; k < half; k++) {
+                rowBoundCos[r][k] = Math.cos(2 * Math.PI * k / rowCount[r]);
+                rowBoundSin[r][k] = Math.sin(2 * Math.PI * k / rowCount[r]);
+            }
         }
         rowSinLow[rows] = Math.sin(Math.toRadians(CAP_FROM_DEG));
         rowFirst[rows] = p;
@@ -132,11 +145,24 @@ public final class SkyPatches {
         int r = 0;
         while (r < rows && dz >= rowSinLow[r + 1]) r++;
         if (r == rows) return count - 1;
-        double az = Math.atan2(dx, dy);
-        if (az < 0) az += 2 * Math.PI;
-        int n = rowCount[r];
-        int k = (int) (az * n / (2 * Math.PI));
-        return rowFirst[r] + Math.min(n - 1, k);
+        // azimuth cell without atan2: fold the western half onto the eastern one (every row's count is
+        // even, so pi is a boundary), then binary search the boundaries phi_k by the sign of
+        // sin(phi - phi_k) = (dx cos phi_k - dy sin phi_k) / |d_h|, monotone for phi, phi_k in [0, pi)
+        int half = rowCount[r] / 2, off = 0;
+        double hx = dx, hy = dy;
+        if (hx < 0 || (hx == 0 && hy < 0)) {
+            hx = -hx;
+            hy = -hy;
+            off = half;
+        }
+        double[] bc = rowBoundCos[r], bs = rowBoundSin[r];
+        int lo = 0, hi = half - 1;
+        while (lo < hi) {
+            int mid = (lo + hi + 1) >>> 1;
+            if (hx * bc[mid] - hy * bs[mid] >= 0) lo = mid;
+            else hi = mid - 1;
+        }
+        return rowFirst[r] + off + lo;
     }
 
     /**

@@ -60,5 +60,24 @@ class SkyPatchesTest {
         assertEquals(144, sp.patchOf(0, 0, 1));               // the zenith cap is the last patch
         double e = Math.toRadians(13), az = Math.toRadians(95); // second band (12-24 deg), 30 patches of 12 deg: cell 7
         assertEquals(30 + 7, sp.patchOf(Math.cos(e) * Math.sin(az), Math.cos(e) * Math.cos(az), Math.sin(e)));
+        // every direction: the patch from elevation band and azimuth by atan2, written out here
+        java.util.Random rnd = new java.util.Random(3);
+        int[] counts = {30, 30, 24, 24, 18, 12, 6};
+        for (int i = 0; i < 100_000; i++) {
+            double el = Math.asin(rnd.nextDouble()), a = 2 * Math.PI * rnd.nextDouble();
+            double dx = Math.cos(el) * Math.sin(a), dy = Math.cos(el) * Math.cos(a), dz = Math.sin(el);
+            double elDeg = Math.toDegrees(el), azDeg = Math.toDegrees(Math.atan2(dx, dy));
+            if (azDeg < 0) azDeg += 360;
+            int band = (int) (elDeg / 12), expected;
+            if (band >= 7) expected = 144;
+            else {
+                int first = 0;
+                for (int b = 0; b < band; b++) first += counts[b];
+                expected = first + (int) (azDeg / (360.0 / counts[band]));
+            }
+            double edge = Math.min(Math.abs(elDeg / 12 - Math.rint(elDeg / 12)), band >= 7 ? 1 : Math.abs(azDeg / (360.0 / counts[band])
+                    - Math.rint(azDeg / (360.0 / counts[band]))));
+            if (edge > 1e-9) assertEquals(expected, sp.patchOf(dx, dy, dz), "elevation " + elDeg + " azimuth " + azDeg);
+        }
     }
 }
