@@ -38,7 +38,10 @@ import java.util.stream.IntStream;
  *
  * <p>The sky diffuse of a slot is the sky package's three-part sum {@link DiffuseParts#sum} of the
  * slot's parts (kept at or above zero: the Perez horizon term may be negative); the clamp acts on
- * slot sums.
+ * slot sums. With a radiance distribution ({@link org.solmass.sky.SkyDistribution}) it is instead the
+ * dot product of the receiver's visible sky-patch shares ({@link SkyPatchView}, from the same
+ * hemisphere rays) with the slot's radiance vector ({@link StepTable#skyWh}); no separate
+ * circumsolar or horizon term.
  *
  * <p>Determinism: receivers are computed in parallel, each from its own ray seed into its own
  * array slots, so results do not depend on the thread count.
@@ -168,12 +171,16 @@ public final class ShadedIrradiation {
         final double[] beamSlot = new double[SLOTS], circSlot = new double[SLOTS];
         final double[] beamUSlot = new double[SLOTS], circUSlot = new double[SLOTS];
         final double[] slotTotal = new double[SLOTS];
+        /** Sky diffuse per slot from a radiance distribution, shaded and unshaded (scratch). */
+        final double[] skySlot = new double[SLOTS], skyUSlot = new double[SLOTS];
         final double[] beamMonth = new double[12], diffMonth = new double[12];
         final int[] refIdx;
         final float[] refW, refW2;
         final long[] refKey;
         final double[] horizonDir = new double[3 * HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
         final double[] horizonCosElev = new double[HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
+        /** A radiance distribution's per-patch view of the sky, or null for a three-part sky model. */
+        final SkyPatchView skyView;
         ViewFactors vf;
         double horizonVis, unshadedTotal, ghiAlbedo, ghiAlbedo2, sunshineHours;
         int refCount;
@@ -199,6 +206,7 @@ public final class ShadedIrradiation {
             refW = new float[maxRays];
             refW2 = new float[maxRays];
             refKey = new long[maxRays];
+            skyView = in.steps().skyPatches != null ? new SkyPatchView(in.steps().skyPatches, bundle) : null;
             int h = 0;
             for (int e = 0; e < HORIZON_ELEVATIONS; e++) {
                 double el = Math.toRadians((e + 0.5) * HORIZON_BAND_DEG / HORIZON_ELEVATIONS);
@@ -220,6 +228,7 @@ public final class ShadedIrradiation {
             HemisphereSampler hs = analysed ? sampler : reflectorSampler;
             hs.sample(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), dir, cls, tri, dist);
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
+            if (skyView != null) skyView.measure(ox, oy, oz, nx, ny, nz, dir, cls, hs.rayCount());
             collectReflectors(hs.rayCount(), ox, oy, oz); // every receiver: reflectors reflect what they receive
             // a horizontal reflector-only receiver (ground probe) weights the horizon band by sin(tilt) = 0
             horizonVis = analysed || rc.sinTilt(r) > 0 ? horizonVisibility(ox, oy, oz, nx, ny, nz) : 0;
@@ -345,13 +354,19 @@ public final class ShadedIrradiation {
             Arrays.fill(beamMonth, 0);
             Arrays.fill(diffMonth, 0);
             double unshadedSum = 0, ga = in.groundAlbedo();
+            if (skyView != null) {
+                skyView.slotSums(skyView.visible, st.skyWh, skySlot);
+                if (analysed) skyView.slotSums(skyView.unobstructed, st.skyWh, skyUSlot);
+            }
             for (int k = 0; k < SLOTS; k++) {
-                double diff = DiffuseParts.sum(st.backgroundWh[k], svf, circSlot[k], st.horizonWh[k], hz);
+                double diff = skyView == null ? DiffuseParts.sum(st.backgroundWh[k], svf, circSlot[k], st.horizonWh[k], hz)
+                        : Math.max(0, skySlot[k]);
                 slotTotal[k] = beamSlot[k] + diff;
                 if (analysed) {
                     beamMonth[MonthHour.month(k) - 1] += beamSlot[k];
                     diffMonth[MonthHour.month(k) - 1] += diff;
-                    double diffU = DiffuseParts.sum(st.backgroundWh[k], svfU, circUSlot[k], st.horizonWh[k], sinTilt);
+                    double diffU = skyView == null ? DiffuseParts.sum(st.backgroundWh[k], svfU, circUSlot[k], st.horizonWh[k], sinTilt)
+                            : Math.max(0, skyUSlot[k]);
                     unshadedSum += beamUSlot[k] + diffU + ga * gvfU * st.ghiWh[k];
                 }
             }

@@ -4,7 +4,9 @@ import org.solmass.climate.MonthHour;
 import org.solmass.climate.Step;
 import org.solmass.climate.WeatherSeries;
 import org.solmass.sky.DiffuseParts;
+import org.solmass.sky.SkyDistribution;
 import org.solmass.sky.SkyModel;
+import org.solmass.sky.SkyPatches;
 
 /**
  * The weather series flattened for the per-patch kernel: one entry per sun-up step with the sun
@@ -50,6 +52,16 @@ final class StepTable {
     final double[] dhiWh = new double[SLOTS];
     /** Per slot: weighted hours (days x hours the slot stands for). */
     final double[] hours = new double[SLOTS];
+    /** A radiance distribution's sky patches ({@link SkyPatches#TREGENZA}), or null for a three-part sky model. */
+    final SkyPatches skyPatches;
+    /**
+     * A radiance distribution only (else null): per slot and sky patch, the step's normalised patch
+     * radiance ({@link SkyDistribution#patchRadiance}) x weighted hours, summed over the slot's steps,
+     * Wh/m2 per unit cosine-weighted patch share; index {@code patch x SLOTS + slot} (patch-major, so
+     * that a receiver adds one patch's row to all its slots in one vectorisable loop). The slot's
+     * whole sky diffuse on a patch is the sum over patches of the patch's visible share times this.
+     */
+    final double[] skyWh;
 
     StepTable(WeatherSeries series, SunDirections dirs, SkyModel sky) {
         int n = 0;
@@ -64,6 +76,11 @@ final class StepTable {
         circumsolarWh = new double[n];
         cosZenith = new float[n];
         sunshineHours = new double[n];
+        SkyDistribution dist = sky instanceof SkyDistribution d ? d : null;
+        skyPatches = dist != null ? SkyPatches.TREGENZA : null;
+        int np = dist != null ? skyPatches.count() : 0;
+        skyWh = dist != null ? new double[SLOTS * np] : null;
+        double[] radiance = new double[np];
         double site = 0;
         int k = 0;
         for (int s = 0; s < series.size(); s++) {
@@ -73,7 +90,11 @@ final class StepTable {
             hours[sl] += wh;
             ghiWh[sl] += st.ghiWm2() * wh;
             dhiWh[sl] += st.dhiWm2() * wh;
-            DiffuseParts parts = sky.parts(st);
+            DiffuseParts parts = dist != null ? DiffuseParts.NONE : sky.parts(st);
+            if (dist != null && st.dhiWm2() > 0) {
+                dist.patchRadiance(st, skyPatches, radiance);
+                for (int p = 0; p < np; p++) skyWh[p * SLOTS + sl] += radiance[p] * wh;
+            }
             if (parts != DiffuseParts.NONE) {
                 backgroundWh[sl] += parts.backgroundPerSvf() * wh;
                 horizonWh[sl] += parts.horizon() * wh;

@@ -1,6 +1,7 @@
 package org.solmass.metrics;
 
 import org.solmass.scene.HemisphereSampler;
+import org.solmass.sky.CieSky;
 import org.solmass.surface.Patch;
 import org.solmass.surface.SurfaceKind;
 import org.solmass.table.AreaStats;
@@ -20,13 +21,15 @@ import java.util.stream.IntStream;
  * horizontal plane under the whole of that sky. A daylight check value of the trade for courtyards
  * and canyons (common practice: an unobstructed vertical wall has 39.6 %).
  *
- * <p>Sky luminance: CIE standard overcast sky, L(gamma) = Lz (1 + 2 sin gamma) / 3 for elevation
- * gamma (Moon and Spencer 1942, Illuminating Engineering 37, 707-726; sky type 16 of ISO 15469:2004 /
- * CIE S 011/E:2003). Horizontal illuminance of the whole sky: E_h = 7 pi Lz / 9 (integral of L sin gamma
- * over the upper hemisphere). The patch's illuminance E_v = integral of L cos(theta) over the sky it sees
- * is estimated with the run's cosine-weighted stratified hemisphere rays ({@link HemisphereSampler}, pdf
- * cos(theta)/pi): E_v ~ (pi / N) sum over rays that reach the sky of L(gamma_i), so
- * VSC = E_v / E_h = 3 / (7 N) x sum (1 + 2 sin gamma_i), in percent. Light reflected by the ground and
+ * <p>Sky luminance: the traditional CIE standard overcast sky, L(gamma) = Lz (1 + 2 sin gamma) / 3 for
+ * elevation gamma (Moon and Spencer 1942, Illuminating Engineering 37, 707-726; kept beside the 15
+ * general skies by ISO 15469:2004 / CIE S 011/E:2003), the sky package's one implementation
+ * ({@link CieSky#overcastRelative}, {@link CieSky#OVERCAST_HORIZONTAL_PER_LZ}; also the sky model
+ * {@code cie-overcast}). Horizontal illuminance of the whole sky: E_h = 7 pi Lz / 9 (integral of
+ * L sin gamma over the upper hemisphere). The patch's illuminance E_v = integral of L cos(theta) over
+ * the sky it sees is estimated with the run's cosine-weighted stratified hemisphere rays
+ * ({@link HemisphereSampler}, pdf cos(theta)/pi): E_v ~ (pi / N) sum over rays that reach the sky of
+ * L(gamma_i), so VSC = E_v / E_h = 3 / (7 N) x sum (1 + 2 sin gamma_i), in percent. Light reflected by the ground and
  * the blocks is not part of the vertical sky component (by its definition). Sampling error at 1024
  * rays: see docs/metrics.md (measured over many seeds in {@code VerticalSkyComponentMetricTest}).
  *
@@ -80,8 +83,8 @@ public final class VerticalSkyComponentMetric implements Metric {
      */
     static double percentOfSky(double[] dir, int[] cls, int n) {
         double sum = 0;
-        for (int i = 0; i < n; i++) if (cls[i] == HemisphereSampler.SKY) sum += 1 + 2 * dir[3 * i + 2];
-        return 100 * 3 * sum / (7.0 * n);
+        for (int i = 0; i < n; i++) if (cls[i] == HemisphereSampler.SKY) sum += CieSky.overcastRelative(dir[3 * i + 2]);
+        return 100 * Math.PI * sum / (n * CieSky.OVERCAST_HORIZONTAL_PER_LZ);
     }
 
     /** Terminal lines of a run; the column is summarised in summary.json. */

@@ -10,7 +10,9 @@ import java.util.Map;
 /**
  * The one registry of sky diffuse models, by the name a study file, a flag or the viewer uses. A new
  * sky model is one entry here; the study reader, the {@code --sky} help and the viewer's choice list
- * all read this list. The first entry is the default.
+ * all read this list. The first entry is the default. The Perez et al. (1990) three-part model and
+ * the isotropic sky come first; the radiance distributions ({@link SkyDistribution}: Perez et al.
+ * 1993, the CIE traditional overcast sky, the 15 CIE standard general skies) follow.
  */
 public final class SkyModels {
     private static final Map<String, SkyModel> BY_NAME = new LinkedHashMap<>();
@@ -18,6 +20,9 @@ public final class SkyModels {
     static {
         register(Perez.INSTANCE);
         register(Isotropic.INSTANCE);
+        register(PerezAllWeather.INSTANCE);
+        register(CieSky.OVERCAST);
+        for (CieSky c : CieSky.GENERAL) register(c);
     }
 
     private SkyModels() {}
@@ -32,7 +37,7 @@ public final class SkyModels {
     /** The known names, the default first. */
     public static List<String> names() { return List.copyOf(BY_NAME.keySet()); }
 
-    /** The known names as one text, "perez, isotropic". */
+    /** The known names as one text, "perez, isotropic, perez-1993, ...". */
     public static String namesText() { return String.join(", ", names()); }
 
     /** The model of this name (any case), or null if none has it. */

@@ -121,7 +121,8 @@ class SharedFlagsTest {
 
     @Test
     void everyRegisteredSkyNameReadsBackAsThatModel() {
-        assertEquals(List.of("perez", "isotropic"), SkyModels.names());   // the two models of docs/method.md
+        assertEquals(List.of("perez", "isotropic", "perez-1993", "cie-overcast"), SkyModels.names().subList(0, 4)); // docs/method.md
+        assertEquals(4 + 15, SkyModels.names().size());   // and the 15 CIE standard general skies
         for (String name : SkyModels.names()) {
             Study s = StudyReader.read(null, new StudyOverrides().model(Path.of("m.obj")).latitude(1.0).longitude(2.0)
                     .zone("UTC").sky(name.toUpperCase(java.util.Locale.ROOT)));

@@ -6,11 +6,10 @@ import org.solmass.climate.ClimateSource;
 import org.solmass.climate.ClimateSpec;
 import org.solmass.climate.Step;
 import org.solmass.climate.WeatherSeries;
-import org.solmass.sky.Isotropic;
-import org.solmass.sky.Perez;
 import org.solmass.sky.PlaneIrradiation;
 import org.solmass.sky.PreparedSky;
 import org.solmass.sky.SkyModel;
+import org.solmass.sky.SkyModels;
 import org.solmass.sun.Site;
 import org.solmass.surface.Patch;
 
@@ -30,12 +29,12 @@ class UnobstructedPlaneTest {
     static final WeatherSeries AVERAGE_DAYS = ClimateSource.load(SITE, ClimateSpec.clearSky());
 
     static SkyModel sky(String name) {
-        return name.equals("perez") ? Perez.INSTANCE : Isotropic.INSTANCE;
+        return SkyModels.byName(name, "test");
     }
 
     /** Invariant of the method: an unobstructed horizontal roof receives exactly the GHI of the input. */
     @ParameterizedTest
-    @ValueSource(strings = {"perez", "isotropic"})
+    @ValueSource(strings = {"perez", "isotropic", "perez-1993", "cie-12", "cie-overcast"})
     void unobstructedHorizontalRoofReceivesTheAnnualGhi(String skyName) {
         TestModels m = new TestModels().slab("roof", 0, 0, 8, 8, 10);
         PipelineFixture f = new PipelineFixture(m.build(), Set.of(), 1.0);
@@ -58,7 +57,8 @@ class UnobstructedPlaneTest {
      * background and the ground-reflected sums that multiply them).
      */
     @ParameterizedTest
-    @ValueSource(strings = {"perez:30:180", "perez:60:90", "perez:90:270", "isotropic:45:0", "isotropic:90:180"})
+    @ValueSource(strings = {"perez:30:180", "perez:60:90", "perez:90:270", "isotropic:45:0", "isotropic:90:180",
+            "perez-1993:90:180", "perez-1993:30:135", "cie-12:60:90", "cie-overcast:90:0"})
     void loneTiltedPanelMatchesThePlaneCalculator(String spec) {
         String[] a = spec.split(":");
         double tilt = Double.parseDouble(a[1]), az = Double.parseDouble(a[2]);

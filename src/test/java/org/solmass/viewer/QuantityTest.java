@@ -52,6 +52,21 @@ class QuantityTest {
         for (Quantity x : q) assertFalse(x.label().contains("_"), "raw column name shown: " + x.label());
     }
 
+    /** The vertical sky component column (issue 17) reaches the selector through the column registry. */
+    @Test
+    void verticalSkyComponentIsOfferedAsAQuantity() {
+        ResultTable t = SyntheticViewerData.courtyard().table();
+        double[] v = new double[t.size()];
+        java.util.Arrays.fill(v, Double.NaN);
+        v[0] = 39.6;
+        t.put(ColumnCatalogue.of("vsc_pct"), v);
+        Quantity q = find(Quantity.available(t), "vsc_pct");
+        assertEquals(org.solmass.metrics.VerticalSkyComponentMetric.VSC.label(), q.label());
+        assertEquals("%", q.unit());
+        assertFalse(q.pvOrRoof());
+        assertEquals("no value", q.format(Double.NaN), "patches other than facades have no value");
+    }
+
     @Test
     void differencesAreDivergingAndNamedAsAChange() {
         ResultTable t = SyntheticViewerData.courtyard().table();
