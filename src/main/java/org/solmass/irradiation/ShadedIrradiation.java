@@ -168,8 +168,7 @@ public final class ShadedIrradiation {
         final int[] refIdx;
         final float[] refW;
         final long[] refKey;
-        final double[] horizonDir = new double[3 * HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
-        final double[] horizonCosElev = new double[HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
+        final HorizonBand horizon = new HorizonBand();
         ViewFactors vf;
         double horizonVis, unshadedTotal, ghiAlbedo, sunshineHours;
         int refCount;
@@ -180,7 +179,7 @@ public final class ShadedIrradiation {
             sampler = new HemisphereSampler(scene, in.raysPerPatch());
             reflectorSampler = new HemisphereSampler(scene, in.reflectorRays());
             bundle = scene.bundleTracer();
-            int bundleMax = Math.max(in.sun().count(), HORIZON_ELEVATIONS * HORIZON_AZIMUTHS);
+            int bundleMax = in.sun().count();
             bundleDir = new double[3 * bundleMax];
             bundleW = new double[bundleMax];
             sunIndex = new int[bundleMax];
@@ -194,17 +193,6 @@ public final class ShadedIrradiation {
             refIdx = new int[maxRays];
             refW = new float[maxRays];
             refKey = new long[maxRays];
-            int h = 0;
-            for (int e = 0; e < HORIZON_ELEVATIONS; e++) {
-                double el = Math.toRadians((e + 0.5) * HORIZON_BAND_DEG / HORIZON_ELEVATIONS);
-                for (int a = 0; a < HORIZON_AZIMUTHS; a++, h++) {
-                    double az = 2 * Math.PI * (a + 0.5) / HORIZON_AZIMUTHS;
-                    horizonDir[3 * h] = Math.sin(az) * Math.cos(el);
-                    horizonDir[3 * h + 1] = Math.cos(az) * Math.cos(el);
-                    horizonDir[3 * h + 2] = Math.sin(el);
-                    horizonCosElev[h] = Math.cos(el);
-                }
-            }
         }
 
         /** First pass of receiver r: view factors, visibilities, beam + diffuse slot sums. */
@@ -216,7 +204,7 @@ public final class ShadedIrradiation {
             hs.sample(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), dir, cls, tri, dist);
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
             if (analysed) collectReflectors(hs.rayCount(), ox, oy, oz);
-            horizonVis = horizonVisibility(ox, oy, oz, nx, ny, nz);
+            horizonVis = horizon.visibility(bundle, ox, oy, oz, nx, ny, nz);
             sunVisibility(ox, oy, oz, nx, ny, nz);
             accumulate(nx, ny, nz, rc.cosTilt(r), rc.sinTilt(r), analysed);
         }
@@ -265,26 +253,6 @@ public final class ShadedIrradiation {
             }
             refCount = m;
             ghiAlbedo = ghi * inv;
-        }
-
-        private double horizonVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {
-            double all = 0;
-            int m = 0;
-            for (int h = 0; h < horizonCosElev.length; h++) { // the band rays in front of the patch, together
-                double dx = horizonDir[3 * h], dy = horizonDir[3 * h + 1], dz = horizonDir[3 * h + 2];
-                double c = nx * dx + ny * dy + nz * dz;
-                if (c <= 0) continue;
-                double w = c * horizonCosElev[h];
-                all += w;
-                bundleDir[3 * m] = dx;
-                bundleDir[3 * m + 1] = dy;
-                bundleDir[3 * m + 2] = dz;
-                bundleW[m++] = w;
-            }
-            bundle.occluded(ox, oy, oz, bundleDir, null, m, blocked);
-            double seen = 0;
-            for (int i = 0; i < m; i++) if (!blocked[i]) seen += bundleW[i];
-            return all > 0 ? seen / all : 0;
         }
 
         private void sunVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {
