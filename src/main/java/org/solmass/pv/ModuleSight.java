@@ -74,7 +74,15 @@ public final class ModuleSight {
      */
     public static ModuleSight compute(Scene scene, boolean[] triangleIsGround, List<PvModule> modules, int substrings,
                                       SunDirections sun, int rays, long runSeed, int along, int across) {
-        ModuleSight s = new ModuleSight(List.copyOf(modules), substrings, sun.count());
+        Vec3[] dirs = new Vec3[sun.count()];
+        for (int d = 0; d < dirs.length; d++) dirs[d] = sun.direction(d);
+        return compute(scene, triangleIsGround, modules, substrings, dirs, rays, runSeed, along, across);
+    }
+
+    /** As {@link #compute(Scene, boolean[], List, int, SunDirections, int, long, int, int)} for given unit sun directions. */
+    public static ModuleSight compute(Scene scene, boolean[] triangleIsGround, List<PvModule> modules, int substrings,
+                                      Vec3[] sun, int rays, long runSeed, int along, int across) {
+        ModuleSight s = new ModuleSight(List.copyOf(modules), substrings, sun.length);
         ThreadLocal<Worker> workers = ThreadLocal.withInitial(() -> new Worker(scene, sun, rays, along * across));
         IntStream.range(0, modules.size()).parallel().forEach(m ->
                 workers.get().module(s, m, triangleIsGround, runSeed, along, across));
@@ -83,7 +91,7 @@ public final class ModuleSight {
 
     private static final class Worker {
         final Scene scene;
-        final SunDirections sun;
+        final Vec3[] sun;
         final HemisphereSampler sampler;
         final BundleTracer bundle;
         final HorizonBand band = new HorizonBand();
@@ -92,7 +100,7 @@ public final class ModuleSight {
         final boolean[] blocked;
         final int[] seen;
 
-        Worker(Scene scene, SunDirections sun, int rays, int points) {
+        Worker(Scene scene, Vec3[] sun, int rays, int points) {
             this.scene = scene;
             this.sun = sun;
             sampler = new HemisphereSampler(scene, rays);
@@ -102,7 +110,7 @@ public final class ModuleSight {
             dist = new double[r];
             cls = new int[r];
             tri = new int[r];
-            int n = sun.count();
+            int n = sun.length;
             bundleDir = new double[3 * Math.max(1, n)];
             index = new int[Math.max(1, n)];
             blocked = new boolean[Math.max(1, n)];
@@ -114,8 +122,8 @@ public final class ModuleSight {
             Vec3 nrm = mod.normal();
             double nx = nrm.x(), ny = nrm.y(), nz = nrm.z(), eps = scene.epsilon();
             int count = 0;
-            for (int d = 0; d < sun.count(); d++) {
-                Vec3 v = sun.direction(d);
+            for (int d = 0; d < sun.length; d++) {
+                Vec3 v = sun[d];
                 if (nx * v.x() + ny * v.y() + nz * v.z() <= 0) continue;
                 bundleDir[3 * count] = v.x();
                 bundleDir[3 * count + 1] = v.y();
