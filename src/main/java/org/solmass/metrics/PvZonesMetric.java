@@ -42,12 +42,12 @@ import java.util.Locale;
  */
 public final class PvZonesMetric implements Metric {
     public static final Column SUITABILITY = Column.of("pv_suitability_pct", Unit.PERCENT,
-            "PV suitability (share of the best plane)",
-            "Roof patches: (1 - shading loss) x (1 - orientation loss), the orientation loss that of the rack plane on flat roofs; empty for other kinds.")
+            "PV suitability (after shading and orientation losses)",
+            "Roof patches (and facades with pv.facades): (1 - shading loss) x (1 - orientation loss), the orientation loss that of the rack plane on flat roofs; empty for other kinds.")
             .withCaution();
     public static final Column ORIENTATION_LOSS = Column.of("pv_orientation_loss_pct", Unit.PERCENT,
             "PV orientation loss (against the best plane)",
-            "Roof patches: the unobstructed plane's annual irradiation short of the best unobstructed plane at the site (flat roofs: the rack plane's); empty for other kinds.")
+            "Roof patches (and facades with pv.facades): the unobstructed plane's annual irradiation short of the best unobstructed plane at the site (flat roofs: the rack plane's; facades: the best vertical plane's); empty for other kinds.")
             .withCaution();
     public static final Column ZONE = new Column("pv_zone", Unit.ID, "PV roof zone", 0, ColumnKind.CATEGORICAL,
             "Number of the PV roof zone (zones.csv) the patch belongs to; empty when in none.", true);

@@ -33,8 +33,13 @@ public final class PvArrays {
      */
     public record Settings(double performanceRatio, int rays, long runSeed, int along, int across) {}
 
-    /** The modules of every zone, their sight and plane-of-array irradiance, and each zone's yield. */
-    public record Result(List<PvModule> modules, PlaneOfArray poa, List<ZoneYield> zones) {}
+    /**
+     * The modules of every zone, their sight and plane-of-array irradiance, and each zone's yield.
+     *
+     * @param sightS seconds spent on the rays (scene with racks, visibilities, view factors)
+     * @param yieldS seconds spent on the step-by-step sums
+     */
+    public record Result(List<PvModule> modules, PlaneOfArray poa, List<ZoneYield> zones, double sightS, double yieldS) {}
 
     /**
      * @param scene the model's scene
@@ -45,6 +50,7 @@ public final class PvArrays {
     public static Result run(Scene scene, boolean[] modelIsGround, List<List<PvModule>> zones, int[] zoneIds,
                              ModuleSpec module, WeatherSeries weather, SkyModel sky, SunDirections sun,
                              double groundAlbedo, Settings s) {
+        long t0 = System.nanoTime();
         List<PvModule> all = new ArrayList<>();
         for (List<PvModule> z : zones) all.addAll(z);
         int racked = 0;
@@ -64,6 +70,7 @@ public final class PvArrays {
         }
         ModuleSight sight = ModuleSight.compute(withRacks, ground, all, module.bypassSubstrings(), sun, s.rays(),
                 s.runSeed(), s.along(), s.across());
+        long t1 = System.nanoTime();
         PlaneOfArray poa = new PlaneOfArray(sight, weather, sky, sun, groundAlbedo);
         List<ZoneYield> out = new ArrayList<>();
         int first = 0;
@@ -72,7 +79,7 @@ public final class PvArrays {
             out.add(zoneYield(poa, zoneIds[z], first, count, module, s));
             first += count;
         }
-        return new Result(List.copyOf(all), poa, List.copyOf(out));
+        return new Result(List.copyOf(all), poa, List.copyOf(out), (t1 - t0) / 1e9, (System.nanoTime() - t1) / 1e9);
     }
 
     /** Sums modules {@code first .. first + count - 1} step by step. */
