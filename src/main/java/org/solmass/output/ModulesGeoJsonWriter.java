@@ -46,7 +46,11 @@ public final class ModulesGeoJsonWriter {
             p.put("tilt_deg", Math.round(m.tiltDeg() * 100) / 100.0);
             p.put("azimuth_deg", Math.round(m.azimuthDeg() * 100) / 100.0);
         }
-        AtomicFiles.writeString(file, org.solmass.study.StudyWriter.pretty(root));
+        try {   // compact: one line per file, as coordinates would otherwise take a line each
+            AtomicFiles.writeString(file, new com.fasterxml.jackson.databind.ObjectMapper().writeValueAsString(root) + "\n");
+        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
     }
 
     private static double round(double v) { return Math.round(v * 1000) / 1000.0; }

@@ -53,4 +53,24 @@ class FlatRoofSuitabilityTest {
         assertEquals(16.0, y.kwp(), 1e-9);
         assertTrue(y.shadingLossPct() < 2, "module shading " + y.shadingLossPct());
     }
+
+    @Test
+    void facadesOnRequestGetFlushModulesOnTheSunnyWall() throws Exception {
+        Boxes.write(dir, "m.obj", Boxes.onGround(0, 0, 20, 12, 9).obj("lone"));
+        Path sf = dir.resolve("s.json");
+        Files.writeString(sf, "{\"model\": {\"file\": \"m.obj\"}, \"site\": {\"latitude\": 44.5, \"longitude\": 10, \"zone\": \"+01:00\"},"
+                + " \"climate\": \"clear-sky\", \"patch_m\": 2, \"rays\": 64, \"pv\": {\"facades\": true}}");
+        AnalysisRun.Outcome o = AnalysisRun.run(StudyReader.read(sf), PhaseProgress.NONE);
+        PvZonesMetric.Found f = o.metrics().find(PvZonesMetric.Found.class).orElseThrow();
+        // the roof and the south wall (the best vertical plane faces about south); east, west and
+        // north walls lose more than 20 % against it
+        assertEquals(2, f.zones().zones().size());
+        ZoneYield wall = f.yieldOf(0).racked() ? f.yieldOf(1) : f.yieldOf(0);
+        assertTrue(!wall.racked());
+        assertEquals(90, wall.tiltDeg(), 1e-6);
+        assertEquals(180, wall.azimuthDeg(), 1e-6);
+        // 20 x 9 m wall, 1 m setback: floor(18 / 1.134) = 15 columns of portrait modules,
+        // floor(7 / 1.722) = 4 rows
+        assertEquals(60, wall.modules());
+    }
 }
