@@ -17,7 +17,7 @@ import java.util.Map;
  * @param year             calendar year of a clear-sky HOURLY_YEAR
  * @param stepMinutes      step of generated days/years (clear sky, monthly means), divides 60
  * @param intervalLabel    whether a timestamp of an hourly file labels its interval's start or end
- * @param columns          role (time, ghi, dhi, dni, temp; date, year, month, day, hour, minute) to header name or 1-based column number
+ * @param columns          role (time, ghi, dhi, dni, temp, wind; date, year, month, day, hour, minute) to header name or 1-based column number
  * @param fillGapsMaxSteps longest run of missing steps/values filled by linear interpolation (0 = never)
  * @param reading          how to read dates, clock time and irradiance units of a file (docs/climate-formats.md)
  */
@@ -70,7 +70,7 @@ public record ClimateSpec(Kind kind, Path file, Format format, TimeBase timeBase
     public enum Kind { CLEAR_SKY, FILE }
 
     /** Roles of the columns of an hourly file that {@code columns} can map. */
-    public static final java.util.List<String> COLUMN_ROLES = java.util.List.of("time", "ghi", "dhi", "dni", "temp", "date", "year", "month", "day", "hour", "minute");
+    public static final java.util.List<String> COLUMN_ROLES = java.util.List.of("time", "ghi", "dhi", "dni", "temp", "wind", "date", "year", "month", "day", "hour", "minute");
 
     /**
      * Kind of climate file (docs/climate-formats.md). Written in lower case, '-' between words;

@@ -29,11 +29,13 @@ public final class HourlyCsvWriter {
         try (BufferedWriter w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
             for (String line : comment.split("\n")) w.write("# " + line + "\n");
             boolean temp = series.steps().stream().anyMatch(s -> !Double.isNaN(s.dryBulbC()));
-            w.write(temp ? "time,ghi_wm2,dhi_wm2,dni_wm2,temp_c\n" : "time,ghi_wm2,dhi_wm2,dni_wm2\n");
+            boolean wind = series.steps().stream().anyMatch(s -> !Double.isNaN(s.windMs()));
+            w.write("time,ghi_wm2,dhi_wm2,dni_wm2" + (temp ? ",temp_c" : "") + (wind ? ",wind_ms" : "") + "\n");
             for (Step s : series.steps()) {
                 w.write(LocalDateTime.ofInstant(s.start(), standardOffset).toString());
                 w.write(String.format(Locale.ROOT, ",%.2f,%.2f,%.2f", s.ghiWm2(), s.dhiWm2(), s.dniWm2()));
                 if (temp) w.write(Double.isNaN(s.dryBulbC()) ? "," : String.format(Locale.ROOT, ",%.1f", s.dryBulbC()));
+                if (wind) w.write(Double.isNaN(s.windMs()) ? "," : String.format(Locale.ROOT, ",%.1f", s.windMs()));
                 w.write("\n");
             }
         } catch (IOException e) {

@@ -19,7 +19,7 @@ import java.util.Set;
 /**
  * Reads an hourly (or finer) CSV: one row per interval, a timestamp column (ISO local standard time
  * of the site, or ISO with an offset) and GHI+DHI, GHI+DNI, DNI+DHI or GHI alone (Erbs et al. 1982
- * decomposition), optional dry-bulb temperature. See docs/climate-formats.md.
+ * decomposition), optional dry-bulb temperature and wind speed. See docs/climate-formats.md.
  */
 final class HourlyYearReader {
     private HourlyYearReader() {}
@@ -33,14 +33,18 @@ final class HourlyYearReader {
             Map.entry("dhi", List.of("dhi_wm2", "dhi")),
             Map.entry("dni", List.of("dni_wm2", "dni")),
             Map.entry("temp", List.of("temp_c", "dry_bulb_c", "temperature_c", "temp", "temperature")),
+            Map.entry("wind", List.of("wind_ms", "wind_speed_ms", "wind_speed", "ws")),
             Map.entry("date", List.of("date")),
             Map.entry("year", List.of("year")), Map.entry("month", List.of("month")), Map.entry("day", List.of("day")),
             Map.entry("hour", List.of("hour")), Map.entry("minute", List.of("minute")));
     private static final Set<String> CELSIUS = Set.of("c", "°c", "degc", "deg_c", "celsius");
+    private static final Set<String> METRES_PER_SECOND = Set.of("m/s", "ms", "m/sec", "ms-1", "m.s-1", "ms^-1");
+    /** Highest wind speed accepted, m/s: above any recorded mean wind (the record gust is 113 m/s, WMO). */
+    static final double MAX_WIND_MS = 100;
 
     static WeatherSeries read(SolarCalculator calc, ClimateTable csv, ClimateSpec spec) {
         int ct = column(csv, spec, "time"), cg = column(csv, spec, "ghi"), cd = column(csv, spec, "dhi"),
-                cn = column(csv, spec, "dni"), cT = column(csv, spec, "temp");
+                cn = column(csv, spec, "dni"), cT = column(csv, spec, "temp"), cW = column(csv, spec, "wind");
         int cdate = column(csv, spec, "date");
         int[] split = {column(csv, spec, "year"), column(csv, spec, "month"), column(csv, spec, "day"), column(csv, spec, "hour"),
                 column(csv, spec, "minute")};
@@ -57,6 +61,9 @@ final class HourlyYearReader {
         for (int c = 0; c < 3; c++) if (irr[c] >= 0) units[c] = csv.irradianceUnit(irr[c], option);
         if (cT >= 0 && csv.unit(cT) != null && !CELSIUS.contains(csv.unit(cT).replace(" ", "").toLowerCase(Locale.ROOT))) {
             throw new InputException(head, "unknown temperature unit '" + csv.unit(cT) + "' in the header '" + csv.header.cells()[cT] + "'; expected C");
+        }
+        if (cW >= 0 && csv.unit(cW) != null && !METRES_PER_SECOND.contains(csv.unit(cW).replace(" ", "").toLowerCase(Locale.ROOT))) {
+            throw new InputException(head, "unknown wind speed unit '" + csv.unit(cW) + "' in the header '" + csv.header.cells()[cW] + "'; expected m/s");
         }
         ClimateReport.Builder rep = new ClimateReport.Builder();
         RowTimes.Result times = RowTimes.read(csv, splitTime ? -1 : ct, split, cdate, spec.reading(), calc.site().zone(), rep);
@@ -80,7 +87,7 @@ final class HourlyYearReader {
         RowTimes.checkYears(csv, t, off);
         long span = Duration.between(t[0], t[n0 - 1]).getSeconds();
         int n = (int) (span / step) + 1;
-        double[][] v = new double[4][n];
+        double[][] v = new double[5][n];
         for (double[] a : v) Arrays.fill(a, Double.NaN);
         String[] where = new String[n];
         for (int i = 0; i < n0; i++) {
@@ -89,9 +96,13 @@ final class HourlyYearReader {
             if (d % step != 0) throw new InputException(csv.at(l), "timestamp is not on the " + step / 60 + "-minute grid of the first rows");
             int k = (int) (d / step);
             where[k] = csv.at(l);
-            int[] cols = {cg, cd, cn, cT};
-            String[] names = {"ghi", "dhi", "dni", "temp"};
-            for (int c = 0; c < 4; c++) if (cols[c] >= 0) v[c][k] = csv.number(l, cols[c], names[c], true);
+            int[] cols = {cg, cd, cn, cT, cW};
+            String[] names = {"ghi", "dhi", "dni", "temp", "wind speed"};
+            for (int c = 0; c < 5; c++) if (cols[c] >= 0) v[c][k] = csv.number(l, cols[c], names[c], true);
+            if (cW >= 0 && (v[4][k] < 0 || v[4][k] > MAX_WIND_MS)) {
+                throw new InputException(csv.at(l), "wind speed " + csv.header.cells()[cW] + " = " + l.cells()[cW]
+                        + " is out of range; expected 0 to " + (int) MAX_WIND_MS + " m/s");
+            }
             for (int c = 0; c < 3; c++) if (cols[c] >= 0 && units[c] != IrradianceUnit.W_M2) v[c][k] = units[c].toWm2(v[c][k], stepH);
         }
         String[] missingAt = new String[n];
@@ -101,9 +112,9 @@ final class HourlyYearReader {
                 missingAt[k] = LocalDateTime.ofInstant(t[0].plusSeconds(k * step), off).toString();
             }
         }
-        int[] cols = {cg, cd, cn, cT};
-        String[] names = {"GHI", "DHI", "DNI", "temperature"};
-        for (int c = 0; c < 4; c++) if (cols[c] >= 0) fill(v[c], names[c], missingAt, where, spec.fillGapsMaxSteps(), rep);
+        int[] cols = {cg, cd, cn, cT, cW};
+        String[] names = {"GHI", "DHI", "DNI", "temperature", "wind speed"};
+        for (int c = 0; c < 5; c++) if (cols[c] >= 0) fill(v[c], names[c], missingAt, where, spec.fillGapsMaxSteps(), rep);
         for (int k = 0; k < n; k++) if (missingAt[k] != null) rep.repair(FILLED_STEPS, missingAt[k]);
         double hours = n * step / 3600.0;
         if (Math.abs(hours - 8760) > 1e-6 && Math.abs(hours - 8784) > 1e-6) {
@@ -128,7 +139,7 @@ final class HourlyYearReader {
             } else if (!Double.isNaN(dh)) r = Components.fromGhiDhi(s, g, dh, rep, where[k]);
             else if (!Double.isNaN(dn)) r = Components.fromGhiDni(s, g, dn, rep, where[k]);
             else r = Components.fromGhi(s, g, rep, where[k]);
-            steps.add(s.toStep(r[0], r[1], r[2], v[3][k]));
+            steps.add(s.toStep(r[0], r[1], r[2], v[3][k], v[4][k]));
         }
         String layout = cg < 0 ? "DNI+DHI" : cd >= 0 ? "GHI+DHI" : cn >= 0 ? "GHI+DNI" : "GHI (Erbs decomposition)";
         if (times.hour24() && spec.intervalLabel() == ClimateSpec.IntervalLabel.START) {
@@ -137,12 +148,13 @@ final class HourlyYearReader {
         }
         if (spec.reading().clock() == ClimateSpec.Clock.STANDARD) ClockCheck.warnIfClockTime(steps, calc.site().zone(), rep);
         Map<String, String> mapped = new java.util.LinkedHashMap<>(), unitNames = new java.util.LinkedHashMap<>();
-        String[] roles = {"date", "time", "year", "month", "day", "hour", "minute", "ghi", "dhi", "dni", "temp"};
+        String[] roles = {"date", "time", "year", "month", "day", "hour", "minute", "ghi", "dhi", "dni", "temp", "wind"};
         int[] at = {times.dateJoined() ? cdate : -1, splitTime ? -1 : ct, splitTime ? split[0] : -1, splitTime ? split[1] : -1, splitTime ? split[2] : -1,
-                splitTime ? split[3] : -1, splitTime ? split[4] : -1, cg, cd, cn, cT};
+                splitTime ? split[3] : -1, splitTime ? split[4] : -1, cg, cd, cn, cT, cW};
         for (int r = 0; r < roles.length; r++) if (at[r] >= 0) mapped.put(roles[r], csv.header.cells()[at[r]]);
         for (int c = 0; c < 3; c++) if (irr[c] >= 0) unitNames.put(roles[7 + c], units[c].label() + (units[c].perInterval() ? " per step" : ""));
         if (cT >= 0) unitNames.put("temp", "C");
+        if (cW >= 0) unitNames.put("wind", "m/s");
         rep.reading(csv.reading("hourly", mapped, unitNames, times.layout() + ", labels at interval "
                 + spec.intervalLabel().name().toLowerCase(Locale.ROOT) + ", layout " + layout, rep.notes()));
         return new WeatherSeries(steps, TimeBase.HOURLY_YEAR, "hourly file " + csv.name + " (" + layout + ", "

@@ -33,7 +33,11 @@ record Slot(Instant start, double durationH, int month, int dayOfYear, double lo
     }
 
     Step toStep(double ghi, double dni, double dhi, double tempC) {
+        return toStep(ghi, dni, dhi, tempC, Double.NaN);
+    }
+
+    Step toStep(double ghi, double dni, double dhi, double tempC, double windMs) {
         return new Step(start, durationH, month, dayOfYear, localStandardHour, sun, sunUpFraction,
-                ghi, dni, dhi, extraNormalWm2, tempC, weightDays);
+                ghi, dni, dhi, extraNormalWm2, tempC, windMs, weightDays);
     }
 }

@@ -26,12 +26,21 @@ import java.time.Instant;
  * @param dhiWm2            diffuse horizontal irradiance, W/m2, interval average
  * @param extraNormalWm2    extraterrestrial normal irradiance of the day, W/m2 (no sun-up weighting)
  * @param dryBulbC          dry-bulb air temperature, degrees C, or NaN when the source has none
+ * @param windMs            wind speed, m/s, interval mean, or NaN when the source has none
  * @param weightDays        real days the step stands for: 1 for a year of steps, the days of the
  *                          month for a monthly average day
  */
 public record Step(Instant start, double durationH, int month, int dayOfYear, double localStandardHour,
                    SunPosition sun, double sunUpFraction, double ghiWm2, double dniWm2, double dhiWm2,
-                   double extraNormalWm2, double dryBulbC, double weightDays) {
+                   double extraNormalWm2, double dryBulbC, double windMs, double weightDays) {
+
+    /** A step without wind data (wind speed NaN). */
+    public Step(Instant start, double durationH, int month, int dayOfYear, double localStandardHour,
+                SunPosition sun, double sunUpFraction, double ghiWm2, double dniWm2, double dhiWm2,
+                double extraNormalWm2, double dryBulbC, double weightDays) {
+        this(start, durationH, month, dayOfYear, localStandardHour, sun, sunUpFraction, ghiWm2, dniWm2, dhiWm2,
+                extraNormalWm2, dryBulbC, Double.NaN, weightDays);
+    }
 
     /** Hours this step contributes to the sums: duration x weight (h). */
     public double weightedHours() { return durationH * weightDays; }

@@ -134,6 +134,8 @@ final class BadInputCases {
         climate("climate-hourly-gap", "time,ghi_wm2\n2025-01-01T00:00,0\n2025-01-01T01:00,0\n2025-01-01T05:00,0\n");
         climate("climate-hourly-step-not-dividing-an-hour", "time,ghi_wm2\n2025-01-01T00:00,0\n2025-01-01T00:45,0\n");
         climate("climate-hourly-no-irradiance-column", "time,dhi_wm2\n2025-01-01T00:00,0\n2025-01-01T01:00,0\n");
+        climate("climate-hourly-negative-wind", "time,ghi_wm2,wind_ms\n2025-01-01T00:00,0,2\n2025-01-01T01:00,0,-3\n");
+        climate("climate-hourly-wind-unit", "time,ghi_wm2,ws (km/h)\n2025-01-01T00:00,0,7\n2025-01-01T01:00,0,9\n");
         climate("climate-row-more-cells-than-header", "time,ghi_wm2,dhi_wm2\n2025-01-01T00:00,0,0\n2025-01-01T01:00,0,5,0,0\n");
         climate("climate-ambiguous-date-order", "time,ghi_wm2\n01/02/2025 00:00,0\n01/02/2025 01:00,0\n");
         climate("climate-unknown-unit-in-header", "time,GHI (W/ft2)\n2025-01-01T00:00,0\n2025-01-01T01:00,0\n");

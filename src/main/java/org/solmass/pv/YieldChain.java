@@ -1,0 +1,110 @@
+package org.solmass.pv;
+
+import java.util.List;
+
+/**
+ * The yield chain of a PV array for one time step: plane-of-array irradiance per module substring to
+ * AC energy, each loss its own quantity (docs/pv.md). Per module, in this order:
+ * <ol>
+ *   <li>reference: STC power x unobstructed irradiance / 1000 W/m2 (IEC 61724-1 reference yield);</li>
+ *   <li>shading: the same for unobstructed minus obstructed irradiance (measured by the caller);</li>
+ *   <li>incidence: per substring, beam x IAM_b(incidence) + sky x IAM_d(tilt) + reflected x IAM_g(tilt)
+ *       ({@link IncidenceAngleModifier}, Martin and Ruiz 2001);</li>
+ *   <li>mismatch: the substrings' effective irradiances with bypass diodes ({@link SubstringMismatch});</li>
+ *   <li>temperature: power x (1 + gamma (T_cell - 25 C)), gamma the module's temperature coefficient
+ *       ({@link ModuleSpec#tempCoeffPerK()}), T_cell from the module's mean obstructed irradiance, air
+ *       temperature and wind ({@link CellTemperature}, Faiman 2008);</li>
+ *   <li>other DC losses: one factor (default {@link #DEFAULT_DC_OTHER_FACTOR});</li>
+ * </ol>
+ * then for the modules sharing inverters: inverter efficiency and clipping ({@link Inverter}) with an
+ * AC rating of the modules' STC power over the DC/AC ratio. Power is taken linear in effective
+ * irradiance (no low-irradiance efficiency change; common simplification, stated in docs/pv.md).
+ *
+ * @param module        the module datasheet
+ * @param iam           incidence-angle modifier
+ * @param thermal       cell-temperature model
+ * @param dcOtherFactor share of DC power kept after soiling, wiring, module quality and light-induced
+ *                      degradation, (0, 1]
+ * @param inverter      inverter curve and DC/AC ratio
+ */
+public record YieldChain(ModuleSpec module, IncidenceAngleModifier iam, CellTemperature thermal,
+                         double dcOtherFactor, Inverter inverter) {
+
+    /**
+     * Other DC losses as one factor: 0.95, i.e. about 2 % soiling, 1.5 % DC wiring and 1.5 % module
+     * quality and light-induced degradation (common practice for a new, cleaned-by-rain system).
+     */
+    public static final double DEFAULT_DC_OTHER_FACTOR = 0.95;
+
+    public YieldChain {
+        if (!(dcOtherFactor > 0 && dcOtherFactor <= 1)) throw new IllegalArgumentException("other-losses factor must lie in (0, 1]: " + dcOtherFactor);
+    }
+
+    /**
+     * The documented defaults for a module: standard glass (ar 0.16), free-standing or flush-roof
+     * thermal preset, other-losses factor 0.95, default inverter (DC/AC 1.2).
+     */
+    public static YieldChain defaults(ModuleSpec module, boolean roofFlush) {
+        return new YieldChain(module, IncidenceAngleModifier.STANDARD_GLASS,
+                roofFlush ? CellTemperature.ROOF_FLUSH : CellTemperature.FREE_STANDING, DEFAULT_DC_OTHER_FACTOR, Inverter.DEFAULT);
+    }
+
+    /**
+     * DC power of one module at one instant.
+     *
+     * @param in     the module's plane-of-array irradiance
+     * @param airC   air temperature, C (NaN: {@link CellTemperature#DEFAULT_AIR_C}; fill from the month
+     *               mean first with {@link CellTemperature#fillAir})
+     * @param windMs wind speed, m/s (NaN: {@link CellTemperature#DEFAULT_WIND_MS})
+     */
+    public ModuleDc moduleDc(ModuleIrradiance in, double airC, double windMs) {
+        double pPerWm2 = module.stcPowerW() / 1000;
+        int n = in.substrings();
+        double unobstructed = Math.max(0, in.unobstructedWm2());
+        double obstructed = in.obstructedMeanWm2();
+        double ib = iam.beam(in.incidenceDeg()), id = iam.skyDiffuse(in.tiltDeg()), ig = iam.groundReflected(in.tiltDeg());
+        double[] eff = new double[n];
+        for (int i = 0; i < n; i++) eff[i] = in.beamWm2()[i] * ib + in.skyWm2()[i] * id + in.reflectedWm2()[i] * ig;
+        double effMean = SubstringMismatch.meanWm2(eff);
+        double equivalent = SubstringMismatch.equivalentWm2(eff);
+        double cell = thermal.cellC(obstructed, airC, windMs);
+        double pMismatch = pPerWm2 * equivalent;
+        double pTemp = Math.max(0, pMismatch * (1 + module.tempCoeffPerK() * (cell - 25)));
+        double pDc = pTemp * dcOtherFactor;
+        double ref = pPerWm2 * unobstructed;
+        return new ModuleDc(ref, ref - pPerWm2 * obstructed, pPerWm2 * (obstructed - effMean), pPerWm2 * effMean - pMismatch,
+                pMismatch - pTemp, pTemp - pDc, pDc, cell * ref);
+    }
+
+    /**
+     * AC side of one step for modules whose DC power is summed in dc (they share inverters rated at
+     * their STC power over the DC/AC ratio).
+     *
+     * @param dc        DC power summed over the modules, W
+     * @param modules   number of modules summed (sets the array's STC power and AC rating)
+     * @param durationH step length, hours
+     * @return the step's energies, Wh
+     */
+    public EnergyBalance acStep(ModuleDc dc, int modules, double durationH) {
+        if (modules < 1) throw new IllegalArgumentException("at least one module: " + modules);
+        Inverter.Conversion c = inverter.convert(dc.dcW(), inverter.acRatingW(modules * module.stcPowerW()));
+        double h = durationH;
+        return new EnergyBalance(dc.referenceW() * h, dc.shadingW() * h, dc.incidenceW() * h, dc.mismatchW() * h,
+                dc.temperatureW() * h, dc.dcOtherW() * h, c.lossW() * h, c.clippedW() * h, c.acW() * h);
+    }
+
+    /**
+     * One step for a group of modules that share inverters: {@link #moduleDc} per module, summed,
+     * then {@link #acStep}.
+     */
+    public EnergyBalance step(List<ModuleIrradiance> modules, double airC, double windMs, double durationH) {
+        return acStep(dcSum(modules, airC, windMs), modules.size(), durationH);
+    }
+
+    /** DC power summed over modules, W. */
+    public ModuleDc dcSum(List<ModuleIrradiance> modules, double airC, double windMs) {
+        ModuleDc sum = ModuleDc.ZERO;
+        for (ModuleIrradiance m : modules) sum = sum.plus(moduleDc(m, airC, windMs));
+        return sum;
+    }
+}
