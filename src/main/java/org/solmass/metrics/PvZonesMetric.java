@@ -113,7 +113,7 @@ public final class PvZonesMetric implements Metric {
                 : SunDirections.binned(ctx.weather(), new SkySubdivision(s.sunBins()));
         boolean[] ground = Surface.groundTriangles(surfaces, ctx.scene().triangleCount());
         PvArrays.Result arrays = PvArrays.run(ctx.scene(), ground, modules, ids, lo.module(), ctx.weather(), ctx.sky(), sun,
-                ctx.groundAlbedo(), new PvArrays.Settings(s.performanceRatio(), ctx.rays(), ctx.raySeed(),
+                ctx.groundAlbedo(), ctx.site().zone(), new PvArrays.Settings(ctx.rays(), ctx.raySeed(),
                         ModuleSight.DEFAULT_ALONG, ModuleSight.DEFAULT_ACROSS));
         return new Found(zones, s, zoneOrient, rackAz, arrays);
     }
@@ -158,11 +158,12 @@ public final class PvZonesMetric implements Metric {
                     String.format(Locale.ROOT, "PV zones (zones.csv): patches with a suitability of at least %.0f %%, zones of at "
                                     + "least %.1f m2; modules placed %.2f m from the zone outline (a layout sketch: setbacks are set by "
                                     + "the local fire and building codes), racked on roofs up to %.0f deg at ground-coverage ratio %.2f, "
-                                    + "flush on steeper roofs. yield_kwh = plane-of-array irradiation x kWp x performance ratio %.3f: "
-                                    + "an indicative figure; layout, electrical, structural and fire-setback design by licensed practice.",
+                                    + "flush on steeper roofs. yield_kwh: the plane-of-array irradiance of every module substring "
+                                    + "through the loss chain of docs/pv.md (shading, incidence, mismatch, temperature, other DC, "
+                                    + "inverter, clipping): an indicative figure; layout, electrical, structural and fire-setback "
+                                    + "design by licensed practice.",
                             settings.suitablePct(), settings.minZoneM2(), lo.setbackM(), lo.flatMaxTiltDeg(),
-                            lo.rowPitchM() > 0 ? lo.module().widthM() / lo.rowPitchM() : lo.groundCoverageRatio(),
-                            settings.performanceRatio()));
+                            lo.rowPitchM() > 0 ? lo.module().widthM() / lo.rowPitchM() : lo.groundCoverageRatio()));
         }
 
         @Override public List<String> summaryColumns() { return List.of(); }
@@ -178,7 +179,6 @@ public final class PvZonesMetric implements Metric {
             b.put("annual_kwh_m2", round(zones.best().annualKwhM2(), 1));
             o.put("suitable_pct", settings.suitablePct());
             o.put("min_zone_m2", settings.minZoneM2());
-            o.put("performance_ratio", settings.performanceRatio());
             LayoutOptions lo = settings.layout();
             ObjectNode m = o.putObject("module");
             m.put("length_m", lo.module().lengthM());
@@ -202,20 +202,34 @@ public final class PvZonesMetric implements Metric {
             o.put("kwp", round(kwp(), 2));
             o.put("yield_kwh", round(yieldKwh(), 1));
             o.put("specific_yield_kwh_kwp", round(kwp() > 0 ? yieldKwh() / kwp() : 0, 1));
+            org.solmass.pv.EnergyBalance all = org.solmass.pv.EnergyBalance.ZERO;
+            for (ZoneYield y : arrays.zones()) all = all.plus(y.year());
+            org.solmass.pv.EnergyBalance e = all;
+            o.put("performance_ratio", round(Double.isNaN(e.performanceRatio()) ? 0 : e.performanceRatio(), 3));
+            ObjectNode kwh = o.putObject("energy_kwh");
+            kwh.put("reference", round(e.referenceWh() / 1000, 1));
+            kwh.put("shading_loss", round(e.shadingWh() / 1000, 1));
+            kwh.put("incidence_loss", round(e.incidenceWh() / 1000, 1));
+            kwh.put("mismatch_loss", round(e.mismatchWh() / 1000, 1));
+            kwh.put("temperature_loss", round(e.temperatureWh() / 1000, 1));
+            kwh.put("other_dc_loss", round(e.dcOtherWh() / 1000, 1));
+            kwh.put("inverter_loss", round(e.inverterWh() / 1000, 1));
+            kwh.put("clipping_loss", round(e.clippingWh() / 1000, 1));
+            kwh.put("ac", round(e.acWh() / 1000, 1));
             ArrayNode zs = o.putArray("zone_list");
             for (int i = 0; i < zones.zones().size(); i++) {
                 PvZones.Zone z = zones.zones().get(i);
                 ZoneYield y = yieldOf(i);
-                ObjectNode e = zs.addObject();
-                e.put("zone", z.id());
-                e.put("surface", z.surfaceLabel());
-                e.put("mounting", y.racked() ? "racked" : "flush");
-                e.put("modules", y.modules());
-                e.put("kwp", round(y.kwp(), 2));
-                e.put("yield_kwh", round(y.yieldKwh(), 1));
-                e.put("specific_yield_kwh_kwp", round(y.specificYieldKwhKwp(), 1));
-                e.put("performance_ratio", round(y.performanceRatio(), 3));
-                e.put("shading_loss_pct", round(y.shadingLossPct(), 2));
+                ObjectNode z1 = zs.addObject();
+                z1.put("zone", z.id());
+                z1.put("surface", z.surfaceLabel());
+                z1.put("mounting", y.racked() ? "racked" : "flush");
+                z1.put("modules", y.modules());
+                z1.put("kwp", round(y.kwp(), 2));
+                z1.put("yield_kwh", round(y.yieldKwh(), 1));
+                z1.put("specific_yield_kwh_kwp", round(y.specificYieldKwhKwp(), 1));
+                z1.put("performance_ratio", round(y.performanceRatio(), 3));
+                z1.put("shading_loss_pct", round(y.shadingLossPct(), 2));
             }
             return o;
         }

@@ -90,7 +90,6 @@ public final class ResultsFolder {
                     found.arrays().zones()));
             if (!found.arrays().zones().isEmpty()) {
                 pub.write(PvSeriesCsvWriter.FILE_NAME, p -> PvSeriesCsvWriter.write(p, found.arrays().poa().weather(),
-                        r.study().site().zone(),
                         found.arrays().zones()));
             }
             pub.write(ModulesGeoJsonWriter.FILE_NAME, p -> ModulesGeoJsonWriter.write(p, found.arrays().modules(),

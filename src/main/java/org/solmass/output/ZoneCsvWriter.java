@@ -25,7 +25,9 @@ public final class ZoneCsvWriter {
         List<String> c = new ArrayList<>(List.of("zone", "block", "surface", "patches", "area_m2", "tilt_deg",
                 "azimuth_deg", "mean_kwh_m2", "total_kwh", "mean_shading_loss_pct", "orientation_loss_pct", "mounting",
                 "modules", "kwp", "module_tilt_deg", "module_azimuth_deg", "poa_kwh_m2", "poa_unobstructed_kwh_m2",
-                "module_shading_loss_pct", "yield_kwh", "specific_yield_kwh_kwp", "performance_ratio"));
+                "module_shading_loss_pct", "reference_kwh", "shading_loss_kwh", "incidence_loss_kwh", "mismatch_loss_kwh",
+                "temperature_loss_kwh", "other_dc_loss_kwh", "inverter_loss_kwh", "clipping_loss_kwh", "yield_kwh",
+                "specific_yield_kwh_kwp", "performance_ratio"));
         c.addAll(MONTHS);
         COLUMNS = List.copyOf(c);
     }
@@ -62,10 +64,19 @@ public final class ZoneCsvWriter {
                 num(sb, y.poaKwhM2(), 2);
                 num(sb, y.poaUnobstructedKwhM2(), 2);
                 num(sb, y.shadingLossPct(), 2);
+                org.solmass.pv.EnergyBalance e = y.year();
+                num(sb, e.referenceWh() / 1000, 1);
+                num(sb, e.shadingWh() / 1000, 1);
+                num(sb, e.incidenceWh() / 1000, 1);
+                num(sb, e.mismatchWh() / 1000, 1);
+                num(sb, e.temperatureWh() / 1000, 1);
+                num(sb, e.dcOtherWh() / 1000, 1);
+                num(sb, e.inverterWh() / 1000, 1);
+                num(sb, e.clippingWh() / 1000, 1);
                 num(sb, y.yieldKwh(), 1);
                 num(sb, y.specificYieldKwhKwp(), 1);
                 num(sb, y.performanceRatio(), 3);
-                for (int m = 0; m < 12; m++) num(sb, y.monthlyYieldKwh()[m], 1);
+                for (int m = 1; m <= 12; m++) num(sb, y.monthYieldKwh(m), 1);
                 sb.append('\n');
                 w.write(sb.toString());
             }

@@ -6,6 +6,8 @@ import org.solmass.irradiation.SunDirections;
 import org.solmass.scene.Scene;
 import org.solmass.sky.SkyModel;
 
+import java.time.LocalDateTime;
+import java.time.ZoneId;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -22,16 +24,14 @@ public final class PvArrays {
     private PvArrays() {}
 
     /**
-     * Settings of the yield sums.
+     * Settings of the module rays.
      *
-     * @param performanceRatio the factor from plane-of-array irradiation to AC energy
-     *                         (IEC 61724-1 performance ratio, with the reference on the obstructed planes)
      * @param rays hemisphere rays per substring
      * @param runSeed seed of the run's ray streams
      * @param along sample points along a substring
      * @param across sample points across a substring
      */
-    public record Settings(double performanceRatio, int rays, long runSeed, int along, int across) {}
+    public record Settings(int rays, long runSeed, int along, int across) {}
 
     /**
      * The modules of every zone, their sight and plane-of-array irradiance, and each zone's yield.
@@ -46,10 +46,11 @@ public final class PvArrays {
      * @param modelIsGround per model triangle: ground or not
      * @param zones per zone (in order of {@code zoneIds}): its modules
      * @param zoneIds zone ids
+     * @param zoneId the site's time zone (its standard offset gives the series' local standard time)
      */
     public static Result run(Scene scene, boolean[] modelIsGround, List<List<PvModule>> zones, int[] zoneIds,
                              ModuleSpec module, WeatherSeries weather, SkyModel sky, SunDirections sun,
-                             double groundAlbedo, Settings s) {
+                             double groundAlbedo, ZoneId zoneId, Settings s) {
         long t0 = System.nanoTime();
         List<PvModule> all = new ArrayList<>();
         for (List<PvModule> z : zones) all.addAll(z);
@@ -76,47 +77,61 @@ public final class PvArrays {
         int first = 0;
         for (int z = 0; z < zones.size(); z++) {
             int count = zones.get(z).size();
-            out.add(zoneYield(poa, zoneIds[z], first, count, module, s));
+            out.add(zoneYield(poa, zoneIds[z], first, count, module, zoneId));
             first += count;
         }
         return new Result(List.copyOf(all), poa, List.copyOf(out), (t1 - t0) / 1e9, (System.nanoTime() - t1) / 1e9);
     }
 
-    /** Sums modules {@code first .. first + count - 1} step by step. */
-    static ZoneYield zoneYield(PlaneOfArray poa, int zone, int first, int count, ModuleSpec module, Settings s) {
+    /**
+     * Sums modules {@code first .. first + count - 1} step by step through the yield chain
+     * ({@link YieldChain#defaults}: the open-rack thermal model for racked modules, the flush-roof one
+     * otherwise; air temperature filled from the month means, wind from the weather or the default).
+     */
+    static ZoneYield zoneYield(PlaneOfArray poa, int zone, int first, int count, ModuleSpec module, ZoneId zoneId) {
         WeatherSeries w = poa.weather();
         int n = w.size(), S = module.bypassSubstrings();
         double[] beam = new double[S], sky = new double[S], refl = new double[S], unob = new double[S];
-        float[] sPoa = new float[n], sUnob = new float[n], sYield = new float[n];
-        double[] monthPoa = new double[12], monthYield = new double[12];
-        double annualPoa = 0, annualUnob = 0, annualYield = 0;
-        double area = module.areaM2();
-        double kw = count * module.stcPowerW() / 1000;
+        float[] sPoa = new float[n], sUnob = new float[n];
+        double[] monthPoa = new double[12];
+        double annualPoa = 0, annualUnob = 0;
+        PvModule any = count > 0 ? poa.sight().modules().get(first) : null;
+        boolean racked = any != null && any.racked();
+        double tilt = any == null ? 0 : any.tiltDeg();
+        YieldTotals totals = count > 0 ? new YieldTotals(count * module.stcPowerW()) : null;
+        ZoneSeries series = count > 0 ? new ZoneSeries("zone " + zone, count * module.stcPowerW()) : null;
+        YieldChain chain = YieldChain.defaults(module, !racked);
+        double[] air = CellTemperature.airPerStep(w.steps());
+        List<ModuleIrradiance> group = new ArrayList<>(count);
         for (int st = 0; st < n; st++) {
             Step step = w.step(st);
             double poaSum = 0, unobSum = 0;
+            group.clear();
             for (int m = first; m < first + count; m++) {
-                poa.module(m, st, beam, sky, refl, unob);
+                double aoi = poa.module(m, st, beam, sky, refl, unob);
+                double u = 0;
                 for (int k = 0; k < S; k++) {
                     poaSum += beam[k] + sky[k] + refl[k];
-                    unobSum += unob[k];
+                    u += unob[k];
                 }
+                unobSum += u;
+                group.add(new ModuleIrradiance(beam.clone(), sky.clone(), refl.clone(), u / S, aoi, Math.min(180, tilt)));
             }
             double meanPoa = count > 0 ? poaSum / (count * S) : 0, meanUnob = count > 0 ? unobSum / (count * S) : 0;
-            double stepWh = kw * meanPoa * s.performanceRatio() * step.durationH(); // kW x W/m2 / (1 kW/m2) x h = Wh
             sPoa[st] = (float) meanPoa;
             sUnob[st] = (float) meanUnob;
-            sYield[st] = (float) stepWh;
             double wh = step.weightedHours();
             monthPoa[step.month() - 1] += meanPoa * wh / 1000;
-            monthYield[step.month() - 1] += stepWh * step.weightDays() / 1000;
             annualPoa += meanPoa * wh / 1000;
             annualUnob += meanUnob * wh / 1000;
-            annualYield += stepWh * step.weightDays() / 1000;
+            if (count == 0) continue;
+            ModuleDc dc = chain.dcSum(group, air[st], step.windMs());
+            EnergyBalance e = chain.acStep(dc, count, step.durationH());
+            totals.add(e, step.month(), step.weightDays());
+            series.add(LocalDateTime.ofInstant(step.start(), zoneId.getRules().getStandardOffset(step.start())),
+                    step.durationH(), dc.meanCellC(), e);
         }
-        PvModule any = count > 0 ? poa.sight().modules().get(first) : null;
-        return new ZoneYield(zone, count, any != null && any.racked(), any == null ? 0 : any.tiltDeg(),
-                any == null ? 0 : any.azimuthDeg(), kw, count * area, annualPoa, annualUnob, monthPoa, annualYield,
-                monthYield, sPoa, sUnob, sYield);
+        return new ZoneYield(zone, count, racked, tilt, any == null ? 0 : any.azimuthDeg(), count * module.stcPowerW() / 1000,
+                count * module.areaM2(), annualPoa, annualUnob, monthPoa, totals, series, sPoa, sUnob);
     }
 }

@@ -1,7 +1,8 @@
 package org.solmass.pv;
 
 /**
- * One PV zone's modules and what they deliver over the weather series (docs/metrics.md "PV yield").
+ * One PV zone's modules and what they deliver over the weather series (docs/metrics.md "PV yield",
+ * docs/pv.md for the loss chain).
  *
  * @param zone zone id
  * @param modules number of modules
@@ -13,30 +14,38 @@ package org.solmass.pv;
  * @param poaKwhM2 annual plane-of-array irradiation, module-area mean, with obstruction, kWh/m2
  * @param poaUnobstructedKwhM2 the same planes with no obstruction, kWh/m2
  * @param monthlyPoaKwhM2 per month 1..12 at index 0..11, with obstruction, kWh/m2
- * @param yieldKwh annual energy, kWh
- * @param monthlyYieldKwh per month, kWh
+ * @param totals the energy balance per month and year ({@link YieldChain}); null when the zone has no module
+ * @param series per step: the energy balance and cell temperature; null when the zone has no module
  * @param seriesPoaWm2 per step of the series: module-area mean plane-of-array irradiance, W/m2
  * @param seriesPoaUnobstructedWm2 per step: the same with no obstruction, W/m2
- * @param seriesYieldWh per step: energy of the step (not times the days an average-day step stands for), Wh
  */
 public record ZoneYield(int zone, int modules, boolean racked, double tiltDeg, double azimuthDeg, double kwp,
                         double moduleAreaM2, double poaKwhM2, double poaUnobstructedKwhM2, double[] monthlyPoaKwhM2,
-                        double yieldKwh, double[] monthlyYieldKwh, float[] seriesPoaWm2,
-                        float[] seriesPoaUnobstructedWm2, float[] seriesYieldWh) {
+                        YieldTotals totals, ZoneSeries series, float[] seriesPoaWm2, float[] seriesPoaUnobstructedWm2) {
+
+    /** The year's energy balance (zeros without modules), Wh. */
+    public EnergyBalance year() { return totals == null ? EnergyBalance.ZERO : totals.year(); }
+
+    /** Annual AC energy, kWh. */
+    public double yieldKwh() { return year().acWh() / 1000; }
+
+    /** AC energy of month 1..12, kWh. */
+    public double monthYieldKwh(int month) { return totals == null ? 0 : totals.month(month).acWh() / 1000; }
 
     /** Shading loss of the modules, %: 100 (1 - obstructed / unobstructed plane-of-array irradiation). */
     public double shadingLossPct() {
         return poaUnobstructedKwhM2 > 0 ? 100 * (1 - poaKwhM2 / poaUnobstructedKwhM2) : 0;
     }
 
-    /** Specific yield, kWh/kWp. */
-    public double specificYieldKwhKwp() { return kwp > 0 ? yieldKwh / kwp : 0; }
+    /** Specific (final) yield Yf, kWh/kWp. */
+    public double specificYieldKwhKwp() { return totals == null ? 0 : totals.finalYield(year()); }
 
     /**
-     * Performance ratio (IEC 61724-1:2021): final yield over reference yield, the reference taken on
-     * the unobstructed module planes (so shading counts as a loss).
+     * Performance ratio (IEC 61724-1:2021) Yf / Yr, the reference on the unobstructed module planes
+     * (so shading counts as a loss); 0 without modules.
      */
     public double performanceRatio() {
-        return poaUnobstructedKwhM2 > 0 && kwp > 0 ? specificYieldKwhKwp() / poaUnobstructedKwhM2 : 0;
+        double pr = year().performanceRatio();
+        return Double.isNaN(pr) ? 0 : pr;
     }
 }

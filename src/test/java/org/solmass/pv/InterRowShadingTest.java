@@ -91,7 +91,7 @@ class InterRowShadingTest {
         Scene scene = sceneWith(all);
         SunDirections sun = SunDirections.exact(w);
         PvArrays.Result r = PvArrays.run(scene, new boolean[scene.triangleCount()], List.of(all), new int[] {1}, m, w,
-                Perez.INSTANCE, sun, 0.2, new PvArrays.Settings(0.8, 1024, 5L, 4, 2));
+                Perez.INSTANCE, sun, 0.2, ZoneOffset.ofHours(1), new PvArrays.Settings(1024, 5L, 4, 2));
         // the middle row's middle modules: rows in front and behind, modules to both sides
         double poa = 0, unob = 0;
         double[] beam = new double[3], sky = new double[3], refl = new double[3], un = new double[3];
