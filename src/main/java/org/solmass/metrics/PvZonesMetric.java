@@ -29,7 +29,7 @@ import java.util.List;
 import java.util.Locale;
 
 /**
- * PV zones and their modules (docs/metrics.md "PV roof zones", "PV layout", "PV yield").
+ * PV zones and their modules (docs/metrics.md "PV roof zones"; docs/pv.md).
  *
  * <p>Suitability of a roof patch measures what the site does to it: {@code (1 - shading loss) x
  * (1 - orientation loss)}, the shading loss its irradiation against the same plane unobstructed

@@ -1,7 +1,7 @@
 package org.solmass.pv;
 
 /**
- * How modules are placed on a PV zone (study keys under {@code pv}, docs/metrics.md "PV layout").
+ * How modules are placed on a PV zone (study keys under {@code pv}, docs/pv.md "Layout").
  * Defaults are common practice for an indicative layout, not a design: setbacks from roof edges and
  * obstacles are set by local fire and building codes and by the wind-load design, which this tool
  * does not know; the racking geometry by the mounting system's maker.

@@ -14,7 +14,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Places modules in one PV zone (docs/metrics.md "PV layout").
+ * Places modules in one PV zone (docs/pv.md "Layout").
  *
  * <p>The zone outline, in its surface's 2D frame ({@link SurfaceFrame}), is shrunk by the setback with
  * a JTS negative buffer; what is left is the area modules may cover. Modules are placed on a regular

@@ -14,7 +14,7 @@ import java.util.List;
 /**
  * The PV stage of a run: the racks become geometry, every module substring's plane-of-array
  * irradiance is computed for every step, and each zone's modules are summed into a {@link ZoneYield}
- * (docs/metrics.md "PV layout" and "PV yield").
+ * (docs/pv.md "Layout" to "Yield per zone").
  *
  * <p>Racked modules are added to the ray scene ({@link Scene#withTriangles}) so that inter-row
  * shading and shading by parapets come from the ray engine; flush-mounted modules lie on their

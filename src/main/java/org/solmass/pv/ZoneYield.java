@@ -1,7 +1,7 @@
 package org.solmass.pv;
 
 /**
- * One PV zone's modules and what they deliver over the weather series (docs/metrics.md "PV yield",
+ * One PV zone's modules and what they deliver over the weather series (docs/pv.md "Yield per zone",
  * docs/pv.md for the loss chain).
  *
  * @param zone zone id
