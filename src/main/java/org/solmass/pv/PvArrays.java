@@ -10,6 +10,7 @@ import java.time.LocalDateTime;
 import java.time.ZoneId;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.stream.IntStream;
 
 /**
  * The PV stage of a run: the racks become geometry, every module substring's plane-of-array
@@ -91,22 +92,23 @@ public final class PvArrays {
     static ZoneYield zoneYield(PlaneOfArray poa, int zone, int first, int count, ModuleSpec module, ZoneId zoneId) {
         WeatherSeries w = poa.weather();
         int n = w.size(), S = module.bypassSubstrings();
-        double[] beam = new double[S], sky = new double[S], refl = new double[S], unob = new double[S];
         float[] sPoa = new float[n], sUnob = new float[n];
-        double[] monthPoa = new double[12];
-        double annualPoa = 0, annualUnob = 0;
         PvModule any = count > 0 ? poa.sight().modules().get(first) : null;
         boolean racked = any != null && any.racked();
         double tilt = any == null ? 0 : any.tiltDeg();
-        YieldTotals totals = count > 0 ? new YieldTotals(count * module.stcPowerW()) : null;
-        ZoneSeries series = count > 0 ? new ZoneSeries("zone " + zone, count * module.stcPowerW()) : null;
         YieldChain chain = YieldChain.defaults(module, !racked);
         double[] air = CellTemperature.airPerStep(w.steps());
-        List<ModuleIrradiance> group = new ArrayList<>(count);
-        for (int st = 0; st < n; st++) {
+        EnergyBalance[] energy = new EnergyBalance[n];
+        double[] cell = new double[n];
+        // steps in parallel, each into its own slots; summed below in step order (thread-count independent)
+        IntStream.range(0, n).parallel().forEach(st -> {
             Step step = w.step(st);
+            energy[st] = EnergyBalance.ZERO;
+            cell[st] = Double.NaN;
+            if (count == 0 || !(step.ghiWm2() > 0 || step.dhiWm2() > 0 || step.dniWm2() > 0)) return; // dark: nothing
+            double[] beam = new double[S], sky = new double[S], refl = new double[S], unob = new double[S];
+            List<ModuleIrradiance> group = new ArrayList<>(count);
             double poaSum = 0, unobSum = 0;
-            group.clear();
             for (int m = first; m < first + count; m++) {
                 double aoi = poa.module(m, st, beam, sky, refl, unob);
                 double u = 0;
@@ -117,19 +119,26 @@ public final class PvArrays {
                 unobSum += u;
                 group.add(new ModuleIrradiance(beam.clone(), sky.clone(), refl.clone(), u / S, aoi, Math.min(180, tilt)));
             }
-            double meanPoa = count > 0 ? poaSum / (count * S) : 0, meanUnob = count > 0 ? unobSum / (count * S) : 0;
-            sPoa[st] = (float) meanPoa;
-            sUnob[st] = (float) meanUnob;
-            double wh = step.weightedHours();
-            monthPoa[step.month() - 1] += meanPoa * wh / 1000;
-            annualPoa += meanPoa * wh / 1000;
-            annualUnob += meanUnob * wh / 1000;
-            if (count == 0) continue;
+            sPoa[st] = (float) (poaSum / (count * S));
+            sUnob[st] = (float) (unobSum / (count * S));
             ModuleDc dc = chain.dcSum(group, air[st], step.windMs());
-            EnergyBalance e = chain.acStep(dc, count, step.durationH());
-            totals.add(e, step.month(), step.weightDays());
+            energy[st] = chain.acStep(dc, count, step.durationH());
+            cell[st] = dc.meanCellC();
+        });
+        double[] monthPoa = new double[12];
+        double annualPoa = 0, annualUnob = 0;
+        YieldTotals totals = count > 0 ? new YieldTotals(count * module.stcPowerW()) : null;
+        ZoneSeries series = count > 0 ? new ZoneSeries("zone " + zone, count * module.stcPowerW()) : null;
+        for (int st = 0; st < n; st++) {
+            Step step = w.step(st);
+            double wh = step.weightedHours();
+            monthPoa[step.month() - 1] += sPoa[st] * wh / 1000;
+            annualPoa += sPoa[st] * wh / 1000;
+            annualUnob += sUnob[st] * wh / 1000;
+            if (count == 0) continue;
+            totals.add(energy[st], step.month(), step.weightDays());
             series.add(LocalDateTime.ofInstant(step.start(), zoneId.getRules().getStandardOffset(step.start())),
-                    step.durationH(), dc.meanCellC(), e);
+                    step.durationH(), cell[st], energy[st]);
         }
         return new ZoneYield(zone, count, racked, tilt, any == null ? 0 : any.azimuthDeg(), count * module.stcPowerW() / 1000,
                 count * module.areaM2(), annualPoa, annualUnob, monthPoa, totals, series, sPoa, sUnob);
