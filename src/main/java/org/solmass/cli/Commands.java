@@ -8,7 +8,7 @@ final class Commands {
 
     static List<Object> all() {
         return List.of(new AnalyseCommand(), new SkyViewCommand(), new SunCommand(), new PlaneCommand(),
-                new MakeWeatherCommand(), new BenchCommand(), new BenchAnalysisCommand(), new ViewCommand(),
+                new MakeWeatherCommand(), new BenchCommand(), new BenchAnalysisCommand(), new BenchPvCommand(), new ViewCommand(),
                 new CompareCommand(), new ClimateCommand(), new ShadowsCommand(), new ElevationsCommand(), new ReportCommand());
     }
 }

@@ -177,8 +177,7 @@ public final class ShadedIrradiation {
         final int[] refIdx;
         final float[] refW, refW2;
         final long[] refKey;
-        final double[] horizonDir = new double[3 * HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
-        final double[] horizonCosElev = new double[HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
+        final HorizonBand horizon = new HorizonBand();
         /** A radiance distribution's per-patch view of the sky, or null for a three-part sky model. */
         final SkyPatchView skyView;
         ViewFactors vf;
@@ -191,7 +190,7 @@ public final class ShadedIrradiation {
             sampler = new HemisphereSampler(scene, in.raysPerPatch());
             reflectorSampler = new HemisphereSampler(scene, in.reflectorRays());
             bundle = scene.bundleTracer();
-            int bundleMax = Math.max(in.sun().count(), HORIZON_ELEVATIONS * HORIZON_AZIMUTHS);
+            int bundleMax = in.sun().count();
             bundleDir = new double[3 * bundleMax];
             bundleW = new double[bundleMax];
             sunIndex = new int[bundleMax];
@@ -207,17 +206,6 @@ public final class ShadedIrradiation {
             refW2 = new float[maxRays];
             refKey = new long[maxRays];
             skyView = in.steps().skyPatches != null ? new SkyPatchView(in.steps().skyPatches, bundle) : null;
-            int h = 0;
-            for (int e = 0; e < HORIZON_ELEVATIONS; e++) {
-                double el = Math.toRadians((e + 0.5) * HORIZON_BAND_DEG / HORIZON_ELEVATIONS);
-                for (int a = 0; a < HORIZON_AZIMUTHS; a++, h++) {
-                    double az = 2 * Math.PI * (a + 0.5) / HORIZON_AZIMUTHS;
-                    horizonDir[3 * h] = Math.sin(az) * Math.cos(el);
-                    horizonDir[3 * h + 1] = Math.cos(az) * Math.cos(el);
-                    horizonDir[3 * h + 2] = Math.sin(el);
-                    horizonCosElev[h] = Math.cos(el);
-                }
-            }
         }
 
         /** First pass of receiver r: view factors, visibilities, beam + diffuse slot sums. */
@@ -231,7 +219,7 @@ public final class ShadedIrradiation {
             if (skyView != null) skyView.measure(ox, oy, oz, nx, ny, nz, dir, cls, hs.rayCount());
             collectReflectors(hs.rayCount(), ox, oy, oz); // every receiver: reflectors reflect what they receive
             // a horizontal reflector-only receiver (ground probe) weights the horizon band by sin(tilt) = 0
-            horizonVis = analysed || rc.sinTilt(r) > 0 ? horizonVisibility(ox, oy, oz, nx, ny, nz) : 0;
+            horizonVis = analysed || rc.sinTilt(r) > 0 ? horizon.visibility(bundle, ox, oy, oz, nx, ny, nz) : 0;
             sunVisibility(ox, oy, oz, nx, ny, nz);
             accumulate(nx, ny, nz, rc.cosTilt(r), rc.sinTilt(r), analysed);
         }
@@ -289,26 +277,6 @@ public final class ShadedIrradiation {
             refCount = m;
             ghiAlbedo = ghi * inv;
             ghiAlbedo2 = ghi2 * inv;
-        }
-
-        private double horizonVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {
-            double all = 0;
-            int m = 0;
-            for (int h = 0; h < horizonCosElev.length; h++) { // the band rays in front of the patch, together
-                double dx = horizonDir[3 * h], dy = horizonDir[3 * h + 1], dz = horizonDir[3 * h + 2];
-                double c = nx * dx + ny * dy + nz * dz;
-                if (c <= 0) continue;
-                double w = c * horizonCosElev[h];
-                all += w;
-                bundleDir[3 * m] = dx;
-                bundleDir[3 * m + 1] = dy;
-                bundleDir[3 * m + 2] = dz;
-                bundleW[m++] = w;
-            }
-            bundle.occluded(ox, oy, oz, bundleDir, null, m, blocked);
-            double seen = 0;
-            for (int i = 0; i < m; i++) if (!blocked[i]) seen += bundleW[i];
-            return all > 0 ? seen / all : 0;
         }
 
         private void sunVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {

@@ -53,8 +53,16 @@ public final class PvZones {
      * @param minZoneM2 smallest zone kept, m2
      * @param moduleEfficiency 0..1
      * @param performanceRatio 0..1
+     * @param layout how modules are placed in a zone
+     * @param sunBins sky cells the sun is binned into for an hourly year (as the irradiation stage)
      */
-    public record Settings(double suitablePct, double minZoneM2, double moduleEfficiency, double performanceRatio) {}
+    public record Settings(double suitablePct, double minZoneM2, double moduleEfficiency, double performanceRatio,
+                           org.solmass.pv.LayoutOptions layout, int sunBins) {
+        /** Settings with the default layout and 4096 sun cells. */
+        public Settings(double suitablePct, double minZoneM2, double moduleEfficiency, double performanceRatio) {
+            this(suitablePct, minZoneM2, moduleEfficiency, performanceRatio, org.solmass.pv.LayoutOptions.DEFAULTS, 4096);
+        }
+    }
 
     /**
      * One zone.
@@ -74,10 +82,11 @@ public final class PvZones {
      * @param azimuthDeg azimuth of the roof surface, degrees from north clockwise
      * @param outlines the zone's boundary rings as closed polylines of x,y,z triples (world, metres;
      *                 the first corner is not repeated)
+     * @param localOutline the zone's outline in its surface's 2D frame ({@link Surface#frame()}), metres
      */
     public record Zone(int id, int block, String blockName, int surface, String surfaceLabel, int[] patches,
                        double areaM2, double meanKwhM2, double totalKwh, double meanShadingLossPct, double yieldKwh,
-                       double tiltDeg, double azimuthDeg, List<double[]> outlines) {}
+                       double tiltDeg, double azimuthDeg, List<double[]> outlines, Geometry localOutline) {}
 
     /**
      * @param best the best unobstructed plane
@@ -102,12 +111,23 @@ public final class PvZones {
         int n = patches.size();
         double[] suit = new double[n];
         Arrays.fill(suit, Double.NaN);
+        for (int p = 0; p < n; p++) {
+            if (patches.get(p).kind() != SurfaceKind.ROOF) continue;
+            suit[p] = best.annualKwhM2() > 0 ? 100 * annualKwhM2[p] / best.annualKwhM2() : 0;
+        }
+        return compute(patches, surfaces, annualKwhM2, shadingLossPct, suit, patchM, best, s);
+    }
+
+    /**
+     * As {@link #compute(List, List, double[], double[], double, BestPlane, Settings)} with the
+     * suitability per patch given (NaN where a patch may not hold a zone).
+     */
+    public static Result compute(List<Patch> patches, List<Surface> surfaces, double[] annualKwhM2,
+                                 double[] shadingLossPct, double[] suit, double patchM, BestPlane best, Settings s) {
+        int n = patches.size();
         Map<Integer, List<Integer>> bySurface = new LinkedHashMap<>();
         for (int p = 0; p < n; p++) {
-            Patch q = patches.get(p);
-            if (q.kind() != SurfaceKind.ROOF) continue;
-            suit[p] = best.annualKwhM2() > 0 ? 100 * annualKwhM2[p] / best.annualKwhM2() : 0;
-            if (suit[p] >= s.suitablePct()) bySurface.computeIfAbsent(q.surface(), k -> new ArrayList<>()).add(p);
+            if (suit[p] >= s.suitablePct()) bySurface.computeIfAbsent(patches.get(p).surface(), k -> new ArrayList<>()).add(p);
         }
         int[] zoneOf = new int[n];
         List<Zone> zones = new ArrayList<>();
@@ -154,7 +174,7 @@ public final class PvZones {
                 Geometry union = OverlayNGRobust.union(gf.buildGeometry(parts));
                 zones.add(new Zone(id, sf.block(), patches.get(idx[0]).blockName(), sid, sf.label(), idx, area,
                         irr / area, irr, loss / area, irr * s.moduleEfficiency() * s.performanceRatio(),
-                        sf.tiltDeg(), sf.azimuthDeg(), rings(union, sf.frame())));
+                        sf.tiltDeg(), sf.azimuthDeg(), rings(union, sf.frame()), union));
             }
         }
         return new Result(best, suit, zoneOf, List.copyOf(zones));

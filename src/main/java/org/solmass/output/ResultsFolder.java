@@ -24,8 +24,9 @@ public final class ResultsFolder {
     public static final String PATCHES = "patches.csv", SUMMARY = "summary.json", MAP = "map.png",
             MONTH_HOUR = "month-hour.csv";
     /** Every output a run may write (run.json apart): what a results folder holds. */
-    public static final List<String> OUTPUT_NAMES = List.of(PATCHES, MONTH_HOUR, ZoneCsvWriter.FILE_NAME, SUMMARY, MAP,
-            GltfWriter.FILE_NAME, GeoJsonWriter.PATCHES, GeoJsonWriter.ZONES);
+    public static final List<String> OUTPUT_NAMES = List.of(PATCHES, MONTH_HOUR, ZoneCsvWriter.FILE_NAME,
+            PvSeriesCsvWriter.FILE_NAME, ModulesGeoJsonWriter.FILE_NAME, SUMMARY, MAP, GltfWriter.FILE_NAME,
+            GeoJsonWriter.PATCHES, GeoJsonWriter.ZONES);
     /** The column the map, glTF colours and the thresholds use. */
     public static final Column MAIN_COLUMN = IrradiationColumns.ANNUAL;
 
@@ -92,8 +93,18 @@ public final class ResultsFolder {
         if (o.monthHourCsv() && r.monthHourWm2() != null) {
             pub.write(MONTH_HOUR, p -> MonthHourCsvWriter.write(p, r.table().patches(), r.monthHourWm2()));
         }
-        PvZones.Result pv = r.metrics().find(PvZonesMetric.Found.class).map(PvZonesMetric.Found::zones).orElse(null);
-        if (pv != null) pub.write(ZoneCsvWriter.FILE_NAME, p -> ZoneCsvWriter.write(p, pv.zones()));
+        PvZonesMetric.Found found = r.metrics().find(PvZonesMetric.Found.class).orElse(null);
+        PvZones.Result pv = found == null ? null : found.zones();
+        if (found != null) {
+            pub.write(ZoneCsvWriter.FILE_NAME, p -> ZoneCsvWriter.write(p, pv.zones(), found.orientationLossPct(),
+                    found.arrays().zones()));
+            if (!found.arrays().zones().isEmpty()) {
+                pub.write(PvSeriesCsvWriter.FILE_NAME, p -> PvSeriesCsvWriter.write(p, found.arrays().poa().weather(),
+                        found.arrays().zones()));
+            }
+            pub.write(ModulesGeoJsonWriter.FILE_NAME, p -> ModulesGeoJsonWriter.write(p, found.arrays().modules(),
+                    org.solmass.Cautions.RESULTS));
+        }
         SummaryWriter.Spec spec = SummaryWriter.Spec.standard(o.thresholdsKwhM2()).with(r.metrics().summaryColumns())
                 .withStoreyHeight(o.storeyHeightM());
         List<String> texts = new ArrayList<>(r.cautions());
@@ -111,10 +122,11 @@ public final class ResultsFolder {
             Column col = r.table().has(MAIN_COLUMN.name()) ? MAIN_COLUMN : r.table().columns().get(0);
             List<double[]> outlines = new ArrayList<>();
             if (pv != null) for (PvZones.Zone z : pv.zones()) outlines.addAll(z.outlines());
+            if (found != null) for (org.solmass.pv.PvModule m : found.arrays().modules()) outlines.add(moduleRing(m));
             pub.write(MAP, p -> MapRenderer.write(p, r.model(), r.study().model().analysedMask(r.model().blockNames()), r.table().patches(),
                     r.table().column(col.name()), col.label(), col.unit().symbol(),
                     MapRenderer.Options.of(o.mapWidthPx(), o.mapHeightPx(), r.study().name()).withPeriod(RunPeriod.of(r.run())),
-                    new MapRenderer.Extras(false, outlines, "PV roof zone (zones.csv)")));
+                    new MapRenderer.Extras(false, outlines, "PV zone (zones.csv) and modules (modules.geojson)")));
         }
         if (o.gltf() && r.table().has(MAIN_COLUMN.name()) && r.table().size() > 0) {
             pub.write(GltfWriter.FILE_NAME, p -> GltfWriter.write(p, r.table(), MAIN_COLUMN.name(),
@@ -141,5 +153,17 @@ public final class ResultsFolder {
                 + " E = origin_x + x cos(north_deg) + y sin(north_deg), N = origin_y - x sin(north_deg) + y cos(north_deg)"
                 + " in working_crs; patches.geojson gives each patch in WGS84 and in crs");
         return o;
+    }
+
+    /** A module's outline as a closed polyline of x,y,z triples (first corner not repeated). */
+    private static double[] moduleRing(org.solmass.pv.PvModule m) {
+        org.solmass.model.Vec3[] c = m.corners();
+        double[] out = new double[12];
+        for (int k = 0; k < 4; k++) {
+            out[3 * k] = c[k].x();
+            out[3 * k + 1] = c[k].y();
+            out[3 * k + 2] = c[k].z();
+        }
+        return out;
     }
 }

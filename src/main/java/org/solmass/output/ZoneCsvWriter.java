@@ -1,27 +1,51 @@
 package org.solmass.output;
 
 import org.solmass.metrics.PvZones;
+import org.solmass.pv.ZoneYield;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Writes zones.csv: one row per PV roof zone ({@link PvZones}). Same conventions as patches.csv (UTF-8,
- * LF, header row first, no comment lines, RFC 4180 quoting, fixed decimals); the caution, the best plane
- * and the settings go to summary.json. Columns: docs/outputs.md.
+ * Writes zones.csv: one row per PV zone ({@link PvZones}) with its modules and yield ({@link ZoneYield}).
+ * Same conventions as patches.csv (UTF-8, LF, header row first, no comment lines, RFC 4180 quoting,
+ * fixed decimals); the caution, the best plane and the settings go to summary.json. Columns: docs/outputs.md.
  */
 public final class ZoneCsvWriter {
     public static final String FILE_NAME = "zones.csv";
-    public static final List<String> COLUMNS = List.of("zone", "block", "surface", "patches", "area_m2", "tilt_deg",
-            "azimuth_deg", "mean_kwh_m2", "total_kwh", "mean_shading_loss_pct", "yield_kwh");
+    /** The monthly yield columns, yield_m01_kwh .. yield_m12_kwh. */
+    static final List<String> MONTHS;
+    public static final List<String> COLUMNS;
+
+    static {
+        List<String> m = new ArrayList<>();
+        for (int i = 1; i <= 12; i++) m.add(String.format("yield_m%02d_kwh", i));
+        MONTHS = List.copyOf(m);
+        List<String> c = new ArrayList<>(List.of("zone", "block", "surface", "patches", "area_m2", "tilt_deg",
+                "azimuth_deg", "mean_kwh_m2", "total_kwh", "mean_shading_loss_pct", "orientation_loss_pct", "mounting",
+                "modules", "kwp", "module_tilt_deg", "module_azimuth_deg", "poa_kwh_m2", "poa_unobstructed_kwh_m2",
+                "module_shading_loss_pct", "reference_kwh", "shading_loss_kwh", "incidence_loss_kwh", "mismatch_loss_kwh",
+                "temperature_loss_kwh", "other_dc_loss_kwh", "inverter_loss_kwh", "clipping_loss_kwh", "yield_kwh",
+                "specific_yield_kwh_kwp", "performance_ratio"));
+        c.addAll(MONTHS);
+        COLUMNS = List.copyOf(c);
+    }
 
     private ZoneCsvWriter() {}
 
-    public static void write(Path file, List<PvZones.Zone> zones) {
+    /**
+     * @param zones the zones
+     * @param orientationLossPct per zone (same order): area-weighted mean orientation loss, %
+     * @param yields per zone (same order): modules and yield
+     */
+    public static void write(Path file, List<PvZones.Zone> zones, double[] orientationLossPct, List<ZoneYield> yields) {
         AtomicFiles.writeText(file, w -> {
             w.write(String.join(",", COLUMNS) + "\n");
-            StringBuilder sb = new StringBuilder(256);
-            for (PvZones.Zone z : zones) {
+            StringBuilder sb = new StringBuilder(512);
+            for (int i = 0; i < zones.size(); i++) {
+                PvZones.Zone z = zones.get(i);
+                ZoneYield y = yields.get(i);
                 sb.setLength(0);
                 sb.append(z.id()).append(',');
                 PatchCsvWriter.text(sb, z.blockName());
@@ -32,7 +56,27 @@ public final class ZoneCsvWriter {
                 num(sb, z.meanKwhM2(), 2);
                 num(sb, z.totalKwh(), 1);
                 num(sb, z.meanShadingLossPct(), 2);
-                num(sb, z.yieldKwh(), 1);
+                num(sb, orientationLossPct[i], 2);
+                sb.append(',').append(y.racked() ? "racked" : "flush").append(',').append(y.modules());
+                num(sb, y.kwp(), 2);
+                num(sb, y.tiltDeg(), 2);
+                num(sb, y.azimuthDeg(), 2);
+                num(sb, y.poaKwhM2(), 2);
+                num(sb, y.poaUnobstructedKwhM2(), 2);
+                num(sb, y.shadingLossPct(), 2);
+                org.solmass.pv.EnergyBalance e = y.year();
+                num(sb, e.referenceWh() / 1000, 1);
+                num(sb, e.shadingWh() / 1000, 1);
+                num(sb, e.incidenceWh() / 1000, 1);
+                num(sb, e.mismatchWh() / 1000, 1);
+                num(sb, e.temperatureWh() / 1000, 1);
+                num(sb, e.dcOtherWh() / 1000, 1);
+                num(sb, e.inverterWh() / 1000, 1);
+                num(sb, e.clippingWh() / 1000, 1);
+                num(sb, y.yieldKwh(), 1);
+                num(sb, y.specificYieldKwhKwp(), 1);
+                num(sb, y.performanceRatio(), 3);
+                for (int m = 1; m <= 12; m++) num(sb, y.monthYieldKwh(m), 1);
                 sb.append('\n');
                 w.write(sb.toString());
             }

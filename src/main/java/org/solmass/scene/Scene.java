@@ -156,6 +156,30 @@ public final class Scene {
         return new Scene(r, b, shift, infiniteGroundPlane, groundZ, n);
     }
 
+    /**
+     * A new scene of this scene's triangles followed by {@code extraSoup} (9 floats per triangle,
+     * world coordinates), with the same ground plane: for objects added to a model, e.g. PV module
+     * racks. Triangle {@code i < triangleCount()} keeps its index; the extra ones follow. The corners of
+     * this scene's triangles are read back from storage (float, relative to the storage origin), so
+     * they may differ from the model's by one float step.
+     */
+    public Scene withTriangles(float[] extraSoup) {
+        if (extraSoup.length % 9 != 0) throw new IllegalArgumentException("triangle soup length not a multiple of 9");
+        float[] soup = new float[9 * triangleCount + extraSoup.length];
+        for (int i = 0; i < triangleCount; i++) {
+            int t = TRI_WORDS * i, o = 9 * triOriginal[i];
+            for (int k = 0; k < 3; k++) {
+                double v0 = tris[t + k] + (k == 0 ? shiftX : k == 1 ? shiftY : shiftZ);
+                soup[o + k] = (float) v0;
+                soup[o + 3 + k] = (float) (v0 + tris[t + 3 + k]);
+                soup[o + 6 + k] = (float) (v0 + tris[t + 6 + k]);
+            }
+        }
+        System.arraycopy(extraSoup, 0, soup, 9 * triangleCount, extraSoup.length);
+        Scene extended = build(soup, groundPlane, groundZ);
+        return horizon.isNone() ? extended : extended.withHorizon(horizon); // the far horizon stays
+    }
+
     /** A new query object for the calling thread (owns its traversal stack; not thread-safe). */
     public Tracer tracer() {
         return new Tracer(this);

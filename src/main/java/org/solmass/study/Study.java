@@ -84,7 +84,8 @@ public record Study(String name, String description, Path source, Model model, S
     /** The metrics' settings from the study's {@code sun_hours} and {@code pv} keys. */
     public org.solmass.metrics.MetricContext.Settings metricSettings() {
         return new org.solmass.metrics.MetricContext.Settings(sunHours.dates(), sunHours.stepMinutes(), sunHours.minElevationDeg(),
-                new org.solmass.metrics.PvZones.Settings(pv.suitablePct(), pv.minZoneM2(), pv.moduleEfficiency(), pv.performanceRatio()));
+                new org.solmass.metrics.PvZones.Settings(pv.suitablePct(), pv.minZoneM2(), pv.moduleEfficiency(), pv.performanceRatio(),
+                        pv.layout(), sunBins));
     }
 
     /**
@@ -123,19 +124,25 @@ public record Study(String name, String description, Path source, Model model, S
     }
 
     /**
-     * PV roof zones (docs/metrics.md).
+     * PV zones, layout and yield (docs/metrics.md).
      *
-     * @param suitablePct a roof patch is suitable at or above this share of the best unobstructed plane's
-     *                    annual irradiation, percent
+     * @param suitablePct a roof patch is suitable at or above this suitability, percent
      * @param minZoneM2 smallest zone kept, square metres
-     * @param moduleEfficiency module efficiency at standard test conditions, 0..1
-     * @param performanceRatio system performance ratio, 0..1
+     * @param moduleEfficiency module efficiency at standard test conditions, 0..1 (that of {@code layout}'s module)
+     * @param performanceRatio system performance ratio, 0..1, from plane-of-array irradiation to AC energy
+     * @param layout the module and how modules are placed
      */
-    public record Pv(double suitablePct, double minZoneM2, double moduleEfficiency, double performanceRatio) {
+    public record Pv(double suitablePct, double minZoneM2, double moduleEfficiency, double performanceRatio,
+                     org.solmass.pv.LayoutOptions layout) {
         public static final double DEFAULT_SUITABLE_PCT = 80, DEFAULT_MIN_ZONE_M2 = 10,
-                DEFAULT_MODULE_EFFICIENCY = 0.20, DEFAULT_PERFORMANCE_RATIO = 0.80;
+                DEFAULT_MODULE_EFFICIENCY = org.solmass.pv.ModuleSpec.DEFAULT.efficiency(), DEFAULT_PERFORMANCE_RATIO = 0.80;
         public static final Pv DEFAULTS = new Pv(DEFAULT_SUITABLE_PCT, DEFAULT_MIN_ZONE_M2, DEFAULT_MODULE_EFFICIENCY,
-                DEFAULT_PERFORMANCE_RATIO);
+                DEFAULT_PERFORMANCE_RATIO, org.solmass.pv.LayoutOptions.DEFAULTS);
+
+        /** Settings with the default layout. */
+        public Pv(double suitablePct, double minZoneM2, double moduleEfficiency, double performanceRatio) {
+            this(suitablePct, minZoneM2, moduleEfficiency, performanceRatio, org.solmass.pv.LayoutOptions.DEFAULTS);
+        }
     }
 
     /**

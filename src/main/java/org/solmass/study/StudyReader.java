@@ -258,12 +258,56 @@ public final class StudyReader {
     /** The {@code pv} section. */
     private static Study.Pv pv(JsonCursor c) {
         JsonCursor k = c.object("pv");
+        org.solmass.pv.LayoutOptions d = org.solmass.pv.LayoutOptions.DEFAULTS;
+        org.solmass.pv.ModuleSpec m = module(k, d.module());
+        if (k.has("module_efficiency")) {
+            if (k.has("module") && k.object("module").has("power_w")) {
+                throw k.error("module_efficiency", "give either module_efficiency or module.power_w, not both");
+            }
+            double eff = k.positive("module_efficiency", m.efficiency(), 0, 1);
+            m = new org.solmass.pv.ModuleSpec(m.lengthM(), m.widthM(), eff * 1000 * m.areaM2(), m.tempCoeffPerK(), m.bypassSubstrings());
+        }
+        double gcr = k.positive("ground_coverage_ratio", d.groundCoverageRatio(), 0, 0.95);
+        double pitch = k.number("row_pitch_m", 0.0, 0, 100);
+        if (k.has("row_pitch_m") && pitch < m.widthM()) {
+            throw k.error("row_pitch_m", String.format(java.util.Locale.ROOT,
+                    "expected at least the module width %.3f m (rows would overlap), got %s", m.widthM(), k.raw("row_pitch_m")));
+        }
+        org.solmass.pv.LayoutOptions lo = new org.solmass.pv.LayoutOptions(m,
+                k.number("setback_m", d.setbackM(), 0, 50),
+                k.number("flat_max_tilt_deg", d.flatMaxTiltDeg(), 0, 30),
+                k.number("rack_tilt_deg", d.rackTiltDeg(), 0, 60),
+                k.has("rack_azimuth_deg") ? k.number("rack_azimuth_deg", null, 0, 360) % 360 : Double.NaN,
+                gcr, pitch,
+                k.number("rack_clearance_m", d.rackClearanceM(), 0, 5),
+                k.bool("facades", d.facades()));
         Study.Pv pv = new Study.Pv(k.number("suitable_pct", Study.Pv.DEFAULT_SUITABLE_PCT, 0, 100),
                 k.number("min_zone_m2", Study.Pv.DEFAULT_MIN_ZONE_M2, 0, 1e6),
-                k.positive("module_efficiency", Study.Pv.DEFAULT_MODULE_EFFICIENCY, 0, 1),
-                k.positive("performance_ratio", Study.Pv.DEFAULT_PERFORMANCE_RATIO, 0, 1));
+                m.efficiency(),
+                k.positive("performance_ratio", Study.Pv.DEFAULT_PERFORMANCE_RATIO, 0, 1), lo);
         k.finish();
         return pv;
+    }
+
+    /** The {@code pv.module} section: the module's datasheet values. */
+    private static org.solmass.pv.ModuleSpec module(JsonCursor pv, org.solmass.pv.ModuleSpec d) {
+        JsonCursor k = pv.object("module");
+        double length = k.positive("length_m", d.lengthM(), 0, 5);
+        double width = k.positive("width_m", d.widthM(), 0, 5);
+        if (width > length) {
+            throw k.error("width_m", String.format(java.util.Locale.ROOT,
+                    "expected at most the module length %s m (the width is the short side), got %s", fmtM(length), k.raw("width_m")));
+        }
+        org.solmass.pv.ModuleSpec m = new org.solmass.pv.ModuleSpec(length, width,
+                k.positive("power_w", d.stcPowerW(), 0, 2000),
+                k.has("temp_coeff_pct_per_k") ? Math.rint(k.number("temp_coeff_pct_per_k", null, -1.99, 0) * 1e10) / 1e12 : d.tempCoeffPerK(),
+                k.integer("substrings", d.bypassSubstrings(), 1, 12));
+        k.finish();
+        return m;
+    }
+
+    private static String fmtM(double v) {
+        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
     }
 
     private static Climate climate(JsonCursor c, Path base) {

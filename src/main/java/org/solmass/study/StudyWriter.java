@@ -107,8 +107,22 @@ public final class StudyWriter {
         ObjectNode pv = root.putObject("pv");
         pv.put("suitable_pct", s.pv().suitablePct());
         pv.put("min_zone_m2", s.pv().minZoneM2());
-        pv.put("module_efficiency", s.pv().moduleEfficiency());
         pv.put("performance_ratio", s.pv().performanceRatio());
+        org.solmass.pv.LayoutOptions lo = s.pv().layout();
+        pv.put("setback_m", lo.setbackM());
+        pv.put("flat_max_tilt_deg", lo.flatMaxTiltDeg());
+        pv.put("rack_tilt_deg", lo.rackTiltDeg());
+        if (!Double.isNaN(lo.rackAzimuthDeg())) pv.put("rack_azimuth_deg", lo.rackAzimuthDeg());
+        pv.put("ground_coverage_ratio", lo.groundCoverageRatio());
+        if (lo.rowPitchM() > 0) pv.put("row_pitch_m", lo.rowPitchM());
+        pv.put("rack_clearance_m", lo.rackClearanceM());
+        pv.put("facades", lo.facades());
+        ObjectNode mod = pv.putObject("module");
+        mod.put("length_m", lo.module().lengthM());
+        mod.put("width_m", lo.module().widthM());
+        mod.put("power_w", lo.module().stcPowerW());
+        mod.put("temp_coeff_pct_per_k", Math.rint(lo.module().tempCoeffPerK() * 100 * 1e9) / 1e9);
+        mod.put("substrings", lo.module().bypassSubstrings());
 
         org.solmass.terrain.TerrainSpec tr = s.terrain();
         if (!tr.isNone()) { // left out without terrain, so that results of earlier versions compare byte for byte

@@ -159,6 +159,9 @@ final class BadInputCases {
         study("study-rays-zero", studyJson(GOOD_SITE, ",\n  \"rays\": 0").replace("\"rays\": 16,", ""));
         study("study-unknown-key", studyJson(GOOD_SITE, ",\n  \"ray_count\": 64"));
         study("study-unknown-sky", studyJson(GOOD_SITE, ",\n  \"sky\": \"cloudy\""));
+        study("study-pv-gcr-one", studyJson(GOOD_SITE, ",\n  \"pv\": {\"ground_coverage_ratio\": 1}"));
+        study("study-pv-row-pitch-below-module-width", studyJson(GOOD_SITE, ",\n  \"pv\": {\"row_pitch_m\": 0.8}"));
+        study("study-pv-module-wider-than-long", studyJson(GOOD_SITE, ",\n  \"pv\": {\"module\": {\"length_m\": 1.0, \"width_m\": 1.7}}"));
         study("study-unknown-block", "{\n  \"model\": {\"file\": \"m.obj\", \"analyse\": [\"west\", \"tower\"]},\n  \"site\": "
                 + GOOD_SITE + "\n}\n");
         study("study-block-analysed-and-context", "{\n  \"model\": {\"file\": \"m.obj\", \"analyse\": [\"west\"], \"context\": [\"west\"]},\n  \"site\": "

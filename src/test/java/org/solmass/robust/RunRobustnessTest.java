@@ -258,7 +258,8 @@ class RunRobustnessTest {
         assertEquals("also mine", Files.readString(out.resolve("compare/delta.csv")));
         Seen s = read(out);
         assertNull(s.refusal());
-        assertEquals(List.of("patches.csv", "zones.csv", "summary.json", "map.png"), List.copyOf(s.files().keySet()));
+        assertEquals(List.of("patches.csv", "zones.csv", "pv-series.csv", "modules.geojson", "summary.json", "map.png"),
+                List.copyOf(s.files().keySet()));
     }
 
     /**

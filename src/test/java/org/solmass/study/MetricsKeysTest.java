@@ -34,7 +34,8 @@ class MetricsKeysTest {
         assertEquals(List.of(MonthDay.of(3, 21)), s.sunHours().dates());
         assertEquals(5, s.sunHours().stepMinutes());
         assertEquals(5.0, s.sunHours().minElevationDeg());
-        assertEquals(new Study.Pv(80, 10, 0.20, 0.80), s.pv());
+        assertEquals(Study.Pv.DEFAULTS, s.pv());
+        assertEquals(org.solmass.pv.ModuleSpec.DEFAULT, s.pv().layout().module());
         assertTrue(s.outputs().gltf());
     }
 
@@ -45,7 +46,11 @@ class MetricsKeysTest {
                 + " \"outputs\": {\"gltf\": false}");
         assertEquals(List.of(MonthDay.of(2, 29), MonthDay.of(12, 21)), s.sunHours().dates());
         assertEquals(new Study.SunHours(List.of(MonthDay.of(2, 29), MonthDay.of(12, 21)), 10, 0), s.sunHours());
-        assertEquals(new Study.Pv(75, 4, 0.22, 0.85), s.pv());
+        assertEquals(75, s.pv().suitablePct());
+        assertEquals(4, s.pv().minZoneM2());
+        assertEquals(0.85, s.pv().performanceRatio());
+        assertEquals(0.22, s.pv().moduleEfficiency(), 1e-12);
+        assertEquals(0.22 * 1000 * org.solmass.pv.ModuleSpec.DEFAULT.areaM2(), s.pv().layout().module().stcPowerW(), 1e-9);
         assertTrue(!s.outputs().gltf());
         Path again = dir.resolve("again.json");
         Files.writeString(again, StudyWriter.toJson(s));
@@ -53,6 +58,29 @@ class MetricsKeysTest {
         assertEquals(s.sunHours(), t.sunHours());
         assertEquals(s.pv(), t.pv());
         assertEquals(s.outputs(), t.outputs());
+    }
+
+    @Test
+    void layoutKeysReadAndWriteBack() throws Exception {
+        Study s = read(", \"pv\": {\"setback_m\": 0.6, \"rack_tilt_deg\": 20, \"rack_azimuth_deg\": 170, \"ground_coverage_ratio\": 0.5,"
+                + " \"rack_clearance_m\": 0.3, \"flat_max_tilt_deg\": 8, \"facades\": true,"
+                + " \"module\": {\"length_m\": 2.0, \"width_m\": 1.0, \"power_w\": 420, \"temp_coeff_pct_per_k\": -0.3, \"substrings\": 2}}");
+        org.solmass.pv.LayoutOptions lo = s.pv().layout();
+        assertEquals(new org.solmass.pv.ModuleSpec(2.0, 1.0, 420, -0.003, 2), lo.module());
+        assertEquals(0.6, lo.setbackM());
+        assertEquals(20, lo.rackTiltDeg());
+        assertEquals(170, lo.rackAzimuthDeg(51));
+        assertEquals(0.5, lo.groundCoverageRatio());
+        assertEquals(2.0, lo.pitchM(), 1e-12);
+        assertEquals(0.3, lo.rackClearanceM());
+        assertEquals(8, lo.flatMaxTiltDeg());
+        assertTrue(lo.facades());
+        assertEquals(0.21, s.pv().moduleEfficiency(), 1e-12);
+        Path again = dir.resolve("again.json");
+        Files.writeString(again, StudyWriter.toJson(s));
+        assertEquals(s.pv(), StudyReader.read(again).pv());
+        assertEquals(180, read("").pv().layout().rackAzimuthDeg(51));
+        assertEquals(0, read("").pv().layout().rackAzimuthDeg(-33));
     }
 
     @Test
@@ -65,6 +93,10 @@ class MetricsKeysTest {
         assertTrue(error(", \"pv\": {\"suitable_pct\": 120}").contains("pv.suitable_pct"));
         assertTrue(error(", \"pv\": {\"module_efficiency\": 0}").contains("pv.module_efficiency"));
         assertTrue(error(", \"pv\": {\"colour\": 1}").contains("pv"));
+        assertTrue(error(", \"pv\": {\"ground_coverage_ratio\": 1}").contains("pv.ground_coverage_ratio"));
+        assertTrue(error(", \"pv\": {\"row_pitch_m\": 0.5}").contains("pv.row_pitch_m"));
+        assertTrue(error(", \"pv\": {\"module\": {\"width_m\": 2.5}}").contains("pv.module.width_m"));
+        assertTrue(error(", \"pv\": {\"module_efficiency\": 0.2, \"module\": {\"power_w\": 400}}").contains("not both"));
     }
 
     @Test

@@ -45,7 +45,7 @@ class QuantityTest {
         assertFalse(sun.pvOrRoof());
         assertEquals("EN 17037 sunlight level on 21 March", level.label());
         assertEquals("1", level.format(1.0), "a level prints as a whole number");
-        assertEquals("PV suitability (share of the best plane) (%)", suit.title());
+        assertEquals("PV suitability (after shading and orientation losses) (%)", suit.title());
         assertTrue(suit.pvOrRoof() && zone.pvOrRoof(), "PV quantities are shown with the caution");
         assertEquals("3", zone.format(3.0));
         assertEquals("no value", zone.format(Double.NaN));

@@ -1,0 +1,60 @@
+package org.solmass.irradiation;
+
+import org.solmass.scene.BundleTracer;
+
+/**
+ * The rays that measure how much of the Perez horizon band a point sees: 3 elevations x 72 azimuths
+ * spread evenly over 0 to {@value ShadedIrradiation#HORIZON_BAND_DEG} degrees of elevation, each
+ * weighted by {@code cos(incidence) cos(elevation)} (Perez et al. 1987, Solar Energy 39(3): the
+ * horizon brightening comes from a band of 6.5 degrees above the horizon). Used by
+ * {@link ShadedIrradiation} for patches and by the PV stage for module substrings.
+ *
+ * <p>One instance per thread: it owns scratch arrays sized for its bundle.
+ */
+public final class HorizonBand {
+    /** Rays of the band. */
+    public static final int RAYS = ShadedIrradiation.HORIZON_ELEVATIONS * ShadedIrradiation.HORIZON_AZIMUTHS;
+    private final double[] dir = new double[3 * RAYS];
+    private final double[] cosElev = new double[RAYS];
+    private final double[] bundleDir = new double[3 * RAYS];
+    private final double[] bundleW = new double[RAYS];
+    private final boolean[] blocked = new boolean[RAYS];
+
+    public HorizonBand() {
+        int h = 0;
+        for (int e = 0; e < ShadedIrradiation.HORIZON_ELEVATIONS; e++) {
+            double el = Math.toRadians((e + 0.5) * ShadedIrradiation.HORIZON_BAND_DEG / ShadedIrradiation.HORIZON_ELEVATIONS);
+            for (int a = 0; a < ShadedIrradiation.HORIZON_AZIMUTHS; a++, h++) {
+                double az = 2 * Math.PI * (a + 0.5) / ShadedIrradiation.HORIZON_AZIMUTHS;
+                dir[3 * h] = Math.sin(az) * Math.cos(el);
+                dir[3 * h + 1] = Math.cos(az) * Math.cos(el);
+                dir[3 * h + 2] = Math.sin(el);
+                cosElev[h] = Math.cos(el);
+            }
+        }
+    }
+
+    /**
+     * Visible share of the band seen from origin {@code o} by a plane of unit normal {@code n}, [0, 1]:
+     * the band rays in front of the plane are traced together as one bundle.
+     */
+    public double visibility(BundleTracer bundle, double ox, double oy, double oz, double nx, double ny, double nz) {
+        double all = 0;
+        int m = 0;
+        for (int h = 0; h < RAYS; h++) {
+            double dx = dir[3 * h], dy = dir[3 * h + 1], dz = dir[3 * h + 2];
+            double c = nx * dx + ny * dy + nz * dz;
+            if (c <= 0) continue;
+            double w = c * cosElev[h];
+            all += w;
+            bundleDir[3 * m] = dx;
+            bundleDir[3 * m + 1] = dy;
+            bundleDir[3 * m + 2] = dz;
+            bundleW[m++] = w;
+        }
+        bundle.occluded(ox, oy, oz, bundleDir, null, m, blocked);
+        double seen = 0;
+        for (int i = 0; i < m; i++) if (!blocked[i]) seen += bundleW[i];
+        return all > 0 ? seen / all : 0;
+    }
+}

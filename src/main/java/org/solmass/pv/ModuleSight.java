@@ -1,0 +1,157 @@
+package org.solmass.pv;
+
+import org.solmass.irradiation.HorizonBand;
+import org.solmass.irradiation.SunDirections;
+import org.solmass.model.Vec3;
+import org.solmass.scene.BundleTracer;
+import org.solmass.scene.HemisphereSampler;
+import org.solmass.scene.Scene;
+import org.solmass.scene.SkyViewCalculator;
+import org.solmass.scene.ViewFactors;
+
+import java.util.List;
+import java.util.stream.IntStream;
+
+/**
+ * What each substring of each placed module sees, measured with the ray engine on the scene that
+ * holds the racks ({@link Scene#withTriangles}): the same quantities the irradiation stage measures
+ * for a patch (docs/method.md), so that {@link PlaneOfArray} can apply the same formulas.
+ *
+ * <ul>
+ * <li>per substring and sun direction: the share of the substring's sample points that see the sun
+ *     ({@code along x across} points spread evenly over the strip, one occlusion ray each, traced as one
+ *     bundle per point); this is the beam and circumsolar visibility, and the shaded share of the
+ *     substring the mismatch model needs;</li>
+ * <li>per substring, from its centre: the obstructed sky, ground and obstruction view factors
+ *     (cosine-weighted hemisphere rays, {@link HemisphereSampler}) and the visible share of the Perez
+ *     horizon band ({@link HorizonBand}).</li>
+ * </ul>
+ * Deterministic: each module is computed from seeds made of its zone and index, into its own slots.
+ */
+public final class ModuleSight {
+    /** Default sample points along and across a substring. */
+    public static final int DEFAULT_ALONG = 4, DEFAULT_ACROSS = 2;
+
+    final List<PvModule> modules;
+    final int substrings;
+    final int directions;
+    /** Per substring q = module x substrings + k and direction d: visible share, {@code q * directions + d}. */
+    final float[] sunVisible;
+    final double[] skyVf, groundVf, obstructionVf, horizonVis;
+
+    private ModuleSight(List<PvModule> modules, int substrings, int directions) {
+        this.modules = modules;
+        this.substrings = substrings;
+        this.directions = directions;
+        int n = modules.size() * substrings;
+        sunVisible = new float[n * directions];
+        skyVf = new double[n];
+        groundVf = new double[n];
+        obstructionVf = new double[n];
+        horizonVis = new double[n];
+    }
+
+    public List<PvModule> modules() { return modules; }
+
+    public int substrings() { return substrings; }
+
+    /** Visible share of sun direction {@code d} from substring {@code k} of module {@code m}, [0, 1]. */
+    public double sunVisible(int m, int k, int d) { return sunVisible[(m * substrings + k) * directions + d]; }
+
+    /** Obstructed sky view factor of substring {@code k} of module {@code m}. */
+    public double skyViewFactor(int m, int k) { return skyVf[m * substrings + k]; }
+
+    /**
+     * @param scene the scene with the racks in it
+     * @param triangleIsGround per scene triangle: ground or not (modules: not)
+     * @param modules the modules
+     * @param substrings bypass-diode substrings per module
+     * @param sun the sun directions of the run
+     * @param rays hemisphere rays per substring
+     * @param runSeed seed of the run's ray streams
+     * @param along sample points along a substring
+     * @param across sample points across a substring
+     */
+    public static ModuleSight compute(Scene scene, boolean[] triangleIsGround, List<PvModule> modules, int substrings,
+                                      SunDirections sun, int rays, long runSeed, int along, int across) {
+        Vec3[] dirs = new Vec3[sun.count()];
+        for (int d = 0; d < dirs.length; d++) dirs[d] = sun.direction(d);
+        return compute(scene, triangleIsGround, modules, substrings, dirs, rays, runSeed, along, across);
+    }
+
+    /** As {@link #compute(Scene, boolean[], List, int, SunDirections, int, long, int, int)} for given unit sun directions. */
+    public static ModuleSight compute(Scene scene, boolean[] triangleIsGround, List<PvModule> modules, int substrings,
+                                      Vec3[] sun, int rays, long runSeed, int along, int across) {
+        ModuleSight s = new ModuleSight(List.copyOf(modules), substrings, sun.length);
+        ThreadLocal<Worker> workers = ThreadLocal.withInitial(() -> new Worker(scene, sun, rays, along * across));
+        IntStream.range(0, modules.size()).parallel().forEach(m ->
+                workers.get().module(s, m, triangleIsGround, runSeed, along, across));
+        return s;
+    }
+
+    private static final class Worker {
+        final Scene scene;
+        final Vec3[] sun;
+        final HemisphereSampler sampler;
+        final BundleTracer bundle;
+        final HorizonBand band = new HorizonBand();
+        final double[] dir, dist, bundleDir;
+        final int[] cls, tri, index;
+        final boolean[] blocked;
+        final int[] seen;
+
+        Worker(Scene scene, Vec3[] sun, int rays, int points) {
+            this.scene = scene;
+            this.sun = sun;
+            sampler = new HemisphereSampler(scene, rays);
+            bundle = scene.bundleTracer();
+            int r = sampler.rayCount();
+            dir = new double[3 * r];
+            dist = new double[r];
+            cls = new int[r];
+            tri = new int[r];
+            int n = sun.length;
+            bundleDir = new double[3 * Math.max(1, n)];
+            index = new int[Math.max(1, n)];
+            blocked = new boolean[Math.max(1, n)];
+            seen = new int[Math.max(1, n)];
+        }
+
+        void module(ModuleSight s, int m, boolean[] isGround, long runSeed, int along, int across) {
+            PvModule mod = s.modules.get(m);
+            Vec3 nrm = mod.normal();
+            double nx = nrm.x(), ny = nrm.y(), nz = nrm.z(), eps = scene.epsilon();
+            int count = 0;
+            for (int d = 0; d < sun.length; d++) {
+                Vec3 v = sun[d];
+                if (nx * v.x() + ny * v.y() + nz * v.z() <= 0) continue;
+                bundleDir[3 * count] = v.x();
+                bundleDir[3 * count + 1] = v.y();
+                bundleDir[3 * count + 2] = v.z();
+                index[count++] = d;
+            }
+            int points = along * across;
+            for (int k = 0; k < s.substrings; k++) {
+                int q = m * s.substrings + k;
+                java.util.Arrays.fill(seen, 0, count, 0);
+                for (int i = 0; i < along; i++) {
+                    for (int j = 0; j < across; j++) {
+                        Vec3 p = mod.at((i + 0.5) / along, (k + (j + 0.5) / across) / s.substrings);
+                        bundle.occluded(p.x() + eps * nx, p.y() + eps * ny, p.z() + eps * nz, bundleDir, null, count, blocked);
+                        for (int c = 0; c < count; c++) if (!blocked[c]) seen[c]++;
+                    }
+                }
+                for (int c = 0; c < count; c++) s.sunVisible[q * s.directions + index[c]] = (float) seen[c] / points;
+                Vec3 p = mod.at(0.5, (k + 0.5) / s.substrings);
+                double ox = p.x() + eps * nx, oy = p.y() + eps * ny, oz = p.z() + eps * nz;
+                long seed = HemisphereSampler.patchSeed("pv-" + mod.zone() + "-" + m + "-" + k, runSeed);
+                sampler.sample(ox, oy, oz, nx, ny, nz, seed, isGround, dir, cls, tri, dist);
+                ViewFactors vf = SkyViewCalculator.fromClasses(cls, sampler.gridSide());
+                s.skyVf[q] = vf.sky();
+                s.groundVf[q] = vf.ground();
+                s.obstructionVf[q] = vf.obstruction();
+                s.horizonVis[q] = band.visibility(bundle, ox, oy, oz, nx, ny, nz);
+            }
+        }
+    }
+}
