@@ -158,7 +158,7 @@ public final class Scene {
 
     /**
      * A new scene of this scene's triangles followed by {@code extraSoup} (9 floats per triangle,
-     * world coordinates), with the same ground plane: for objects added to a model, e.g. PV module
+     * world coordinates), with the same ground plane and far horizon: for objects added to a model, e.g. PV module
      * racks. Triangle {@code i < triangleCount()} keeps its index; the extra ones follow. The corners of
      * this scene's triangles are read back from storage (float, relative to the storage origin), so
      * they may differ from the model's by one float step.
