@@ -82,7 +82,7 @@ public final class AnalyseCommand implements Callable<Integer> {
         System.out.printf("  annual irradiation: area-weighted mean %.0f kWh/m2, min %.0f, max %.0f, total %.0f MWh on %.0f m2%n",
                 a.mean(), a.min(), a.max(), a.valueTimesAreaSum() / 1000, a.areaM2());
         printMetrics(o);
-        System.out.println("  " + org.solmass.Cautions.RESULTS);
+        for (String caution : ResultFiles.cautions(o.study())) System.out.println("  " + caution);
         System.out.printf("  time %.1f s (%s)%n", seconds, timings(o.timingsS()));
         for (Path f : files) System.out.println("  wrote " + f);
     }
