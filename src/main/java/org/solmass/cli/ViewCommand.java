@@ -27,6 +27,11 @@ public final class ViewCommand implements Callable<Integer> {
     @Option(names = "--width", defaultValue = "1440", paramLabel = "PX", description = "window width (default ${DEFAULT-VALUE})") int width;
     @Option(names = "--height", defaultValue = "900", paramLabel = "PX", description = "window height (default ${DEFAULT-VALUE})") int height;
 
+    /** The actions of a window started on a model for a new study (the set-up's runs, variants, compare). */
+    public static ViewerActions newStudyActions() {
+        return ViewerBridge.forNewStudy();
+    }
+
     @Override
     public Integer call() throws Exception {
         ViewerLoader loader;
@@ -34,7 +39,7 @@ public final class ViewCommand implements Callable<Integer> {
         if (Files.isRegularFile(target) && target.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".obj")) {
             if (against != null) throw new InputException("--against", "compares two results folders; give a results folder, not a model");
             if (snapshot != null) System.setProperty(SolmassViewer.SNAPSHOT_PROPERTY, snapshot.toString());
-            SolmassViewer.openNewStudy(target.toAbsolutePath().normalize(), ViewerBridge.forNewStudy());
+            SolmassViewer.openNewStudy(target.toAbsolutePath().normalize(), newStudyActions());
             return Main.EXIT_OK;
         }
         if (Files.isDirectory(target)) {

@@ -27,7 +27,7 @@ import java.util.Locale;
  * dots, and the sun at the month and hour the user picks, read off those tracks.
  */
 final class SunInset extends VBox {
-    static final double SIZE_PX = 210;
+    static final double SIZE_PX = 170;
     private final Canvas canvas = new Canvas(SIZE_PX, SIZE_PX);
     private final ComboBox<String> month = new ComboBox<>();
     private final Slider hour = new Slider(4, 20, 12);
@@ -42,11 +42,11 @@ final class SunInset extends VBox {
         setMaxSize(SIZE_PX + 16, USE_PREF_SIZE);
         for (Month m : Month.values()) month.getItems().add(m.getDisplayName(TextStyle.SHORT, Locale.ENGLISH));
         month.getSelectionModel().select(5);
-        month.setPrefWidth(80);
+        month.setPrefWidth(74);
         hour.setMajorTickUnit(1);
         hour.setSnapToTicks(true);
         hour.setBlockIncrement(1);
-        hour.setPrefWidth(120);
+        hour.setPrefWidth(86);
         month.valueProperty().addListener((o, a, b) -> draw());
         hour.valueProperty().addListener((o, a, b) -> draw());
         readout.getStyleClass().add("small");

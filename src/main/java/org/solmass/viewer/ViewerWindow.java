@@ -113,7 +113,7 @@ public final class ViewerWindow {
         StackPane.setMargin(north, new Insets(14));
         StackPane.setAlignment(contextBox, Pos.TOP_LEFT);
         StackPane.setMargin(contextBox, new Insets(10));
-        StackPane.setAlignment(sunInset, Pos.BOTTOM_LEFT);
+        StackPane.setAlignment(sunInset, Pos.BOTTOM_RIGHT);
         StackPane.setMargin(sunInset, new Insets(10));
         StackPane.setAlignment(hover, Pos.TOP_LEFT);
         viewStack.setMinSize(0, 0);
@@ -332,7 +332,7 @@ public final class ViewerWindow {
         StringBuilder s = new StringBuilder(String.format(Locale.ROOT, "Site %.4f\u00b0 %s, %.4f\u00b0 %s \u00b7 %s \u00b7 %,d patches on %d blocks",
                 Math.abs(d.latitudeDeg()), d.latitudeDeg() >= 0 ? "N" : "S", Math.abs(d.longitudeDeg()),
                 d.longitudeDeg() >= 0 ? "E" : "W", d.zone(), d.patches().size(), d.model().blockNames().size()));
-        for (String w : d.warnings()) s.append("  \u26a0 ").append(w);
+        for (String w : d.warnings()) s.append("  \u26a0 ").append(GuiWords.of(w));
         return s.toString();
     }
 
@@ -541,9 +541,18 @@ public final class ViewerWindow {
     /** Shows the data on show with the differences from another results folder of the study (diverging colours). */
     void compare(java.nio.file.Path against) {
         runBusy("Comparing with " + against.getFileName() + "\u2026", () -> actions.compare(against), w -> {
-            status.setText("Differences from " + against + " \u00b7 " + status.getText());
+            String none = matchedNone(data) ? "No patch of the two runs lines up with one of the other (different patch sizes"
+                    + " make different grids), so nothing is coloured; compare runs of one patch size \u00b7 " : "";
+            status.setText(none + "Differences from " + against + " \u00b7 " + status.getText());
             controls.selectFirstDelta();
         }, null);
+    }
+
+    /** Whether a comparison left every difference empty (no patch matched). */
+    static boolean matchedNone(ViewerData d) {
+        if (!d.table().has("delta_annual_kwh_m2")) return false;
+        for (double v : d.table().column("delta_annual_kwh_m2")) if (!Double.isNaN(v)) return false;
+        return true;
     }
 
     /** The window's side of the set-up. */
