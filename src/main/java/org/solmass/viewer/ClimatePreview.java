@@ -25,10 +25,11 @@ final class ClimatePreview {
     /** The preview lines of the study's climate file (the study must name a file). */
     static List<String> lines(Study study) {
         WeatherSeries w = ClimateSource.load(study.site(), study.climateSpec());
-        return lines(w);
+        return lines(w, study.site().standardOffset(study.climate().year()));
     }
 
-    static List<String> lines(WeatherSeries w) {
+    /** The preview lines of a series whose local standard time is UTC + {@code offset}. */
+    static List<String> lines(WeatherSeries w, java.time.ZoneOffset offset) {
         List<String> out = new ArrayList<>();
         ClimateReport r = w.report();
         ClimateReport.Reading rd = r.reading();
@@ -51,13 +52,16 @@ final class ClimatePreview {
             out.add(String.format(Locale.ROOT, "Period: %s%,d steps of %.0f min (%s)", p.first().isEmpty() ? "" : p.first() + " to " + p.last() + ", ",
                     p.steps(), p.stepMinutes(), p.timeBase()));
         }
-        out.add("First daylight steps as read (local standard time; W/m\u00b2 GHI / DHI / DNI):");
+        out.add("First daylight steps as read (local standard time), W/m\u00b2:");
+        out.add(String.format(Locale.ROOT, "   %-9s %-5s %5s %5s %5s", "day", "time", "GHI", "DHI", "DNI"));
         int shown = 0;
         for (Step s : w.steps()) {
             if (s.ghiWm2() <= 0) continue;
             int h = (int) Math.floor(s.localStandardHour()), min = (int) Math.round((s.localStandardHour() - h) * 60);
-            out.add(String.format(Locale.ROOT, "   month %2d, day %3d, %02d:%02d   %6.0f / %6.0f / %6.0f", s.month(), s.dayOfYear(), h, min,
-                    s.ghiWm2(), s.dhiWm2(), s.dniWm2()));
+            String day = java.time.Month.of(s.month()).getDisplayName(java.time.format.TextStyle.SHORT, Locale.ENGLISH)
+                    + (w.timeBase() == org.solmass.climate.TimeBase.HOURLY_YEAR
+                    ? " " + s.start().atOffset(offset).getDayOfMonth() : " (mean)");
+            out.add(String.format(Locale.ROOT, "   %-9s %02d:%02d %5.0f %5.0f %5.0f", day, h, min, s.ghiWm2(), s.dhiWm2(), s.dniWm2()));
             if (++shown == 5) break;
         }
         if (r.total() != null) {

@@ -22,11 +22,12 @@ import java.util.Locale;
  * plausibility checks as suggestions the user can take with one click, before any run.
  *
  * @param model       the model as read
+ * @param unit        the unit it was read in
  * @param notes       the reader's warnings (e.g. zero-area faces dropped)
  * @param suggestions plausibility findings, in the window's words, with the change that answers them
  * @param blockAreaM2 face area per block id, m2, undersides left out
  */
-record ModelCheck(MassingModel model, List<String> notes, List<Suggestion> suggestions, double[] blockAreaM2) {
+record ModelCheck(MassingModel model, LengthUnit unit, List<String> notes, List<Suggestion> suggestions, double[] blockAreaM2) {
 
     /**
      * One plausibility finding.
@@ -61,7 +62,37 @@ record ModelCheck(MassingModel model, List<String> notes, List<Suggestion> sugge
             if (cr[2] < -0.9 * len) continue;   // undersides are not patched
             area[m.triangleBlock()[t]] += 0.5 * len;
         }
-        return new ModelCheck(m, r.warnings(), s, area);
+        return new ModelCheck(m, unit, r.warnings(), s, area);
+    }
+
+    /**
+     * Opens a model for a new study: in metres, z up; when metres make it too large to read (wider
+     * than {@link org.solmass.model.CoordinateRange#MAX_EXTENT_M}, as a millimetre model of a district
+     * is), in millimetres, then centimetres, with a suggestion that says so first.
+     *
+     * @throws org.solmass.InputException the metres reader's error when no unit reads it
+     */
+    static ModelCheck open(Path obj) {
+        try {
+            return read(obj, UpAxis.Z, LengthUnit.M);
+        } catch (org.solmass.InputException inMetres) {
+            String m = String.valueOf(inMetres.getMessage());
+            if (!m.contains("supported extent") && !m.contains("supported range")) throw inMetres;
+            for (LengthUnit u : new LengthUnit[] {LengthUnit.MM, LengthUnit.CM}) {
+                try {
+                    ModelCheck c = read(obj, UpAxis.Z, u);
+                    List<Suggestion> s = new ArrayList<>();
+                    s.add(new Suggestion(String.format(Locale.ROOT, "Read in metres, the model is wider than %,.0f km, more than"
+                            + " Solmass reads and more than any district: it was probably drawn in %s, and it is read so now."
+                            + " Check the unit above.", org.solmass.model.CoordinateRange.MAX_EXTENT_M / 1000, unitName(u)), null, null));
+                    s.addAll(c.suggestions());
+                    return new ModelCheck(c.model(), u, c.notes(), s, c.blockAreaM2());
+                } catch (org.solmass.InputException ignored) {
+                    // try the next unit
+                }
+            }
+            throw inMetres;
+        }
     }
 
     private static Suggestion suggestion(Warning w, MassingModel m, UpAxis up, LengthUnit unit) {

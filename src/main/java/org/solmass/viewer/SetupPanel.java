@@ -114,8 +114,8 @@ final class SetupPanel extends VBox {
             @Override public String toString(LengthUnit u) { return u == null ? "" : ModelCheck.unitName(u); }
             @Override public LengthUnit fromString(String s) { return null; }
         });
-        up.setOnAction(e -> { draft.up = up.getSelectionModel().getSelectedIndex() == 1 ? UpAxis.Y : UpAxis.Z; reread(); });
-        unit.setOnAction(e -> { if (unit.getValue() != null) { draft.unit = unit.getValue(); reread(); } });
+        up.setOnAction(e -> reread(up.getSelectionModel().getSelectedIndex() == 1 ? UpAxis.Y : UpAxis.Z, draft.unit));
+        unit.setOnAction(e -> { if (unit.getValue() != null) reread(draft.up, unit.getValue()); });
         suggestions.setId("model-suggestions");
         return section("1 \u00b7 Model", new Field[] {Field.MODEL},
                 small(draft.modelFile.getFileName().toString()), label("Vertical axis of the file"), up,
@@ -193,6 +193,7 @@ final class SetupPanel extends VBox {
         climateFile.setOnAction(e -> refreshPreview());
         climateFile.focusedProperty().addListener((o, a, b) -> { if (!b) refreshPreview(); });
         zoneNote.getStyleClass().add("small");
+        zoneNote.setWrapText(true);
         zoneNote.setId("zone-note");
         preview.setId("climate-preview");
         preview.managedProperty().bind(preview.visibleProperty());
@@ -231,7 +232,6 @@ final class SetupPanel extends VBox {
         Button save = new Button("Save study"), run = new Button("Run");
         save.setId("save-study");
         run.setId("run-study");
-        run.setDefaultButton(true);
         save.setOnAction(e -> save());
         run.setOnAction(e -> run());
         done.setWrapText(true);
@@ -245,9 +245,13 @@ final class SetupPanel extends VBox {
                 ViewerWindow.row(save, run), done);
     }
 
-    private void fillFromDraft() {
+    private void fillAxisAndUnit() {
         up.getSelectionModel().select(draft.up == UpAxis.Y ? 1 : 0);
         unit.setValue(draft.unit);
+    }
+
+    private void fillFromDraft() {
+        fillAxisAndUnit();
         lat.setText(draft.latitude);
         lon.setText(draft.longitude);
         elev.setText(draft.elevation);
@@ -265,12 +269,18 @@ final class SetupPanel extends VBox {
         results.setText(draft.resultsFolder);
     }
 
-    private void reread() {
+    /** Reads the model with another axis or unit; when it does not read so, keeps the ones it reads with and says why. */
+    private void reread(UpAxis newUp, LengthUnit newUnit) {
+        if (newUp == draft.up && newUnit == draft.unit) return;
         try {
-            model = ModelCheck.read(draft.modelFile, draft.up, draft.unit);
+            model = ModelCheck.read(draft.modelFile, newUp, newUnit);
+            draft.up = newUp;
+            draft.unit = newUnit;
             show(Field.MODEL, null);
         } catch (RuntimeException ex) {
-            show(Field.MODEL, GuiWords.of(ex.getMessage()));
+            show(Field.MODEL, "Read in " + ModelCheck.unitName(newUnit) + " with " + Study.Named.labelOf(newUp) + " up: "
+                    + sentence(GuiWords.of(ex.getMessage().replaceFirst("^[^:]*:\\d+: ", ""))) + " It stays as it was.");
+            fillAxisAndUnit();
             return;
         }
         refreshModel();
@@ -462,6 +472,10 @@ final class SetupPanel extends VBox {
     /** After a run or a save: a line under the buttons. */
     void setDone(String text) {
         done.setText(text);
+    }
+
+    private static String sentence(String s) {
+        return s.endsWith(".") ? s : s + ".";
     }
 
     private static TextField field(String id) {

@@ -454,12 +454,13 @@ public final class ViewerWindow {
     public void startSetup(java.nio.file.Path obj) {
         ModelCheck mc;
         try {
-            mc = ModelCheck.read(obj, org.solmass.model.UpAxis.Z, org.solmass.model.LengthUnit.M);
+            mc = ModelCheck.open(obj);
         } catch (RuntimeException e) {
             status.setText("Cannot open " + obj + ": " + GuiWords.of(e.getMessage()));
             return;
         }
         StudyDraft d = new StudyDraft(obj, mc.model().blockNames());
+        d.unit = mc.unit();
         setup = new SetupPanel(d, mc, new SetupHost());
         ScrollPane sp = new ScrollPane(setup);
         sp.setFitToWidth(true);
