@@ -20,7 +20,7 @@ import java.util.List;
 
 /**
  * The 3D content: grey massing (lit), patch meshes coloured through the palette atlas (unlit, so
- * their colours match the legend exactly), a ground plane, the sun path and the selection frame.
+ * their colours match the legend exactly), a ground plane and the selection frame.
  * Patches live in a few large meshes; a picked face maps to its patch through {@link PatchMeshData}.
  */
 public final class ModelView3D {
@@ -36,7 +36,6 @@ public final class ModelView3D {
 
     private final Group root = new Group();
     private final Group zoneGroup = new Group();
-    private final Group sunGroup = new Group();
     private final Group selection = new Group();
     private final List<PatchMeshData> patchData;
     private final List<WritableImage> patchTextures = new ArrayList<>();
@@ -128,10 +127,9 @@ public final class ModelView3D {
         }
 
         AmbientLight flat = new AmbientLight(Color.WHITE);   // the only light: shades are baked into textures
-        sunGroup.setVisible(false);
         zoneGroup.setVisible(false);
         addZoneOutlines(data);
-        root.getChildren().addAll(massing, patches, context, sunGroup, zoneGroup, selection, flat);
+        root.getChildren().addAll(massing, patches, context, zoneGroup, selection, flat);
     }
 
     /** The shaded material of a massing colour. */
@@ -187,8 +185,6 @@ public final class ModelView3D {
     public Group node() { return root; }
 
     public SceneFrame frame() { return frame; }
-
-    public Group sunPathGroup() { return sunGroup; }
 
     /** The PV roof zone outlines (empty when the results have no zones). */
     public Group zoneGroup() { return zoneGroup; }

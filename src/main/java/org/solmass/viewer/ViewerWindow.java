@@ -270,6 +270,8 @@ public final class ViewerWindow {
     /** Puts data on show (FX thread). */
     public void show(ViewerData d, ModelView3D.Prepared prep) {
         this.data = d;
+        root.getRight().setVisible(!d.patches().isEmpty());   // a set-up preview has no patch to show
+        root.getRight().setManaged(!d.patches().isEmpty());
         if (!d.patches().isEmpty()) lastResults = d;
         stage.setTitle("Solmass \u2014 " + d.title());
         long t0 = System.nanoTime();
