@@ -104,13 +104,25 @@ public final class Plausibility {
     /** "mm (... m tall, ... m across)" and/or "cm (...)", whichever gives a plausible size. */
     static String unitAdvice(double heightM, double extentM) {
         List<String> ok = new ArrayList<>();
-        for (String[] u : new String[][] {{"mm", "1000"}, {"cm", "100"}}) {
-            double f = Double.parseDouble(u[1]), h = heightM / f, e = extentM / f;
-            if (h <= MAX_PLAUSIBLE_HEIGHT_M && e <= MAX_PLAUSIBLE_EXTENT_M && (h >= 2.5 || e >= 10)) {
-                ok.add(String.format(Locale.ROOT, "%s (%.1f m tall, %.0f m across)", u[0], h, e));
-            }
+        for (org.solmass.model.LengthUnit u : plausibleUnits(heightM, extentM)) {
+            double f = 1 / u.toMetres(), h = heightM / f, e = extentM / f;
+            ok.add(String.format(Locale.ROOT, "%s (%.1f m tall, %.0f m across)", u.name().toLowerCase(Locale.ROOT), h, e));
         }
         return ok.isEmpty() ? "the unit it was drawn in" : String.join(" or ", ok);
+    }
+
+    /**
+     * The units (millimetres, then centimetres) that give a model {@code heightM} tall and
+     * {@code extentM} across as read in metres a plausible size: within the limits above, and at
+     * least a storey (2.5 m) tall or 10 m across. Empty when neither does.
+     */
+    public static List<org.solmass.model.LengthUnit> plausibleUnits(double heightM, double extentM) {
+        List<org.solmass.model.LengthUnit> ok = new ArrayList<>();
+        for (org.solmass.model.LengthUnit u : new org.solmass.model.LengthUnit[] {org.solmass.model.LengthUnit.MM, org.solmass.model.LengthUnit.CM}) {
+            double h = heightM * u.toMetres(), e = extentM * u.toMetres();
+            if (h <= MAX_PLAUSIBLE_HEIGHT_M && e <= MAX_PLAUSIBLE_EXTENT_M && (h >= 2.5 || e >= 10)) ok.add(u);
+        }
+        return ok;
     }
 
     /**

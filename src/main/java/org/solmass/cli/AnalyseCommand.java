@@ -88,7 +88,7 @@ public final class AnalyseCommand implements Callable<Integer> {
                 b.converged() ? String.format(java.util.Locale.ROOT, "the last added under %.1f %% of the reflected total", 100 * b.tolerance())
                         : "stopped at the maximum before the last bounce fell under " + 100 * b.tolerance() + " %");
         printMetrics(o);
-        System.out.println("  " + org.solmass.Cautions.RESULTS);
+        for (String caution : ResultFiles.cautions(o.study())) System.out.println("  " + caution);
         System.out.printf("  time %.1f s (%s)%n", seconds, timings(o.timingsS()));
         for (Path f : files) System.out.println("  wrote " + f);
     }

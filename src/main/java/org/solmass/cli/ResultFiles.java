@@ -44,6 +44,11 @@ public final class ResultFiles {
         List<String> notes = new java.util.ArrayList<>();
         for (String w : o.warnings()) notes.add("warning: " + w); // the warnings analyse printed, kept with the results
         return ResultsFolder.write(new ResultsFolder.Results(o.study(), o.model(), o.table(),
-                o.result().monthHourWm2(), run, List.of(Cautions.RESULTS), o.metrics(), notes, o.geo()), claim);
+                o.result().monthHourWm2(), run, cautions(o.study()), o.metrics(), notes, o.geo()), claim);
+    }
+
+    /** The cautions of a run's results: the one for results, and the clear-sky one when the climate is the clear sky. */
+    static List<String> cautions(org.solmass.study.Study study) {
+        return study.climate().isClearSky() ? List.of(Cautions.RESULTS, Cautions.CLEAR_SKY) : List.of(Cautions.RESULTS);
     }
 }

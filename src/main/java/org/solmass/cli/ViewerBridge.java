@@ -53,7 +53,7 @@ final class ViewerBridge implements ViewerActions {
     private AnalysisRun.Outcome last;
     private ResultTable shown;
     /** The study's first results folder; re-runs write variant folders beside it, never into it. */
-    private final Path firstResults;
+    private Path firstResults;
     /** The results folder of the data on show. */
     private Path shownFolder;
     private java.time.Clock clock = java.time.Clock.systemDefaultZone();
@@ -65,6 +65,11 @@ final class ViewerBridge implements ViewerActions {
     private ViewerBridge(Study study, Path firstResults) {
         this.study = study;
         this.firstResults = firstResults.toAbsolutePath().normalize();
+    }
+
+    /** A bridge for a new study set up in the window: nothing to show until the first run ({@link #runStudy}). */
+    static ViewerBridge forNewStudy() {
+        return new ViewerBridge(null, Path.of("results"));
     }
 
     /** The clock that stamps default variant names (tests fix it). */
@@ -155,6 +160,9 @@ final class ViewerBridge implements ViewerActions {
         }
         List<String> warnings = new ArrayList<>(b.warnings());
         warnings.addAll(runA.warnings());
+        for (org.solmass.output.ComparisonNote.Difference d : org.solmass.output.ComparisonNote.of(runA, runB).differences()) {
+            warnings.add(d.message());
+        }
         warnings.add(c.matched() + " of " + n + " patches matched with " + folderA);
         return new ViewerData(b.title() + " vs " + runA.record().study().name(), b.model(), b.blockAnalysed(), b.patches(), t,
                 b.monthHourWm2(), b.climate(), b.sunPath(), b.latitudeDeg(), b.longitudeDeg(), b.zone(), warnings);
@@ -168,6 +176,10 @@ final class ViewerBridge implements ViewerActions {
         if (climateFile != null && climateFile.getFileName() != null) {   // the file name reads better than its full path
             glance = new ClimateGlance(glance.source().replace(climateFile.toString(), climateFile.getFileName().toString()),
                     glance.ghiWm2(), glance.dhiWm2(), glance.ghiMonthKwhM2(), glance.dhiMonthKwhM2());
+        }
+        if (study.climate().isClearSky() && !warnings.contains(Cautions.CLEAR_SKY)) {
+            warnings = new ArrayList<>(warnings);
+            warnings.add(Cautions.CLEAR_SKY);
         }
         return new ViewerData(study.name(), model, ps.analysedBlocks(), ps.patches(), table, monthHour,
                 glance, sunPath(site), site.latitudeDeg(), site.longitudeDeg(), zoneLabel(site), warnings);
@@ -186,17 +198,12 @@ final class ViewerBridge implements ViewerActions {
 
     /** The sun over each monthly-average day (Klein's days), every 20 minutes while it is up. */
     static List<SunArc> sunPath(Site site) {
-        List<SunArc> arcs = new ArrayList<>();
-        for (SunPath.Arc a : SunPath.averageDayArcs(site, 20)) {
-            List<SunArc.Point> pts = new ArrayList<>();
-            for (SunPath.ArcPoint p : a.points()) pts.add(new SunArc.Point(p.localHour(), p.azimuthDeg(), p.elevationDeg()));
-            arcs.add(new SunArc(a.month(), pts));
-        }
-        return arcs;
+        return SunArc.of(site);
     }
 
     @Override
     public RerunRequest currentOptions() {
+        if (study == null) return new RerunRequest(Study.DEFAULT_PATCH_M, org.solmass.study.StudyReader.CLEAR_SKY, org.solmass.sky.SkyModels.standard().name());
         String climate = study.climate().isClearSky() ? "clear-sky" : study.climate().file().toString();
         return new RerunRequest(study.patchM(), climate, study.sky().name());
     }
@@ -245,6 +252,56 @@ final class ViewerBridge implements ViewerActions {
         }
     }
 
+    /**
+     * Runs a study set up in the window. The first run goes into the study's results folder when that
+     * does not exist or is empty (and no name is given); any other run into a new variant folder beside
+     * it ({@link VariantFolders}). The folder gets the study that ran as study.json first, as a
+     * re-run's does. Earlier results are never written into.
+     */
+    @Override
+    public ViewerData runStudy(Study s, String variantName, ProgressSink progress, BooleanSupplier cancelled) throws java.io.IOException {
+        Path results = s.outputs().folder().toAbsolutePath().normalize();
+        boolean fresh = !Files.exists(results) || (Files.isDirectory(results) && isEmpty(results));
+        Path dir;
+        if (fresh && (variantName == null || variantName.isBlank())) {
+            Files.createDirectories(results);
+            dir = results;
+        } else {
+            dir = VariantFolders.create(results, variantName, java.time.LocalDateTime.now(clock));
+        }
+        com.fasterxml.jackson.databind.node.ObjectNode t = org.solmass.study.StudyWriter.toTree(s);
+        ((com.fasterxml.jackson.databind.node.ObjectNode) t.get("outputs")).put("folder", dir.toString());
+        Path studyFile = dir.resolve(VARIANT_STUDY);
+        Study run = org.solmass.study.StudyReader.fromTree(t, studyFile, dir, "set-up");
+        org.solmass.output.AtomicFiles.writeString(studyFile, org.solmass.study.StudyWriter.toJson(run));
+        Study before = study;
+        Path firstBefore = firstResults;
+        study = run;
+        firstResults = results;
+        try {
+            return analyse(progress, cancelled);
+        } catch (RuntimeException e) {   // cancelled or failed: what was on show stays
+            study = before;
+            firstResults = firstBefore;
+            throw e;
+        }
+    }
+
+    private static boolean isEmpty(Path dir) throws java.io.IOException {
+        try (java.util.stream.Stream<Path> s = Files.list(dir)) {
+            return s.findAny().isEmpty();
+        }
+    }
+
+    /** The data on show (read back from its folder) with its differences from {@code against}. */
+    @Override
+    public ViewerData compare(Path against) {
+        if (shownFolder == null) throw new IllegalStateException("no results on show to compare");
+        ViewerBridge[] b = new ViewerBridge[1];
+        ViewerData d = fromFolder(shownFolder, b);
+        return withDifferences(d, against, shownFolder);
+    }
+
     @Override
     public Path shownFolder() {
         return shownFolder;
@@ -269,6 +326,7 @@ final class ViewerBridge implements ViewerActions {
 
     @Override
     public String defaultVariantName() {
+        if (study == null) return null;
         return firstResults.getFileName() + VariantFolders.INFIX + "yyyyMMdd-HHmmss";
     }
 

@@ -27,7 +27,6 @@ public final class CameraRig {
     private final double radius;
     private final double[] focus, siteFocus;
     private double lastX, lastY;
-    private double outsideRadiusM;
 
     /**
      * @param siteRadiusM half the diagonal of the whole model, metres (zoom limits, clipping)
@@ -71,31 +70,10 @@ public final class CameraRig {
     public void setView(double headingDeg, double pitchDeg, double distance) {
         yaw.setAngle(headingDeg);
         pitch.setAngle(-Math.max(-5, Math.min(90, pitchDeg)));
-        back.setZ(-Math.max(distance, outsideDistance()));
+        back.setZ(-distance);
         heading.set(headingDeg);
         clip();
         moves.set(moves.get() + 1);
-    }
-
-    /**
-     * Keeps the camera at least {@code radiusM} from the scene origin (0 = no limit): the sun path's
-     * dome is centred there, and from inside it its arcs and beads would pass close up across the
-     * model. Moves the camera back along its line of sight when it is inside.
-     */
-    public void keepOutside(double radiusM) {
-        outsideRadiusM = radiusM;
-        setView(headingDeg(), pitchDeg(), distance());
-    }
-
-    /** Smallest distance from the target that puts the eye {@link #outsideRadiusM} from the origin. */
-    private double outsideDistance() {
-        if (!(outsideRadiusM > 0)) return 0;
-        back.setZ(0);
-        Point3D p0 = camera.localToParent(0, 0, 0);
-        back.setZ(-1);
-        Point3D u = camera.localToParent(0, 0, 0).subtract(p0);   // unit: the line of sight, backwards
-        double b = p0.dotProduct(u), c = p0.dotProduct(p0) - outsideRadiusM * outsideRadiusM;
-        return Math.max(0, -b + Math.sqrt(Math.max(0, b * b - c)));
     }
 
     /**
@@ -178,6 +156,6 @@ public final class CameraRig {
         target.setX(target.getX() + rx * mx + ux * my);
         target.setY(target.getY() + uy * my);
         target.setZ(target.getZ() + rz * mx + uz * my);
-        setView(headingDeg(), pitchDeg(), distance());   // counts the move; keeps the eye outside the sun path's dome
+        setView(headingDeg(), pitchDeg(), distance());   // counts the move
     }
 }

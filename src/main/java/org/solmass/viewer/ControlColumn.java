@@ -39,6 +39,7 @@ final class ControlColumn extends VBox {
     private final ComboBox<String> sky = new ComboBox<>();
     private final TextField variantName = new TextField();
     private final ComboBox<String> variants = new ComboBox<>();
+    private final ComboBox<String> against = new ComboBox<>();
     private List<java.nio.file.Path> variantFolders = List.of();
     private final ComboBox<String> pngScale = new ComboBox<>(FXCollections.observableArrayList("1\u00d7", "2\u00d7", "3\u00d7", "4\u00d7"));
     private ViewerData data;
@@ -125,6 +126,17 @@ final class ControlColumn extends VBox {
             int i = variants.getSelectionModel().getSelectedIndex();
             if (i >= 0 && i < variantFolders.size()) win.openVariant(variantFolders.get(i));
         });
+        against.setId("compare-with");
+        against.setPrefWidth(150);
+        against.setMaxWidth(Double.MAX_VALUE);
+        against.setPromptText("another results folder");
+        Button diff = new Button("Compare");
+        diff.setId("compare");
+        diff.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        diff.setOnAction(e -> {
+            int i = against.getSelectionModel().getSelectedIndex();
+            if (i >= 0 && i < variantFolders.size()) win.compare(variantFolders.get(i));
+        });
         pngScale.getSelectionModel().select(1);
 
         Button csv = new Button("CSV\u2026"), summary = new Button("Summary\u2026"), png = new Button("PNG\u2026");
@@ -138,6 +150,7 @@ final class ControlColumn extends VBox {
                 head("Re-run"), label("Patch size (m)"), patchSize, label("Climate"), climate, label("Sky model"), sky,
                 label("Variant folder (empty: dated name)"), variantName, run,
                 label("Results of this study"), ViewerWindow.row(variants, open),
+                label("Differences of the results on show from"), ViewerWindow.row(against, diff),
                 head("Export"), ViewerWindow.row(csv, summary), ViewerWindow.row(png, pngScale));
     }
 
@@ -206,6 +219,7 @@ final class ControlColumn extends VBox {
         List<String> names = new java.util.ArrayList<>();
         for (java.nio.file.Path f : variantFolders) names.add(String.valueOf(f.getFileName()));
         variants.setItems(FXCollections.observableArrayList(names));
+        against.setItems(FXCollections.observableArrayList(names));
         java.nio.file.Path onShow = actions.shownFolder();
         int i = onShow == null ? -1 : variantFolders.indexOf(onShow);
         if (i >= 0) variants.getSelectionModel().select(i);
@@ -217,6 +231,16 @@ final class ControlColumn extends VBox {
         thr.setText(Double.isFinite(v) ? LegendTicks.label(v, 1) : "");
         thrOn.setSelected(Double.isFinite(v));
         refresh();
+    }
+
+    /** Colours by the difference of annual irradiation (or the first difference) after a comparison. */
+    void selectFirstDelta() {
+        Quantity pick = null;
+        for (Quantity q : quantity.getItems()) {
+            if (q.column().equals("delta_annual_kwh_m2")) pick = q;
+            else if (pick == null && q.column().startsWith("delta_")) pick = q;
+        }
+        if (pick != null) quantity.setValue(pick);
     }
 
     /** Selects a quantity by column name (for scripts and tests). */

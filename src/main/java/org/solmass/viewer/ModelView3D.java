@@ -20,23 +20,30 @@ import java.util.List;
 
 /**
  * The 3D content: grey massing (lit), patch meshes coloured through the palette atlas (unlit, so
- * their colours match the legend exactly), a ground plane, the sun path and the selection frame.
+ * their colours match the legend exactly), a ground plane and the selection frame.
  * Patches live in a few large meshes; a picked face maps to its patch through {@link PatchMeshData}.
  */
 public final class ModelView3D {
     static final Color CONTEXT_GREY = Color.rgb(0xE4, 0xE2, 0xDD);
     static final Color ANALYSED_GREY = Color.rgb(0xC4, 0xC2, 0xBD);
     static final Color GROUND = Color.rgb(0xBF, 0xBE, 0xB8);
+    /** Analysed blocks in the set-up, before any result: a warm tint that reads apart from the context grey. */
+    static final Color SETUP_ANALYSED = Color.rgb(0xD9, 0x9A, 0x5B);
+    /** How context blocks are drawn: as solid as the rest, see-through, or not at all. */
+    static final java.util.List<String> CONTEXT_MODES = java.util.List.of("shown", "ghosted", "hidden");
+    /** Opacity of ghosted context blocks: enough to see their outline, little enough to see through them (common practice for ghosting, about a third). */
+    static final double GHOST_ALPHA = 0.3;
 
     private final Group root = new Group();
     private final Group zoneGroup = new Group();
-    private final Group sunGroup = new Group();
     private final Group selection = new Group();
     private final List<PatchMeshData> patchData;
     private final List<WritableImage> patchTextures = new ArrayList<>();
     private final List<MeshView> patchViews = new ArrayList<>();
     private final List<MeshView> massingViews = new ArrayList<>();
     private final List<MassingMeshData> massingData = new ArrayList<>();
+    private final List<MeshView> contextViews = new ArrayList<>();
+    private PhongMaterial contextSolid, contextGhost;
     private final SceneFrame frame;
     private final double liftM;
 
@@ -88,8 +95,15 @@ public final class ModelView3D {
         this.patchData = prep.patches();
 
         Group massing = new Group();
-        addMassing(massing, prep.analysed(), ANALYSED_GREY);
-        addMassing(massing, prep.context(), CONTEXT_GREY);
+        addMassing(massing, prep.analysed(), data.patches().isEmpty() ? SETUP_ANALYSED : ANALYSED_GREY);
+        int first = massingViews.size();
+        Group context = new Group();   // after the patches: a ghosted block lets the patches behind it show
+        contextSolid = addMassing(context, prep.context(), CONTEXT_GREY);
+        contextViews.addAll(massingViews.subList(first, massingViews.size()));
+        // the 3D pipeline blends as colour + (1 - alpha) x behind, so the colour goes in premultiplied by its alpha
+        contextGhost = new PhongMaterial(Color.color(CONTEXT_GREY.getRed() * GHOST_ALPHA, CONTEXT_GREY.getGreen() * GHOST_ALPHA,
+                CONTEXT_GREY.getBlue() * GHOST_ALPHA, GHOST_ALPHA));
+        contextGhost.setSpecularColor(Color.BLACK);
         Node ground = ground(data);
         massing.getChildren().add(ground);
 
@@ -113,20 +127,33 @@ public final class ModelView3D {
         }
 
         AmbientLight flat = new AmbientLight(Color.WHITE);   // the only light: shades are baked into textures
-        sunGroup.setVisible(false);
         zoneGroup.setVisible(false);
         addZoneOutlines(data);
-        root.getChildren().addAll(massing, patches, sunGroup, zoneGroup, selection, flat);
+        root.getChildren().addAll(massing, patches, context, zoneGroup, selection, flat);
     }
 
-    private void addMassing(Group g, List<MassingMeshData> parts, Color c) {
+    /** The shaded material of a massing colour. */
+    private static PhongMaterial material(Color c) {
         WritableImage tex = new WritableImage(MassingMeshData.LEVELS, 1);
         int rgb = ((int) Math.round(c.getRed() * 255) << 16) | ((int) Math.round(c.getGreen() * 255) << 8) | (int) Math.round(c.getBlue() * 255);
-        tex.getPixelWriter().setPixels(0, 0, MassingMeshData.LEVELS, 1, PixelFormat.getIntArgbInstance(),
-                MassingMeshData.shadeTexture(rgb), 0, MassingMeshData.LEVELS);
+        int[] px = MassingMeshData.shadeTexture(rgb);
+        tex.getPixelWriter().setPixels(0, 0, MassingMeshData.LEVELS, 1, PixelFormat.getIntArgbInstance(), px, 0, MassingMeshData.LEVELS);
         PhongMaterial mat = new PhongMaterial(Color.WHITE);
         mat.setDiffuseMap(tex);
         mat.setSpecularColor(Color.BLACK);
+        return mat;
+    }
+
+    /** Context blocks "shown", "ghosted" (see-through) or "hidden" ({@link #CONTEXT_MODES}). */
+    public void setContextMode(String mode) {
+        for (MeshView v : contextViews) {
+            v.setVisible(!"hidden".equals(mode));
+            v.setMaterial("ghosted".equals(mode) ? contextGhost : contextSolid);
+        }
+    }
+
+    private PhongMaterial addMassing(Group g, List<MassingMeshData> parts, Color c) {
+        PhongMaterial mat = material(c);
         for (MassingMeshData md : parts) {
             TriangleMesh m = new TriangleMesh(VertexFormat.POINT_NORMAL_TEXCOORD);
             m.getPoints().setAll(md.points);
@@ -140,6 +167,7 @@ public final class ModelView3D {
             massingData.add(md);
             g.getChildren().add(v);
         }
+        return mat;
     }
 
     private Node ground(ViewerData d) {
@@ -157,8 +185,6 @@ public final class ModelView3D {
     public Group node() { return root; }
 
     public SceneFrame frame() { return frame; }
-
-    public Group sunPathGroup() { return sunGroup; }
 
     /** The PV roof zone outlines (empty when the results have no zones). */
     public Group zoneGroup() { return zoneGroup; }

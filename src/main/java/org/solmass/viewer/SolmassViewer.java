@@ -50,6 +50,32 @@ public final class SolmassViewer {
     }
 
     /**
+     * Opens the window on a model for a new study (the set-up on the left, docs/viewer.md "A new study
+     * from a model") and blocks until the user closes it; then stops the FX toolkit. With
+     * {@code -Dsolmass.viewer.snapshot=FILE} it saves the set-up window there and returns.
+     */
+    public static void openNewStudy(Path obj, ViewerActions actions) throws InterruptedException {
+        String snap = System.getProperty(SNAPSHOT_PROPERTY);
+        startToolkit();
+        CountDownLatch closed = new CountDownLatch(1);
+        Platform.runLater(() -> {
+            Stage st = new Stage();
+            ViewerWindow w = new ViewerWindow(st, actions, 1440, 900);
+            st.setOnHidden(e -> closed.countDown());
+            st.show();
+            w.startSetup(obj);
+            if (snap != null && !snap.isBlank()) {
+                afterFrames(3, () -> {
+                    write(w.snapshotWindow(), Path.of(snap));
+                    st.hide();
+                });
+            }
+        });
+        closed.await();
+        Platform.exit();
+    }
+
+    /**
      * Opens the window at the given size, waits until the data is loaded and rendered, writes a PNG
      * of the whole window to {@code png}, closes the window and stops the FX toolkit.
      *

@@ -36,6 +36,24 @@ public interface ViewerActions {
     /** The default variant name offered in the re-run control (shown as the name field's prompt); null when none. */
     default String defaultVariantName() { return null; }
 
+    /**
+     * Runs a study set up in the window: into its results folder when that holds no results yet,
+     * otherwise into a new variant folder beside it (named {@code variantName}, or dated when blank);
+     * never over earlier results. The study file is not written (Save does that).
+     */
+    default ViewerData runStudy(org.solmass.study.Study study, String variantName, ProgressSink progress, BooleanSupplier cancelled)
+            throws Exception {
+        throw new UnsupportedOperationException("running a new study is not available here");
+    }
+
+    /**
+     * The data on show with its differences from another results folder of the study ({@code delta_*}
+     * quantities: on show minus {@code against}), as {@code solmass compare} matches patches.
+     */
+    default ViewerData compare(Path against) throws Exception {
+        throw new UnsupportedOperationException("comparing is not available for this data");
+    }
+
     /** Writes the per-patch CSV of the data on show. */
     void exportCsv(Path file) throws Exception;
 

@@ -19,6 +19,7 @@ import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Pane;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 import javafx.scene.paint.Color;
@@ -49,8 +50,16 @@ public final class ViewerWindow {
     private final ViewerActions actions;
     private final BorderPane root = new BorderPane();
     private final Pane subHost = new Pane();
-    private final Pane hourLayer = new Pane();
-    private final java.util.List<javafx.scene.Node> hourAnchors = new java.util.ArrayList<>();
+    private final SunInset sunInset = new SunInset();
+    private final javafx.scene.control.ChoiceBox<String> contextMode = new javafx.scene.control.ChoiceBox<>(
+            javafx.collections.FXCollections.observableArrayList(ModelView3D.CONTEXT_MODES));
+    private final TabPane leftTabs = new TabPane();
+    private final Tab setupTab = new Tab("Set-up"), resultsTab = new Tab("Results");
+    private SetupPanel setup;
+    /** Whether the sun path inset was turned on once the set-up's site was complete. */
+    private boolean insetOffered;
+    /** The last results put on show (not a set-up preview). */
+    private ViewerData lastResults;
     private final StackPane viewStack = new StackPane();
     private final PatchPanel panel = new PatchPanel();
     private final ClimatePane climate = new ClimatePane();
@@ -67,7 +76,6 @@ public final class ViewerWindow {
     private final TabPane tabs;
     private SubScene sub;
     private CameraRig rig;
-    private SunPathView.Built sunPath;
     private ModelView3D view;
     private ViewerData data;
     private long shownAtNanos;
@@ -95,11 +103,22 @@ public final class ViewerWindow {
         busy.setVisible(false);
         subHost.setMinSize(0, 0);
         subHost.getChildren().add(warmUp());
-        hourLayer.setMouseTransparent(true);
-        hourLayer.setPickOnBounds(false);
-        viewStack.getChildren().addAll(subHost, hourLayer, north, hover, busy);
+        sunInset.setVisible(false);
+        sunInset.managedProperty().bind(sunInset.visibleProperty());
+        contextMode.setId("context-mode");
+        contextMode.getSelectionModel().select(0);
+        contextMode.valueProperty().addListener((o, a, b) -> { if (view != null) view.setContextMode(b); });
+        HBox contextBox = new HBox(6, new Label("Context blocks"), contextMode);
+        contextBox.setAlignment(Pos.CENTER_LEFT);
+        contextBox.getStyleClass().add("overlay-box");
+        contextBox.setMaxSize(Region.USE_PREF_SIZE, Region.USE_PREF_SIZE);
+        viewStack.getChildren().addAll(subHost, north, contextBox, sunInset, hover, busy);
         StackPane.setAlignment(north, Pos.TOP_RIGHT);
         StackPane.setMargin(north, new Insets(14));
+        StackPane.setAlignment(contextBox, Pos.TOP_LEFT);
+        StackPane.setMargin(contextBox, new Insets(10));
+        StackPane.setAlignment(sunInset, Pos.BOTTOM_RIGHT);
+        StackPane.setMargin(sunInset, new Insets(10));
         StackPane.setAlignment(hover, Pos.TOP_LEFT);
         viewStack.setMinSize(0, 0);
         Tab elevationTab = new Tab("Facade elevations", elevations), statisticsTab = new Tab("Statistics", statistics);
@@ -122,9 +141,14 @@ public final class ViewerWindow {
         left.setFitToWidth(true);
         left.setPrefWidth(270);
         left.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+        resultsTab.setContent(left);
+        leftTabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        leftTabs.setPrefWidth(330);
+        leftTabs.setId("left-tabs");
         status.getStyleClass().add("status");
         status.setMaxWidth(Double.MAX_VALUE);
         root.setLeft(left);
+        root.setTop(menu());
         root.setCenter(tabs);
         root.setRight(right);
         root.setBottom(status);
@@ -132,6 +156,21 @@ public final class ViewerWindow {
         scene.getStylesheets().add(ViewerWindow.class.getResource("viewer.css").toExternalForm());
         stage.setScene(scene);
         stage.setTitle("Solmass viewer");
+    }
+
+    private javafx.scene.control.MenuBar menu() {
+        javafx.scene.control.MenuItem fresh = new javafx.scene.control.MenuItem("New study from a model\u2026");
+        fresh.setId("new-study");
+        fresh.setOnAction(e -> {
+            javafx.stage.FileChooser fc = new javafx.stage.FileChooser();
+            fc.setTitle("Model for a new study");
+            fc.getExtensionFilters().add(new javafx.stage.FileChooser.ExtensionFilter("OBJ model (*.obj)", "*.obj", "*.OBJ"));
+            java.io.File f = fc.showOpenDialog(stage);
+            if (f != null) startSetup(f.toPath().toAbsolutePath().normalize());
+        });
+        javafx.scene.control.MenuItem close = new javafx.scene.control.MenuItem("Close window");
+        close.setOnAction(e -> stage.hide());
+        return new javafx.scene.control.MenuBar(new javafx.scene.control.Menu("File", null, fresh, close));
     }
 
     /**
@@ -245,23 +284,16 @@ public final class ViewerWindow {
     /** Puts data on show (FX thread). */
     public void show(ViewerData d, ModelView3D.Prepared prep) {
         this.data = d;
+        root.getRight().setVisible(!d.patches().isEmpty());   // a set-up preview has no patch to show
+        root.getRight().setManaged(!d.patches().isEmpty());
+        if (!d.patches().isEmpty()) lastResults = d;
         stage.setTitle("Solmass \u2014 " + d.title());
         long t0 = System.nanoTime();
         view = new ModelView3D(d, prep);
         long t1 = System.nanoTime();
         rig = new CameraRig(prep.frame().radiusM(), prep.focus(), prep.siteFocus());
         javafx.scene.Group world = new javafx.scene.Group(view.node(), rig.node());
-        SunPathView.Built sp = SunPathView.build(d.sunPath(), prep.frame().radiusM());
-        view.sunPathGroup().getChildren().setAll(sp.group());
-        sunPath = sp;
-        hourAnchors.clear();
-        hourLayer.getChildren().clear();
-        for (int i = 0; i < sp.labelBeads().size(); i++) {
-            Label l = new Label(sp.labels().get(i));
-            l.getStyleClass().add("hour-label");
-            hourAnchors.add(sp.labelBeads().get(i));
-            hourLayer.getChildren().add(l);
-        }
+        sunInset.setArcs(d.sunPath());
         boolean msaa = Platform.isSupported(javafx.application.ConditionalFeature.SCENE3D)
                 && !"false".equals(System.getProperty("solmass.viewer.msaa"));
         sub = new SubScene(world, 10, 10, true, msaa ? SceneAntialiasing.BALANCED : SceneAntialiasing.DISABLED);
@@ -273,15 +305,6 @@ public final class ViewerWindow {
         rig.attach(sub);
         rig.headingProperty().addListener((o, a, b) -> north.setRotate(-b.doubleValue()));
         north.setRotate(-rig.headingDeg());
-        rig.movesProperty().addListener((o, a, b) -> {
-            fitSunPath();
-            placeHourLabels();
-        });
-        sub.widthProperty().addListener((o, a, b) -> placeHourLabels());
-        sub.heightProperty().addListener((o, a, b) -> {
-            fitSunPath();
-            placeHourLabels();
-        });
         sub.addEventHandler(javafx.scene.input.MouseEvent.MOUSE_CLICKED, e -> {
             if (e.isStillSincePress() && e.getButton() == javafx.scene.input.MouseButton.PRIMARY) pick(e.getPickResult());
         });
@@ -302,12 +325,18 @@ public final class ViewerWindow {
         setSunPathVisible(controls.sunPathOn());
         controls.setZonesAvailable(view.hasZones());
         view.zoneGroup().setVisible(view.hasZones() && controls.zonesOn());
-        Platform.runLater(this::placeHourLabels);
+        view.setContextMode(contextMode.getValue());
+        if (!d.patches().isEmpty()) {
+            resultsTab.setDisable(false);
+            if (setup != null) leftTabs.getSelectionModel().select(resultsTab);
+        }
         status.setText(statusLine(d));
         String q = System.getProperty("solmass.viewer.quantity");
         if (q != null) controls.select(q);
         String thr = System.getProperty("solmass.viewer.threshold");
         if (thr != null) controls.setThreshold(Double.parseDouble(thr));
+        String ctx = System.getProperty("solmass.viewer.context");
+        if (ctx != null && ModelView3D.CONTEXT_MODES.contains(ctx)) contextMode.setValue(ctx);
         String v = System.getProperty("solmass.viewer.view");
         if (v != null) rig.preset(v);
         if (v != null && v.startsWith("sun")) controls.setSunPath(true);
@@ -323,7 +352,7 @@ public final class ViewerWindow {
         StringBuilder s = new StringBuilder(String.format(Locale.ROOT, "Site %.4f\u00b0 %s, %.4f\u00b0 %s \u00b7 %s \u00b7 %,d patches on %d blocks",
                 Math.abs(d.latitudeDeg()), d.latitudeDeg() >= 0 ? "N" : "S", Math.abs(d.longitudeDeg()),
                 d.longitudeDeg() >= 0 ? "E" : "W", d.zone(), d.patches().size(), d.model().blockNames().size()));
-        for (String w : d.warnings()) s.append("  \u26a0 ").append(w);
+        for (String w : d.warnings()) s.append("  \u26a0 ").append(GuiWords.of(w));
         return s.toString();
     }
 
@@ -336,32 +365,9 @@ public final class ViewerWindow {
         if (view != null) view.zoneGroup().setVisible(on);
     }
 
+    /** Shows or hides the sun path inset (a chart beside the model, docs/viewer.md "Sun path"). */
     void setSunPathVisible(boolean on) {
-        if (view != null) view.sunPathGroup().setVisible(on);
-        if (rig != null && view != null) rig.keepOutside(on ? 1.1 * SunPathView.domeRadiusM(view.frame().radiusM()) : 0);
-        fitSunPath();
-        placeHourLabels();
-    }
-
-    /** Gives the sun path's rods and beads their set width on screen for the current camera. */
-    private void fitSunPath() {
-        if (view == null || sunPath == null || rig == null || sub == null || !view.sunPathGroup().isVisible()) return;
-        sunPath.fitTo(rig.eye(), rig.focalPx(Math.max(1, sub.getHeight())));
-    }
-
-    /** Puts the hour numbers next to the labelled beads as seen through the camera. */
-    private void placeHourLabels() {
-        boolean on = view != null && view.sunPathGroup().isVisible();
-        hourLayer.setVisible(on);
-        if (!on) return;
-        for (int i = 0; i < hourAnchors.size(); i++) {
-            Point2D s = hourAnchors.get(i).localToScreen(0, 0, 0);
-            Node l = hourLayer.getChildren().get(i);
-            Point2D p = s == null ? null : hourLayer.screenToLocal(s);
-            boolean ok = p != null && Double.isFinite(p.getX()) && Double.isFinite(p.getY());
-            l.setVisible(ok);
-            if (ok) l.relocate(p.getX() + 6, p.getY() - 18);
-        }
+        sunInset.setVisible(on);
     }
 
     void preset(String v) {
@@ -370,6 +376,14 @@ public final class ViewerWindow {
 
     /** Handles a pick: a patch opens in the side panel; anything else clears it. */
     void pick(PickResult r) {
+        if (setup != null && leftTabs.getSelectionModel().getSelectedItem() == setupTab && r != null && r.getIntersectedNode() != null) {
+            int b = view.blockAt(r.getIntersectedNode(), r.getIntersectedFace());
+            if (b < 0) b = blockOfPatch(patchOf(r));
+            if (b >= 0) {
+                setup.toggleBlock(b);
+                return;
+            }
+        }
         int p = patchOf(r);
         panel.show(p);
         view.select(p >= 0 ? data.patches().get(p) : null);
@@ -452,6 +466,142 @@ public final class ViewerWindow {
     }
 
     Node root() { return root; }
+
+    /**
+     * Starts the new-study set-up on a model: the set-up tab on the left, the model in the 3D view
+     * with its blocks as set up (analysed ones tinted), the results tab waiting for the first run.
+     */
+    public void startSetup(java.nio.file.Path obj) {
+        ModelCheck mc;
+        try {
+            mc = ModelCheck.open(obj);
+        } catch (RuntimeException e) {
+            status.setText("Cannot open " + obj + ": " + GuiWords.of(e.getMessage()));
+            return;
+        }
+        StudyDraft d = new StudyDraft(obj, mc.model().blockNames());
+        d.unit = mc.unit();
+        setup = new SetupPanel(d, mc, new SetupHost());
+        ScrollPane sp = new ScrollPane(setup);
+        sp.setFitToWidth(true);
+        sp.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+        setupTab.setContent(sp);
+        leftTabs.getTabs().setAll(setupTab, resultsTab);
+        leftTabs.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            // back on the results after the set-up's preview replaced them: show them again
+            if (b == resultsTab && lastResults != null && data != lastResults) show(lastResults, ModelView3D.Prepared.of(lastResults));
+        });
+        resultsTab.setDisable(data == null || data.patches().isEmpty());
+        leftTabs.getSelectionModel().select(setupTab);
+        root.setLeft(leftTabs);
+        preview(d, mc);
+        status.setText("New study from " + obj.getFileName() + ": set it up on the left; click blocks in the view to make them context.");
+    }
+
+    /** The set-up panel, or null when the window was not started on a model. */
+    SetupPanel setup() { return setup; }
+
+    /** Shows the model as set up (no results): analysed blocks tinted, context as chosen; keeps the camera when the model is the same. */
+    private void preview(StudyDraft d, ModelCheck mc) {
+        java.util.List<SunArc> arcs = java.util.List.of();
+        org.solmass.sun.Site site = null;
+        try {
+            java.time.ZoneId z = StudyDraft.zoneId(d.zone);
+            double lat = StudyDraft.parse(d.latitude), lon = StudyDraft.parse(d.longitude);
+            if (z != null && Math.abs(lat) <= 90 && Math.abs(lon) <= 180) {
+                site = new org.solmass.sun.Site(lat, lon, 0, z);
+                arcs = SunArc.of(site);
+            }
+        } catch (RuntimeException e) {
+            arcs = java.util.List.of();
+        }
+        ViewerData pd = new ViewerData(d.name + " (set-up)", mc.model(), d.analysed.clone(), java.util.List.of(),
+                new org.solmass.table.ResultTable(java.util.List.of()), null, null, arcs,
+                site == null ? Double.NaN : site.latitudeDeg(), site == null ? Double.NaN : site.longitudeDeg(),
+                site == null ? "" : site.zone().getId(), java.util.List.of());
+        ModelView3D.Prepared prep = ModelView3D.Prepared.of(pd);
+        if (view != null && data != null && data.model() == pd.model() && sub != null) {
+            data = pd;
+            ModelView3D v = new ModelView3D(pd, prep);
+            ((javafx.scene.Group) sub.getRoot()).getChildren().set(0, v.node());
+            view = v;
+            view.setContextMode(contextMode.getValue());
+            sunInset.setArcs(arcs);
+            panel.setData(pd);
+        } else {
+            show(pd, prep);
+        }
+        if (!arcs.isEmpty() && !insetOffered) {   // the site is complete: its sun path helps the set-up
+            insetOffered = true;
+            controls.setSunPath(true);
+        }
+    }
+
+    /** The block of a patch, -1 for none. */
+    private int blockOfPatch(int p) {
+        return p < 0 ? -1 : data.patches().get(p).block();
+    }
+
+    /** Runs a study from the set-up (a new results folder, or a variant folder beside the first). */
+    void runStudy(org.solmass.study.Study s, String variantName) {
+        if (setup != null) setup.setDisable(true);   // one run at a time; the set-up opens again when it ends
+        runBusy("Running the analysis\u2026", () -> actions.runStudy(s, variantName, this::progress, cancelled::get), w -> {
+            java.nio.file.Path f = actions.shownFolder();
+            String line = "Results written to " + f;
+            status.setText(line + " \u00b7 " + status.getText());
+            if (setup != null) {
+                setup.setDisable(false);
+                setup.setDone(line + ". Change a setting and run again for a variant; earlier results stay as they are.");
+            }
+        }, e -> {
+            if (setup != null) setup.setDisable(false);
+            if (setup != null) setup.setDone(e instanceof CancellationException ? "Cancelled." : "The run failed: " + GuiWords.of(e.getMessage()));
+        });
+    }
+
+    /** Shows the data on show with the differences from another results folder of the study (diverging colours). */
+    void compare(java.nio.file.Path against) {
+        runBusy("Comparing with " + against.getFileName() + "\u2026", () -> actions.compare(against), w -> {
+            String none = matchedNone(data) ? "No patch of the two runs lines up with one of the other (different patch sizes"
+                    + " make different grids), so nothing is coloured; compare runs of one patch size \u00b7 " : "";
+            status.setText(none + "Differences from " + against + " \u00b7 " + status.getText());
+            controls.selectFirstDelta();
+        }, null);
+    }
+
+    /** Whether a comparison left every difference empty (no patch matched). */
+    static boolean matchedNone(ViewerData d) {
+        if (!d.table().has("delta_annual_kwh_m2")) return false;
+        for (double v : d.table().column("delta_annual_kwh_m2")) if (!Double.isNaN(v)) return false;
+        return true;
+    }
+
+    /** The window's side of the set-up. */
+    private final class SetupHost implements SetupPanel.SetupHost {
+        @Override public void draftChanged(StudyDraft d, ModelCheck mc) {
+            if (data == null || data.patches().isEmpty() || data.model() != mc.model()) preview(d, mc);
+            else if (leftTabs.getSelectionModel().getSelectedItem() == setupTab) preview(d, mc);
+        }
+
+        @Override public void runStudy(org.solmass.study.Study s, String variantName) {
+            ViewerWindow.this.runStudy(s, variantName);
+        }
+
+        @Override public String saveStudy(org.solmass.study.Study s, java.nio.file.Path file, String text) throws Exception {
+            if (java.nio.file.Files.exists(file) && !java.nio.file.Files.readString(file).equals(text)) {
+                javafx.scene.control.Alert a = new javafx.scene.control.Alert(javafx.scene.control.Alert.AlertType.CONFIRMATION,
+                        file + " exists. Replace it with this study?", javafx.scene.control.ButtonType.YES, javafx.scene.control.ButtonType.NO);
+                a.initOwner(stage);
+                if (a.showAndWait().orElse(javafx.scene.control.ButtonType.NO) != javafx.scene.control.ButtonType.YES) return "Not saved.";
+            }
+            java.nio.file.Path parent = file.toAbsolutePath().getParent();
+            if (parent != null) java.nio.file.Files.createDirectories(parent);
+            org.solmass.output.AtomicFiles.writeString(file, text);
+            return "Saved " + file;
+        }
+
+        @Override public javafx.stage.Window window() { return stage; }
+    }
 
     static HBox row(Node... n) {
         HBox h = new HBox(6, n);

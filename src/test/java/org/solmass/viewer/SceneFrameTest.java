@@ -10,11 +10,17 @@ class SceneFrameTest {
     private static final double E = 1e-12;
 
     @Test
-    void sunDirectionsLandOnTheCompassAxesOfTheScene() {
-        assertPoint(new Point3D(0, 0, 2), SunPathView.onDome(2, 0, 0));     // north -> +z
-        assertPoint(new Point3D(2, 0, 0), SunPathView.onDome(2, 90, 0));    // east -> +x
-        assertPoint(new Point3D(0, 0, -2), SunPathView.onDome(2, 180, 0));  // south -> -z
-        assertPoint(new Point3D(0, -2, 0), SunPathView.onDome(2, 123, 90)); // zenith -> -y (JavaFX y points down)
+    void sunPathInsetDrawsNorthUpEastRightAndTheZenithAtTheCentre() {
+        // a plan's orientation (common practice for sun-path charts): north up, east right
+        double[] n = SunInset.xy(0, 0, 100, 100, 80), e = SunInset.xy(90, 0, 100, 100, 80),
+                s = SunInset.xy(180, 0, 100, 100, 80), z = SunInset.xy(123, 90, 100, 100, 80), h = SunInset.xy(180, 45, 100, 100, 80);
+        assertEquals(100, n[0], 1e-9);
+        assertEquals(20, n[1], 1e-9);    // screen y grows downwards: north is up
+        assertEquals(180, e[0], 1e-9);
+        assertEquals(180, s[1], 1e-9);
+        assertEquals(100, z[0], 1e-9);
+        assertEquals(100, z[1], 1e-9);
+        assertEquals(140, h[1], 1e-9);   // equidistant: 45 deg up is half way to the rim
     }
 
     @Test
