@@ -54,7 +54,22 @@ public final class ShadedIrradiation {
     public record Inputs(Receivers receivers, ReflectorIndex reflectors, boolean[] triangleIsGround,
                          float[] triangleAlbedo, double groundAlbedo, boolean shadedGround,
                          StepTable steps, SunDirections sun, int raysPerPatch, int reflectorRays,
-                         boolean keepMonthHour) {}
+                         boolean keepMonthHour, CanopyShading canopy) {
+        /** Inputs without trees. */
+        public Inputs(Receivers receivers, ReflectorIndex reflectors, boolean[] triangleIsGround,
+                      float[] triangleAlbedo, double groundAlbedo, boolean shadedGround,
+                      StepTable steps, SunDirections sun, int raysPerPatch, int reflectorRays,
+                      boolean keepMonthHour) {
+            this(receivers, reflectors, triangleIsGround, triangleAlbedo, groundAlbedo, shadedGround, steps, sun,
+                    raysPerPatch, reflectorRays, keepMonthHour, null);
+        }
+
+        /** The same inputs with tree crowns that attenuate rays (null: none). */
+        public Inputs withCanopy(CanopyShading c) {
+            return new Inputs(receivers, reflectors, triangleIsGround, triangleAlbedo, groundAlbedo, shadedGround, steps, sun,
+                    raysPerPatch, reflectorRays, keepMonthHour, c);
+        }
+    }
 
     public static IrradiationResult run(org.solmass.scene.Scene scene, Inputs in, PhaseProgress progress) {
         Receivers rc = in.receivers();
@@ -170,6 +185,8 @@ public final class ShadedIrradiation {
         final long[] refKey;
         final double[] horizonDir = new double[3 * HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
         final double[] horizonCosElev = new double[HORIZON_ELEVATIONS * HORIZON_AZIMUTHS];
+        /** Tree crowns of the study (docs/method.md "Vegetation"); null without trees, and then never touched. */
+        final CanopyShading.Probe canopy;
         ViewFactors vf;
         double horizonVis, unshadedTotal, ghiAlbedo, sunshineHours;
         int refCount;
@@ -191,6 +208,7 @@ public final class ShadedIrradiation {
             tri = new int[maxRays];
             dist = new double[maxRays];
             vis = new byte[in.sun().count()];
+            canopy = in.canopy() == null ? null : in.canopy().probe(in.sun().count());
             refIdx = new int[maxRays];
             refW = new float[maxRays];
             refKey = new long[maxRays];
@@ -215,6 +233,7 @@ public final class ShadedIrradiation {
             HemisphereSampler hs = analysed ? sampler : reflectorSampler;
             hs.sample(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), dir, cls, tri, dist);
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
+            if (canopy != null) canopy.sky(ox, oy, oz, dir, cls, hs.rayCount());
             if (analysed) collectReflectors(hs.rayCount(), ox, oy, oz);
             horizonVis = horizonVisibility(ox, oy, oz, nx, ny, nz);
             sunVisibility(ox, oy, oz, nx, ny, nz);
@@ -284,6 +303,7 @@ public final class ShadedIrradiation {
             bundle.occluded(ox, oy, oz, bundleDir, null, m, blocked);
             double seen = 0;
             for (int i = 0; i < m; i++) if (!blocked[i]) seen += bundleW[i];
+            if (canopy != null) canopy.horizon(ox, oy, oz, bundleDir, bundleW, m, blocked, all);
             return all > 0 ? seen / all : 0;
         }
 
@@ -301,6 +321,7 @@ public final class ShadedIrradiation {
             }
             bundle.occluded(ox, oy, oz, bundleDir, null, m, blocked);
             for (int k = 0; k < m; k++) if (!blocked[k]) vis[sunIndex[k]] = 1;
+            if (canopy != null) canopy.sun(ox, oy, oz, bundleDir, sunIndex, m, blocked);
         }
 
         private void accumulate(double nx, double ny, double nz, double cosTilt, double sinTilt, boolean analysed) {
@@ -319,9 +340,16 @@ public final class ShadedIrradiation {
                 beamUSlot[k] += b;
                 circUSlot[k] += cs;
                 if (vis[st.direction[s]] != 0) {
+                    if (canopy != null) { // through the crowns: t_m^k of this direction (1 exactly without a crossing)
+                        double f = canopy.sunFactor(MonthHour.month(k) - 1, st.direction[s]);
+                        b *= f;
+                        cs *= f;
+                        sun += st.sunshineHours[s] * f;
+                    } else {
+                        sun += st.sunshineHours[s];
+                    }
                     beamSlot[k] += b;
                     circSlot[k] += cs;
-                    sun += st.sunshineHours[s];
                 }
             }
             sunshineHours = sun;
@@ -331,6 +359,10 @@ public final class ShadedIrradiation {
             Arrays.fill(diffMonth, 0);
             double unshadedSum = 0, ga = in.groundAlbedo();
             for (int k = 0; k < SLOTS; k++) {
+                if (canopy != null) { // the month's sky and horizon band seen through the crowns
+                    svf = canopy.skyMonth[MonthHour.month(k) - 1];
+                    hz = sinTilt * canopy.horizonMonth[MonthHour.month(k) - 1];
+                }
                 double diff = DiffuseParts.sum(st.backgroundWh[k], svf, circSlot[k], st.horizonWh[k], hz);
                 slotTotal[k] = beamSlot[k] + diff;
                 if (analysed) {

@@ -41,11 +41,12 @@ import java.util.Map;
  * @param threads worker threads, 0 = all cores
  * @param sunHours sun hours on given dates (key {@code sun_hours})
  * @param pv PV roof zones (key {@code pv})
+ * @param vegetation trees that attenuate rays (key {@code vegetation}; {@link Vegetation#NONE} for none)
  */
 public record Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
                     GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
                     TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads,
-                    SunHours sunHours, Pv pv) {
+                    SunHours sunHours, Pv pv, Vegetation vegetation) {
 
     public static final double DEFAULT_PATCH_M = 1.0;
     public static final int DEFAULT_RAYS = 1024;
@@ -59,6 +60,16 @@ public record Study(String name, String description, Path source, Model model, S
         climate = climate == null ? Climate.CLEAR_SKY : climate;
         sunHours = sunHours == null ? SunHours.DEFAULTS : sunHours;
         pv = pv == null ? Pv.DEFAULTS : pv;
+        vegetation = vegetation == null ? Vegetation.NONE : vegetation;
+    }
+
+    /** A study without trees. */
+    public Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
+                 GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
+                 TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads,
+                 SunHours sunHours, Pv pv) {
+        this(name, description, source, model, site, climate, albedo, groundIrradiance, patchM, rays, sky, timeBase,
+                sunBins, stepMinutes, outputs, threads, sunHours, pv, Vegetation.NONE);
     }
 
     /** A study with the default sun-hour and PV settings. */
