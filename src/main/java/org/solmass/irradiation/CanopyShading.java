@@ -22,6 +22,12 @@ import org.solmass.scene.HemisphereSampler;
  * {@code (1/N) sum over the hemisphere rays that reach the sky of t_m^k} (the cosine-weighted rays
  * carry equal weights), in place of the opaque SVF;</li>
  * <li>horizon band: each band ray's weight times {@code t_m^k}.</li>
+ * <li>reflected: the hemisphere rays that hit an opaque face or the ground carry {@code t_m^k} of
+ * the crowns before the hit; a patch's reflected irradiance of month {@code m} is multiplied by
+ * {@code f_m = sum rho_hit t_m^k / sum rho_hit} over those rays (the reflection-weighted share that
+ * passes the crowns). Exact when the reflectors behind crowns receive what the others receive on
+ * average; otherwise an approximation (the sparse reflection sum keeps one weight per reflector, not
+ * one per month). Crowns themselves do not reflect.</li>
  * </ul>
  * With {@code t_m = 1} every factor is exactly 1 and the results are those of the model without the
  * trees; with {@code t_m = 0} a crossed crown blocks like an opaque block that does not reflect.
@@ -87,6 +93,28 @@ public final class CanopyShading {
             }
             for (int m = 0; m < 12; m++) skyMonth[m] /= rays;
         }
+
+        /**
+         * Per month: the factor {@code f_m = sum rho t_m^k / sum rho} over the hemisphere rays that hit
+         * something ({@code cls} not sky), {@code rho} the hit triangle's albedo (the ground albedo for
+         * the ground plane), {@code k} the crowns before the hit at {@code dist}; 1 when nothing is hit.
+         */
+        void reflection(double ox, double oy, double oz, double[] dir, int[] cls, int[] tri, double[] dist, int rays,
+                        float[] albedo, double groundAlbedo, float[] out) {
+            double[] num = reflectionSum;
+            java.util.Arrays.fill(num, 0);
+            double den = 0;
+            for (int s = 0; s < rays; s++) {
+                if (cls[s] == HemisphereSampler.SKY) continue;
+                double rho = tri[s] >= 0 ? albedo[tri[s]] : groundAlbedo;
+                int k = counter.crossings(ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2], dist[s]);
+                den += rho;
+                for (int m = 0; m < 12; m++) num[m] += rho * power[m][k];
+            }
+            for (int m = 0; m < 12; m++) out[m] = den > 0 ? (float) (num[m] / den) : 1f;
+        }
+
+        private final double[] reflectionSum = new double[12];
 
         /** Per month: the visible share of the horizon band, each band ray weighted by {@code w t_m^k}. */
         void horizon(double ox, double oy, double oz, double[] dir, double[] weight, int count, boolean[] blocked, double all) {

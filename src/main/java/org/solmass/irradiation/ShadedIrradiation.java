@@ -82,6 +82,7 @@ public final class ShadedIrradiation {
         int[][] refIdx = new int[n][];
         float[][] refW = new float[n][];
         float[] ghiAlbedo = new float[n];
+        float[][] canopyReflection = in.canopy() == null ? null : new float[n][12]; // per month, docs/method.md "Vegetation"
 
         progress.begin("visibility", total);
         AtomicLong done = new AtomicLong();
@@ -107,6 +108,7 @@ public final class ShadedIrradiation {
                 refIdx[r] = Arrays.copyOf(w.refIdx, w.refCount);
                 refW[r] = Arrays.copyOf(w.refW, w.refCount);
                 ghiAlbedo[r] = (float) w.ghiAlbedo;
+                if (canopyReflection != null) w.canopyReflection(r, canopyReflection[r]);
             }
             long d = done.incrementAndGet();
             if (d % every == 0 || d == total) progress.advance(d);
@@ -132,6 +134,9 @@ public final class ShadedIrradiation {
                 for (int k = 0; k < SLOTS; k++) refl[k] += wr * firstPass[base + k];
             }
             for (int k = 0; k < SLOTS; k++) refl[k] += g * st.ghiWh[k];
+            if (canopyReflection != null) { // the share of the reflected light that passes the crowns
+                for (int k = 0; k < SLOTS; k++) refl[k] *= canopyReflection[p][MonthHour.month(k) - 1];
+            }
             double[] reflMonth = new double[12];
             int base = p * SLOTS;
             for (int k = 0; k < SLOTS; k++) {
@@ -238,6 +243,13 @@ public final class ShadedIrradiation {
             horizonVis = horizonVisibility(ox, oy, oz, nx, ny, nz);
             sunVisibility(ox, oy, oz, nx, ny, nz);
             accumulate(nx, ny, nz, rc.cosTilt(r), rc.sinTilt(r), analysed);
+        }
+
+        /** Per month, the factor of receiver r's reflected light for the crowns its hemisphere rays cross (just after its first pass). */
+        void canopyReflection(int r, float[] out) {
+            Receivers rc = in.receivers();
+            canopy.reflection(rc.origin[3 * r], rc.origin[3 * r + 1], rc.origin[3 * r + 2], dir, cls, tri, dist,
+                    sampler.rayCount(), in.triangleAlbedo(), in.groundAlbedo(), out);
         }
 
         private void collectReflectors(int rays, double ox, double oy, double oz) {

@@ -9,9 +9,10 @@ package org.solmass.scene;
  *
  * <p>Counting: the crown surfaces met along the ray at {@code 0 < s < sMax} are found one after the
  * other (closest hit, then again from just past it); a closed crown met from outside is met twice (in
- * and out), so the crossings are {@code ceil(hits / 2)}: two crowns in line give 2, a ray that starts
- * inside a crown or ends at an opaque face inside one still crosses it once, and a single open sheet
- * (a billboard tree) counts once.
+ * and out), so the crossings are {@code ceil(hits / 2)}: two crowns in line give 2; a ray that starts
+ * inside a crown and leaves it, or enters one and ends at an opaque face inside it, crosses it once; a
+ * single open sheet (a billboard tree) counts once. A ray that starts and ends inside the same crown
+ * meets no surface and counts none (a patch inside a crown is not attenuated by it on such rays).
  *
  * <p>Immutable and thread-safe; each thread counts through its own {@link Counter}.
  */

@@ -164,4 +164,41 @@ class CanopyShadingTest {
             assertEquals(opaque.diffuse()[p], clear.diffuse()[p], 1e-9 * Math.max(1, opaque.diffuse()[p]), "sky diffuse of patch " + p);
         }
     }
+
+    /**
+     * The house stands in a crown 20 km wide whose underside is at z = 1 m: every ray that leaves a
+     * patch above the underside crosses the crown's surface exactly once (through its top, side or
+     * underside, the last on the way to the ground), so by the model (t^1 on every ray, f_m = t) the
+     * beam, the sky diffuse and the reflected irradiation are those without the crown times t.
+     * Evergreen default t = 0.15 all year (Vegetation, from memory). The transmittances are kept as
+     * float for reflection: relative 1e-6.
+     */
+    @Test
+    void insideOneCrownBeamSkyAndReflectionAreScaledByItsTransmittance() {
+        MassingModel house = new TestModels().box("house", -10, 0, 10, 8, 10).build();
+        PipelineFixture f = new PipelineFixture(house, Set.of("house"), 1.0);
+        TestModels shell = new TestModels();
+        crown(shell, "crown", new double[] {-1e4, -1e4, 1, 1e4, 1e4, 1e3});
+        double[] t = new Vegetation(List.of("x"), List.of(), Vegetation.Kind.EVERGREEN, null).monthly(SITE.latitudeDeg());
+        assertEquals(0.15, t[0]);
+        IrradiationResult without = f.run(juneAndDecember(), Perez.INSTANCE, PipelineFixture.options(256, IrradiationSetup.SunSampling.EXACT));
+        float[] albedo = new float[house.triangleCount()];
+        Arrays.fill(albedo, 0.3f);
+        ShadedIrradiation.Inputs in = IrradiationSetup.build(f.scene, house, f.patches.surfaces(), f.patches.patches(), List.of(),
+                albedo, juneAndDecember(), Perez.INSTANCE, PipelineFixture.options(256, IrradiationSetup.SunSampling.EXACT))
+                .withCanopy(new CanopyShading(Canopy.build(shell.build().triangleSoup()), t));
+        IrradiationResult with = ShadedIrradiation.run(f.scene, in, PhaseProgress.NONE);
+        int checked = 0, reflecting = 0;
+        for (Patch p : f.patches.patches()) {
+            if (p.centroid().z() < 1.5) continue;
+            int i = p.index();
+            checked++;
+            assertTrue(without.diffuse()[i] > 0);
+            if (without.reflected()[i] > 0) reflecting++;
+            assertEquals(0.15 * without.reflected()[i], with.reflected()[i], 1e-6 * without.reflected()[i], "reflected, patch " + p.centroid());
+            assertEquals(0.15 * without.beam()[i], with.beam()[i], 1e-6 * Math.max(1, without.beam()[i]), "beam, patch " + p.centroid());
+            assertEquals(0.15 * without.diffuse()[i], with.diffuse()[i], 1e-6 * without.diffuse()[i], "sky diffuse, patch " + p.centroid());
+        }
+        assertTrue(checked > 500 && reflecting > 300, checked + " patches, " + reflecting + " with reflected light");
+    }
 }
