@@ -158,6 +158,9 @@ final class BadInputCases {
         study("study-rays-zero", studyJson(GOOD_SITE, ",\n  \"rays\": 0").replace("\"rays\": 16,", ""));
         study("study-unknown-key", studyJson(GOOD_SITE, ",\n  \"ray_count\": 64"));
         study("study-unknown-sky", studyJson(GOOD_SITE, ",\n  \"sky\": \"cloudy\""));
+        study("study-vegetation-transmittance-above-1", studyJson(GOOD_SITE, ",\n  \"vegetation\": {\"blocks\": [\"tree*\"], \"transmittance\": 1.2}"));
+        study("study-vegetation-month-negative", studyJson(GOOD_SITE,
+                ",\n  \"vegetation\": {\"blocks\": [\"tree*\"], \"transmittance\": [0.6, 0.6, 0.6, 0.4, 0.2, -0.2, 0.2, 0.2, 0.2, 0.4, 0.6, 0.6]}"));
         study("study-unknown-block", "{\n  \"model\": {\"file\": \"m.obj\", \"analyse\": [\"west\", \"tower\"]},\n  \"site\": "
                 + GOOD_SITE + "\n}\n");
         study("study-block-analysed-and-context", "{\n  \"model\": {\"file\": \"m.obj\", \"analyse\": [\"west\"], \"context\": [\"west\"]},\n  \"site\": "
