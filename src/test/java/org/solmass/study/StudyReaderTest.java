@@ -334,6 +334,8 @@ class StudyReaderTest {
         assertEquals(0.3, e.vegetation().monthly(10)[0]);
         assertEquals(Vegetation.Kind.EVERGREEN, e.vegetation().kind());
         assertEquals(Vegetation.NONE, StudyReader.read(write("v3.json", base + " }")).vegetation());
+        Study t = StudyReader.read(write("v4.json", base + ", \"vegetation\": { \"materials\": [\"leaf*\"], \"transmittance\": [0.6, 0.6, 0.6, 0.4, 0.2, 0.2, 0.2, 0.2, 0.2, 0.4, 0.6, 0.6] } }"));
+        assertEquals(t.vegetation(), StudyReader.fromTree(StudyWriter.toTree(t), null, dir, "run.json").vegetation(), "written and read back");
         assertTrue(fails(base + ", \"vegetation\": { \"kind\": \"evergreen\" } }").getMessage().contains("vegetation.blocks or vegetation.materials"));
     }
 
