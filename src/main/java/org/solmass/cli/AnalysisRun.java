@@ -12,6 +12,7 @@ import org.solmass.irradiation.IrradiationResult;
 import org.solmass.irradiation.IrradiationSetup;
 import org.solmass.irradiation.MemoryEstimate;
 import org.solmass.irradiation.PhaseProgress;
+import org.solmass.irradiation.CanopyShading;
 import org.solmass.irradiation.ShadedIrradiation;
 import org.solmass.metrics.MetricContext;
 import org.solmass.metrics.Metrics;
@@ -93,6 +94,13 @@ public final class AnalysisRun {
         return out;
     }
 
+    /** Whether a block has no triangle in the model (a block whose faces are all trees). */
+    private static java.util.function.Predicate<String> blockWithoutTriangles(MassingModel model) {
+        boolean[] has = new boolean[model.blockNames().size()];
+        for (int b : model.triangleBlock()) has[b] = true;
+        return name -> !has[model.blockNames().indexOf(name)];
+    }
+
     /** The weather series of the study, with the time base resolved. */
     public static WeatherSeries loadWeather(Study study) {
         return ClimateSource.load(study.site(), study.climateSpec());
@@ -137,11 +145,24 @@ public final class AnalysisRun {
             throw new InputException("time_base", "the climate source " + weather.source()
                     + " is an hourly year; monthly-average days need a month-hour table, monthly means or clear-sky");
         }
+        org.solmass.scene.Canopy canopy = null;
+        if (study.vegetation().any()) { // trees leave the opaque model: no patches, no reflection (docs/method.md "Vegetation")
+            for (String x : study.vegetation().unmatched(model)) warnings.add(x);
+            boolean[] tree = study.vegetation().treeTriangles(model);
+            boolean[] opaque = new boolean[tree.length];
+            for (int i = 0; i < tree.length; i++) opaque[i] = !tree[i];
+            MassingModel crowns = model.subset(tree);
+            if (crowns.triangleCount() > 0) {
+                canopy = org.solmass.scene.Canopy.build(crowns.triangleSoup());
+                model = model.subset(opaque);
+            }
+        }
         t.put("load", seconds(t0));
 
         long t1 = System.nanoTime();
         progress.begin("patches", 0);
         Set<String> analysed = analysedBlocks(study, model);
+        if (canopy != null) analysed.removeIf(blockWithoutTriangles(model));
         try {
             requireMemoryForPatches(study, model, analysed);
         } catch (InputException e) {   // a model in millimetres read as metres ends here: say so first
@@ -182,6 +203,7 @@ public final class AnalysisRun {
                 study.sunBins(), RUN_SEED, true);
         ShadedIrradiation.Inputs in = IrradiationSetup.build(scene, model, patches.surfaces(), patches.patches(),
                 contextPatches, albedo, weather, study.sky(), o);
+        if (canopy != null) in = in.withCanopy(new CanopyShading(canopy, study.vegetation().monthly(study.site().latitudeDeg())));
         t.put("scene", seconds(t2));
         requireMemory(study, in, patches.patchCount());
 
@@ -201,6 +223,7 @@ public final class AnalysisRun {
         counts.put("surfaces", (long) patches.surfaces().size());
         counts.put("patches", (long) patches.patchCount());
         counts.put("context_patches", (long) contextPatches.size());
+        if (canopy != null) counts.put("tree_triangles", (long) canopy.triangleCount());
         counts.put("steps", (long) weather.size());
         counts.put("sun_directions", (long) r.sunDirections());
         counts.put("rays_per_patch", (long) org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()));

@@ -39,6 +39,12 @@ public final class HorizonBand {
      * the band rays in front of the plane are traced together as one bundle.
      */
     public double visibility(BundleTracer bundle, double ox, double oy, double oz, double nx, double ny, double nz) {
+        return visibility(bundle, ox, oy, oz, nx, ny, nz, null);
+    }
+
+    /** As {@link #visibility(BundleTracer, double, double, double, double, double, double)}, the band also seen through tree crowns when {@code canopy} is not null. */
+    double visibility(BundleTracer bundle, double ox, double oy, double oz, double nx, double ny, double nz,
+                      CanopyShading.Probe canopy) {
         double all = 0;
         int m = 0;
         for (int h = 0; h < RAYS; h++) {
@@ -55,6 +61,7 @@ public final class HorizonBand {
         bundle.occluded(ox, oy, oz, bundleDir, null, m, blocked);
         double seen = 0;
         for (int i = 0; i < m; i++) if (!blocked[i]) seen += bundleW[i];
+        if (canopy != null) canopy.horizon(ox, oy, oz, bundleDir, bundleW, m, blocked, all);
         return all > 0 ? seen / all : 0;
     }
 }

@@ -58,7 +58,22 @@ public final class ShadedIrradiation {
     public record Inputs(Receivers receivers, ReflectorIndex reflectors, boolean[] triangleIsGround,
                          float[] triangleAlbedo, double groundAlbedo, boolean shadedGround,
                          StepTable steps, SunDirections sun, int raysPerPatch, int reflectorRays,
-                         boolean keepMonthHour, double bounceTolerance, int maxBounces) {}
+                         boolean keepMonthHour, double bounceTolerance, int maxBounces, CanopyShading canopy) {
+        /** Inputs without trees. */
+        public Inputs(Receivers receivers, ReflectorIndex reflectors, boolean[] triangleIsGround,
+                      float[] triangleAlbedo, double groundAlbedo, boolean shadedGround,
+                      StepTable steps, SunDirections sun, int raysPerPatch, int reflectorRays,
+                      boolean keepMonthHour, double bounceTolerance, int maxBounces) {
+            this(receivers, reflectors, triangleIsGround, triangleAlbedo, groundAlbedo, shadedGround, steps, sun,
+                    raysPerPatch, reflectorRays, keepMonthHour, bounceTolerance, maxBounces, null);
+        }
+
+        /** The same inputs with tree crowns that attenuate rays (null: none). */
+        public Inputs withCanopy(CanopyShading c) {
+            return new Inputs(receivers, reflectors, triangleIsGround, triangleAlbedo, groundAlbedo, shadedGround, steps, sun,
+                    raysPerPatch, reflectorRays, keepMonthHour, bounceTolerance, maxBounces, c);
+        }
+    }
 
     public static IrradiationResult run(org.solmass.scene.Scene scene, Inputs in, PhaseProgress progress) {
         Receivers rc = in.receivers();
@@ -70,6 +85,7 @@ public final class ShadedIrradiation {
         int[][] refIdx = new int[total][];
         float[][] refW = new float[total][], refW2 = new float[n][];
         float[] ghiAlbedo = new float[total], ghiAlbedo2 = new float[n];
+        float[][] canopyReflection = in.canopy() == null ? null : new float[n][12]; // per month, docs/method.md "Vegetation"
 
         progress.begin("visibility", total);
         AtomicLong done = new AtomicLong();
@@ -96,6 +112,7 @@ public final class ShadedIrradiation {
                 sunshine[r] = w.sunshineHours;
                 refW2[r] = Arrays.copyOf(w.refW2, w.refCount);
                 ghiAlbedo2[r] = (float) w.ghiAlbedo2;
+                if (canopyReflection != null) w.canopyReflection(r, canopyReflection[r]);
             }
             long d = done.incrementAndGet();
             if (d % every == 0 || d == total) progress.advance(d);
@@ -122,15 +139,17 @@ public final class ShadedIrradiation {
         long everyB = Math.max(1, n / 200);
         IntStream.range(0, n).parallel().forEach(p -> {
             int base = p * SLOTS;
+            float[] crown = canopyReflection == null ? null : canopyReflection[p]; // reflected light through the crowns
             if (monthHour != null) {
                 for (int k = 0; k < SLOTS; k++) {
-                    double t = firstPass[base + k] + monthHour[base + k]; // first pass of p: its beam + sky diffuse
+                    double rk = crown == null ? monthHour[base + k] : monthHour[base + k] * crown[MonthHour.month(k) - 1];
+                    double t = firstPass[base + k] + rk; // first pass of p: its beam + sky diffuse
                     monthHour[base + k] = st.hours[k] > 0 ? (float) (t / st.hours[k]) : 0f;
                 }
             }
             double b = 0, dfs = 0, ref = 0;
             for (int m = 0; m < 12; m++) {
-                double rm = ro.reflMonthWh()[m][p];
+                double rm = crown == null ? ro.reflMonthWh()[m][p] : ro.reflMonthWh()[m][p] * crown[m];
                 monthly[m][p] = (beamM[m][p] + diffM[m][p] + rm) / 1000;
                 b += beamM[m][p];
                 dfs += diffM[m][p];
@@ -180,6 +199,8 @@ public final class ShadedIrradiation {
         final HorizonBand horizon = new HorizonBand();
         /** A radiance distribution's per-patch view of the sky, or null for a three-part sky model. */
         final SkyPatchView skyView;
+        /** Tree crowns of the study (docs/method.md "Vegetation"); null without trees, and then never touched. */
+        final CanopyShading.Probe canopy;
         ViewFactors vf;
         double horizonVis, unshadedTotal, ghiAlbedo, ghiAlbedo2, sunshineHours;
         int refCount;
@@ -201,6 +222,7 @@ public final class ShadedIrradiation {
             tri = new int[maxRays];
             dist = new double[maxRays];
             vis = new byte[in.sun().count()];
+            canopy = in.canopy() == null ? null : in.canopy().probe(in.sun().count());
             refIdx = new int[maxRays];
             refW = new float[maxRays];
             refW2 = new float[maxRays];
@@ -217,11 +239,19 @@ public final class ShadedIrradiation {
             hs.sample(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), dir, cls, tri, dist);
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
             if (skyView != null) skyView.measure(ox, oy, oz, nx, ny, nz, dir, cls, hs.rayCount());
+            if (canopy != null) canopy.sky(ox, oy, oz, dir, cls, hs.rayCount());
             collectReflectors(hs.rayCount(), ox, oy, oz); // every receiver: reflectors reflect what they receive
             // a horizontal reflector-only receiver (ground probe) weights the horizon band by sin(tilt) = 0
-            horizonVis = analysed || rc.sinTilt(r) > 0 ? horizon.visibility(bundle, ox, oy, oz, nx, ny, nz) : 0;
+            horizonVis = analysed || rc.sinTilt(r) > 0 ? horizon.visibility(bundle, ox, oy, oz, nx, ny, nz, canopy) : 0;
             sunVisibility(ox, oy, oz, nx, ny, nz);
             accumulate(nx, ny, nz, rc.cosTilt(r), rc.sinTilt(r), analysed);
+        }
+
+        /** Per month, the factor of receiver r's reflected light for the crowns its hemisphere rays cross (just after its first pass). */
+        void canopyReflection(int r, float[] out) {
+            Receivers rc = in.receivers();
+            canopy.reflection(rc.origin[3 * r], rc.origin[3 * r + 1], rc.origin[3 * r + 2], dir, cls, tri, dist,
+                    sampler.rayCount(), in.triangleAlbedo(), in.groundAlbedo(), out);
         }
 
         private void collectReflectors(int rays, double ox, double oy, double oz) {
@@ -293,6 +323,7 @@ public final class ShadedIrradiation {
             }
             bundle.occluded(ox, oy, oz, bundleDir, null, m, blocked);
             for (int k = 0; k < m; k++) if (!blocked[k]) vis[sunIndex[k]] = 1;
+            if (canopy != null) canopy.sun(ox, oy, oz, bundleDir, sunIndex, m, blocked);
         }
 
         private void accumulate(double nx, double ny, double nz, double cosTilt, double sinTilt, boolean analysed) {
@@ -311,9 +342,16 @@ public final class ShadedIrradiation {
                 beamUSlot[k] += b;
                 circUSlot[k] += cs;
                 if (vis[st.direction[s]] != 0) {
+                    if (canopy != null) { // through the crowns: t_m^k of this direction (1 exactly without a crossing)
+                        double f = canopy.sunFactor(MonthHour.month(k) - 1, st.direction[s]);
+                        b *= f;
+                        cs *= f;
+                        sun += st.sunshineHours[s] * f;
+                    } else {
+                        sun += st.sunshineHours[s];
+                    }
                     beamSlot[k] += b;
                     circSlot[k] += cs;
-                    sun += st.sunshineHours[s];
                 }
             }
             sunshineHours = sun;
@@ -327,6 +365,10 @@ public final class ShadedIrradiation {
                 if (analysed) skyView.slotSums(skyView.unobstructed, st.skyWh, skyUSlot);
             }
             for (int k = 0; k < SLOTS; k++) {
+                if (canopy != null) { // the month's sky and horizon band seen through the crowns
+                    svf = canopy.skyMonth[MonthHour.month(k) - 1];
+                    hz = sinTilt * canopy.horizonMonth[MonthHour.month(k) - 1];
+                }
                 double diff = skyView == null ? DiffuseParts.sum(st.backgroundWh[k], svf, circSlot[k], st.horizonWh[k], hz)
                         : Math.max(0, skySlot[k]);
                 slotTotal[k] = beamSlot[k] + diff;

@@ -83,6 +83,27 @@ public record MassingModel(Path source, List<String> blockNames, List<String> ma
         return used;
     }
 
+    /**
+     * The model with only the triangles {@code keep} marks: same blocks, materials and vertices (block
+     * and material ids keep their meaning; a block may be left without triangles); triangle order,
+     * blocks, materials and OBJ lines kept.
+     */
+    public MassingModel subset(boolean[] keep) {
+        int n = 0;
+        for (int t = 0; t < triangleCount(); t++) if (keep[t]) n++;
+        int[] tr = new int[3 * n], bl = new int[n], ma = new int[n], li = new int[n];
+        int j = 0;
+        for (int t = 0; t < triangleCount(); t++) {
+            if (!keep[t]) continue;
+            System.arraycopy(triangles, 3 * t, tr, 3 * j, 3);
+            bl[j] = triangleBlock[t];
+            ma[j] = triangleMaterial[t];
+            li[j] = triangleLine[t];
+            j++;
+        }
+        return new MassingModel(source, blockNames, materialNames, vertices, tr, bl, ma, li, degenerateDropped);
+    }
+
     /** Flat x,y,z of the 3 corners of every triangle (9 floats per triangle), for the scene stage. */
     public float[] triangleSoup() {
         float[] out = new float[triangles.length * 3];

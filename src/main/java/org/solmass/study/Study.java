@@ -43,11 +43,12 @@ import java.util.Map;
  * @param sunHours sun hours on given dates (key {@code sun_hours})
  * @param pv PV roof zones (key {@code pv})
  * @param terrain far horizon and DEM terrain (key {@code terrain}; {@link TerrainSpec#NONE}: flat, open)
+ * @param vegetation trees that attenuate rays (key {@code vegetation}; {@link Vegetation#NONE} for none)
  */
 public record Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
                     GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
                     TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads,
-                    SunHours sunHours, Pv pv, TerrainSpec terrain) {
+                    SunHours sunHours, Pv pv, TerrainSpec terrain, Vegetation vegetation) {
 
     public static final double DEFAULT_PATCH_M = 1.0;
     public static final int DEFAULT_RAYS = 1024;
@@ -62,15 +63,16 @@ public record Study(String name, String description, Path source, Model model, S
         sunHours = sunHours == null ? SunHours.DEFAULTS : sunHours;
         pv = pv == null ? Pv.DEFAULTS : pv;
         terrain = terrain == null ? TerrainSpec.NONE : terrain;
+        vegetation = vegetation == null ? Vegetation.NONE : vegetation;
     }
 
-    /** A study without terrain (flat ground, open horizon). */
+    /** A study without terrain (flat ground, open horizon) and without trees. */
     public Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
                  GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
                  TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads,
                  SunHours sunHours, Pv pv) {
         this(name, description, source, model, site, climate, albedo, groundIrradiance, patchM, rays, sky, timeBase,
-                sunBins, stepMinutes, outputs, threads, sunHours, pv, TerrainSpec.NONE);
+                sunBins, stepMinutes, outputs, threads, sunHours, pv, TerrainSpec.NONE, Vegetation.NONE);
     }
 
     /** A study with the default sun-hour and PV settings. */
@@ -78,7 +80,7 @@ public record Study(String name, String description, Path source, Model model, S
                  GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
                  TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads) {
         this(name, description, source, model, site, climate, albedo, groundIrradiance, patchM, rays, sky, timeBase,
-                sunBins, stepMinutes, outputs, threads, SunHours.DEFAULTS, Pv.DEFAULTS, TerrainSpec.NONE);
+                sunBins, stepMinutes, outputs, threads, SunHours.DEFAULTS, Pv.DEFAULTS, TerrainSpec.NONE, Vegetation.NONE);
     }
 
     /** The metrics' settings from the study's {@code sun_hours} and {@code pv} keys. */

@@ -190,11 +190,12 @@ public final class StudyReader {
             throw c.error("ground_irradiance", "\"shaded\" samples the flat ground plane and cannot be combined with a DEM"
                     + " (terrain.dem); use \"unshaded\" (the terrain then reflects the ground albedo x GHI)");
         }
+        Vegetation vegetation = vegetation(c);
         c.finish();
 
         if (name == null || name.isBlank()) name = baseName(source != null ? source : modelFile);
         return new Study(name, description, source, model, site, climate, albedo, ground, patchM, rays, sky,
-                timeBase, sunBins, step, outputs, threads, sunHours, pv, terrain);
+                timeBase, sunBins, step, outputs, threads, sunHours, pv, terrain, vegetation);
     }
 
     /** The {@code terrain} section: far-horizon file, DEM and its placement (docs/study-file.md). */
@@ -223,6 +224,47 @@ public final class StudyReader {
                 f.string("base_property", GeoOptions.DEFAULT_BASE), f.string("name_property", GeoOptions.DEFAULT_NAME));
         f.finish();
         return o;
+    }
+
+    /**
+     * The {@code vegetation} section: block-name and material patterns of trees, their leaf habit
+     * ({@code kind}) and optionally {@code transmittance}, one number for every month or 12 (January first).
+     */
+    private static Vegetation vegetation(JsonCursor c) {
+        if (!c.has("vegetation")) {
+            c.raw("vegetation");
+            return Vegetation.NONE;
+        }
+        JsonCursor v = c.object("vegetation");
+        List<String> blocks = v.strings("blocks"), materials = v.strings("materials");
+        String kindName = v.oneOf("kind", java.util.Arrays.stream(Vegetation.Kind.values()).map(Vegetation.Kind::label).toList(),
+                Vegetation.Kind.DECIDUOUS.label());
+        Vegetation.Kind kind = Vegetation.Kind.valueOf(kindName.toUpperCase(java.util.Locale.ROOT));
+        double[] t = null;
+        com.fasterxml.jackson.databind.JsonNode n = v.raw("transmittance");
+        String expected = "expected a transmittance from 0 to 1 (one number, or 12 numbers January to December)";
+        if (n != null) {
+            if (n.isNumber()) {
+                t = new double[12];
+                java.util.Arrays.fill(t, v.number("transmittance", null, 0, 1));
+            } else if (n.isArray() && n.size() == 12) {
+                t = new double[12];
+                for (int i = 0; i < 12; i++) {
+                    com.fasterxml.jackson.databind.JsonNode e = n.get(i);
+                    if (!e.isNumber() || !(e.asDouble() >= 0 && e.asDouble() <= 1)) {
+                        throw v.error("transmittance[" + i + "]", expected + ", got " + JsonCursor.shown(e));
+                    }
+                    t[i] = e.asDouble();
+                }
+            } else {
+                throw v.error("transmittance", expected + ", got " + JsonCursor.shown(n));
+            }
+        }
+        v.finish();
+        if (blocks.isEmpty() && materials.isEmpty()) {
+            throw c.error("vegetation", "expected vegetation.blocks or vegetation.materials: name patterns of the tree blocks or their materials");
+        }
+        return new Vegetation(blocks, materials, kind, t);
     }
 
     /** The {@code sun_hours} section: dates as "MM-DD" (valid in the study's year), step and minimum elevation. */

@@ -104,6 +104,16 @@ public final class StudyWriter {
         sh.put("step_minutes", s.sunHours().stepMinutes());
         sh.put("min_elevation_deg", s.sunHours().minElevationDeg());
 
+        if (s.vegetation().any()) {
+            ObjectNode veg = root.putObject("vegetation");
+            s.vegetation().blockPatterns().forEach(veg.putArray("blocks")::add);
+            s.vegetation().materialPatterns().forEach(veg.putArray("materials")::add);
+            veg.put("kind", s.vegetation().kind().label());
+            if (s.vegetation().transmittance() != null) {
+                com.fasterxml.jackson.databind.node.ArrayNode tr = veg.putArray("transmittance");
+                for (double x : s.vegetation().transmittance()) tr.add(x);
+            }
+        }
         ObjectNode pv = root.putObject("pv");
         pv.put("suitable_pct", s.pv().suitablePct());
         pv.put("min_zone_m2", s.pv().minZoneM2());

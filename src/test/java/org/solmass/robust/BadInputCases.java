@@ -162,6 +162,9 @@ final class BadInputCases {
         study("study-pv-gcr-one", studyJson(GOOD_SITE, ",\n  \"pv\": {\"ground_coverage_ratio\": 1}"));
         study("study-pv-row-pitch-below-module-width", studyJson(GOOD_SITE, ",\n  \"pv\": {\"row_pitch_m\": 0.8}"));
         study("study-pv-module-wider-than-long", studyJson(GOOD_SITE, ",\n  \"pv\": {\"module\": {\"length_m\": 1.0, \"width_m\": 1.7}}"));
+        study("study-vegetation-transmittance-above-1", studyJson(GOOD_SITE, ",\n  \"vegetation\": {\"blocks\": [\"tree*\"], \"transmittance\": 1.2}"));
+        study("study-vegetation-month-negative", studyJson(GOOD_SITE,
+                ",\n  \"vegetation\": {\"blocks\": [\"tree*\"], \"transmittance\": [0.6, 0.6, 0.6, 0.4, 0.2, -0.2, 0.2, 0.2, 0.2, 0.4, 0.6, 0.6]}"));
         study("study-unknown-block", "{\n  \"model\": {\"file\": \"m.obj\", \"analyse\": [\"west\", \"tower\"]},\n  \"site\": "
                 + GOOD_SITE + "\n}\n");
         study("study-block-analysed-and-context", "{\n  \"model\": {\"file\": \"m.obj\", \"analyse\": [\"west\"], \"context\": [\"west\"]},\n  \"site\": "

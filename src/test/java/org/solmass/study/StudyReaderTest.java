@@ -320,4 +320,33 @@ class StudyReaderTest {
         InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", " + climate.formatted("25") + "}");
         assertTrue(e.getMessage().endsWith("climate.fill_gaps: expected a whole number from 0 to 24, got 25"), e.getMessage());
     }
+
+    @Test
+    void vegetationKeysGiveTreePatternsAndMonthlyTransmittance() throws Exception {
+        String base = "{ \"model\": { \"file\": \"m.obj\" }, \"site\": { \"latitude\": -33.9, \"longitude\": 18.4, \"zone\": \"+02:00\" }";
+        Study s = StudyReader.read(write("v1.json", base + ", \"vegetation\": { \"blocks\": [\"tree*\"], \"materials\": [\"leaves\"] } }"));
+        assertEquals(java.util.List.of("tree*"), s.vegetation().blockPatterns());
+        assertEquals(Vegetation.Kind.DECIDUOUS, s.vegetation().kind());
+        // south of the equator the deciduous year is shifted by six months: June is bare, December in leaf
+        assertEquals(0.6, s.vegetation().monthly(-33.9)[5]);
+        assertEquals(0.25, s.vegetation().monthly(-33.9)[11]);
+        Study e = StudyReader.read(write("v2.json", base + ", \"vegetation\": { \"blocks\": [\"pine?\"], \"kind\": \"evergreen\", \"transmittance\": 0.3 } }"));
+        assertEquals(0.3, e.vegetation().monthly(10)[0]);
+        assertEquals(Vegetation.Kind.EVERGREEN, e.vegetation().kind());
+        assertEquals(Vegetation.NONE, StudyReader.read(write("v3.json", base + " }")).vegetation());
+        Study t = StudyReader.read(write("v4.json", base + ", \"vegetation\": { \"materials\": [\"leaf*\"], \"transmittance\": [0.6, 0.6, 0.6, 0.4, 0.2, 0.2, 0.2, 0.2, 0.2, 0.4, 0.6, 0.6] } }"));
+        assertEquals(t.vegetation(), StudyReader.fromTree(StudyWriter.toTree(t), null, dir, "run.json").vegetation(), "written and read back");
+        assertTrue(fails(base + ", \"vegetation\": { \"kind\": \"evergreen\" } }").getMessage().contains("vegetation.blocks or vegetation.materials"));
+    }
+
+    @Test
+    void vegetationPatternsMatchWholeNamesWithStarAndQuestionMark() {
+        org.solmass.model.MassingModel m = new org.solmass.model.MassingModel(null, java.util.List.of("tree_1", "tree_22", "house", "oak"),
+                java.util.List.of("leaves"), new double[9], new int[] {0, 1, 2, 0, 1, 2, 0, 1, 2, 0, 1, 2}, new int[] {0, 1, 2, 3},
+                new int[] {-1, -1, -1, 0}, new int[4], 0);
+        Vegetation v = new Vegetation(java.util.List.of("tree_?", "hou"), java.util.List.of("leaves"), null, null);
+        assertArrayEquals(new boolean[] {true, false, false, true}, v.treeTriangles(m));
+        assertEquals(1, v.unmatched(m).size()); // "hou" matches no whole block name
+        assertTrue(v.unmatched(m).get(0).startsWith("vegetation.blocks[1]: the pattern \"hou\" matches no block"));
+    }
 }
