@@ -241,15 +241,23 @@ public final class ReportCommand implements Callable<Integer> {
                 n.path("shading_loss_pct").path("mean").asText(), n.path("sky_view_factor").path("mean").asText()};
     }
 
+    /** zones.csv's layout and yield columns, and its energy balance, as two tables of the columns the file has. */
+    static final List<String> PV_LAYOUT = List.of("zone", "block", "surface", "area_m2", "mounting", "modules", "kwp",
+            "poa_kwh_m2", "module_shading_loss_pct", "yield_kwh", "specific_yield_kwh_kwp", "performance_ratio");
+    static final List<String> PV_BALANCE = List.of("zone", "reference_kwh", "shading_loss_kwh", "incidence_loss_kwh",
+            "mismatch_loss_kwh", "temperature_loss_kwh", "other_dc_loss_kwh", "inverter_loss_kwh", "clipping_loss_kwh", "yield_kwh");
+
     private static void pvZones(PdfPages pdf, PublishedRun run, JsonNode summary) {
         JsonNode pv = summary.get("pv_zones");
         if (pv != null) {
             JsonNode best = pv.path("best_plane");
-            pdf.paragraph("Roof patches with at least " + pv.path("suitable_pct").asText() + " % of the best unobstructed plane at "
-                    + "the site (tilt " + best.path("tilt_deg").asText() + " deg, azimuth " + best.path("azimuth_deg").asText() + " deg, "
-                    + best.path("annual_kwh_m2").asText() + " kWh/m2 per year), zones of at least " + pv.path("min_zone_m2").asText()
-                    + " m2. Yield = irradiation x module efficiency " + pv.path("module_efficiency").asText() + " x performance ratio "
-                    + pv.path("performance_ratio").asText() + ", the zone fully covered: indicative, not a yield estimate.", 9.5f, false);
+            pdf.paragraph("Roof patches with a suitability of at least " + pv.path("suitable_pct").asText() + " % (what the site"
+                    + " leaves of the best unobstructed plane: tilt " + best.path("tilt_deg").asText() + " deg, azimuth "
+                    + best.path("azimuth_deg").asText() + " deg, " + best.path("annual_kwh_m2").asText() + " kWh/m2 per year),"
+                    + " zones of at least " + pv.path("min_zone_m2").asText() + " m2. Modules are placed in each zone with"
+                    + " setbacks (racked rows on flat roofs, flush on pitched ones); the yield follows each module's"
+                    + " plane-of-array irradiance through the loss chain of docs/pv.md. Indicative: layout, electrical,"
+                    + " structural and fire-setback design belong to licensed practice and local codes.", 9.5f, false);
         }
         if (!run.has(ZoneCsvWriter.FILE_NAME)) {
             pdf.paragraph("The run wrote no zones.csv.", 9.5f, true);
@@ -260,12 +268,33 @@ public final class ReportCommand implements Callable<Integer> {
             pdf.paragraph("No roof area met the settings: no PV zone.", 9.5f, true);
             return;
         }
-        String[] header = table.get(0).toArray(String[]::new);
+        zoneTable(pdf, table, PV_LAYOUT);
+        if (table.get(0).contains("reference_kwh")) {
+            pdf.paragraph("Energy balance per zone, kWh per year: reference (plane-of-array irradiation x kWp / 1 kW/m2)"
+                    + " minus each loss equals the yield.", 9f, true);
+            zoneTable(pdf, table, PV_BALANCE);
+        }
+    }
+
+    /** The named columns of a CSV table (header first) that the file has, in the given order. */
+    private static void zoneTable(PdfPages pdf, List<List<String>> table, List<String> wanted) {
+        List<String> head = table.get(0);
+        List<Integer> at = new ArrayList<>();
+        for (String w : wanted) if (head.contains(w)) at.add(head.indexOf(w));
+        String[] header = new String[at.size()];
+        boolean[] right = new boolean[at.size()];
+        for (int i = 0; i < at.size(); i++) {
+            header[i] = head.get(at.get(i));
+            right[i] = !header[i].equals("block") && !header[i].equals("surface") && !header[i].equals("mounting");
+        }
         List<String[]> rows = new ArrayList<>();
-        for (int i = 1; i < table.size(); i++) rows.add(table.get(i).toArray(String[]::new));
-        boolean[] right = new boolean[header.length];
-        for (int i = 0; i < right.length; i++) right[i] = !header[i].equals("block") && !header[i].equals("surface");
-        pdf.table(header, rows, null, right, 8.5f);
+        for (int r = 1; r < table.size(); r++) {
+            List<String> row = table.get(r);
+            String[] out = new String[at.size()];
+            for (int i = 0; i < at.size(); i++) out[i] = at.get(i) < row.size() ? row.get(at.get(i)) : "";
+            rows.add(out);
+        }
+        pdf.table(header, rows, null, right, 8f);
     }
 
     private static List<String> columns(JsonNode summary) {

@@ -27,7 +27,7 @@ public final class MethodSources {
     static final String KLEIN = "Klein, S.A. (1977). Calculation of monthly average insolation on tilted surfaces. "
             + "Solar Energy 19(4) 325-329 (recommended average days).";
     static final String RADIOSITY = "Howell, J.R., Menguc, M.P., Siegel, R. (2016). Thermal Radiation Heat Transfer, 6th ed., "
-            + "ch. 5 and 7 (view factors and one bounce of diffuse reflection).";
+            + "ch. 5, 7 and 9 (view factors; diffuse reflection summed bounce by bounce, the Neumann series of the radiosity equations).";
     static final String HOTTEL = "Hottel, H.C. (1976). A simple model for estimating the transmittance of direct solar "
             + "radiation through clear atmospheres. Solar Energy 18(2) 129-134 (clear sky).";
     static final String LIU_JORDAN_1960 = "Liu, B.Y.H., Jordan, R.C. (1960). The interrelationship and characteristic "
@@ -42,6 +42,19 @@ public final class MethodSources {
     static final String CIE_OVERCAST = "Moon, P., Spencer, D.E. (1942). Illumination from a non-uniform sky. Illuminating "
             + "Engineering 37, 707-726; ISO 15469:2004 / CIE S 011/E:2003, sky type 16 (CIE standard overcast sky).";
 
+    static final String PEREZ_1993 = "Perez, R., Seals, R., Michalsky, J. (1993). All-weather model for sky luminance "
+            + "distribution: preliminary configuration and validation. Solar Energy 50(3) 235-245 (sky radiance distribution).";
+    static final String CIE_GENERAL = "ISO 15469:2004 / CIE S 011/E:2003 Spatial distribution of daylight: CIE standard "
+            + "general sky (sky radiance distribution).";
+    static final String TREGENZA = "Tregenza, P.R. (1987). Subdivision of the sky hemisphere for luminance measurements. "
+            + "Lighting Research and Technology 19(1) 13-14 (145 sky patches).";
+    static final String MARTIN_RUIZ = "Martin, N., Ruiz, J.M. (2001). Calculation of the PV modules angular losses under field "
+            + "conditions by means of an analytical model. Solar Energy Materials and Solar Cells 70(1) 25-38 (incidence-angle losses).";
+    static final String FAIMAN = "Faiman, D. (2008). Assessing the outdoor operating temperature of photovoltaic modules. "
+            + "Progress in Photovoltaics 16(4) 307-315 (cell temperature).";
+    static final String IEC_61724 = "IEC 61724-1:2021 Photovoltaic system performance - Part 1: Monitoring (reference and "
+            + "final yield, performance ratio).";
+
     private MethodSources() {}
 
     /**
@@ -55,7 +68,11 @@ public final class MethodSources {
         out.add(SPA);
         out.add(DUFFIE_BECKMAN);
         if (!"hourly-year".equals(timeBase)) out.add(KLEIN);
-        if ("perez".equals(study.sky().name())) out.add(PEREZ);
+        String sky = study.sky().name();
+        if ("perez".equals(sky)) out.add(PEREZ);
+        if ("perez-1993".equals(sky)) out.add(PEREZ_1993);
+        if (sky.startsWith("cie-") && !"cie-overcast".equals(sky)) out.add(CIE_GENERAL);
+        if ("perez-1993".equals(sky) || sky.startsWith("cie-")) out.add(TREGENZA);
         out.add(LIU_JORDAN_1963);
         out.add(RADIOSITY);
         if (study.climate().isClearSky()) {
@@ -71,15 +88,21 @@ public final class MethodSources {
                 out.add(ERBS);
             }
         }
-        boolean sunLevels = false, sunshine = false, vsc = false;
+        boolean sunLevels = false, sunshine = false, vsc = false, pv = false;
         for (String c : columns) {
             sunLevels |= c.startsWith("sun_level_");
             sunshine |= c.equals("sunshine_h");
             vsc |= c.equals("vsc_pct");
+            pv |= c.equals("pv_zone");
         }
         if (sunshine) out.add(WMO);
         if (sunLevels) out.add(EN17037);
-        if (vsc) out.add(CIE_OVERCAST);
+        if (vsc || "cie-overcast".equals(sky)) out.add(CIE_OVERCAST);
+        if (pv) {
+            out.add(MARTIN_RUIZ);
+            out.add(FAIMAN);
+            out.add(IEC_61724);
+        }
         return out;
     }
 }

@@ -88,11 +88,12 @@ class ReportCommandTest {
         Path pdf = dir.resolve("out").resolve("r.pdf");
         assertEquals(0, quietly("report", results.toString(), "--out", pdf.toString()));
         try (PDDocument d = Loader.loadPDF(pdf.toFile())) {
-            assertEquals(5, d.getNumberOfPages(), "title, map, elevations of box, tables, PV zones + cautions + sources");
+            assertEquals(6, d.getNumberOfPages(), "title, map, elevations of box, tables, PV zones + cautions, sources (run onto a sixth page)");
             PDFTextStripper strip = new PDFTextStripper();
             String all = strip.getText(d).replaceAll("\\s+", " ");
             for (String want : new String[] {"Two boxes (invented)", "two.obj", "clear-sky model", "Climate, annual totals", "GHI ",
-                    "Sky model perez", "Patch size 2.00 m", "latitude 51.0000", "Solmass"}) {
+                    "Sky model perez", "Patch size 2.00 m", "latitude 51.0000", "Solmass",
+                    "Energy balance per zone", "performance_ratio", "Faiman"}) {
                 assertTrue(all.contains(want), "inputs: " + want);
             }
             assertTrue(all.contains(PdfPages.safe(Cautions.RESULTS)), "the results caution, whole");

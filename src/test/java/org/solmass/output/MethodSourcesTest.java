@@ -53,4 +53,14 @@ class MethodSourcesTest {
         assertTrue(src.contains(MethodSources.CIE_OVERCAST) && src.contains(MethodSources.EN17037));
         assertFalse(src.contains(MethodSources.ERBS));
     }
+
+    @Test
+    void pvZonesNameTheirYieldModelsAndNoneWithout() throws Exception {
+        Study s = study(new StudyOverrides());
+        List<String> with = MethodSources.of(s, "average-days", null, List.of("annual_kwh_m2", "pv_zone"));
+        assertTrue(with.contains(MethodSources.MARTIN_RUIZ) && with.contains(MethodSources.FAIMAN)
+                && with.contains(MethodSources.IEC_61724), "PV zones: incidence, cell temperature, performance ratio");
+        List<String> without = MethodSources.of(s, "average-days", null, List.of("annual_kwh_m2"));
+        assertFalse(without.contains(MethodSources.FAIMAN), "no pv_zone column: no PV sources");
+    }
 }

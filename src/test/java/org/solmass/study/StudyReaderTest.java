@@ -200,7 +200,7 @@ class StudyReaderTest {
     @Test
     void unknownChoiceListsTheAllowedValues() throws Exception {
         InputException e = fails("{\"model\": {\"file\": \"m.obj\"}, " + MIN_SITE + ", \"sky\": \"cloudy\"}");
-        assertTrue(e.getMessage().contains("sky: expected one of perez, isotropic, got \"cloudy\""), e.getMessage());
+        assertTrue(e.getMessage().contains("sky: expected one of perez, isotropic, perez-1993, cie-overcast, cie-1, cie-2, cie-3, cie-4, cie-5, cie-6, cie-7, cie-8, cie-9, cie-10, cie-11, cie-12, cie-13, cie-14, cie-15, got \"cloudy\""), e.getMessage());
     }
 
     @Test
