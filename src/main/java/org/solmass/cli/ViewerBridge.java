@@ -9,6 +9,8 @@ import org.solmass.climate.MonthHour;
 import org.solmass.climate.WeatherSeries;
 import org.solmass.irradiation.PhaseProgress;
 import org.solmass.model.MassingModel;
+import org.solmass.output.ModulesGeoJsonReader;
+import org.solmass.output.ModulesGeoJsonWriter;
 import org.solmass.output.MonthHourCsvReader;
 import org.solmass.output.PatchCsvReader;
 import org.solmass.output.PatchCsvWriter;
@@ -87,7 +89,20 @@ final class ViewerBridge implements ViewerActions {
         last = o;
         shown = o.table();
         shownFolder = o.study().outputs().folder().toAbsolutePath().normalize();
-        return data(o.study(), o.model(), o.patches(), o.table(), o.result().monthHourWm2(), o.weather(), o.warnings());
+        return data(o.study(), o.model(), o.patches(), o.table(), o.result().monthHourWm2(), o.weather(), o.warnings())
+                .withModuleRings(moduleRings(shownFolder));
+    }
+
+    /** The PV module outlines of a results folder; none when the run wrote no modules.geojson (older results, no PV). */
+    static List<double[]> moduleRings(PublishedRun published) {
+        if (!published.has(ModulesGeoJsonWriter.FILE_NAME)) return List.of();
+        return published.read(ModulesGeoJsonWriter.FILE_NAME, ModulesGeoJsonReader::rings);
+    }
+
+    /** The PV module outlines of a folder this bridge has just written; none without modules.geojson. */
+    static List<double[]> moduleRings(Path folder) {
+        Path f = folder.resolve(ModulesGeoJsonWriter.FILE_NAME);
+        return Files.isRegularFile(f) ? ModulesGeoJsonReader.rings(f) : List.of();
     }
 
     /**
@@ -137,7 +152,7 @@ final class ViewerBridge implements ViewerActions {
         b.shown = table;
         b.shownFolder = folder.toAbsolutePath().normalize();
         bridgeOut[0] = b;
-        return data(study, model, ps, table, monthHour, weather, warnings);
+        return data(study, model, ps, table, monthHour, weather, warnings).withModuleRings(moduleRings(published));
     }
 
     /**
@@ -165,7 +180,7 @@ final class ViewerBridge implements ViewerActions {
         }
         warnings.add(c.matched() + " of " + n + " patches matched with " + folderA);
         return new ViewerData(b.title() + " vs " + runA.record().study().name(), b.model(), b.blockAnalysed(), b.patches(), t,
-                b.monthHourWm2(), b.climate(), b.sunPath(), b.latitudeDeg(), b.longitudeDeg(), b.zone(), warnings);
+                b.monthHourWm2(), b.climate(), b.sunPath(), b.latitudeDeg(), b.longitudeDeg(), b.zone(), warnings, b.moduleRings());
     }
 
     static ViewerData data(Study study, MassingModel model, PatchSet ps, ResultTable table, float[] monthHour,

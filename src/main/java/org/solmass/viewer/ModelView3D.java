@@ -129,6 +129,7 @@ public final class ModelView3D {
         AmbientLight flat = new AmbientLight(Color.WHITE);   // the only light: shades are baked into textures
         zoneGroup.setVisible(false);
         addZoneOutlines(data);
+        addModuleOutlines(data);
         root.getChildren().addAll(massing, patches, context, zoneGroup, selection, flat);
     }
 
@@ -189,7 +190,7 @@ public final class ModelView3D {
     /** The PV roof zone outlines (empty when the results have no zones). */
     public Group zoneGroup() { return zoneGroup; }
 
-    /** Whether the results carry PV roof zones. */
+    /** Whether the results carry PV roof zones or placed modules. */
     public boolean hasZones() { return !zoneGroup.getChildren().isEmpty(); }
 
     private void addZoneOutlines(ViewerData d) {
@@ -202,6 +203,33 @@ public final class ModelView3D {
             Point3D b = new Point3D(frame.fx(e[3] + p.normal().x() * lift), frame.fy(e[5] + p.normal().z() * lift),
                     frame.fz(e[4] + p.normal().y() * lift));
             zoneGroup.getChildren().add(Shapes.rod(a, b, r, mat));
+        }
+    }
+
+    /**
+     * The placed PV modules' outlines (results' modules.geojson), thin dark rods lifted off the roof
+     * along the module's upward normal (Newell's polygon normal), in the zone outlines' group so the
+     * same box shows and hides them.
+     */
+    private void addModuleOutlines(ViewerData d) {
+        PhongMaterial mat = new PhongMaterial(Color.rgb(0x1B, 0x24, 0x30));
+        double r = Math.max(0.02, Math.min(0.05, frame.radiusM() * 1e-4)), lift = 4 * liftM;
+        for (double[] ring : d.moduleRings()) {
+            int n = ring.length / 3;
+            double nx = 0, ny = 0, nz = 0;
+            for (int i = 0; i < n; i++) {
+                int j = (i + 1) % n;
+                nx += (ring[3 * i + 1] - ring[3 * j + 1]) * (ring[3 * i + 2] + ring[3 * j + 2]);
+                ny += (ring[3 * i + 2] - ring[3 * j + 2]) * (ring[3 * i] + ring[3 * j]);
+                nz += (ring[3 * i] - ring[3 * j]) * (ring[3 * i + 1] + ring[3 * j + 1]);
+            }
+            double len = Math.sqrt(nx * nx + ny * ny + nz * nz), s = len > 0 ? (nz < 0 ? -lift : lift) / len : 0;
+            for (int i = 0; i < n; i++) {
+                int j = (i + 1) % n;
+                Point3D a = new Point3D(frame.fx(ring[3 * i] + nx * s), frame.fy(ring[3 * i + 2] + nz * s), frame.fz(ring[3 * i + 1] + ny * s));
+                Point3D b = new Point3D(frame.fx(ring[3 * j] + nx * s), frame.fy(ring[3 * j + 2] + nz * s), frame.fz(ring[3 * j + 1] + ny * s));
+                zoneGroup.getChildren().add(Shapes.rod(a, b, r, mat));
+            }
         }
     }
 

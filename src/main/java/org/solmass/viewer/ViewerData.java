@@ -24,11 +24,13 @@ import java.util.List;
  * @param longitudeDeg site longitude, degrees east
  * @param zone time zone label of the local standard time, e.g. "UTC+01:00"
  * @param warnings messages for the status line (e.g. from import or climate checks)
+ * @param moduleRings outlines of the placed PV modules (results' modules.geojson), each
+ *                    {x0, y0, z0, x1, ...} in world metres without the closing corner; may be empty
  */
 public record ViewerData(String title, MassingModel model, boolean[] blockAnalysed, List<Patch> patches,
                          ResultTable table, float[] monthHourWm2, ClimateGlance climate,
                          List<SunArc> sunPath, double latitudeDeg, double longitudeDeg, String zone,
-                         List<String> warnings) {
+                         List<String> warnings, List<double[]> moduleRings) {
 
     public ViewerData {
         if (table.size() != patches.size()) {
@@ -49,6 +51,27 @@ public record ViewerData(String title, MassingModel model, boolean[] blockAnalys
         }
         sunPath = sunPath == null ? List.of() : List.copyOf(sunPath);
         warnings = warnings == null ? List.of() : List.copyOf(warnings);
+        moduleRings = moduleRings == null ? List.of() : List.copyOf(moduleRings);
+        for (double[] r : moduleRings) {
+            if (r.length < 9 || r.length % 3 != 0) {
+                throw new IllegalArgumentException("a module ring has " + r.length + " coordinates, expected 3 per corner and at least 3 corners");
+            }
+        }
+    }
+
+    /** Data without PV modules (results without modules.geojson). */
+    public ViewerData(String title, MassingModel model, boolean[] blockAnalysed, List<Patch> patches,
+                      ResultTable table, float[] monthHourWm2, ClimateGlance climate,
+                      List<SunArc> sunPath, double latitudeDeg, double longitudeDeg, String zone,
+                      List<String> warnings) {
+        this(title, model, blockAnalysed, patches, table, monthHourWm2, climate, sunPath, latitudeDeg, longitudeDeg,
+                zone, warnings, List.of());
+    }
+
+    /** The same data with these PV module outlines. */
+    public ViewerData withModuleRings(List<double[]> rings) {
+        return new ViewerData(title, model, blockAnalysed, patches, table, monthHourWm2, climate, sunPath,
+                latitudeDeg, longitudeDeg, zone, warnings, rings);
     }
 
     /** Mean irradiance of a patch in a month (1..12) at local standard hour h (0..23), W/m2; NaN if absent. */
