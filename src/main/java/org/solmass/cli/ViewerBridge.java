@@ -32,6 +32,7 @@ import org.solmass.viewer.ProgressSink;
 import org.solmass.viewer.RerunRequest;
 import org.solmass.viewer.SunArc;
 import org.solmass.viewer.ViewerActions;
+import org.solmass.viewer.ShadowFrames;
 import org.solmass.viewer.ViewerData;
 
 import java.nio.file.Files;
@@ -90,7 +91,7 @@ final class ViewerBridge implements ViewerActions {
         shown = o.table();
         shownFolder = o.study().outputs().folder().toAbsolutePath().normalize();
         return data(o.study(), o.model(), o.patches(), o.table(), o.result().monthHourWm2(), o.weather(), o.warnings())
-                .withModuleRings(moduleRings(shownFolder));
+                .withModuleRings(moduleRings(shownFolder)).withShadows(ShadowFrames.ofFolder(shownFolder));
     }
 
     /** The PV module outlines of a results folder; none when the run wrote no modules.geojson (older results, no PV). */
@@ -152,7 +153,8 @@ final class ViewerBridge implements ViewerActions {
         b.shown = table;
         b.shownFolder = folder.toAbsolutePath().normalize();
         bridgeOut[0] = b;
-        return data(study, model, ps, table, monthHour, weather, warnings).withModuleRings(moduleRings(published));
+        return data(study, model, ps, table, monthHour, weather, warnings).withModuleRings(moduleRings(published))
+                .withShadows(ShadowFrames.ofFolder(folder));
     }
 
     /**
@@ -180,7 +182,7 @@ final class ViewerBridge implements ViewerActions {
         }
         warnings.add(c.matched() + " of " + n + " patches matched with " + folderA);
         return new ViewerData(b.title() + " vs " + runA.record().study().name(), b.model(), b.blockAnalysed(), b.patches(), t,
-                b.monthHourWm2(), b.climate(), b.sunPath(), b.latitudeDeg(), b.longitudeDeg(), b.zone(), warnings, b.moduleRings());
+                b.monthHourWm2(), b.climate(), b.sunPath(), b.latitudeDeg(), b.longitudeDeg(), b.zone(), warnings, b.moduleRings(), b.shadows());
     }
 
     static ViewerData data(Study study, MassingModel model, PatchSet ps, ResultTable table, float[] monthHour,

@@ -44,6 +44,7 @@ final class ControlColumn extends VBox {
     private final ComboBox<String> pngScale = new ComboBox<>(FXCollections.observableArrayList("1\u00d7", "2\u00d7", "3\u00d7", "4\u00d7"));
     private ViewerData data;
     private ColourScale scale = new ColourScale(0, 1, false);
+    private final ShadowControl shadow = new ShadowControl(this::refresh);
     private final javafx.beans.property.SimpleLongProperty colouring = new javafx.beans.property.SimpleLongProperty();
 
     ControlColumn(ViewerWindow win, ViewerActions actions) {
@@ -145,7 +146,7 @@ final class ControlColumn extends VBox {
         png.setOnAction(e -> exportPng());
 
         getChildren().addAll(head("Colour by"), quantity, legend, caution, auto, ViewerWindow.row(min, new Label("to"), max),
-                head("Threshold"), thrOn, thr, thrArea,
+                head("Threshold"), thrOn, thr, thrArea, shadow,
                 head("View"), views, sunPath, zones, hint(),
                 head("Re-run"), label("Patch size (m)"), patchSize, label("Climate"), climate, label("Sky model"), sky,
                 label("Variant folder (empty: dated name)"), variantName, run,
@@ -206,7 +207,14 @@ final class ControlColumn extends VBox {
         Quantity pick = qs.isEmpty() ? null : qs.get(0);
         if (keep != null) for (Quantity q : qs) if (q.column().equals(keep.column())) pick = q;
         quantity.setValue(pick);
+        shadow.setFrames(d.shadows());
         refresh();
+    }
+
+    /** Switches the shadow study colouring on or off (for scripts and tests); false when there is none. */
+    boolean showShadows(boolean on) {
+        shadow.setActive(on);
+        return shadow.active();
     }
 
     /** Lists the study's results folders (the first results and its variants) by folder name; selects the one on show. */
@@ -273,7 +281,9 @@ final class ControlColumn extends VBox {
         boolean pv = q.pvOrRoof();
         caution.setVisible(pv);
         caution.setManaged(pv);
-        win.applyColours(scale, scale.indices(v, t));
+        int[] sun = shadow.active() ? shadow.colours(data) : null;
+        if (sun != null) win.applyRgb(sun);
+        else win.applyColours(scale, scale.indices(v, t));
         colouring.set(colouring.get() + 1);
     }
 

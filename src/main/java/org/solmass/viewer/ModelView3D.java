@@ -239,6 +239,11 @@ public final class ModelView3D {
         for (int i = 0; i < lut.length; i++) lut[i] = scale.rgbOfIndex(i);
         int[] rgb = new int[paletteOfPatch.length];
         for (int i = 0; i < rgb.length; i++) rgb[i] = lut[paletteOfPatch[i]];
+        recolourRgb(rgb);
+    }
+
+    /** Recolours the patches with one sRGB 0xRRGGBB per patch (e.g. the shadow study). */
+    public void recolourRgb(int[] rgb) {
         for (int i = 0; i < patchData.size(); i++) {
             PatchMeshData pd = patchData.get(i);
             int[] px = new int[pd.atlas.width * pd.atlas.height];

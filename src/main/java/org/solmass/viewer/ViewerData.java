@@ -26,11 +26,13 @@ import java.util.List;
  * @param warnings messages for the status line (e.g. from import or climate checks)
  * @param moduleRings outlines of the placed PV modules (results' modules.geojson), each
  *                    {x0, y0, z0, x1, ...} in world metres without the closing corner; may be empty
+ * @param shadows the results' shadow study (shadows/shadows.csv); {@link ShadowFrames#NONE} without it
  */
 public record ViewerData(String title, MassingModel model, boolean[] blockAnalysed, List<Patch> patches,
                          ResultTable table, float[] monthHourWm2, ClimateGlance climate,
                          List<SunArc> sunPath, double latitudeDeg, double longitudeDeg, String zone,
-                         List<String> warnings, List<double[]> moduleRings) {
+                         List<String> warnings, List<double[]> moduleRings,
+                         ShadowFrames shadows) {
 
     public ViewerData {
         if (table.size() != patches.size()) {
@@ -52,6 +54,7 @@ public record ViewerData(String title, MassingModel model, boolean[] blockAnalys
         sunPath = sunPath == null ? List.of() : List.copyOf(sunPath);
         warnings = warnings == null ? List.of() : List.copyOf(warnings);
         moduleRings = moduleRings == null ? List.of() : List.copyOf(moduleRings);
+        shadows = shadows == null ? ShadowFrames.NONE : shadows;
         for (double[] r : moduleRings) {
             if (r.length < 9 || r.length % 3 != 0) {
                 throw new IllegalArgumentException("a module ring has " + r.length + " coordinates, expected 3 per corner and at least 3 corners");
@@ -65,13 +68,28 @@ public record ViewerData(String title, MassingModel model, boolean[] blockAnalys
                       List<SunArc> sunPath, double latitudeDeg, double longitudeDeg, String zone,
                       List<String> warnings) {
         this(title, model, blockAnalysed, patches, table, monthHourWm2, climate, sunPath, latitudeDeg, longitudeDeg,
-                zone, warnings, List.of());
+                zone, warnings, List.of(), ShadowFrames.NONE);
+    }
+
+    /** Data without a shadow study (results without shadows/shadows.csv). */
+    public ViewerData(String title, MassingModel model, boolean[] blockAnalysed, List<Patch> patches,
+                      ResultTable table, float[] monthHourWm2, ClimateGlance climate,
+                      List<SunArc> sunPath, double latitudeDeg, double longitudeDeg, String zone,
+                      List<String> warnings, List<double[]> moduleRings) {
+        this(title, model, blockAnalysed, patches, table, monthHourWm2, climate, sunPath, latitudeDeg, longitudeDeg,
+                zone, warnings, moduleRings, ShadowFrames.NONE);
+    }
+
+    /** The same data with this shadow study. */
+    public ViewerData withShadows(ShadowFrames s) {
+        return new ViewerData(title, model, blockAnalysed, patches, table, monthHourWm2, climate, sunPath,
+                latitudeDeg, longitudeDeg, zone, warnings, moduleRings, s);
     }
 
     /** The same data with these PV module outlines. */
     public ViewerData withModuleRings(List<double[]> rings) {
         return new ViewerData(title, model, blockAnalysed, patches, table, monthHourWm2, climate, sunPath,
-                latitudeDeg, longitudeDeg, zone, warnings, rings);
+                latitudeDeg, longitudeDeg, zone, warnings, rings, shadows);
     }
 
     /** Mean irradiance of a patch in a month (1..12) at local standard hour h (0..23), W/m2; NaN if absent. */

@@ -361,6 +361,11 @@ public final class ViewerWindow {
         if (view != null) view.recolour(scale, cells);
     }
 
+    /** Colours the patches with one sRGB per patch (the shadow study). */
+    void applyRgb(int[] rgb) {
+        if (view != null) view.recolourRgb(rgb);
+    }
+
     void setZonesVisible(boolean on) {
         if (view != null) view.zoneGroup().setVisible(on);
     }
