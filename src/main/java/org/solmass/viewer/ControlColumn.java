@@ -282,6 +282,7 @@ final class ControlColumn extends VBox {
         caution.setVisible(pv);
         caution.setManaged(pv);
         int[] sun = shadow.active() ? shadow.colours(data) : null;
+        legend.setVisible(sun == null);   // the quantity's ramp does not apply while the shadow study is on
         if (sun != null) win.applyRgb(sun);
         else win.applyColours(scale, scale.indices(v, t));
         colouring.set(colouring.get() + 1);
