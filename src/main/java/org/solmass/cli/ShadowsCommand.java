@@ -44,7 +44,7 @@ public final class ShadowsCommand implements Callable<Integer> {
     @Option(names = "--times", paramLabel = "HH:MM", split = ",", description = "local standard times (default 09:00,12:00,15:00)") List<String> times;
     @Option(names = "--patch", paramLabel = "METRES", description = "patch size of the blocks (default: the study's patch_m)") Double patch;
     @Option(names = "--ground-cell", paramLabel = "METRES", defaultValue = "2", description = "ground grid cell around the model's own ground faces (default ${DEFAULT-VALUE} m)") double groundCell;
-    @Option(names = "--ground-margin", paramLabel = "METRES", description = "ground grid beyond the model on each side (default 40 % of the model's larger horizontal size, at least 10 m)") Double groundMargin;
+    @Option(names = "--ground-margin", paramLabel = "METRES", description = "ground grid beyond the model on each side (default 40 %% of the model's larger horizontal size, at least 10 m)") Double groundMargin;
     @Option(names = "--threads", paramLabel = "N", defaultValue = "0", description = "worker threads (default: all cores)") int threads;
     @Option(names = "--out", paramLabel = "DIR", description = "output folder (default: the folder shadows inside the study's outputs.folder)") Path out;
     /** The default folder of the sheet and table, inside the study's results folder. */
