@@ -316,7 +316,12 @@ final class ControlColumn extends VBox {
         if (f == null) return;
         double s = pngScale.getSelectionModel().getSelectedIndex() + 1;
         try {
-            ImageIO.write(javafx.embed.swing.SwingFXUtils.fromFXImage(win.snapshot3D(s), null), "png", f);
+            java.awt.image.BufferedImage view = javafx.embed.swing.SwingFXUtils.fromFXImage(win.snapshot3D(s), null);
+            Quantity q = quantity.getValue();
+            CameraRig rig = win.rig();
+            ImageIO.write(q == null ? view : org.solmass.output.ExportSheet.compose(view, new org.solmass.output.ExportSheet.Marks(
+                    win.data().title(), q.title(), null, scale.min(), scale.max(), scale.diverging(),
+                    rig == null ? 0 : rig.headingDeg())), "png", f);
             win.setStatus("Wrote " + f);
         } catch (Exception ex) {
             win.setStatus("PNG export failed: " + ex.getMessage());
