@@ -89,7 +89,8 @@ public final class CompareCommand implements Callable<Integer> {
                 System.err.println("solmass: warning: the model of " + b + " changed since its run; delta-map.png not written");
             } else {
                 Path map = dir.resolve(MAP);
-                writeMap(map, c, runB.study());
+                String perA = org.solmass.output.RunPeriod.of(pa.record()), perB = org.solmass.output.RunPeriod.of(runB);
+                writeMap(map, c, runB.study(), perA.equals(perB) ? perB : "A: " + perA + "; B: " + perB);
                 written.add(map);
             }
         }
@@ -123,8 +124,12 @@ public final class CompareCommand implements Callable<Integer> {
                 0.5 * Math.min(runA.record().study().patchM(), runB.record().study().patchM()), maxAngleDeg);
     }
 
-    /** delta-map.png: B's geometry rebuilt from its run record, patches coloured by the annual difference. */
-    static void writeMap(Path file, ComparedResults c, Study studyB) {
+    /**
+     * delta-map.png: B's geometry rebuilt from its run record, patches coloured by the annual difference.
+     *
+     * @param period what the two runs cover ({@code RunPeriod}; both when they differ), under the title as on map.png
+     */
+    static void writeMap(Path file, ComparedResults c, Study studyB, String period) {
         org.solmass.geo.GeoModel read = AnalysisRun.loadModel(studyB);
         PatchSet ps = Patcher.build(read.model(), new PatchOptions(studyB.patchM(),
                 AnalysisRun.analysedBlocks(studyB, read.model()), false));
@@ -138,7 +143,7 @@ public final class CompareCommand implements Callable<Integer> {
         }
         MapRenderer.write(file, read.model(), studyB.model().analysedMask(read.model().blockNames()), patches, v,
                 q.label(), q.unit().symbol(),
-                MapRenderer.Options.of(studyB.outputs().mapWidthPx(), studyB.outputs().mapHeightPx(), studyB.name()),
+                MapRenderer.Options.of(studyB.outputs().mapWidthPx(), studyB.outputs().mapHeightPx(), studyB.name()).withPeriod(period),
                 new MapRenderer.Extras(true, List.of(), ""));
     }
 }

@@ -319,6 +319,19 @@ final class ControlColumn extends VBox {
         t.start();
     }
 
+    /**
+     * The PNG export: the 3D view at {@code s} times its size with title, legend, north arrow and
+     * caution ({@link org.solmass.output.ExportSheet}); call on the FX thread.
+     */
+    java.awt.image.BufferedImage exportImage(double s) {
+        java.awt.image.BufferedImage view = javafx.embed.swing.SwingFXUtils.fromFXImage(win.snapshot3D(s), null);
+        Quantity q = quantity.getValue();
+        CameraRig rig = win.rig();
+        return q == null ? view : org.solmass.output.ExportSheet.compose(view, new org.solmass.output.ExportSheet.Marks(
+                win.data().title(), q.title(), null, scale.min(), scale.max(), scale.diverging(),
+                rig == null ? 0 : rig.headingDeg()));
+    }
+
     private void exportPng() {
         FileChooser fc = new FileChooser();
         fc.setTitle("Export the 3D view as PNG");
@@ -327,7 +340,7 @@ final class ControlColumn extends VBox {
         if (f == null) return;
         double s = pngScale.getSelectionModel().getSelectedIndex() + 1;
         try {
-            ImageIO.write(javafx.embed.swing.SwingFXUtils.fromFXImage(win.snapshot3D(s), null), "png", f);
+            ImageIO.write(exportImage(s), "png", f);
             win.setStatus("Wrote " + f);
         } catch (Exception ex) {
             win.setStatus("PNG export failed: " + ex.getMessage());

@@ -437,6 +437,9 @@ public final class ViewerWindow {
         return sub.snapshot(sp, null);
     }
 
+    /** What the PNG export writes: the 3D view at {@code scale} with title, legend, north arrow and caution. */
+    java.awt.image.BufferedImage exportSheet(double scale) { return controls.exportImage(scale); }
+
     /** The whole window as on screen. */
     public javafx.scene.image.WritableImage snapshotWindow() {
         return stage.getScene().snapshot(null);

@@ -130,6 +130,10 @@ class ViewerSmokeTest {
         WritableImage twice = onFx(() -> w.snapshot3D(2));
         assertEquals(2 * width, (int) twice.getWidth());
         assertEquals(2 * height, (int) twice.getHeight());
+        // and writes it as a sheet: the same width, title and legend bands added above and below
+        java.awt.image.BufferedImage sheet = onFx(() -> w.exportSheet(2));
+        assertEquals(2 * width, sheet.getWidth());
+        assertTrue(sheet.getHeight() > 2 * height, "export sheet height " + sheet.getHeight());
 
         // re-run from the window: the actions get the request, the new data replaces the old
         onFx(() -> {

@@ -1,0 +1,85 @@
+package org.solmass.output;
+
+import org.solmass.Cautions;
+import org.solmass.model.Vec3;
+
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.Graphics2D;
+import java.awt.image.BufferedImage;
+
+/**
+ * The viewer's PNG export as a sheet: a title band (study, quantity with unit, the period when known)
+ * above the 3D snapshot, a north arrow over the snapshot turned to the camera's heading, and below it
+ * the colour bar with ticks ({@link PageMarks#colourBar}) and the results caution
+ * ({@link Cautions#RESULTS}). Plain java.awt, so it needs no display.
+ */
+public final class ExportSheet {
+    /** Title band and footer heights and the side margin, in sheet units (pixels times {@link Layout#scale()}). */
+    static final int TITLE_H = 66, FOOTER_H = 106, MARGIN = 18;
+
+    private ExportSheet() {}
+
+    /**
+     * What the sheet says about the view.
+     *
+     * @param study study name (may be empty)
+     * @param quantity quantity with its unit, e.g. the legend title "Annual irradiation (kWh/m²)"
+     * @param period what the values cover ({@link RunPeriod}); null or empty when not known
+     * @param lo value at the low end of the colour bar
+     * @param hi value at the high end of the colour bar
+     * @param diverging the diverging ramp (differences) instead of the sequential one
+     * @param headingDeg compass direction the camera looks towards, degrees from north clockwise
+     */
+    public record Marks(String study, String quantity, String period, double lo, double hi, boolean diverging,
+                        double headingDeg) {}
+
+    /**
+     * Where things go on a sheet for a snapshot of {@code viewW x viewH} pixels, in sheet pixels.
+     *
+     * @param scale whole pixels per sheet unit (larger snapshots get larger text)
+     */
+    record Layout(int scale, int width, int height, int viewTop, int barX, int barY, int barW, int barH,
+                  int arrowX, int arrowY) {
+        static Layout of(int viewW, int viewH) {
+            int u = Math.max(1, (int) Math.round(viewW / 1200.0));
+            int w = viewW / u;
+            int barW = Math.max(80, Math.min(600, w / 2));
+            return new Layout(u, viewW, viewH + (TITLE_H + FOOTER_H) * u, TITLE_H * u,
+                    MARGIN * u, (viewH / u + TITLE_H + 30) * u, barW * u, 18 * u,
+                    (w - 52) * u, (TITLE_H + 52) * u);
+        }
+    }
+
+    /** The sheet: the snapshot unchanged between the title band and the legend, with the marks. */
+    public static BufferedImage compose(BufferedImage view, Marks m) {
+        Layout l = Layout.of(view.getWidth(), view.getHeight());
+        BufferedImage out = new BufferedImage(l.width(), l.height(), BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = PageMarks.begin(out);
+        g.drawImage(view, 0, l.viewTop(), null);
+        int u = l.scale(), w = l.width() / u, viewBottom = (l.viewTop() + view.getHeight()) / u;
+        g.scale(u, u);
+        String title = (m.study() == null || m.study().isBlank() ? "" : m.study() + " \u2014 ") + m.quantity();
+        g.setColor(new Color(0x1E1E1E));
+        PageMarks.fitFont(g, title, Font.BOLD, 22, w - 2 * MARGIN);
+        g.drawString(title, MARGIN, 32);
+        g.setColor(new Color(0x555555));
+        String sub = (m.period() == null || m.period().isBlank() ? "" : m.period() + ". ")
+                + "3D view exported from the viewer; analysed surfaces coloured by value, context in grey";
+        PageMarks.fitFont(g, sub, Font.PLAIN, 13, w - 2 * MARGIN);
+        g.drawString(sub, MARGIN, 54);
+        // north as on screen: the plan turned by the heading, so north sits headingDeg anticlockwise from up
+        double h = Math.toRadians(m.headingDeg());
+        MapView turned = new MapView(new Vec3(Math.cos(h), -Math.sin(h), 0), new Vec3(Math.sin(h), Math.cos(h), 0), Vec3.UP);
+        MapRenderer.northArrow(g, turned, l.arrowX() / u, l.arrowY() / u);
+        PageMarks.colourBar(g, l.barX() / u, l.barY() / u, l.barW() / u, l.barH() / u, m.lo(), m.hi(), m.diverging());
+        g.setColor(new Color(0x222222));
+        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 13));
+        g.drawString(m.quantity(), MARGIN, viewBottom + 22);
+        g.setColor(new Color(0x444444));
+        PageMarks.fitFont(g, Cautions.RESULTS, Font.PLAIN, 12, w - 2 * MARGIN);
+        g.drawString(Cautions.RESULTS, MARGIN, viewBottom + FOOTER_H - 10);
+        g.dispose();
+        return out;
+    }
+}
