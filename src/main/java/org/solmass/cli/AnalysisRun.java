@@ -95,6 +95,30 @@ public final class AnalysisRun {
     }
 
     /** Whether a block has no triangle in the model (a block whose faces are all trees). */
+    /**
+     * The model without the study's trees, and the crowns as their own scene (null when no triangle is a
+     * tree): trees get no patches, do not reflect and do not block (docs/method.md "Vegetation").
+     */
+    record TreeSplit(MassingModel opaque, org.solmass.scene.Canopy canopy, List<String> warnings) {}
+
+    static TreeSplit splitTrees(Study study, MassingModel model) {
+        if (!study.vegetation().any()) return new TreeSplit(model, null, List.of());
+        List<String> warnings = new ArrayList<>(study.vegetation().unmatched(model));
+        boolean[] tree = study.vegetation().treeTriangles(model);
+        boolean[] opaque = new boolean[tree.length];
+        for (int i = 0; i < tree.length; i++) opaque[i] = !tree[i];
+        MassingModel crowns = model.subset(tree);
+        if (crowns.triangleCount() == 0) return new TreeSplit(model, null, warnings);
+        return new TreeSplit(model.subset(opaque), org.solmass.scene.Canopy.build(crowns.triangleSoup()), warnings);
+    }
+
+    /** The blocks that get patches: the analysed blocks, less those made only of tree faces. */
+    static Set<String> patchedBlocks(Study study, TreeSplit split) {
+        Set<String> analysed = analysedBlocks(study, split.opaque());
+        if (split.canopy() != null) analysed.removeIf(blockWithoutTriangles(split.opaque()));
+        return analysed;
+    }
+
     private static java.util.function.Predicate<String> blockWithoutTriangles(MassingModel model) {
         boolean[] has = new boolean[model.blockNames().size()];
         for (int b : model.triangleBlock()) has[b] = true;
@@ -145,24 +169,15 @@ public final class AnalysisRun {
             throw new InputException("time_base", "the climate source " + weather.source()
                     + " is an hourly year; monthly-average days need a month-hour table, monthly means or clear-sky");
         }
-        org.solmass.scene.Canopy canopy = null;
-        if (study.vegetation().any()) { // trees leave the opaque model: no patches, no reflection (docs/method.md "Vegetation")
-            for (String x : study.vegetation().unmatched(model)) warnings.add(x);
-            boolean[] tree = study.vegetation().treeTriangles(model);
-            boolean[] opaque = new boolean[tree.length];
-            for (int i = 0; i < tree.length; i++) opaque[i] = !tree[i];
-            MassingModel crowns = model.subset(tree);
-            if (crowns.triangleCount() > 0) {
-                canopy = org.solmass.scene.Canopy.build(crowns.triangleSoup());
-                model = model.subset(opaque);
-            }
-        }
+        TreeSplit split = splitTrees(study, model);
+        warnings.addAll(split.warnings());
+        org.solmass.scene.Canopy canopy = split.canopy();
+        model = split.opaque();
         t.put("load", seconds(t0));
 
         long t1 = System.nanoTime();
         progress.begin("patches", 0);
-        Set<String> analysed = analysedBlocks(study, model);
-        if (canopy != null) analysed.removeIf(blockWithoutTriangles(model));
+        Set<String> analysed = patchedBlocks(study, split);
         try {
             requireMemoryForPatches(study, model, analysed);
         } catch (InputException e) {   // a model in millimetres read as metres ends here: say so first

@@ -41,8 +41,9 @@ record RunGeometry(PublishedRun run, Study study, MassingModel model, boolean[] 
         }
         PatchCsvReader.Table table = run.read(ResultsFolder.PATCHES, PatchCsvReader::read);
         org.solmass.geo.GeoModel read = AnalysisRun.loadModel(study);
-        MassingModel m = read.model();
-        PatchSet ps = Patcher.build(m, new PatchOptions(study.patchM(), AnalysisRun.analysedBlocks(study, m), false));
+        AnalysisRun.TreeSplit split = AnalysisRun.splitTrees(study, read.model()); // patched as the run did: trees left out
+        MassingModel m = split.opaque();
+        PatchSet ps = Patcher.build(m, new PatchOptions(study.patchM(), AnalysisRun.patchedBlocks(study, split), false));
         if (ps.patches().size() != table.size() || (table.size() > 0 && table.row(ps.patches().get(0).id()) != 0)) {
             throw new InputException(run.folder().resolve(ResultsFolder.PATCHES).toString(), "holds " + table.size()
                     + " patches, the model rebuilt with the run's settings " + ps.patches().size() + "; run analyse again");
