@@ -36,6 +36,12 @@ public final class SolmassViewer {
             snapshot(loader, actions, Path.of(snap), 1440, 900);
             return;
         }
+        showUntilClosed(actions, (st, w) -> w.load(loader, win -> reportFirstFrame(win)));
+    }
+
+    /** Shows a new window, hands it to {@code then} on the FX thread, blocks until it is closed; stops the toolkit. */
+    private static void showUntilClosed(ViewerActions actions, java.util.function.BiConsumer<Stage, ViewerWindow> then)
+            throws InterruptedException {
         startToolkit();
         CountDownLatch closed = new CountDownLatch(1);
         Platform.runLater(() -> {
@@ -43,7 +49,7 @@ public final class SolmassViewer {
             ViewerWindow w = new ViewerWindow(st, actions, 1440, 900);
             st.setOnHidden(e -> closed.countDown());
             st.show();
-            w.load(loader, win -> reportFirstFrame(win));
+            then.accept(st, w);
         });
         closed.await();
         Platform.exit();
@@ -56,13 +62,7 @@ public final class SolmassViewer {
      */
     public static void openNewStudy(Path obj, ViewerActions actions) throws InterruptedException {
         String snap = System.getProperty(SNAPSHOT_PROPERTY);
-        startToolkit();
-        CountDownLatch closed = new CountDownLatch(1);
-        Platform.runLater(() -> {
-            Stage st = new Stage();
-            ViewerWindow w = new ViewerWindow(st, actions, 1440, 900);
-            st.setOnHidden(e -> closed.countDown());
-            st.show();
+        showUntilClosed(actions, (st, w) -> {
             w.startSetup(obj);
             if (snap != null && !snap.isBlank()) {
                 afterFrames(3, () -> {
@@ -71,8 +71,6 @@ public final class SolmassViewer {
                 });
             }
         });
-        closed.await();
-        Platform.exit();
     }
 
     /**
