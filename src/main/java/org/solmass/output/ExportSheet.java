@@ -78,7 +78,15 @@ public final class ExportSheet {
         g.drawString(m.quantity(), MARGIN, viewBottom + 22);
         g.setColor(new Color(0x444444));
         PageMarks.fitFont(g, Cautions.RESULTS, Font.PLAIN, 12, w - 2 * MARGIN);
-        g.drawString(Cautions.RESULTS, MARGIN, viewBottom + FOOTER_H - 10);
+        if (g.getFontMetrics().stringWidth(Cautions.RESULTS) <= w - 2 * MARGIN) {
+            g.drawString(Cautions.RESULTS, MARGIN, viewBottom + FOOTER_H - 10);
+        } else { // a narrow view: the caution on two lines, split after its first sentence, never cut off
+            int cut = Cautions.RESULTS.indexOf(". ") + 1;
+            String a = Cautions.RESULTS.substring(0, cut), b = Cautions.RESULTS.substring(cut + 1);
+            PageMarks.fitFont(g, b.length() > a.length() ? b : a, Font.PLAIN, 11, w - 2 * MARGIN);
+            g.drawString(a, MARGIN, viewBottom + FOOTER_H - 22);
+            g.drawString(b, MARGIN, viewBottom + FOOTER_H - 8);
+        }
         g.dispose();
         return out;
     }

@@ -109,4 +109,17 @@ class ExportSheetTest {
             assertTrue(Math.abs(a - b) <= tol, what + ": want " + Integer.toHexString(want) + ", got " + Integer.toHexString(got));
         }
     }
+
+    /** A narrow view (600 px): the caution wraps instead of running past the right edge (seen cut off before). */
+    @Test
+    void cautionOfANarrowViewStaysInsideTheMargins() {
+        BufferedImage s = ExportSheet.compose(view(600, 400), marks(0, false));
+        int bg = s.getRGB(s.getWidth() - 2, s.getHeight() - 2) & 0xFFFFFF, ink = 0;
+        for (int y = s.getHeight() - ExportSheet.FOOTER_H; y < s.getHeight(); y++) {
+            for (int x = s.getWidth() - ExportSheet.MARGIN + 4; x < s.getWidth(); x++) {
+                if ((s.getRGB(x, y) & 0xFFFFFF) != bg) ink++;
+            }
+        }
+        assertEquals(0, ink, "no footer text in the right margin");
+    }
 }
