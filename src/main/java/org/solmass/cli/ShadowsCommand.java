@@ -3,6 +3,11 @@ package org.solmass.cli;
 import org.solmass.InputException;
 import org.solmass.metrics.ShadowStudy;
 import org.solmass.model.MassingModel;
+import org.solmass.output.FolderClaim;
+import org.solmass.output.Publication;
+import org.solmass.output.ResultsFolder;
+import org.solmass.output.RunRecord;
+import org.solmass.output.ShadowPatchTable;
 import org.solmass.output.ShadowSheet;
 import org.solmass.output.ShadowTable;
 import org.solmass.scene.Scene;
@@ -20,12 +25,15 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 import java.nio.file.Path;
+import java.time.Instant;
 import java.time.LocalTime;
 import java.time.MonthDay;
 import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ForkJoinPool;
 
@@ -33,11 +41,14 @@ import java.util.concurrent.ForkJoinPool;
 @Command(name = "shadows", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Shadow diagrams: which patches of the blocks and of the ground are in sun at chosen",
                 "dates and times (local standard time), one ray per patch to the sun.",
-                "Writes shadows.png (dates as rows, times as columns) and shadows.csv (sunlit area",
-                "per block and of the ground) to the study's results folder or --out."})
+                "Writes shadows.png (dates as rows, times as columns), shadows.csv (sunlit area",
+                "per block and of the ground), shadow-patches.csv (sun or shade per patch and moment)",
+                "and run.json (the manifest) to the folder shadows of the study's results or --out."})
 public final class ShadowsCommand implements Callable<Integer> {
-    /** File names this command writes. */
+    /** File names this command writes (and {@link ShadowPatchTable#FILE_NAME}, and run.json). */
     public static final String SHEET = "shadows.png", TABLE = "shadows.csv";
+    /** The time base run.json records for a shadow study: chosen moments, no weather. */
+    public static final String TIME_BASE = "shadow-moments";
 
     @Parameters(paramLabel = "STUDY.json", description = "study file (docs/study-file.md)") Path studyFile;
     @Option(names = "--dates", paramLabel = "MM-DD", split = ",", description = "dates (default 03-21,06-21,12-21)") List<String> dates;
@@ -61,8 +72,27 @@ public final class ShadowsCommand implements Callable<Integer> {
         Study study = StudyReader.read(studyFile, new StudyOverrides().out(out).patchM(patch));
         // a folder of their own: the results folder holds one analyse run, published and verified as a whole
         Path folder = out != null ? study.outputs().folder() : study.outputs().folder().resolve(FOLDER);
-        org.solmass.output.FolderClaim.prepareWritable(folder, out != null ? "--out"
-                : (study.source() == null ? "outputs.folder" : study.source() + ": outputs.folder"));   // before the work
+        String where = out != null ? "--out" : (study.source() == null ? "outputs.folder" : study.source() + ": outputs.folder");
+        refuseAnalyseFolder(folder, where);
+        try (FolderClaim claim = FolderClaim.claim(folder, where, studyFile, studyFile.toString())) {   // before the work
+            if (claim.note() != null && !quiet) System.err.println("solmass: note: " + claim.note());
+            return run(study, claim, ds, ts);
+        }
+    }
+
+    /**
+     * The shadow study is published as a run of its own (run.json with its manifest): a folder that
+     * holds an {@code analyse} run is refused, since publishing there would replace that run.
+     */
+    static void refuseAnalyseFolder(Path folder, String where) {
+        Path runJson = folder.resolve(RunRecord.FILE_NAME);
+        if (java.nio.file.Files.isRegularFile(runJson) && java.nio.file.Files.exists(folder.resolve(ResultsFolder.PATCHES))) {
+            throw new InputException(where, folder.toAbsolutePath().normalize() + " holds the results of an analyse run; "
+                    + "give the shadow study a folder of its own, e.g. " + folder.toAbsolutePath().normalize().resolve(FOLDER));
+        }
+    }
+
+    private int run(Study study, FolderClaim claim, List<MonthDay> ds, List<LocalTime> ts) {
         long t0 = System.nanoTime();
         org.solmass.geo.GeoModel read = AnalysisRun.loadModel(study);
         for (String w : read.warnings()) System.err.println("solmass: warning: " + w);
@@ -90,15 +120,28 @@ public final class ShadowsCommand implements Callable<Integer> {
         } finally {
             pool.shutdownNow();
         }
-        Path png = folder.resolve(SHEET), csv = folder.resolve(TABLE);
-        ShadowTable.write(csv, ShadowStudy.areas(patches, frames, analysed));
-        ShadowSheet.write(png, m, analysed, patches, frames, ts.size(), study.name());
+        Path folder = claim.folder();
+        Path png = folder.resolve(SHEET), csv = folder.resolve(TABLE), perPatch = folder.resolve(ShadowPatchTable.FILE_NAME);
+        try (Publication pub = new Publication(claim)) {
+            pub.write(TABLE, f -> ShadowTable.write(f, ShadowStudy.areas(patches, frames, analysed)));
+            pub.write(ShadowPatchTable.FILE_NAME, f -> ShadowPatchTable.write(f, patches, analysed, frames));
+            pub.write(SHEET, f -> ShadowSheet.write(f, m, analysed, patches, frames, ts.size(), study.name()));
+            Map<String, Long> counts = new LinkedHashMap<>();
+            counts.put("patches", (long) patches.size());
+            counts.put("ground_grid_patches", (long) (patches.size() - ps.patchCount()));
+            counts.put("dates", (long) ds.size());
+            counts.put("times", (long) ts.size());
+            Map<String, Double> timings = new LinkedHashMap<>();
+            timings.put("total", AnalysisRun.seconds(t0));
+            pub.publish(RunRecord.of(Main.version(), study, TIME_BASE, counts, timings, Instant.now()));
+        }
         System.out.printf("solmass shadows: %s%n", study.name());
         System.out.printf("  %d patches (blocks and ground), %d dates x %d times, year %d, local standard time (UTC%s)%n",
                 patches.size(), ds.size(), ts.size(), year, study.site().standardOffset(year));
         System.out.printf("  time %.2f s%n", AnalysisRun.seconds(t0));
         System.out.println("  wrote " + png);
         System.out.println("  wrote " + csv);
+        System.out.println("  wrote " + perPatch);
         return Main.EXIT_OK;
     }
 

@@ -91,7 +91,8 @@ final class ViewerBridge implements ViewerActions {
         shown = o.table();
         shownFolder = o.study().outputs().folder().toAbsolutePath().normalize();
         return data(o.study(), o.model(), o.patches(), o.table(), o.result().monthHourWm2(), o.weather(), o.warnings())
-                .withModuleRings(moduleRings(shownFolder)).withShadows(ShadowFrames.ofFolder(shownFolder));
+                .withModuleRings(moduleRings(shownFolder)).withShadows(ShadowFrames.ofFolder(shownFolder))
+                .withPeriod(org.solmass.output.RunPeriod.text(o.study(), o.weather().timeBase().label()));
     }
 
     /** The PV module outlines of a results folder; none when the run wrote no modules.geojson (older results, no PV). */
@@ -154,7 +155,7 @@ final class ViewerBridge implements ViewerActions {
         b.shownFolder = folder.toAbsolutePath().normalize();
         bridgeOut[0] = b;
         return data(study, model, ps, table, monthHour, weather, warnings).withModuleRings(moduleRings(published))
-                .withShadows(ShadowFrames.ofFolder(folder));
+                .withShadows(ShadowFrames.ofFolder(folder)).withPeriod(org.solmass.output.RunPeriod.of(run));
     }
 
     /**
@@ -182,7 +183,7 @@ final class ViewerBridge implements ViewerActions {
         }
         warnings.add(c.matched() + " of " + n + " patches matched with " + folderA);
         return new ViewerData(b.title() + " vs " + runA.record().study().name(), b.model(), b.blockAnalysed(), b.patches(), t,
-                b.monthHourWm2(), b.climate(), b.sunPath(), b.latitudeDeg(), b.longitudeDeg(), b.zone(), warnings, b.moduleRings(), b.shadows());
+                b.monthHourWm2(), b.climate(), b.sunPath(), b.latitudeDeg(), b.longitudeDeg(), b.zone(), warnings, b.moduleRings(), b.shadows(), b.period());
     }
 
     static ViewerData data(Study study, MassingModel model, PatchSet ps, ResultTable table, float[] monthHour,

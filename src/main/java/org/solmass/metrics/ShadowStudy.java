@@ -160,6 +160,17 @@ public final class ShadowStudy {
     }
 
     /**
+     * A patch's role in the study: {@value #GROUND} for a patch of kind GROUND (the grid's cells and the
+     * model's own ground faces), else "analysed" or "context" by its block.
+     *
+     * @param analysedBlock per block id: analysed (else context)
+     */
+    public static String role(Patch p, boolean[] analysedBlock) {
+        if (p.kind() == SurfaceKind.GROUND) return GROUND;
+        return analysedBlock[p.block()] ? "analysed" : "context";
+    }
+
+    /**
      * Area and sunlit area per block and of the ground, per moment: a patch of kind GROUND counts to the
      * ground, every other patch to its block. Blocks in order of first appearance, the ground last.
      *
@@ -168,7 +179,7 @@ public final class ShadowStudy {
     public static List<Area> areas(List<Patch> patches, List<Frame> frames, boolean[] analysedBlock) {
         Map<String, String> roles = new LinkedHashMap<>();
         for (Patch p : patches) {
-            if (p.kind() != SurfaceKind.GROUND) roles.putIfAbsent(p.blockName(), analysedBlock[p.block()] ? "analysed" : "context");
+            if (p.kind() != SurfaceKind.GROUND) roles.putIfAbsent(p.blockName(), role(p, analysedBlock));
         }
         roles.put(GROUND, GROUND);
         List<String> names = new ArrayList<>(roles.keySet());

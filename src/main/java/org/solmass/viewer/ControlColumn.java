@@ -281,8 +281,10 @@ final class ControlColumn extends VBox {
         boolean pv = q.pvOrRoof();
         caution.setVisible(pv);
         caution.setManaged(pv);
-        int[] sun = shadow.active() ? shadow.colours(data) : null;
-        legend.setVisible(sun == null);   // the quantity's ramp does not apply while the shadow study is on
+        int[] layer = shadow.active() ? shadow.layerColours() : null;   // sun or shade per patch, ground and context too
+        int[] sun = shadow.active() && layer == null ? shadow.colours(data) : null;   // an older study: per block
+        legend.setVisible(layer == null && sun == null);   // the quantity's ramp does not apply while the shadow study is on
+        win.applyShadowLayer(layer);
         if (sun != null) win.applyRgb(sun);
         else win.applyColours(scale, scale.indices(v, t));
         colouring.set(colouring.get() + 1);
@@ -328,7 +330,7 @@ final class ControlColumn extends VBox {
         Quantity q = quantity.getValue();
         CameraRig rig = win.rig();
         return q == null ? view : org.solmass.output.ExportSheet.compose(view, new org.solmass.output.ExportSheet.Marks(
-                win.data().title(), q.title(), null, scale.min(), scale.max(), scale.diverging(),
+                win.data().title(), q.title(), win.data().period(), scale.min(), scale.max(), scale.diverging(),
                 rig == null ? 0 : rig.headingDeg()));
     }
 

@@ -40,6 +40,11 @@ public final class ModelView3D {
     private final List<PatchMeshData> patchData;
     private final List<WritableImage> patchTextures = new ArrayList<>();
     private final List<MeshView> patchViews = new ArrayList<>();
+    private final Group patchGroup = new Group();
+    /** The shadow study's patches (analysed, context, ground), shown instead of the result patches while it is on. */
+    private final Group shadowGroup = new Group();
+    private final List<PatchMeshData> shadowData;
+    private final List<WritableImage> shadowTextures = new ArrayList<>();
     private final List<MeshView> massingViews = new ArrayList<>();
     private final List<MassingMeshData> massingData = new ArrayList<>();
     private final List<MeshView> contextViews = new ArrayList<>();
@@ -48,14 +53,22 @@ public final class ModelView3D {
     private final double liftM;
 
     /** Geometry prepared off the FX thread. */
+    /**
+     * Geometry prepared off the FX thread.
+     *
+     * @param shadowLayer meshes of the shadow study's patches (analysed, context and ground, from
+     *                    shadows/shadow-patches.csv, {@link ShadowFrames#perPatch}); empty without them
+     */
     public record Prepared(SceneFrame frame, double liftM, double[] focus, double[] siteFocus, List<PatchMeshData> patches,
-                           List<MassingMeshData> analysed, List<MassingMeshData> context) {
+                           List<MassingMeshData> analysed, List<MassingMeshData> context, List<PatchMeshData> shadowLayer) {
         public static Prepared of(ViewerData d) {
             SceneFrame f = SceneFrame.of(d.model().bounds());
             double lift = Math.max(0.01, Math.min(0.15, f.radiusM() * 2e-4));
+            List<PatchMeshData> layer = d.shadows().hasPatches()
+                    ? PatchMeshData.build(d.shadows().perPatch().patches(), f, lift) : List.of();
             return new Prepared(f, lift, ModelView3D.focus(d, f), sphere(d.model().bounds(), f), PatchMeshData.build(d.patches(), f, lift),
                     MassingMeshData.build(d.model(), f, d.blockAnalysed(), true),
-                    MassingMeshData.build(d.model(), f, d.blockAnalysed(), false));
+                    MassingMeshData.build(d.model(), f, d.blockAnalysed(), false), layer);
         }
     }
 
@@ -93,6 +106,7 @@ public final class ModelView3D {
         this.frame = prep.frame();
         this.liftM = prep.liftM();
         this.patchData = prep.patches();
+        this.shadowData = prep.shadowLayer();
 
         Group massing = new Group();
         addMassing(massing, prep.analysed(), data.patches().isEmpty() ? SETUP_ANALYSED : ANALYSED_GREY);
@@ -107,30 +121,61 @@ public final class ModelView3D {
         Node ground = ground(data);
         massing.getChildren().add(ground);
 
-        Group patches = new Group();
-        for (PatchMeshData pd : patchData) {
-            TriangleMesh m = new TriangleMesh(VertexFormat.POINT_NORMAL_TEXCOORD);
-            m.getPoints().setAll(pd.points);
-            m.getNormals().setAll(pd.normals);
-            m.getTexCoords().setAll(pd.texCoords);
-            m.getFaces().setAll(pd.faces);
-            WritableImage tex = new WritableImage(pd.atlas.width, pd.atlas.height);
-            PhongMaterial mat = new PhongMaterial(Color.WHITE);
-            mat.setDiffuseMap(tex);
-            mat.setSpecularColor(Color.BLACK);
-            MeshView v = new MeshView(m);
-            v.setMaterial(mat);
-            v.setCullFace(CullFace.NONE);
-            patchTextures.add(tex);
-            patchViews.add(v);
-            patches.getChildren().add(v);
-        }
+        Group patches = patchGroup;
+        for (PatchMeshData pd : patchData) patchViews.add(patchMesh(pd, patchTextures, patches));
+        for (PatchMeshData pd : shadowData) patchMesh(pd, shadowTextures, shadowGroup);
+        shadowGroup.setVisible(false);
+        shadowGroup.setMouseTransparent(true);   // picks fall through to the massing under it
 
         AmbientLight flat = new AmbientLight(Color.WHITE);   // the only light: shades are baked into textures
         zoneGroup.setVisible(false);
         addZoneOutlines(data);
         addModuleOutlines(data);
-        root.getChildren().addAll(massing, patches, context, zoneGroup, selection, flat);
+        root.getChildren().addAll(massing, patches, shadowGroup, context, zoneGroup, selection, flat);
+    }
+
+    /** A patch mesh textured through its palette atlas (unlit), added to {@code g}; its texture goes into {@code textures}. */
+    private static MeshView patchMesh(PatchMeshData pd, List<WritableImage> textures, Group g) {
+        TriangleMesh m = new TriangleMesh(VertexFormat.POINT_NORMAL_TEXCOORD);
+        m.getPoints().setAll(pd.points);
+        m.getNormals().setAll(pd.normals);
+        m.getTexCoords().setAll(pd.texCoords);
+        m.getFaces().setAll(pd.faces);
+        WritableImage tex = new WritableImage(pd.atlas.width, pd.atlas.height);
+        PhongMaterial mat = new PhongMaterial(Color.WHITE);
+        mat.setDiffuseMap(tex);
+        mat.setSpecularColor(Color.BLACK);
+        MeshView v = new MeshView(m);
+        v.setMaterial(mat);
+        v.setCullFace(CullFace.NONE);
+        textures.add(tex);
+        g.getChildren().add(v);
+        return v;
+    }
+
+    /** Whether the shadow study has patches of its own to draw (shadows/shadow-patches.csv). */
+    public boolean hasShadowLayer() { return !shadowData.isEmpty(); }
+
+    /**
+     * Shows the shadow study's patches (analysed, context and ground) with one sRGB 0xRRGGBB each, in
+     * the order of {@link ShadowFrames#perPatch}, in place of the result patches; null hides them and
+     * shows the result patches again.
+     */
+    public void showShadowLayer(int[] rgb) {
+        boolean on = rgb != null && !shadowData.isEmpty();
+        if (on) fill(shadowData, shadowTextures, rgb);
+        shadowGroup.setVisible(on);
+        patchGroup.setVisible(!on);
+    }
+
+    private static void fill(List<PatchMeshData> data, List<WritableImage> textures, int[] rgb) {
+        for (int i = 0; i < data.size(); i++) {
+            PatchMeshData pd = data.get(i);
+            int[] px = new int[pd.atlas.width * pd.atlas.height];
+            pd.texels(rgb, px);
+            textures.get(i).getPixelWriter().setPixels(0, 0, pd.atlas.width, pd.atlas.height,
+                    PixelFormat.getIntArgbInstance(), px, 0, pd.atlas.width);
+        }
     }
 
     /** The shaded material of a massing colour. */
@@ -244,13 +289,7 @@ public final class ModelView3D {
 
     /** Recolours the patches with one sRGB 0xRRGGBB per patch (e.g. the shadow study). */
     public void recolourRgb(int[] rgb) {
-        for (int i = 0; i < patchData.size(); i++) {
-            PatchMeshData pd = patchData.get(i);
-            int[] px = new int[pd.atlas.width * pd.atlas.height];
-            pd.texels(rgb, px);
-            patchTextures.get(i).getPixelWriter().setPixels(0, 0, pd.atlas.width, pd.atlas.height,
-                    PixelFormat.getIntArgbInstance(), px, 0, pd.atlas.width);
-        }
+        fill(patchData, patchTextures, rgb);
     }
 
     /** Patch index under a pick (node, face, texture coordinate), -1 if the node is not a patch mesh. */

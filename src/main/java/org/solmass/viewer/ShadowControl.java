@@ -15,8 +15,10 @@ import java.util.Locale;
 /**
  * The control column's "Shadow study" section, shown only when the results folder has
  * shadows/shadows.csv ({@link ShadowFrames}): a date choice, a time slider, a two-colour legend and
- * a caption. While it is on, each analysed block's patches take the colour of its sunlit share at the
- * chosen moment (in shade to in sun); the file has one row per block, so a block is one colour.
+ * a caption. While it is on, with the per-patch file (shadows/shadow-patches.csv) every patch of the
+ * analysed blocks, the context blocks and the ground is drawn in sun or in shade at the chosen moment
+ * ({@link #layerColours}); without it (results of an earlier Solmass) each analysed block's patches
+ * take the colour of the block's sunlit share ({@link #colours}).
  */
 final class ShadowControl extends VBox {
     /** Colour of "in sun", 0xRRGGBB (warm light yellow). */
@@ -30,6 +32,12 @@ final class ShadowControl extends VBox {
     private final Label timeLabel = new Label();
     private final Label caption = new Label();
     private final VBox body = new VBox(6);
+    private final Label note = new Label();
+    /** Note under the legend with the per-patch file, and without it. */
+    static final String NOTE_PATCHES = "Each patch of the blocks (analysed and context) and of the ground is in sun or in shade "
+            + "at its centre, one ray to the sun (shadow-patches.csv); walls are drawn lighter or darker by the way they face.",
+            NOTE_BLOCKS = "Each analysed block is coloured by the share of its area in sun (these results have shadows.csv only, "
+                    + "one row per block; run solmass shadows again for sun and shade per patch).";
     private ShadowFrames frames = ShadowFrames.NONE;
 
     ShadowControl(Runnable changed) {
@@ -52,7 +60,7 @@ final class ShadowControl extends VBox {
             if (r != b.doubleValue()) time.setValue(r);
             else changed.run();
         });
-        Label note = new Label("Each analysed block is coloured by the share of its area in sun (shadows.csv has one row per block).");
+        note.setId("shadow-note");
         note.setWrapText(true);
         note.getStyleClass().add("small");
         body.getChildren().addAll(date, time, timeLabel, new HBox(10, swatch(SUN_RGB, "in sun"), swatch(SHADE_RGB, "in shade")),
@@ -77,6 +85,7 @@ final class ShadowControl extends VBox {
     void setFrames(ShadowFrames f) {
         frames = f == null ? ShadowFrames.NONE : f;
         boolean has = !frames.isEmpty();
+        note.setText(frames.hasPatches() ? NOTE_PATCHES : NOTE_BLOCKS);
         setVisible(has);
         setManaged(has);
         on.setSelected(false);
@@ -104,15 +113,41 @@ final class ShadowControl extends VBox {
         return frames.frame(date.getValue(), ts.get(i));
     }
 
-    /** sRGB per patch for the moment on show (and updates the caption); null when there is none. */
-    int[] colours(ViewerData d) {
-        ShadowFrames.Frame f = frame();
-        if (f == null) return null;
+    /** Shows the moment's date, time and sun position. */
+    private void caption(ShadowFrames.Frame f) {
         timeLabel.setText("Time " + f.time() + " (local standard time)");
         StringBuilder c = new StringBuilder("Date " + f.date() + ", " + f.time());
         if (Double.isFinite(f.sunAzimuthDeg())) c.append(String.format(Locale.ROOT, ", sun azimuth %.1f\u00b0", f.sunAzimuthDeg()));
         if (Double.isFinite(f.sunElevationDeg())) c.append(String.format(Locale.ROOT, ", elevation %.1f\u00b0", f.sunElevationDeg()));
+        if (Double.isFinite(f.sunElevationDeg()) && f.sunElevationDeg() <= 0) c.append(" (sun below the horizon: all in shade)");
         caption.setText(c.toString());
+    }
+
+    /**
+     * sRGB per patch of the per-patch study ({@link ShadowFrames#perPatch}) for the moment on show, in
+     * sun or in shade, each darkened by the way the patch faces ({@link MassingMeshData#shade}, the
+     * massing's fixed light) so walls and ground read apart; updates the caption. Null when the study
+     * has no per-patch file or nothing is on show.
+     */
+    int[] layerColours() {
+        ShadowFrames.Frame f = frame();
+        boolean[] lit = frames.sunlit(f);
+        if (lit == null) return null;
+        caption(f);
+        List<org.solmass.surface.Patch> ps = frames.perPatch().patches();
+        int[] rgb = new int[ps.size()];
+        for (int i = 0; i < rgb.length; i++) {
+            org.solmass.model.Vec3 n = ps.get(i).normal();
+            rgb[i] = PaletteAtlas.darken(lit[i] ? SUN_RGB : SHADE_RGB, MassingMeshData.shade(n.x(), n.y(), n.z()));
+        }
+        return rgb;
+    }
+
+    /** sRGB per analysed patch of the block's sunlit share at the moment on show (and updates the caption); null when there is none. */
+    int[] colours(ViewerData d) {
+        ShadowFrames.Frame f = frame();
+        if (f == null) return null;
+        caption(f);
         int[] rgb = new int[d.patches().size()];
         for (int i = 0; i < rgb.length; i++) rgb[i] = rgb(f.sunlitPct(d.patches().get(i).blockName()));
         return rgb;

@@ -4,6 +4,9 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.solmass.InputException;
+import org.solmass.output.PublishedRun;
+import org.solmass.output.RunRecord;
+import org.solmass.output.ShadowPatchTable;
 
 import java.io.IOException;
 import java.io.Reader;
@@ -18,15 +21,23 @@ import java.util.Map;
 
 /**
  * A finished shadow study as the viewer shows it, read from {@code shadows/shadows.csv}
- * ({@code output.ShadowTable}, docs/metrics.md "Shadow studies"); the viewer computes nothing of it.
- * The file holds one row per date, time and block (and the ground) with the block's sunlit share of
- * its area, so the viewer's finest unit is the block: a block's patches all carry its share.
+ * ({@code output.ShadowTable}, docs/metrics.md "Shadow studies") and, when the study wrote it, from
+ * {@code shadows/shadow-patches.csv} ({@link ShadowPatchTable}, docs/outputs.md); the viewer computes
+ * nothing of it. shadows.csv holds one row per date, time and block (and the ground) with the block's
+ * sunlit share of its area; the per-patch file holds, per patch of the analysed blocks, the context
+ * blocks and the ground, its outline and whether it is in sun at each date and time. Without the
+ * per-patch file (results of an earlier Solmass) the viewer's finest unit is the block.
  *
  * @param frames one frame per date and time, in file order
+ * @param perPatch the per-patch study; null when the results have none
  */
-public record ShadowFrames(List<Frame> frames) {
+public record ShadowFrames(List<Frame> frames, ShadowPatchTable.Table perPatch) {
+    /** Folder of the shadow study inside a results folder. */
+    public static final String FOLDER = "shadows";
     /** Path of the table inside a results folder. */
-    public static final String FILE = "shadows/shadows.csv";
+    public static final String FILE = FOLDER + "/shadows.csv";
+    /** Path of the per-patch table inside a results folder. */
+    public static final String PATCH_FILE = FOLDER + "/" + ShadowPatchTable.FILE_NAME;
 
     /**
      * One date and time of the study.
@@ -52,6 +63,21 @@ public record ShadowFrames(List<Frame> frames) {
 
     public ShadowFrames {
         frames = List.copyOf(frames);
+    }
+
+    /** A study read from shadows.csv alone (per block). */
+    public ShadowFrames(List<Frame> frames) {
+        this(frames, null);
+    }
+
+    /** Whether the study has sun and shade per patch (shadow-patches.csv). */
+    public boolean hasPatches() {
+        return perPatch != null && !perPatch.patches().isEmpty();
+    }
+
+    /** Per patch of {@link #perPatch}: in sun at this frame; null without the per-patch file or its column. */
+    public boolean[] sunlit(Frame f) {
+        return perPatch == null || f == null ? null : perPatch.sunlit(f.date() + " " + f.time());
     }
 
     /** No shadow study. */
@@ -81,10 +107,23 @@ public record ShadowFrames(List<Frame> frames) {
         return null;
     }
 
-    /** The shadow study of a results folder; {@link #NONE} when it has no {@link #FILE}. */
+    /**
+     * The shadow study of a results folder; {@link #NONE} when it has no {@link #FILE}. When the study
+     * folder has a run.json (a study published with its manifest) its files are checked against it
+     * ({@link PublishedRun}); an older study folder without one is read as it is.
+     */
     public static ShadowFrames ofFolder(Path folder) {
-        Path f = folder.resolve(FILE);
-        return Files.isRegularFile(f) ? read(f) : NONE;
+        Path dir = folder.resolve(FOLDER), f = folder.resolve(FILE);
+        if (!Files.isRegularFile(f)) return NONE;
+        if (Files.isRegularFile(dir.resolve(RunRecord.FILE_NAME))) {
+            PublishedRun run = PublishedRun.open(dir);
+            String table = f.getFileName().toString();
+            ShadowFrames s = run.has(table) ? run.read(table, ShadowFrames::read) : read(f);
+            return run.has(ShadowPatchTable.FILE_NAME)
+                    ? new ShadowFrames(s.frames(), run.read(ShadowPatchTable.FILE_NAME, ShadowPatchTable::read)) : s;
+        }
+        Path patches = folder.resolve(PATCH_FILE);
+        return Files.isRegularFile(patches) ? new ShadowFrames(read(f).frames(), ShadowPatchTable.read(patches)) : read(f);
     }
 
     /** Reads a shadows.csv (header first: date, time, name, sunlit_pct required; sun columns optional). */

@@ -26,13 +26,16 @@ import java.util.List;
  * @param warnings messages for the status line (e.g. from import or climate checks)
  * @param moduleRings outlines of the placed PV modules (results' modules.geojson), each
  *                    {x0, y0, z0, x1, ...} in world metres without the closing corner; may be empty
- * @param shadows the results' shadow study (shadows/shadows.csv); {@link ShadowFrames#NONE} without it
+ * @param shadows the results' shadow study (shadows/shadows.csv and, when written, the per-patch
+ *                shadows/shadow-patches.csv); {@link ShadowFrames#NONE} without it
+ * @param period what the run's annual values cover, in words ({@code output.RunPeriod}, e.g. "Year of
+ *               monthly-average days, climate site.csv"); null when not known (a set-up, synthetic data)
  */
 public record ViewerData(String title, MassingModel model, boolean[] blockAnalysed, List<Patch> patches,
                          ResultTable table, float[] monthHourWm2, ClimateGlance climate,
                          List<SunArc> sunPath, double latitudeDeg, double longitudeDeg, String zone,
                          List<String> warnings, List<double[]> moduleRings,
-                         ShadowFrames shadows) {
+                         ShadowFrames shadows, String period) {
 
     public ViewerData {
         if (table.size() != patches.size()) {
@@ -68,7 +71,7 @@ public record ViewerData(String title, MassingModel model, boolean[] blockAnalys
                       List<SunArc> sunPath, double latitudeDeg, double longitudeDeg, String zone,
                       List<String> warnings) {
         this(title, model, blockAnalysed, patches, table, monthHourWm2, climate, sunPath, latitudeDeg, longitudeDeg,
-                zone, warnings, List.of(), ShadowFrames.NONE);
+                zone, warnings, List.of(), ShadowFrames.NONE, null);
     }
 
     /** Data without a shadow study (results without shadows/shadows.csv). */
@@ -77,19 +80,25 @@ public record ViewerData(String title, MassingModel model, boolean[] blockAnalys
                       List<SunArc> sunPath, double latitudeDeg, double longitudeDeg, String zone,
                       List<String> warnings, List<double[]> moduleRings) {
         this(title, model, blockAnalysed, patches, table, monthHourWm2, climate, sunPath, latitudeDeg, longitudeDeg,
-                zone, warnings, moduleRings, ShadowFrames.NONE);
+                zone, warnings, moduleRings, ShadowFrames.NONE, null);
     }
 
     /** The same data with this shadow study. */
     public ViewerData withShadows(ShadowFrames s) {
         return new ViewerData(title, model, blockAnalysed, patches, table, monthHourWm2, climate, sunPath,
-                latitudeDeg, longitudeDeg, zone, warnings, moduleRings, s);
+                latitudeDeg, longitudeDeg, zone, warnings, moduleRings, s, period);
+    }
+
+    /** The same data with this period of the run's values ({@code output.RunPeriod}). */
+    public ViewerData withPeriod(String p) {
+        return new ViewerData(title, model, blockAnalysed, patches, table, monthHourWm2, climate, sunPath,
+                latitudeDeg, longitudeDeg, zone, warnings, moduleRings, shadows, p);
     }
 
     /** The same data with these PV module outlines. */
     public ViewerData withModuleRings(List<double[]> rings) {
         return new ViewerData(title, model, blockAnalysed, patches, table, monthHourWm2, climate, sunPath,
-                latitudeDeg, longitudeDeg, zone, warnings, rings, shadows);
+                latitudeDeg, longitudeDeg, zone, warnings, rings, shadows, period);
     }
 
     /** Mean irradiance of a patch in a month (1..12) at local standard hour h (0..23), W/m2; NaN if absent. */

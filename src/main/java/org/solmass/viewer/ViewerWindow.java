@@ -366,6 +366,11 @@ public final class ViewerWindow {
         if (view != null) view.recolourRgb(rgb);
     }
 
+    /** Shows the shadow study's own patches with one sRGB each ({@link ModelView3D#showShadowLayer}); null hides them. */
+    void applyShadowLayer(int[] rgb) {
+        if (view != null) view.showShadowLayer(rgb);
+    }
+
     void setZonesVisible(boolean on) {
         if (view != null) view.zoneGroup().setVisible(on);
     }

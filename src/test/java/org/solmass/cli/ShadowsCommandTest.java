@@ -4,6 +4,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.solmass.output.ShadowPatchTable;
 import org.solmass.output.ShadowTable;
 
 import java.io.ByteArrayOutputStream;
@@ -59,5 +60,32 @@ class ShadowsCommandTest {
         assertEquals(816, Double.parseDouble(box.get("area_m2")), 1e-9);
         assertEquals(456, Double.parseDouble(box.get("sunlit_area_m2")), 1e-9);
         assertEquals("ground", rows.get(1).get("role"));
+
+        // the per-patch file: published with the sheet and the table (run.json's manifest), every patch
+        // once, and the block's patches in sun add up to the same 456 m2 (box geometry, as above)
+        org.solmass.output.PublishedRun run = org.solmass.output.PublishedRun.open(out);
+        for (String f : List.of(ShadowsCommand.SHEET, ShadowsCommand.TABLE, ShadowPatchTable.FILE_NAME)) {
+            assertTrue(run.has(f), f + " in run.json's manifest");
+        }
+        ShadowPatchTable.Table t = run.read(ShadowPatchTable.FILE_NAME, ShadowPatchTable::read);
+        assertEquals(List.of("06-21 12:00"), t.frames());
+        assertEquals(t.patches().size(), t.patches().stream().map(org.solmass.surface.Patch::id).distinct().count(), "each patch once");
+        double boxArea = 0, boxSunlit = 0, groundArea = 0, groundSunlit = 0;
+        boolean[] lit = t.sunlit("06-21 12:00");
+        for (int i = 0; i < lit.length; i++) {
+            double a = t.patches().get(i).areaM2();
+            if (t.roles().get(i).equals("ground")) {
+                groundArea += a;
+                if (lit[i]) groundSunlit += a;
+            } else {
+                assertEquals("analysed", t.roles().get(i));
+                boxArea += a;
+                if (lit[i]) boxSunlit += a;
+            }
+        }
+        assertEquals(816, boxArea, 1e-3);
+        assertEquals(456, boxSunlit, 1e-3);
+        assertEquals(Double.parseDouble(rows.get(1).get("area_m2")), groundArea, 0.01, "ground area as in shadows.csv");
+        assertEquals(Double.parseDouble(rows.get(1).get("sunlit_area_m2")), groundSunlit, 0.01, "ground sunlit area as in shadows.csv");
     }
 }

@@ -73,14 +73,54 @@ class ShadowStudyTest {
         return mp.convexHull().difference(footprint).intersection(grid);
     }
 
+    /** Three moments with shadows to the north-east, west and north (sun in the south-west, east, south). */
+    static final List<ShadowStudy.Moment> MOMENTS = List.of(new ShadowStudy.Moment(MonthDay.of(3, 21), LocalTime.of(15, 0)),
+            new ShadowStudy.Moment(MonthDay.of(6, 21), LocalTime.of(9, 0)),
+            new ShadowStudy.Moment(MonthDay.of(12, 21), LocalTime.of(12, 0)));
+
+    /**
+     * The ray answer and the per-patch file (output.ShadowPatchTable) read back: every frame lists every
+     * patch of the study exactly once with the ray's answer, and the file's ground rows, drawn from its
+     * outlines and in-sun flags alone, give the analytic shadow within one patch.
+     */
     @Test
-    void groundShadowOfABoxMatchesTheAnalyticProjectionWithinOnePatch() {
+    void groundShadowOfABoxMatchesTheAnalyticProjectionWithinOnePatch(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) {
         Box b = box();
-        for (ShadowStudy.Moment mo : List.of(new ShadowStudy.Moment(MonthDay.of(3, 21), LocalTime.of(15, 0)),
-                new ShadowStudy.Moment(MonthDay.of(6, 21), LocalTime.of(9, 0)),
-                new ShadowStudy.Moment(MonthDay.of(12, 21), LocalTime.of(12, 0)))) {
-            SunPosition sun = ShadowStudy.sunAt(CALC, YEAR, mo);
-            boolean[] lit = ShadowStudy.sunlit(b.scene(), b.ground(), sun);
+        List<Patch> all = new ArrayList<>(b.blockPatches());
+        all.addAll(b.ground());
+        List<ShadowStudy.Frame> frames = ShadowStudy.compute(b.scene(), all, CALC, YEAR, MOMENTS);
+        java.nio.file.Path file = dir.resolve(org.solmass.output.ShadowPatchTable.FILE_NAME);
+        org.solmass.output.ShadowPatchTable.write(file, all, new boolean[] {true}, frames);
+        org.solmass.output.ShadowPatchTable.Table t = org.solmass.output.ShadowPatchTable.read(file);
+        assertEquals(all.size(), t.patches().size(), "one row per patch");
+        assertEquals(all.size(), t.patches().stream().map(Patch::id).distinct().count(), "each patch id once");
+        assertEquals(MOMENTS.size(), t.frames().size(), "one column per date and time");
+        List<Patch> ground = new ArrayList<>();
+        List<Integer> rows = new ArrayList<>();
+        for (int i = 0; i < t.patches().size(); i++) {
+            assertEquals(all.get(i).id(), t.patches().get(i).id());
+            assertEquals(i < b.blockPatches().size() ? "analysed" : "ground", t.roles().get(i));
+            if (t.roles().get(i).equals("ground")) {
+                ground.add(t.patches().get(i));
+                rows.add(i);
+            }
+        }
+        assertEquals(b.ground().size(), ground.size());
+        for (int k = 0; k < MOMENTS.size(); k++) {
+            ShadowStudy.Moment mo = MOMENTS.get(k);
+            boolean[] lit = t.sunlit(org.solmass.output.ShadowPatchTable.frameKey(mo)), groundLit = new boolean[ground.size()];
+            assertArrayEquals(frames.get(k).sunlit(), lit, mo + ": the file holds the ray's answer for every patch");
+            for (int i = 0; i < ground.size(); i++) groundLit[i] = lit[rows.get(i)];
+            assertShadowMatchesProjection(mo, frames.get(k).sun(), ground, groundLit);
+        }
+    }
+
+    /**
+     * The shaded ground patches against the analytic shadow: cells farther than one patch from its
+     * outline agree with it, the shaded area and the tip agree within one patch.
+     */
+    private static void assertShadowMatchesProjection(ShadowStudy.Moment mo, SunPosition sun, List<Patch> groundPatches, boolean[] lit) {
+        {
             Geometry shadow = analyticShadow(sun);
             Geometry edge = shadow.getBoundary();
             double shadedArea = 0, tipAlong = Double.NEGATIVE_INFINITY;
@@ -88,7 +128,7 @@ class ShadowStudyTest {
             double az = Math.toRadians(sun.azimuthDeg() + 180), ux = Math.sin(az), uy = Math.cos(az);
             double tx = (ux > 0 ? W : 0) + len * ux, ty = (uy > 0 ? D : 0) + len * uy, nearTip = Double.POSITIVE_INFINITY;
             for (int i = 0; i < lit.length; i++) {
-                Patch p = b.ground().get(i);
+                Patch p = groundPatches.get(i);
                 var pt = GF.createPoint(new Coordinate(p.centroid().x(), p.centroid().y()));
                 boolean inside = shadow.contains(pt);
                 // away from the analytic outline by more than one patch, the ray agrees with the projection

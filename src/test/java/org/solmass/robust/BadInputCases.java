@@ -213,6 +213,16 @@ final class BadInputCases {
         CASES.put("sky-view-out-is-a-file", new Case(Map.of("m.obj", MODEL, "out", "a file"),
                 new String[] {"sky-view", "-q", "@m.obj", "--out", "@out"}));
 
+        CASES.put("shadows-out-holds-analyse-run", new Case(Map.of("m.obj", MODEL, "s.json", "{\"name\": \"two boxes (invented)\","
+                + " \"model\": {\"file\": \"m.obj\"}, \"site\": {\"latitude\": 51, \"longitude\": 10, \"zone\": \"+01:00\"}}"),
+                new String[] {"shadows", "-q", "@s.json", "--out", "@out"}));
+        SETUP.put("shadows-out-holds-analyse-run", dir -> {   // what an analyse run leaves: run.json beside patches.csv
+            java.nio.file.Path out = java.nio.file.Files.createDirectory(dir.resolve("out"));
+            java.nio.file.Files.writeString(out.resolve("run.json"), "{}");
+            java.nio.file.Files.writeString(out.resolve("patches.csv"), "patch_id\n");
+            return () -> { };
+        });
+
         CASES.put("report-out-not-pdf", new Case(Map.of(), new String[] {"report", "@", "--out", "@r.txt"}));
 
         // terrain: far-horizon files and DEMs (GeoTIFFs written with the NGA TIFF library, invented heights)

@@ -63,6 +63,41 @@ class ShadowFramesTest {
         assertSame(s, d.withModuleRings(List.of()).shadows(), "adding module outlines keeps the shadow study");
     }
 
+    /** A per-patch table in the layout of docs/outputs.md (values invented): a roof patch, a wall patch, a ground cell. */
+    static final String PATCHES = String.join("\n",
+            "patch_id,role,block,kind,area_m2,normal_x,normal_y,normal_z,outline_m,sunlit_03-21_09:00,sunlit_03-21_12:00",
+            "B0-S0-P0000,analysed,A,roof,1.0000,0.000000,0.000000,1.000000,0 0 10 1 0 10 1 1 10 0 1 10,1,1",
+            "B1-S2-P0003,context,B,facade,1.0000,0.000000,-1.000000,0.000000,5 0 0 6 0 0 6 0 1 5 0 1,0,1",
+            "G-P0000-0001,ground,ground,ground,4.0000,0.000000,0.000000,1.000000,2 -4 0 4 -4 0 4 -2 0 2 -2 0,0,0", "");
+
+    @Test
+    void thePerPatchTableGivesEachPatchItsSunOrShadeAtEachDateAndTimeWithItsOutline() throws Exception {
+        Files.createDirectories(dir.resolve("shadows"));
+        Files.writeString(dir.resolve(ShadowFrames.FILE), CSV);
+        Files.writeString(dir.resolve(ShadowFrames.PATCH_FILE), PATCHES);
+        ShadowFrames s = ShadowFrames.ofFolder(dir);
+        assertTrue(s.hasPatches());
+        assertEquals(List.of("analysed", "context", "ground"), s.perPatch().roles());
+        org.junit.jupiter.api.Assertions.assertArrayEquals(new boolean[] {true, false, false}, s.sunlit(s.frame("03-21", "09:00")));
+        org.junit.jupiter.api.Assertions.assertArrayEquals(new boolean[] {true, true, false}, s.sunlit(s.frame("03-21", "12:00")));
+        assertEquals(null, s.sunlit(s.frame("06-21", "09:00")), "a moment without a column has no per-patch answer");
+        org.solmass.surface.Patch ground = s.perPatch().patches().get(2);
+        assertEquals(-1, ground.block(), "the ground grid belongs to no block");
+        assertEquals(3, ground.centroid().x(), 1e-12, "centre of the 2 m cell");
+        assertEquals(-3, ground.centroid().y(), 1e-12);
+        assertEquals(180, s.perPatch().patches().get(1).azimuthDeg(), 1e-9, "a wall facing south");
+        assertEquals(2, ground.triangles().length / 3, "a square cell is drawn as two triangles");
+    }
+
+    @Test
+    void withoutThePerPatchTableTheStudyIsPerBlock() throws Exception {
+        Files.createDirectories(dir.resolve("shadows"));
+        Files.writeString(dir.resolve(ShadowFrames.FILE), CSV);
+        ShadowFrames s = ShadowFrames.ofFolder(dir);
+        assertTrue(!s.hasPatches());
+        assertEquals(null, s.sunlit(s.frame("03-21", "09:00")));
+    }
+
     @Test
     void allInShadeAndAllInSunGetTheTwoLegendColoursAndAMissingBlockIsGrey() {
         assertEquals(ShadowControl.SHADE_RGB, ShadowControl.rgb(0));
