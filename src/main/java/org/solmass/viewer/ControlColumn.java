@@ -329,6 +329,8 @@ final class ControlColumn extends VBox {
         java.awt.image.BufferedImage view = javafx.embed.swing.SwingFXUtils.fromFXImage(win.snapshot3D(s), null);
         Quantity q = quantity.getValue();
         CameraRig rig = win.rig();
+        org.solmass.output.ExportSheet.ShadowMarks sm = shadow.exportMarks(win.data().title(), rig == null ? 0 : rig.headingDeg());
+        if (sm != null) return org.solmass.output.ExportSheet.compose(view, sm);   // the shadow study on show: its two colours, not the ramp
         return q == null ? view : org.solmass.output.ExportSheet.compose(view, new org.solmass.output.ExportSheet.Marks(
                 win.data().title(), q.title(), win.data().period(), scale.min(), scale.max(), scale.diverging(),
                 rig == null ? 0 : rig.headingDeg()));

@@ -153,6 +153,17 @@ final class ShadowControl extends VBox {
         return rgb;
     }
 
+    /** The PNG export sheet's marks for the moment on show ({@code output.ExportSheet}); null while the study is off. */
+    org.solmass.output.ExportSheet.ShadowMarks exportMarks(String study, double headingDeg) {
+        ShadowFrames.Frame f = active() ? frame() : null;
+        if (f == null) return null;
+        String sun = Double.isFinite(f.sunAzimuthDeg()) && Double.isFinite(f.sunElevationDeg())
+                ? String.format(Locale.ROOT, "Sun azimuth %.1f\u00b0, elevation %.1f\u00b0", f.sunAzimuthDeg(), f.sunElevationDeg()) : "";
+        String what = frames.hasPatches() ? "" : " (share of each block in sun)";
+        return new org.solmass.output.ExportSheet.ShadowMarks(study, "Shadow study" + what + ", " + f.date() + " " + f.time()
+                + " local standard time", sun, SUN_RGB, SHADE_RGB, headingDeg);
+    }
+
     /** Colour of a sunlit share in percent: in shade at 0, in sun at 100, straight mix between; grey when NaN. */
     static int rgb(double pct) {
         if (!Double.isFinite(pct)) return ColourScale.NAN_RGB;

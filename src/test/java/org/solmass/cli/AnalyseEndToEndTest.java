@@ -39,6 +39,9 @@ class AnalyseEndToEndTest {
         }
         assertNoPatchGetsMoreThanItsUnobstructedPlane(d);
         assertEquals(12, d.sunPath().size());
+        // the export sheet's period: what run.json records (docs/outputs.md, map.png: the time base and the climate)
+        assertEquals(org.solmass.output.RunPeriod.of(org.solmass.output.RunRecord.read(out)), d.period());
+        assertTrue(d.period().startsWith("Year of monthly-average days"), d.period());
         assertTrue(d.climate() != null && d.climate().ghiMonthKwhM2()[5] > d.climate().ghiMonthKwhM2()[11],
                 "June brighter than December in the northern hemisphere");
     }

@@ -45,6 +45,27 @@ class ExportSheetTest {
         assertTrue(big.getHeight() > s.getHeight() * 2);
     }
 
+    /** A shadow-study view: the legend is the two swatches in the given colours (invented colours), no ramp. */
+    @Test
+    void shadowStudySheetShowsTheSunAndShadeSwatchesWhereTheColourBarWouldBe() {
+        int sun = 0xF4D35E, shade = 0x34487A;
+        BufferedImage s = ExportSheet.compose(view(900, 600), new ExportSheet.ShadowMarks("Invented block",
+                "Shadow study, 03-21 15:00 local standard time", "Sun azimuth 225.7\u00b0, elevation 30.1\u00b0", sun, shade, 0));
+        ExportSheet.Layout l = ExportSheet.Layout.of(900, 600);
+        int sunPx = 0, shadePx = 0, rampPx = 0;
+        for (int y = l.barY(); y < l.barY() + l.barH(); y++) {
+            for (int x = l.barX(); x < l.barX() + l.barW(); x++) {
+                int c = s.getRGB(x, y) & 0xFFFFFF;
+                if (c == sun) sunPx++;
+                if (c == shade) shadePx++;
+                if (c == ColourRamp.sequential(0.5)) rampPx++;
+            }
+        }
+        assertTrue(sunPx > 100 && shadePx > 100, "swatches: " + sunPx + " sun, " + shadePx + " shade pixels");
+        assertEquals(0, rampPx, "no colour bar");
+        assertEquals(900, s.getWidth());
+    }
+
     @Test
     void titleBandCarriesText() {
         BufferedImage s = ExportSheet.compose(view(900, 600), marks(0, false));
