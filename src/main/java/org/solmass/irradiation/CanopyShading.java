@@ -21,6 +21,10 @@ import org.solmass.scene.HemisphereSampler;
  * <li>isotropic sky diffuse: the sky view factor of month {@code m} is
  * {@code (1/N) sum over the hemisphere rays that reach the sky of t_m^k} (the cosine-weighted rays
  * carry equal weights), in place of the opaque SVF;</li>
+ * <li>a radiance distribution (Perez 1993, CIE skies): the visible share of each sky patch in month
+ * {@code m} is its unobstructed share times the mean of {@code t_m^k} over the patch's rays (0 for a
+ * ray the opaque scene stops), in place of the fraction of its rays that reach the sky
+ * ({@link SkyPatchView#throughCrowns});</li>
  * <li>horizon band: each band ray's weight times {@code t_m^k}.</li>
  * <li>reflected: the hemisphere rays that hit an opaque face or the ground carry {@code t_m^k} of
  * the crowns before the hit; a patch's reflected irradiance of month {@code m} is multiplied by
@@ -80,15 +84,32 @@ public final class CanopyShading {
             }
         }
 
+        /** Crown crossings of one ray to the sky from {@code o} along the unit vector {@code d}. */
+        int crossings(double ox, double oy, double oz, double dx, double dy, double dz) {
+            return counter.crossings(ox, oy, oz, dx, dy, dz, Double.POSITIVE_INFINITY);
+        }
+
+        /** {@code t_m^k}: the transmittance of {@code k} crossings in month {@code month0} (0 = January). */
+        double factor(int month0, int k) { return power[month0][k]; }
+
         /** Factor of the beam of a sun direction in month {@code month0} (0 = January). */
         double sunFactor(int month0, int direction) { return power[month0][sunCrossings[direction]]; }
 
-        /** Per month: {@code (1/N) sum t_m^k} over the hemisphere rays that reach the sky. */
+        /** Crossings of each hemisphere ray of the current receiver that reaches the sky (set by {@link #sky}). */
+        byte[] skyCrossings = new byte[0];
+
+        /**
+         * Per month: {@code (1/N) sum t_m^k} over the hemisphere rays that reach the sky; keeps each
+         * such ray's crossings in {@link #skyCrossings} (for a radiance distribution's sky patches,
+         * {@link SkyPatchView#throughCrowns}).
+         */
         void sky(double ox, double oy, double oz, double[] dir, int[] cls, int rays) {
             java.util.Arrays.fill(skyMonth, 0);
+            if (skyCrossings.length < rays) skyCrossings = new byte[rays];
             for (int s = 0; s < rays; s++) {
                 if (cls[s] != HemisphereSampler.SKY) continue;
                 int k = counter.crossings(ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2], Double.POSITIVE_INFINITY);
+                skyCrossings[s] = (byte) k;
                 for (int m = 0; m < 12; m++) skyMonth[m] += power[m][k];
             }
             for (int m = 0; m < 12; m++) skyMonth[m] /= rays;

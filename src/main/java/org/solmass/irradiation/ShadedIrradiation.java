@@ -240,6 +240,7 @@ public final class ShadedIrradiation {
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
             if (skyView != null) skyView.measure(ox, oy, oz, nx, ny, nz, dir, cls, hs.rayCount());
             if (canopy != null) canopy.sky(ox, oy, oz, dir, cls, hs.rayCount());
+            if (canopy != null && skyView != null) skyView.throughCrowns(canopy, ox, oy, oz, cls, hs.rayCount());
             collectReflectors(hs.rayCount(), ox, oy, oz); // every receiver: reflectors reflect what they receive
             // a horizontal reflector-only receiver (ground probe) weights the horizon band by sin(tilt) = 0
             horizonVis = analysed || rc.sinTilt(r) > 0 ? horizon.visibility(bundle, ox, oy, oz, nx, ny, nz, canopy) : 0;
@@ -361,7 +362,8 @@ public final class ShadedIrradiation {
             Arrays.fill(diffMonth, 0);
             double unshadedSum = 0, ga = in.groundAlbedo();
             if (skyView != null) {
-                skyView.slotSums(skyView.visible, st.skyWh, skySlot);
+                if (canopy != null) skyView.slotSumsThroughCrowns(st.skyWh, skySlot); // docs/method.md "Vegetation"
+                else skyView.slotSums(skyView.visible, st.skyWh, skySlot);
                 if (analysed) skyView.slotSums(skyView.unobstructed, st.skyWh, skyUSlot);
             }
             for (int k = 0; k < SLOTS; k++) {
