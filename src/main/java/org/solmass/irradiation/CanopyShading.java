@@ -66,9 +66,6 @@ public final class CanopyShading {
     /** Transmittance of {@code k} crossings in month {@code month0} (0 = January): {@code t^k}. */
     public double factor(int month0, int k) { return power[month0][k]; }
 
-    /** A new per-thread probe for up to {@code sunDirections} sun directions (year weights: each month alike). */
-    Probe probe(int sunDirections) { return new Probe(sunDirections, null); }
-
     /**
      * A new per-thread probe for up to {@code sunDirections} sun directions; the reflection weights'
      * year-mean factor {@code tau(k)} weights the months by the site's GHI of the step table.
