@@ -215,7 +215,8 @@ public final class AnalysisRun {
                 study.albedo().ground(), study.groundIrradiance() == Study.GroundIrradiance.SHADED,
                 weather.timeBase() == TimeBase.AVERAGE_DAYS ? IrradiationSetup.SunSampling.EXACT
                         : IrradiationSetup.SunSampling.BINNED,
-                study.sunBins(), RUN_SEED, true);
+                study.sunBins(), RUN_SEED, true)
+                .withBounces(study.reflection().toleranceFraction(), study.reflection().maxBounces());
         ShadedIrradiation.Inputs in = IrradiationSetup.build(scene, model, patches.surfaces(), patches.patches(),
                 contextPatches, albedo, weather, study.sky(), o);
         if (canopy != null) in = in.withCanopy(new CanopyShading(canopy, study.vegetation().monthly(study.site().latitudeDeg())));

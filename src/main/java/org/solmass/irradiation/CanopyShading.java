@@ -21,13 +21,21 @@ import org.solmass.scene.HemisphereSampler;
  * <li>isotropic sky diffuse: the sky view factor of month {@code m} is
  * {@code (1/N) sum over the hemisphere rays that reach the sky of t_m^k} (the cosine-weighted rays
  * carry equal weights), in place of the opaque SVF;</li>
+ * <li>a radiance distribution (Perez 1993, CIE skies): the visible share of each sky patch in month
+ * {@code m} is its unobstructed share times the mean of {@code t_m^k} over the patch's rays (0 for a
+ * ray the opaque scene stops), in place of the fraction of its rays that reach the sky
+ * ({@link SkyPatchView#throughCrowns});</li>
  * <li>horizon band: each band ray's weight times {@code t_m^k}.</li>
- * <li>reflected: the hemisphere rays that hit an opaque face or the ground carry {@code t_m^k} of
- * the crowns before the hit; a patch's reflected irradiance of month {@code m} is multiplied by
- * {@code f_m = sum rho_hit t_m^k / sum rho_hit} over those rays (the reflection-weighted share that
- * passes the crowns). Exact when the reflectors behind crowns receive what the others receive on
- * average; otherwise an approximation (the sparse reflection sum keeps one weight per reflector, not
- * one per month). Crowns themselves do not reflect.</li>
+ * <li>reflected, on every leg of every bounce: each receiver's hemisphere rays that hit an opaque face
+ * or the ground carry the transmittance of the crowns before the hit in their reflector weights,
+ * {@code w_rj = (1/N) sum over the rays that hit j of rho tau(k)}, {@code tau(k)} the year mean of
+ * {@code t_m^k} (months weighted by GHI), and so does the weight of GHI-lit hits; exact when the
+ * transmittance is the same all year. The sparse reflection sum keeps one weight per reflector, not
+ * one per month, so with a transmittance that changes over the year the last leg, onto an analysed
+ * patch, is corrected to its month by {@code c_m = sum rho t_m^k / sum rho tau(k)} over its rays (exact
+ * when its reflectors behind crowns receive what the others receive on average), and the legs between
+ * reflectors keep the year mean (docs/method.md gives a worked case). Crowns themselves do not
+ * reflect.</li>
  * </ul>
  * With {@code t_m = 1} every factor is exactly 1 and the results are those of the model without the
  * trees; with {@code t_m = 0} a crossed crown blocks like an opaque block that does not reflect.
@@ -58,8 +66,40 @@ public final class CanopyShading {
     /** Transmittance of {@code k} crossings in month {@code month0} (0 = January): {@code t^k}. */
     public double factor(int month0, int k) { return power[month0][k]; }
 
-    /** A new per-thread probe for up to {@code sunDirections} sun directions. */
-    Probe probe(int sunDirections) { return new Probe(sunDirections); }
+    /**
+     * A new per-thread probe for up to {@code sunDirections} sun directions; the reflection weights'
+     * year-mean factor {@code tau(k)} weights the months by the site's GHI of the step table.
+     */
+    Probe probe(int sunDirections, StepTable steps) { return new Probe(sunDirections, steps); }
+
+    /**
+     * {@code tau(k) = sum_m G_m t_m^k / sum_m G_m}, k = 0 .. the most crossings: the year mean of the
+     * transmittance of k crossings, months weighted by their GHI {@code G_m} (each month alike when
+     * there is none); exactly {@code t^k} when {@code t} is the same all year, exactly 1 for k = 0.
+     */
+    private double[] yearMean(StepTable steps) {
+        double[] g = new double[12];
+        if (steps != null) for (int k = 0; k < StepTable.SLOTS; k++) g[org.solmass.climate.MonthHour.month(k) - 1] += steps.ghiWh[k];
+        double all = 0;
+        for (double x : g) all += x;
+        if (!(all > 0)) java.util.Arrays.fill(g, 1.0);
+        double[] tau = new double[power[0].length];
+        for (int k = 0; k < tau.length; k++) {
+            boolean same = true;
+            for (int m = 1; m < 12; m++) same &= power[m][k] == power[0][k];
+            if (same) {
+                tau[k] = power[0][k];
+                continue;
+            }
+            double num = 0, den = 0;
+            for (int m = 0; m < 12; m++) {
+                num += g[m] * power[m][k];
+                den += g[m];
+            }
+            tau[k] = num / den;
+        }
+        return tau;
+    }
 
     /** Per-thread state of one receiver's canopy factors; no allocation per ray. */
     final class Probe {
@@ -69,7 +109,34 @@ public final class CanopyShading {
         /** Per month: the sky view factor weighted by the transmittance, and the visible horizon-band share. */
         final double[] skyMonth = new double[12], horizonMonth = new double[12];
 
-        Probe(int sunDirections) { sunCrossings = new byte[sunDirections]; }
+        /** {@code tau(k)}: the year-mean transmittance of k crossings ({@link #yearMean}). */
+        private final double[] tau;
+        /** Crossings of each hemisphere ray of the current receiver that hits something, up to the hit (set by {@link #hits}). */
+        private byte[] hitCrossings = new byte[0];
+
+        Probe(int sunDirections, StepTable steps) {
+            sunCrossings = new byte[sunDirections];
+            tau = yearMean(steps);
+        }
+
+        /**
+         * Crossings of the hemisphere rays that hit something ({@code cls} not sky), each up to its hit
+         * at {@code dist}; call before {@link #hitFactor} and {@link #reflection} for the same rays.
+         */
+        void hits(double ox, double oy, double oz, double[] dir, int[] cls, double[] dist, int rays) {
+            if (hitCrossings.length < rays) hitCrossings = new byte[rays];
+            for (int s = 0; s < rays; s++) {
+                if (cls[s] == HemisphereSampler.SKY) continue;
+                hitCrossings[s] = (byte) counter.crossings(ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2], dist[s]);
+            }
+        }
+
+        /**
+         * The year-mean factor {@code tau(k)} of hemisphere ray {@code s} (a hit): the factor its
+         * reflector weight carries, so that every leg of every bounce passes the crowns its own ray
+         * crosses (docs/method.md, "Vegetation"); 1 exactly for a ray that crosses none.
+         */
+        double hitFactor(int s) { return tau[hitCrossings[s]]; }
 
         /** Crossings of the sun directions the opaque bundle let through ({@code blocked[i]} false). */
         void sun(double ox, double oy, double oz, double[] dir, int[] sunIndex, int count, boolean[] blocked) {
@@ -80,35 +147,53 @@ public final class CanopyShading {
             }
         }
 
+        /** Crown crossings of one ray to the sky from {@code o} along the unit vector {@code d}. */
+        int crossings(double ox, double oy, double oz, double dx, double dy, double dz) {
+            return counter.crossings(ox, oy, oz, dx, dy, dz, Double.POSITIVE_INFINITY);
+        }
+
+        /** {@code t_m^k}: the transmittance of {@code k} crossings in month {@code month0} (0 = January). */
+        double factor(int month0, int k) { return power[month0][k]; }
+
         /** Factor of the beam of a sun direction in month {@code month0} (0 = January). */
         double sunFactor(int month0, int direction) { return power[month0][sunCrossings[direction]]; }
 
-        /** Per month: {@code (1/N) sum t_m^k} over the hemisphere rays that reach the sky. */
+        /** Crossings of each hemisphere ray of the current receiver that reaches the sky (set by {@link #sky}). */
+        byte[] skyCrossings = new byte[0];
+
+        /**
+         * Per month: {@code (1/N) sum t_m^k} over the hemisphere rays that reach the sky; keeps each
+         * such ray's crossings in {@link #skyCrossings} (for a radiance distribution's sky patches,
+         * {@link SkyPatchView#throughCrowns}).
+         */
         void sky(double ox, double oy, double oz, double[] dir, int[] cls, int rays) {
             java.util.Arrays.fill(skyMonth, 0);
+            if (skyCrossings.length < rays) skyCrossings = new byte[rays];
             for (int s = 0; s < rays; s++) {
                 if (cls[s] != HemisphereSampler.SKY) continue;
                 int k = counter.crossings(ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2], Double.POSITIVE_INFINITY);
+                skyCrossings[s] = (byte) k;
                 for (int m = 0; m < 12; m++) skyMonth[m] += power[m][k];
             }
             for (int m = 0; m < 12; m++) skyMonth[m] /= rays;
         }
 
         /**
-         * Per month: the factor {@code f_m = sum rho t_m^k / sum rho} over the hemisphere rays that hit
-         * something ({@code cls} not sky), {@code rho} the hit triangle's albedo (the ground albedo for
-         * the ground plane), {@code k} the crowns before the hit at {@code dist}; 1 when nothing is hit.
+         * Per month, the last leg's correction from the year mean to the month:
+         * {@code c_m = sum rho t_m^k / sum rho tau(k)} over the hemisphere rays that hit something
+         * ({@code cls} not sky), {@code rho} the hit triangle's albedo (the ground albedo for the ground
+         * plane), {@code k} the crowns before the hit ({@link #hits}); 1 when nothing is hit or when
+         * no hit crosses a crown. Exactly 1 when the transmittance is the same all year.
          */
-        void reflection(double ox, double oy, double oz, double[] dir, int[] cls, int[] tri, double[] dist, int rays,
-                        float[] albedo, double groundAlbedo, float[] out) {
+        void reflection(int[] cls, int[] tri, int rays, float[] albedo, double groundAlbedo, float[] out) {
             double[] num = reflectionSum;
             java.util.Arrays.fill(num, 0);
             double den = 0;
             for (int s = 0; s < rays; s++) {
                 if (cls[s] == HemisphereSampler.SKY) continue;
                 double rho = tri[s] >= 0 ? albedo[tri[s]] : groundAlbedo;
-                int k = counter.crossings(ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2], dist[s]);
-                den += rho;
+                int k = hitCrossings[s];
+                den += rho * tau[k];
                 for (int m = 0; m < 12; m++) num[m] += rho * power[m][k];
             }
             for (int m = 0; m < 12; m++) out[m] = den > 0 ? (float) (num[m] / den) : 1f;

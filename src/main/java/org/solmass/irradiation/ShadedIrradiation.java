@@ -222,7 +222,7 @@ public final class ShadedIrradiation {
             tri = new int[maxRays];
             dist = new double[maxRays];
             vis = new byte[in.sun().count()];
-            canopy = in.canopy() == null ? null : in.canopy().probe(in.sun().count());
+            canopy = in.canopy() == null ? null : in.canopy().probe(in.sun().count(), in.steps());
             refIdx = new int[maxRays];
             refW = new float[maxRays];
             refW2 = new float[maxRays];
@@ -240,6 +240,8 @@ public final class ShadedIrradiation {
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
             if (skyView != null) skyView.measure(ox, oy, oz, nx, ny, nz, dir, cls, hs.rayCount());
             if (canopy != null) canopy.sky(ox, oy, oz, dir, cls, hs.rayCount());
+            if (canopy != null) canopy.hits(ox, oy, oz, dir, cls, dist, hs.rayCount()); // crowns on each reflection leg
+            if (canopy != null && skyView != null) skyView.throughCrowns(canopy, ox, oy, oz, cls, hs.rayCount());
             collectReflectors(hs.rayCount(), ox, oy, oz); // every receiver: reflectors reflect what they receive
             // a horizontal reflector-only receiver (ground probe) weights the horizon band by sin(tilt) = 0
             horizonVis = analysed || rc.sinTilt(r) > 0 ? horizon.visibility(bundle, ox, oy, oz, nx, ny, nz, canopy) : 0;
@@ -247,11 +249,9 @@ public final class ShadedIrradiation {
             accumulate(nx, ny, nz, rc.cosTilt(r), rc.sinTilt(r), analysed);
         }
 
-        /** Per month, the factor of receiver r's reflected light for the crowns its hemisphere rays cross (just after its first pass). */
+        /** Per month, the last-leg correction of analysed receiver r's reflected light from the crowns' year mean to the month (just after its first pass). */
         void canopyReflection(int r, float[] out) {
-            Receivers rc = in.receivers();
-            canopy.reflection(rc.origin[3 * r], rc.origin[3 * r + 1], rc.origin[3 * r + 2], dir, cls, tri, dist,
-                    sampler.rayCount(), in.triangleAlbedo(), in.groundAlbedo(), out);
+            canopy.reflection(cls, tri, sampler.rayCount(), in.triangleAlbedo(), in.groundAlbedo(), out);
         }
 
         private void collectReflectors(int rays, double ox, double oy, double oz) {
@@ -265,25 +265,28 @@ public final class ShadedIrradiation {
                 int k = cls[s];
                 if (k == HemisphereSampler.SKY) continue;
                 int t = tri[s];
+                // the crowns this ray crosses before its hit, in its weight: every reflection leg passes them (exactly 1 without)
+                double tf = canopy == null ? 1.0 : canopy.hitFactor(s), gt = ga * tf;
                 double hx = ox + dir[3 * s] * dist[s], hy = oy + dir[3 * s + 1] * dist[s], hz = oz + dir[3 * s + 2] * dist[s];
                 if (t >= 0) {
+                    float rho = canopy == null ? albedo[t] : (float) (albedo[t] * tf);
                     if (k == HemisphereSampler.GROUND && !shaded) {
-                        ghi += albedo[t];
-                        ghi2 += albedo[t] * albedo[t];
+                        ghi += rho;
+                        ghi2 += rho * rho;
                         continue;
                     }
                     int rec = idx.onTriangle(t, hx, hy, hz);
-                    if (rec >= 0) refKey[c++] = ((long) rec << 32) | Float.floatToRawIntBits(albedo[t]);
+                    if (rec >= 0) refKey[c++] = ((long) rec << 32) | Float.floatToRawIntBits(rho);
                 } else if (t == Tracer.GROUND && shaded) {
                     int probe = idx.probeAt(hx, hy);
-                    if (probe >= 0) refKey[c++] = ((long) probe << 32) | Float.floatToRawIntBits((float) ga);
+                    if (probe >= 0) refKey[c++] = ((long) probe << 32) | Float.floatToRawIntBits((float) gt);
                     else {
-                        ghi += ga;
-                        ghi2 += ga * ga;
+                        ghi += gt;
+                        ghi2 += gt * gt;
                     }
                 } else {
-                    ghi += ga; // ground plane (unshaded mode) or a downward ray leaving a model without one
-                    ghi2 += ga * ga;
+                    ghi += gt; // ground plane (unshaded mode) or a downward ray leaving a model without one
+                    ghi2 += gt * gt;
                 }
             }
             Arrays.sort(refKey, 0, c);
@@ -361,7 +364,8 @@ public final class ShadedIrradiation {
             Arrays.fill(diffMonth, 0);
             double unshadedSum = 0, ga = in.groundAlbedo();
             if (skyView != null) {
-                skyView.slotSums(skyView.visible, st.skyWh, skySlot);
+                if (canopy != null) skyView.slotSumsThroughCrowns(st.skyWh, skySlot); // docs/method.md "Vegetation"
+                else skyView.slotSums(skyView.visible, st.skyWh, skySlot);
                 if (analysed) skyView.slotSums(skyView.unobstructed, st.skyWh, skyUSlot);
             }
             for (int k = 0; k < SLOTS; k++) {

@@ -31,6 +31,12 @@ final class SkyPatchView {
     private final double[] extraDir;
     private final boolean[] extraBlocked;
     private final BundleTracer bundle;
+    /** Sky patch of each hemisphere ray of the current receiver, -1 below the horizon. */
+    private int[] rayPatch = new int[0];
+    /** Patches in front that got a ray of their own ({@code extraPatch[0 .. extraCount - 1]}). */
+    private int extraCount;
+    /** Per month (0 = January): the visible shares through the tree crowns ({@link #throughCrowns}). */
+    final double[][] visibleMonth;
 
     SkyPatchView(SkyPatches patches, BundleTracer bundle) {
         this.patches = patches;
@@ -43,6 +49,7 @@ final class SkyPatchView {
         extraPatch = new int[np];
         extraDir = new double[3 * np];
         extraBlocked = new boolean[np];
+        visibleMonth = new double[12][np];
     }
 
     /**
@@ -53,10 +60,13 @@ final class SkyPatchView {
         patches.cosineShares(nx, ny, nz, unobstructed);
         Arrays.fill(rays, 0);
         Arrays.fill(seen, 0);
+        if (rayPatch.length < n) rayPatch = new int[n];
         for (int s = 0; s < n; s++) {
             double dz = dir[3 * s + 2];
+            rayPatch[s] = -1;
             if (dz < 0) continue;
             int p = patches.patchOf(dir[3 * s], dir[3 * s + 1], dz);
+            rayPatch[s] = p;
             rays[p]++;
             if (cls[s] == HemisphereSampler.SKY) seen[p]++;
         }
@@ -64,6 +74,7 @@ final class SkyPatchView {
         for (int p = 0; p < np; p++) {
             if (rays[p] == 0 && unobstructed[p] > 0 && patches.frontDirection(p, nx, ny, nz, extraDir, m)) extraPatch[m++] = p;
         }
+        extraCount = m;
         if (m > 0) {
             bundle.occluded(ox, oy, oz, extraDir, null, m, extraBlocked);
             for (int i = 0; i < m; i++) {
@@ -73,6 +84,52 @@ final class SkyPatchView {
         }
         for (int p = 0; p < np; p++) {
             visible[p] = rays[p] > 0 ? unobstructed[p] * seen[p] / rays[p] : 0;
+        }
+    }
+
+    /**
+     * Per month, the visible shares seen through tree crowns (docs/method.md, "Vegetation"):
+     * {@code visibleMonth[m][p] = unobstructed[p] (sum over the patch's rays that reach the sky of
+     * t_m^k) / rays[p]}, {@code k} the crowns a ray crosses, the same per-crossing transmittance the
+     * isotropic sky view factor gets ({@link CanopyShading}). Call after {@link #measure} and after
+     * the probe's {@code sky} for the same receiver and rays (it reads their crossings); a patch's
+     * own extra ray is counted here. With {@code t_m = 1} every share equals {@link #visible}.
+     */
+    void throughCrowns(CanopyShading.Probe crowns, double ox, double oy, double oz, int[] cls, int n) {
+        for (double[] v : visibleMonth) Arrays.fill(v, 0);
+        for (int s = 0; s < n; s++) {
+            int p = rayPatch[s];
+            if (p < 0 || cls[s] != HemisphereSampler.SKY) continue;
+            int k = crowns.skyCrossings[s];
+            for (int m = 0; m < 12; m++) visibleMonth[m][p] += crowns.factor(m, k);
+        }
+        for (int i = 0; i < extraCount; i++) {
+            if (extraBlocked[i]) continue;
+            int p = extraPatch[i];
+            int k = crowns.crossings(ox, oy, oz, extraDir[3 * i], extraDir[3 * i + 1], extraDir[3 * i + 2]);
+            for (int m = 0; m < 12; m++) visibleMonth[m][p] += crowns.factor(m, k);
+        }
+        for (int p = 0; p < np; p++) { // in measure's order of operations: with t = 1 exactly its visible shares
+            for (int m = 0; m < 12; m++) visibleMonth[m][p] = rays[p] > 0 ? unobstructed[p] * visibleMonth[m][p] / rays[p] : 0;
+        }
+    }
+
+    /**
+     * As {@link #slotSums} on the month's shares through the crowns ({@link #visibleMonth}): each
+     * slot summed with the shares of its own month.
+     */
+    void slotSumsThroughCrowns(double[] skyWh, double[] out) {
+        int slots = out.length, hours = slots / 12;
+        Arrays.fill(out, 0);
+        for (int m = 0; m < 12; m++) {
+            double[] shares = visibleMonth[m];
+            int k0 = m * hours, k1 = k0 + hours; // the slots of month m (MonthHour.index)
+            for (int p = 0; p < np; p++) {
+                double w = shares[p];
+                if (w == 0) continue;
+                int base = p * slots;
+                for (int k = k0; k < k1; k++) out[k] += w * skyWh[base + k];
+            }
         }
     }
 

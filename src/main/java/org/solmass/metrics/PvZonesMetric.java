@@ -112,7 +112,7 @@ public final class PvZonesMetric implements Metric {
         SunDirections sun = ctx.weather().timeBase() == TimeBase.AVERAGE_DAYS ? SunDirections.exact(ctx.weather())
                 : SunDirections.binned(ctx.weather(), new SkySubdivision(s.sunBins()));
         boolean[] ground = Surface.groundTriangles(surfaces, ctx.scene().triangleCount());
-        PvArrays.Result arrays = PvArrays.run(ctx.scene(), ground, modules, ids, lo.module(), ctx.weather(), ctx.sky(), sun,
+        PvArrays.Result arrays = PvArrays.run(ctx.scene(), ground, modules, ids, lo, ctx.weather(), ctx.sky(), sun,
                 ctx.groundAlbedo(), ctx.site().zone(), new PvArrays.Settings(ctx.rays(), ctx.raySeed(),
                         ModuleSight.DEFAULT_ALONG, ModuleSight.DEFAULT_ACROSS));
         return new Found(zones, s, zoneOrient, rackAz, arrays);
@@ -195,6 +195,10 @@ public final class PvZonesMetric implements Metric {
             l.put("ground_coverage_ratio", round(lo.module().widthM() / lo.pitchM(), 3));
             l.put("rack_clearance_m", lo.rackClearanceM());
             l.put("facades", lo.facades());
+            if (!lo.defaultElectrical()) { // left out at the defaults, so that results of earlier versions compare byte for byte
+                l.put("dc_ac_ratio", lo.dcAcRatio());
+                l.put("other_dc_factor", lo.dcOtherFactor());
+            }
             o.put("zones", zones.zones().size());
             o.put("area_m2", round(zones.totalAreaM2(), 2));
             o.put("total_kwh", round(zones.zones().stream().mapToDouble(PvZones.Zone::totalKwh).sum(), 1));

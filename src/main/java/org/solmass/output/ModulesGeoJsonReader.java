@@ -3,6 +3,8 @@ package org.solmass.output;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import org.solmass.InputException;
+import org.solmass.geo.Crs;
+import org.solmass.geo.GeoReference;
 
 import java.io.IOException;
 import java.nio.file.Path;
@@ -12,8 +14,10 @@ import java.util.List;
 /**
  * Reads modules.geojson ({@link ModulesGeoJsonWriter}) back as module outlines: one ring per Polygon
  * feature, its exterior ring's corners as {x0, y0, z0, x1, ...} in local metres (x east, y north,
- * z up). The closing position that GeoJSON repeats (RFC 7946, section 3.1.6) is dropped. Geometry
- * only: nothing here computes energy.
+ * z up). The closing position that GeoJSON repeats (RFC 7946, section 3.1.6) is dropped. A file of a
+ * geo-referenced model holds its corners in the model's CRS with the transform to local metres in
+ * {@code "solmass_local"} ({@link ModulesGeoJsonWriter}): they are turned back with
+ * {@link GeoReference#toLocal}. Geometry only: nothing here computes energy.
  */
 public final class ModulesGeoJsonReader {
     private ModulesGeoJsonReader() {}
@@ -31,6 +35,7 @@ public final class ModulesGeoJsonReader {
         if (feats == null || !feats.isArray()) {
             throw new InputException(file.toString(), "features: expected an array of GeoJSON features");
         }
+        GeoReference geo = reference(root.get("solmass_local"), file);
         for (int i = 0; i < feats.size(); i++) {
             JsonNode g = feats.get(i).path("geometry");
             if (!"Polygon".equals(g.path("type").asText())) continue;
@@ -47,9 +52,24 @@ public final class ModulesGeoJsonReader {
                     throw new InputException(file.toString(), "features[" + i + "].geometry.coordinates[0][" + k + "]: expected [x, y, z] in metres");
                 }
                 for (int c = 0; c < 3; c++) r[3 * k + c] = p.get(c).asDouble();
+                if (geo != null) System.arraycopy(geo.toLocal(r[3 * k], r[3 * k + 1], r[3 * k + 2]), 0, r, 3 * k, 3);
             }
             out.add(r);
         }
         return out;
+    }
+
+    /** The geo-reference declared by {@code "solmass_local"}, or null when the file is in local metres. */
+    private static GeoReference reference(JsonNode l, Path file) {
+        if (l == null || !l.isObject()) return null;
+        String where = file + ": solmass_local";
+        for (String k : new String[] {"crs_epsg", "work_epsg", "origin_x", "origin_y", "north_deg", "z_metres_per_unit"}) {
+            if (!l.path(k).isNumber()) throw new InputException(where, k + ": expected a number");
+        }
+        Crs crs = Crs.epsg(l.get("crs_epsg").asInt(), where);
+        Crs work = l.get("work_epsg").asInt() == crs.epsg() ? crs : Crs.epsg(l.get("work_epsg").asInt(), where);
+        return new GeoReference(crs, work, l.get("origin_x").asDouble(), l.get("origin_y").asDouble(),
+                l.get("z_metres_per_unit").asDouble(), l.get("north_deg").asDouble(),
+                l.path("latitude_deg").asDouble(Double.NaN), l.path("longitude_deg").asDouble(Double.NaN));
     }
 }

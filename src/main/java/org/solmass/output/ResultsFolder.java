@@ -103,7 +103,7 @@ public final class ResultsFolder {
                         found.arrays().zones()));
             }
             pub.write(ModulesGeoJsonWriter.FILE_NAME, p -> ModulesGeoJsonWriter.write(p, found.arrays().modules(),
-                    org.solmass.Cautions.RESULTS));
+                    org.solmass.Cautions.RESULTS, r.geo()));
         }
         SummaryWriter.Spec spec = SummaryWriter.Spec.standard(o.thresholdsKwhM2()).with(r.metrics().summaryColumns())
                 .withStoreyHeight(o.storeyHeightM());

@@ -18,8 +18,9 @@ import java.util.List;
  *
  * <p>The zone outline, in its surface's 2D frame ({@link SurfaceFrame}), is shrunk by the setback with
  * a JTS negative buffer; what is left is the area modules may cover. Modules are placed on a regular
- * grid anchored at the corner of that area's bounding box (in the grid's own axes) and kept when the
- * area covers them wholly:
+ * grid (in the grid's own axes) and kept when the area covers them wholly. Flush modules: the grid is
+ * anchored at the corner of that area's bounding box. Racked rows start at that corner across the
+ * rows; along each row the modules are centred in each free run of the row ({@link #centredStarts}):
  * <ul>
  * <li>flush-mounted (pitched roofs, facades): portrait, the long side up the slope, rows touching
  *     (pitch = module length), in the surface plane;</li>
@@ -29,8 +30,8 @@ import java.util.List;
  *     {@code width x cos(tilt)}.</li>
  * </ul>
  * For a rectangle this gives the floor-division count {@code floor((a - 2s) / w) x rows}, the number
- * of rows {@code floor((b - 2s - depth) / pitch) + 1}. No search over grid offsets is made: an
- * indicative layout, not a design.
+ * of rows {@code floor((b - 2s - depth) / pitch) + 1}. No other search over grid offsets is made:
+ * an indicative layout, not a design.
  */
 public final class ModuleLayout {
     /** Modules are tested shrunk by this much on every side, so that rounding never drops one, metres. */
@@ -82,7 +83,15 @@ public final class ModuleLayout {
         GeometryFactory gf = region.getFactory();
         double e = FIT_TOLERANCE_M;
         for (double t0 = env.getMinY(); t0 + depth <= env.getMaxY() + e; t0 += pitch) {
-            for (double s0 = env.getMinX(); s0 + along <= env.getMaxX() + e; s0 += along) {
+            double[] starts = racked ? centredStarts(region, gf, env, t0, depth, along, ax, ay, dx, dy) : null;
+            int k = 0;
+            for (double s0 = racked ? Double.NaN : env.getMinX(); ; s0 += along) {
+                if (racked) {
+                    if (k == starts.length) break;
+                    s0 = starts[k++];
+                } else if (!(s0 + along <= env.getMaxX() + e)) {
+                    break;
+                }
                 Polygon rect = rect(gf, s0 + e, t0 + e, s0 + along - e, t0 + depth - e, ax, ay, dx, dy);
                 if (!prep.covers(rect)) continue;
                 Vec3 base = frame.toWorld(s0 * ax + t0 * dx, s0 * ay + t0 * dy);
@@ -96,6 +105,48 @@ public final class ModuleLayout {
                 }
             }
         }
+        return out;
+    }
+
+    /**
+     * Where the modules of one racked row start (grid coordinate s along the row): the row's strip
+     * {@code t0 .. t0 + depth} across the region's whole extent, less the s-ranges of what the region
+     * leaves uncovered of it (each uncovered piece of the strip blocks its s-range: a module there
+     * would stick out), gives the free runs along the row; each run holds {@code floor(run / along)}
+     * modules, centred in it. For a rectangle this is the anchored grid's count with the leftover
+     * split evenly between both ends.
+     */
+    static double[] centredStarts(Geometry region, GeometryFactory gf, Envelope env, double t0, double depth, double along,
+                                  double ax, double ay, double dx, double dy) {
+        double e = FIT_TOLERANCE_M, s0 = env.getMinX(), s1 = env.getMaxX();
+        Polygon strip = rect(gf, s0, t0 + e, s1, t0 + depth - e, ax, ay, dx, dy);
+        Geometry open = strip.difference(region);
+        List<double[]> blocked = new ArrayList<>();
+        for (int i = 0; i < open.getNumGeometries(); i++) {
+            Geometry g = open.getGeometryN(i);
+            if (g.getArea() <= e * e) continue; // a sliver where edges coincide
+            double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
+            for (Coordinate c : g.getCoordinates()) {
+                double sc = c.x * ax + c.y * ay;
+                lo = Math.min(lo, sc);
+                hi = Math.max(hi, sc);
+            }
+            blocked.add(new double[] {lo, hi});
+        }
+        blocked.sort((p, q) -> Double.compare(p[0], q[0]));
+        List<Double> starts = new ArrayList<>();
+        double from = s0;
+        for (int i = 0; i <= blocked.size(); i++) {
+            double to = i < blocked.size() ? blocked.get(i)[0] : s1;
+            if (to > from) {
+                int n = (int) Math.floor((to - from + e) / along);
+                double first = from + 0.5 * (to - from - n * along);
+                for (int j = 0; j < n; j++) starts.add(first + j * along);
+            }
+            if (i < blocked.size()) from = Math.max(from, blocked.get(i)[1]);
+        }
+        double[] out = new double[starts.size()];
+        for (int i = 0; i < out.length; i++) out[i] = starts.get(i);
         return out;
     }
 

@@ -52,6 +52,19 @@ public final class PvArrays {
     public static Result run(Scene scene, boolean[] modelIsGround, List<List<PvModule>> zones, int[] zoneIds,
                              ModuleSpec module, WeatherSeries weather, SkyModel sky, SunDirections sun,
                              double groundAlbedo, ZoneId zoneId, Settings s) {
+        return run(scene, modelIsGround, zones, zoneIds, new LayoutOptions(module, 0, LayoutOptions.DEFAULT_FLAT_MAX_TILT_DEG,
+                LayoutOptions.DEFAULT_RACK_TILT_DEG, Double.NaN, LayoutOptions.DEFAULT_GCR, 0, LayoutOptions.DEFAULT_RACK_CLEARANCE_M, false),
+                weather, sky, sun, groundAlbedo, zoneId, s);
+    }
+
+    /**
+     * As above, with the module, the DC/AC ratio and the other-DC-loss factor of the layout options
+     * (the placement options themselves are not used here: the modules are placed already).
+     */
+    public static Result run(Scene scene, boolean[] modelIsGround, List<List<PvModule>> zones, int[] zoneIds,
+                             LayoutOptions lo, WeatherSeries weather, SkyModel sky, SunDirections sun,
+                             double groundAlbedo, ZoneId zoneId, Settings s) {
+        ModuleSpec module = lo.module();
         long t0 = System.nanoTime();
         List<PvModule> all = new ArrayList<>();
         for (List<PvModule> z : zones) all.addAll(z);
@@ -78,7 +91,7 @@ public final class PvArrays {
         int first = 0;
         for (int z = 0; z < zones.size(); z++) {
             int count = zones.get(z).size();
-            out.add(zoneYield(poa, zoneIds[z], first, count, module, zoneId));
+            out.add(zoneYield(poa, zoneIds[z], first, count, lo, zoneId));
             first += count;
         }
         return new Result(List.copyOf(all), poa, List.copyOf(out), (t1 - t0) / 1e9, (System.nanoTime() - t1) / 1e9);
@@ -86,17 +99,18 @@ public final class PvArrays {
 
     /**
      * Sums modules {@code first .. first + count - 1} step by step through the yield chain
-     * ({@link YieldChain#defaults}: the open-rack thermal model for racked modules, the flush-roof one
+     * ({@link LayoutOptions#yieldChain}: the open-rack thermal model for racked modules, the flush-roof one
      * otherwise; air temperature filled from the month means, wind from the weather or the default).
      */
-    static ZoneYield zoneYield(PlaneOfArray poa, int zone, int first, int count, ModuleSpec module, ZoneId zoneId) {
+    static ZoneYield zoneYield(PlaneOfArray poa, int zone, int first, int count, LayoutOptions lo, ZoneId zoneId) {
+        ModuleSpec module = lo.module();
         WeatherSeries w = poa.weather();
         int n = w.size(), S = module.bypassSubstrings();
         float[] sPoa = new float[n], sUnob = new float[n];
         PvModule any = count > 0 ? poa.sight().modules().get(first) : null;
         boolean racked = any != null && any.racked();
         double tilt = any == null ? 0 : any.tiltDeg();
-        YieldChain chain = YieldChain.defaults(module, !racked);
+        YieldChain chain = lo.yieldChain(racked);
         double[] air = CellTemperature.airPerStep(w.steps());
         EnergyBalance[] energy = new EnergyBalance[n];
         double[] cell = new double[n];

@@ -45,8 +45,18 @@ public record YieldChain(ModuleSpec module, IncidenceAngleModifier iam, CellTemp
      * thermal preset, other-losses factor 0.95, default inverter (DC/AC 1.2).
      */
     public static YieldChain defaults(ModuleSpec module, boolean roofFlush) {
+        return of(module, roofFlush, DEFAULT_DC_OTHER_FACTOR, Inverter.DEFAULT.dcAcRatio());
+    }
+
+    /**
+     * The documented defaults with a given other-losses factor and DC/AC ratio (study keys
+     * {@code pv.other_dc_losses_pct} and {@code pv.dc_ac_ratio}); the default inverter curve.
+     */
+    public static YieldChain of(ModuleSpec module, boolean roofFlush, double dcOtherFactor, double dcAcRatio) {
+        Inverter inv = dcAcRatio == Inverter.DEFAULT.dcAcRatio() ? Inverter.DEFAULT
+                : new Inverter(Inverter.DEFAULT.p0(), Inverter.DEFAULT.v(), Inverter.DEFAULT.r(), dcAcRatio);
         return new YieldChain(module, IncidenceAngleModifier.STANDARD_GLASS,
-                roofFlush ? CellTemperature.ROOF_FLUSH : CellTemperature.FREE_STANDING, DEFAULT_DC_OTHER_FACTOR, Inverter.DEFAULT);
+                roofFlush ? CellTemperature.ROOF_FLUSH : CellTemperature.FREE_STANDING, dcOtherFactor, inv);
     }
 
     /**

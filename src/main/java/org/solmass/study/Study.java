@@ -44,11 +44,12 @@ import java.util.Map;
  * @param pv PV roof zones (key {@code pv})
  * @param terrain far horizon and DEM terrain (key {@code terrain}; {@link TerrainSpec#NONE}: flat, open)
  * @param vegetation trees that attenuate rays (key {@code vegetation}; {@link Vegetation#NONE} for none)
+ * @param reflection when the reflection bounces stop (key {@code reflection})
  */
 public record Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
                     GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
                     TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads,
-                    SunHours sunHours, Pv pv, TerrainSpec terrain, Vegetation vegetation) {
+                    SunHours sunHours, Pv pv, TerrainSpec terrain, Vegetation vegetation, Reflection reflection) {
 
     public static final double DEFAULT_PATCH_M = 1.0;
     public static final int DEFAULT_RAYS = 1024;
@@ -64,6 +65,16 @@ public record Study(String name, String description, Path source, Model model, S
         pv = pv == null ? Pv.DEFAULTS : pv;
         terrain = terrain == null ? TerrainSpec.NONE : terrain;
         vegetation = vegetation == null ? Vegetation.NONE : vegetation;
+        reflection = reflection == null ? Reflection.DEFAULTS : reflection;
+    }
+
+    /** A study with the default reflection bounces. */
+    public Study(String name, String description, Path source, Model model, Site site, Climate climate, Albedo albedo,
+                 GroundIrradiance groundIrradiance, double patchM, int rays, SkyModel sky,
+                 TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads,
+                 SunHours sunHours, Pv pv, TerrainSpec terrain, Vegetation vegetation) {
+        this(name, description, source, model, site, climate, albedo, groundIrradiance, patchM, rays, sky, timeBase,
+                sunBins, stepMinutes, outputs, threads, sunHours, pv, terrain, vegetation, Reflection.DEFAULTS);
     }
 
     /** A study without terrain (flat ground, open horizon) and without trees. */
@@ -81,6 +92,34 @@ public record Study(String name, String description, Path source, Model model, S
                  TimeBaseChoice timeBase, int sunBins, int stepMinutes, Outputs outputs, int threads) {
         this(name, description, source, model, site, climate, albedo, groundIrradiance, patchM, rays, sky, timeBase,
                 sunBins, stepMinutes, outputs, threads, SunHours.DEFAULTS, Pv.DEFAULTS, TerrainSpec.NONE, Vegetation.NONE);
+    }
+
+    /**
+     * When the multi-bounce reflection sum stops (key {@code reflection}, docs/study-file.md; method:
+     * docs/method.md, {@code irradiation.Reflection}): after the bounce that adds at most
+     * {@code tolerancePct} % of the reflected total so far, or after {@code maxBounces} bounces.
+     *
+     * @param tolerancePct stopping share, percent, in (0, 100]; default 0.5 (our choice)
+     * @param maxBounces the most bounces, 1 (one bounce, as before multi-bounce) to {@value #MAX_BOUNCES}; default 20
+     */
+    public record Reflection(double tolerancePct, int maxBounces) {
+        /** The largest {@code max_bounces} the study accepts. */
+        public static final int MAX_BOUNCES = 100;
+        public static final Reflection DEFAULTS = new Reflection(
+                100 * org.solmass.irradiation.IrradiationSetup.DEFAULT_BOUNCE_TOLERANCE,
+                org.solmass.irradiation.IrradiationSetup.DEFAULT_MAX_BOUNCES);
+
+        public Reflection {
+            if (!(tolerancePct > 0 && tolerancePct <= 100)) throw new IllegalArgumentException("tolerance must lie in (0, 100] %: " + tolerancePct);
+            if (maxBounces < 1 || maxBounces > MAX_BOUNCES) throw new IllegalArgumentException("max bounces must be 1.." + MAX_BOUNCES + ": " + maxBounces);
+        }
+
+        /** The stopping share as a fraction (the irradiation stage's unit); the default's exact constant when default. */
+        public double toleranceFraction() {
+            return equals(DEFAULTS) ? org.solmass.irradiation.IrradiationSetup.DEFAULT_BOUNCE_TOLERANCE : tolerancePct / 100;
+        }
+
+        public boolean isDefault() { return equals(DEFAULTS); }
     }
 
     /** The metrics' settings from the study's {@code sun_hours} and {@code pv} keys. */

@@ -191,11 +191,16 @@ public final class StudyReader {
                     + " (terrain.dem); use \"unshaded\" (the terrain then reflects the ground albedo x GHI)");
         }
         Vegetation vegetation = vegetation(c);
+        JsonCursor rf = c.object("reflection");
+        Study.Reflection reflection = new Study.Reflection(
+                rf.positive("tolerance_pct", Study.Reflection.DEFAULTS.tolerancePct(), 0, 100),
+                rf.integer("max_bounces", Study.Reflection.DEFAULTS.maxBounces(), 1, Study.Reflection.MAX_BOUNCES));
+        rf.finish();
         c.finish();
 
         if (name == null || name.isBlank()) name = baseName(source != null ? source : modelFile);
         return new Study(name, description, source, model, site, climate, albedo, ground, patchM, rays, sky,
-                timeBase, sunBins, step, outputs, threads, sunHours, pv, terrain, vegetation);
+                timeBase, sunBins, step, outputs, threads, sunHours, pv, terrain, vegetation, reflection);
     }
 
     /** The {@code terrain} section: far-horizon file, DEM and its placement (docs/study-file.md). */
@@ -322,7 +327,10 @@ public final class StudyReader {
                 k.has("rack_azimuth_deg") ? k.number("rack_azimuth_deg", null, 0, 360) % 360 : Double.NaN,
                 gcr, pitch,
                 k.number("rack_clearance_m", d.rackClearanceM(), 0, 5),
-                k.bool("facades", d.facades()));
+                k.bool("facades", d.facades()),
+                k.number("dc_ac_ratio", d.dcAcRatio(), 0.5, 3),
+                // percent of DC power lost to soiling, wiring, module quality; the default's exact factor when not given
+                k.raw("other_dc_losses_pct") != null ? 1 - k.number("other_dc_losses_pct", null, 0, 50) / 100 : d.dcOtherFactor());
         Study.Pv pv = new Study.Pv(k.number("suitable_pct", Study.Pv.DEFAULT_SUITABLE_PCT, 0, 100),
                 k.number("min_zone_m2", Study.Pv.DEFAULT_MIN_ZONE_M2, 0, 1e6),
                 m.efficiency(),

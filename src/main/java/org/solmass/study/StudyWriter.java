@@ -114,6 +114,11 @@ public final class StudyWriter {
                 for (double x : s.vegetation().transmittance()) tr.add(x);
             }
         }
+        if (!s.reflection().isDefault()) { // left out at the defaults, so that results of earlier versions compare byte for byte
+            ObjectNode rf = root.putObject("reflection");
+            rf.put("tolerance_pct", s.reflection().tolerancePct());
+            rf.put("max_bounces", s.reflection().maxBounces());
+        }
         ObjectNode pv = root.putObject("pv");
         pv.put("suitable_pct", s.pv().suitablePct());
         pv.put("min_zone_m2", s.pv().minZoneM2());
@@ -127,6 +132,10 @@ public final class StudyWriter {
         if (lo.rowPitchM() > 0) pv.put("row_pitch_m", lo.rowPitchM());
         pv.put("rack_clearance_m", lo.rackClearanceM());
         pv.put("facades", lo.facades());
+        if (!lo.defaultElectrical()) { // left out at the defaults, so that results of earlier versions compare byte for byte
+            pv.put("dc_ac_ratio", lo.dcAcRatio());
+            pv.put("other_dc_losses_pct", Math.rint((1 - lo.dcOtherFactor()) * 100 * 1e9) / 1e9);
+        }
         ObjectNode mod = pv.putObject("module");
         mod.put("length_m", lo.module().lengthM());
         mod.put("width_m", lo.module().widthM());

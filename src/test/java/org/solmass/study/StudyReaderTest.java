@@ -339,6 +339,39 @@ class StudyReaderTest {
         assertTrue(fails(base + ", \"vegetation\": { \"kind\": \"evergreen\" } }").getMessage().contains("vegetation.blocks or vegetation.materials"));
     }
 
+    /**
+     * The reflection bounce limits and the PV system's DC/AC ratio and other DC losses: defaults equal
+     * the irradiation and PV stages' constants, given values reach the stages' types, the writer leaves
+     * them out at the defaults (earlier results compare byte for byte) and writes given ones so that
+     * they read back equal.
+     */
+    @Test
+    void reflectionAndPvSystemKeysReadWriteAndReadBack() throws Exception {
+        String base = "{ \"model\": { \"file\": \"m.obj\" }, " + MIN_SITE;
+        Study d = StudyReader.read(write("d.json", base + " }"));
+        assertEquals(org.solmass.irradiation.IrradiationSetup.DEFAULT_BOUNCE_TOLERANCE, d.reflection().toleranceFraction());
+        assertEquals(org.solmass.irradiation.IrradiationSetup.DEFAULT_MAX_BOUNCES, d.reflection().maxBounces());
+        assertEquals(1.2, d.pv().layout().dcAcRatio());
+        assertEquals(org.solmass.pv.YieldChain.DEFAULT_DC_OTHER_FACTOR, d.pv().layout().dcOtherFactor());
+        String written = StudyWriter.toJson(d);
+        assertFalse(written.contains("reflection") || written.contains("dc_ac_ratio") || written.contains("other_dc"), written);
+        Study s = StudyReader.read(write("r.json", base + ", \"reflection\": { \"tolerance_pct\": 0.1, \"max_bounces\": 3 },"
+                + " \"pv\": { \"dc_ac_ratio\": 1.35, \"other_dc_losses_pct\": 7 } }"));
+        assertEquals(new Reflection(0.1, 3), s.reflection());
+        assertEquals(0.001, s.reflection().toleranceFraction(), 1e-18);
+        assertEquals(1.35, s.pv().layout().dcAcRatio());
+        assertEquals(0.93, s.pv().layout().dcOtherFactor(), 1e-15);
+        assertEquals(1.35, s.pv().layout().yieldChain(true).inverter().dcAcRatio());
+        assertEquals(0.93, s.pv().layout().yieldChain(false).dcOtherFactor(), 1e-15);
+        Study t = StudyReader.fromTree(StudyWriter.toTree(s), null, dir, "run.json");
+        assertEquals(s.reflection(), t.reflection());
+        assertEquals(s.pv().layout(), t.pv().layout());
+        assertTrue(fails(base + ", \"reflection\": { \"max_bounces\": 101 } }").getMessage()
+                .endsWith("reflection.max_bounces: expected a whole number from 1 to 100, got 101"));
+        assertTrue(fails(base + ", \"pv\": { \"dc_ac_ratio\": 0.4 } }").getMessage()
+                .endsWith("pv.dc_ac_ratio: expected a number from 0.5 to 3, got 0.4"));
+    }
+
     @Test
     void vegetationPatternsMatchWholeNamesWithStarAndQuestionMark() {
         org.solmass.model.MassingModel m = new org.solmass.model.MassingModel(null, java.util.List.of("tree_1", "tree_22", "house", "oak"),
