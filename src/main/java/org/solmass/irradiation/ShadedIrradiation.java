@@ -195,8 +195,11 @@ public final class ShadedIrradiation {
         final double[] beamMonth = new double[12], diffMonth = new double[12];
         final int[] refIdx;
         final float[] refW, refW2;
-        final long[] refKey;
+        /** The reflectors the hemisphere rays hit, gathered per receiver ({@link ReflectorGroups}). */
+        final ReflectorGroups reflectors;
         final HorizonBand horizon = new HorizonBand();
+        /** Per-normal step terms of the opaque step loop ({@link StepTerms}). */
+        final StepTerms stepTerms;
         /** A radiance distribution's per-patch view of the sky, or null for a three-part sky model. */
         final SkyPatchView skyView;
         /** Tree crowns of the study (docs/method.md "Vegetation"); null without trees, and then never touched. */
@@ -226,7 +229,8 @@ public final class ShadedIrradiation {
             refIdx = new int[maxRays];
             refW = new float[maxRays];
             refW2 = new float[maxRays];
-            refKey = new long[maxRays];
+            reflectors = new ReflectorGroups(in.receivers().count, maxRays);
+            stepTerms = new StepTerms(in.steps());
             skyView = in.steps().skyPatches != null ? new SkyPatchView(in.steps().skyPatches, bundle) : null;
         }
 
@@ -259,7 +263,6 @@ public final class ShadedIrradiation {
             float[] albedo = in.triangleAlbedo();
             boolean shaded = in.shadedGround();
             double ga = in.groundAlbedo();
-            int c = 0;
             double ghi = 0, ghi2 = 0;
             for (int s = 0; s < rays; s++) {
                 int k = cls[s];
@@ -276,10 +279,10 @@ public final class ShadedIrradiation {
                         continue;
                     }
                     int rec = idx.onTriangle(t, hx, hy, hz);
-                    if (rec >= 0) refKey[c++] = ((long) rec << 32) | Float.floatToRawIntBits(rho);
+                    if (rec >= 0) reflectors.add(rec, rho);
                 } else if (t == Tracer.GROUND && shaded) {
                     int probe = idx.probeAt(hx, hy);
-                    if (probe >= 0) refKey[c++] = ((long) probe << 32) | Float.floatToRawIntBits((float) gt);
+                    if (probe >= 0) reflectors.add(probe, (float) gt);
                     else {
                         ghi += gt;
                         ghi2 += gt * gt;
@@ -289,25 +292,8 @@ public final class ShadedIrradiation {
                     ghi2 += gt * gt;
                 }
             }
-            Arrays.sort(refKey, 0, c);
             double inv = 1.0 / rays;
-            int m = 0;
-            for (int i = 0; i < c; ) {
-                long key = refKey[i];
-                int rec = (int) (key >>> 32);
-                double w = 0, w2 = 0;
-                while (i < c && (int) (refKey[i] >>> 32) == rec) {
-                    double rho = Float.intBitsToFloat((int) refKey[i]);
-                    w += rho * inv;
-                    w2 += rho * rho * inv;
-                    i++;
-                }
-                refIdx[m] = rec;
-                refW[m] = (float) w;
-                refW2[m] = (float) w2;
-                m++;
-            }
-            refCount = m;
+            refCount = reflectors.finish(rays, refIdx, refW, refW2);
             ghiAlbedo = ghi * inv;
             ghiAlbedo2 = ghi2 * inv;
         }
@@ -337,7 +323,14 @@ public final class ShadedIrradiation {
             Arrays.fill(circUSlot, 0);
             float fnx = (float) nx, fny = (float) ny, fnz = (float) nz;
             double sun = 0;
-            for (int s = 0; s < st.count; s++) {
+            if (canopy == null) { // the normal's step terms, shared with the receivers before it on the same face
+                stepTerms.normal(fnx, fny, fnz, analysed);
+                sun = stepTerms.shaded(vis, beamSlot, circSlot);
+                if (analysed) {
+                    System.arraycopy(stepTerms.beamU, 0, beamUSlot, 0, SLOTS);
+                    System.arraycopy(stepTerms.circU, 0, circUSlot, 0, SLOTS);
+                }
+            } else for (int s = 0; s < st.count; s++) {
                 double c = fnx * st.sx[s] + fny * st.sy[s] + fnz * st.sz[s];
                 if (c <= 0) continue;
                 int k = st.slot[s];

@@ -128,12 +128,11 @@ public final class HemisphereSampler {
         double ua = 2 * u - 1, ub = 2 * v - 1;
         double x, y;
         if (ua == 0 && ub == 0) { x = 0; y = 0; }
-        else if (Math.abs(ua) > Math.abs(ub)) {
-            double th = Math.PI / 4 * (ub / ua);
-            x = ua * Math.cos(th); y = ua * Math.sin(th);
-        } else {
-            double th = Math.PI / 2 - Math.PI / 4 * (ua / ub);
-            x = ub * Math.cos(th); y = ub * Math.sin(th);
+        else { // the two wedges of the map, chosen by selects rather than a branch (half of them would mispredict)
+            boolean aMajor = Math.abs(ua) > Math.abs(ub);
+            double r = aMajor ? ua : ub;
+            double th = aMajor ? Math.PI / 4 * (ub / ua) : Math.PI / 2 - Math.PI / 4 * (ua / ub);
+            x = r * Math.cos(th); y = r * Math.sin(th);
         }
         double z = Math.sqrt(Math.max(0, 1 - x * x - y * y));
         dir[3 * s] = x * t1x + y * t2x + z * nx;
