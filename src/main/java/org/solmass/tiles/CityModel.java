@@ -90,6 +90,7 @@ public final class CityModel {
         }
         if (!key.equals(lastKey)) {
             last = null; // let the old one go before the new one is built
+            lastKey = null;
             last = load(studyFile);
             lastKey = key;
         }
