@@ -11,11 +11,13 @@ import java.util.Locale;
  * (4-byte floats and ints, 8-byte doubles and longs, 16-byte array headers):
  * <ul>
  * <li>per receiver (analysed patch, context patch or ground probe): the first-pass month-hour slot
- *     sums, {@code double[288]} (8 bytes a slot: they are the sums later weighted into other patches'
- *     reflection, so they stay doubles), the current and the next reflection bounce as month sums,
- *     {@code 2 x double[12]} ({@link Reflection}: the same whatever the number of bounces), its
+ *     sums of the slots that can hold light ({@link FirstPass}: at most 288, about half of them in an
+ *     hourly year; 8 bytes a slot: they are the sums later weighted into other patches'
+ *     reflection, so they stay doubles) with their annual sum, the current and the next reflection
+ *     bounce as month sums, {@code 2 x double[12]} ({@link Reflection}: the same whatever the number
+ *     of bounces; the first holds the first pass's month sums during bounce 1), its
  *     annual total and last-bounce sum, origin, normal, seed, surface and
- *     reflector index entries, and its reflector list with its GHI weight; a reflector-only receiver's
+ *     reflector index entries (with about 4 candidates of its bucket, int + 2 doubles each, {@link ReflectorIndex}), and its reflector list with its GHI weight; a reflector-only receiver's
  *     list holds up to one reference (int + float) per reflector ray;</li>
  * <li>per analysed patch: up to one reflector reference (int + float + the float of squared albedo for
  *     the standard error) per hemisphere ray, about 40 per-patch result doubles (components, standard
@@ -30,8 +32,10 @@ import java.util.Locale;
  * @param countBytes     the part that scales with the number of receivers and patches
  */
 public record MemoryEstimate(long bytes, long countBytes) {
-    static final long PER_RECEIVER = StepTable.SLOTS * 8L + 16 + 2 * 12 * 8 + 8 + 8 + 48 + 8 + 4 + 24
-            + 2 * 16 + 4 + 16;
+    /** Per receiver besides the first pass's slot sums (8 bytes for each slot kept). */
+    static final long PER_RECEIVER_BESIDES_SLOTS = 16 + 8 + 2 * 12 * 8 + 8 + 8 + 48 + 8 + 4 + 24 + 2 * 16 + 4 + 16
+            + 4 * (4 + 16) + 4;
+    static final long PER_RECEIVER = StepTable.SLOTS * 8L + PER_RECEIVER_BESIDES_SLOTS;
     static final long PER_REFLECTOR_ONLY_PER_RAY = 4 + 4;
     static final long PER_PATCH_FIXED = 40 * 8 + 36 * 8 + 2 * 16 + 30 * 8 + 12 * 8 + 8 + 16 + 4;
     static final long PER_PATCH_PER_RAY = 4 + 4 + 4;
@@ -50,7 +54,16 @@ public record MemoryEstimate(long bytes, long countBytes) {
      */
     public static MemoryEstimate of(long receivers, long analysed, int raysPerPatch, int steps,
                                     boolean keepMonthHour, int threads) {
-        long counts = receivers * PER_RECEIVER
+        return of(receivers, analysed, raysPerPatch, steps, keepMonthHour, threads, StepTable.SLOTS);
+    }
+
+    /**
+     * The estimate with the number of first-pass slots kept ({@link FirstPass}: the slots that can
+     * hold light; all 288 when not yet known).
+     */
+    static MemoryEstimate of(long receivers, long analysed, int raysPerPatch, int steps,
+                             boolean keepMonthHour, int threads, int firstPassSlots) {
+        long counts = receivers * (firstPassSlots * 8L + PER_RECEIVER_BESIDES_SLOTS)
                 + (receivers - analysed) * PER_REFLECTOR_ONLY_PER_RAY * Math.min(raysPerPatch, IrradiationSetup.REFLECTOR_RAYS)
                 + analysed * (PER_PATCH_FIXED + PER_PATCH_PER_RAY * raysPerPatch + (keepMonthHour ? StepTable.SLOTS * 4L + 12 * 8 : 0));
         long fixed = (long) threads * raysPerPatch * PER_THREAD_PER_RAY + (long) steps * PER_STEP;
@@ -80,7 +93,7 @@ public record MemoryEstimate(long bytes, long countBytes) {
     /** The estimate for inputs already built. */
     public static MemoryEstimate of(ShadedIrradiation.Inputs in, int threads) {
         return of(in.receivers().count, in.receivers().analysed, in.raysPerPatch(), in.steps().count,
-                in.keepMonthHour(), threads);
+                in.keepMonthHour(), threads, FirstPass.liveSlots(in.steps()));
     }
 
     /**

@@ -23,13 +23,16 @@ import java.util.stream.IntStream;
  * all slots) is at most {@code tolerance} times the reflected total so far, or at {@code maxBounces}.
  * With a geometric decay of ratio q the part left out is about q / (1 - q) times the last bounce.
  *
- * <p>Bounce 1 is summed slot by slot (288 month-hour slots); the later bounces month by month
- * (12 values): W is the same for every slot, so the month sums of {@code W D} are W times the month
- * sums of D and monthly and annual results are exact; only the month-hour table spreads the later
- * bounces over a month's hours in proportion to bounce 1. Memory: besides the first pass
- * ({@code double[total x 288]}) two {@code double[total x 12]} hold the current and the next bounce,
- * so the peak stays that of the one-bounce pass plus under 10 % ({@link MemoryEstimate}); time: the
- * later bounces cost 1/24 of bounce 1 each.
+ * <p>Bounce 1 of an analysed patch whose month-hour table is kept is summed slot by slot (the slots
+ * that can hold light, {@link FirstPass}: the others are zero for every receiver); every other
+ * receiver's bounce 1 and all later bounces month by month (12 values): W is the same for every
+ * slot, so the month sums of {@code W D} are W times the month sums of D and monthly and annual
+ * results are exact (only the order of the additions differs); only the month-hour table spreads
+ * the later bounces over a month's hours in proportion to bounce 1. Memory: besides the first pass
+ * ({@code double[total x lit slots]}, about half of 288 for an hourly year) two
+ * {@code double[total x 12]} hold the current and the next bounce (the first holds the first pass's
+ * month sums during bounce 1), so the peak stays that of the one-bounce pass plus under 10 %
+ * ({@link MemoryEstimate}); time: a month-space bounce costs about 1/12 of a slot-by-slot one.
  *
  * <p>Determinism: each receiver's bounce is summed in its list's order into its own slots, and the
  * energy sums run in receiver order after the parallel part, so nothing depends on the thread count.
@@ -69,20 +72,29 @@ final class Reflection {
 
     private Reflection() {}
 
-    static Outcome solve(double[] firstPass, Lists l, int analysed, StepTable st, double tolerance, int maxBounces,
+    static Outcome solve(FirstPass fp, Lists l, int analysed, StepTable st, double tolerance, int maxBounces,
                          boolean keepMonthHour, PhaseProgress progress) {
-        int total = l.idx().length, n = analysed;
+        int total = l.idx().length, n = analysed, ns = fp.slots();
+        double[] firstPass = fp.values;
+        int[] live = fp.live, liveMonth = fp.liveMonth;
         double[] cur = new double[total * 12], next = new double[total * 12];
         double[][] reflMonth = new double[12][n];
         double[] firstBounceMonth = keepMonthHour ? new double[n * 12] : null;
         float[] monthHour = keepMonthHour ? new float[n * SLOTS] : null;
-        double[] totalAnnual = new double[total];
+        double[] totalAnnual = fp.annual.clone();
         double[] added = new double[total];
-        for (int r = 0; r < total; r++) {
-            double s = 0;
-            for (int k = 0; k < SLOTS; k++) s += firstPass[r * SLOTS + k];
-            totalAnnual[r] = s;
+        double[] ghiLive = new double[ns], ghiMonth = new double[12];
+        for (int i = 0; i < ns; i++) {
+            ghiLive[i] = st.ghiWh[live[i]];
+            ghiMonth[liveMonth[i]] += ghiLive[i];
         }
+        // receivers without a month-hour table take bounce 1 in month space: W acts on every slot alike
+        int slotted = keepMonthHour ? n : 0;
+        double[] fpMonth = cur; // bounce 1 reads no earlier bounce: cur holds the first pass's month sums meanwhile
+        IntStream.range(0, total).parallel().forEach(r -> {
+            int base = r * ns, m0 = r * 12;
+            for (int i = 0; i < ns; i++) fpMonth[m0 + liveMonth[i]] += firstPass[base + i];
+        });
         int[] slotMonth = new int[SLOTS];
         for (int k = 0; k < SLOTS; k++) slotMonth[k] = org.solmass.climate.MonthHour.month(k) - 1;
         double[] bounceWh = new double[Math.max(1, maxBounces)];
@@ -92,40 +104,38 @@ final class Reflection {
         progress.begin("reflection", maxBounces);
         for (int b = 0; b < maxBounces; b++) {
             final double[] src = cur, dst = next;
-            if (b == 0) { // bounce 1, slot by slot: the month-hour table needs its profile
-                ThreadLocal<double[]> scratch = ThreadLocal.withInitial(() -> new double[SLOTS]);
+            if (b == 0) { // bounce 1: slot by slot where the month-hour table needs its profile
+                ThreadLocal<double[]> scratch = ThreadLocal.withInitial(() -> new double[ns]);
                 IntStream.range(0, total).parallel().forEach(r -> {
-                    double[] acc = scratch.get();
-                    java.util.Arrays.fill(acc, 0);
-                    int[] idx = l.idx()[r];
-                    float[] wt = l.w()[r];
-                    for (int i = 0; i < idx.length; i++) {
-                        int base = idx[i] * SLOTS;
-                        double wr = wt[i];
-                        for (int k = 0; k < SLOTS; k++) acc[k] += wr * firstPass[base + k];
-                    }
-                    double g = l.ghiW()[r];
-                    for (int k = 0; k < SLOTS; k++) acc[k] += g * st.ghiWh[k];
                     int m0 = r * 12;
                     for (int m = 0; m < 12; m++) dst[m0 + m] = 0;
-                    for (int k = 0; k < SLOTS; k++) dst[m0 + slotMonth[k]] += acc[k];
+                    int[] idx = l.idx()[r];
+                    float[] wt = l.w()[r];
+                    double g = l.ghiW()[r];
+                    if (r >= slotted) {
+                        monthBounce(r, l, fpMonth, dst);
+                        for (int m = 0; m < 12; m++) dst[m0 + m] += g * ghiMonth[m];
+                        finish(r, n, dst, reflMonth, added, totalAnnual);
+                        return;
+                    }
+                    double[] acc = scratch.get();
+                    java.util.Arrays.fill(acc, 0);
+                    for (int i = 0; i < idx.length; i++) {
+                        int base = idx[i] * ns;
+                        double wr = wt[i];
+                        for (int k = 0; k < ns; k++) acc[k] += wr * firstPass[base + k];
+                    }
+                    for (int k = 0; k < ns; k++) acc[k] += g * ghiLive[k];
+                    for (int k = 0; k < ns; k++) dst[m0 + liveMonth[k]] += acc[k];
                     if (r < n && monthHour != null) {
-                        for (int k = 0; k < SLOTS; k++) monthHour[r * SLOTS + k] = (float) acc[k];
+                        for (int k = 0; k < ns; k++) monthHour[r * SLOTS + live[k]] = (float) acc[k];
                         System.arraycopy(dst, m0, firstBounceMonth, m0, 12);
                     }
                     finish(r, n, dst, reflMonth, added, totalAnnual);
                 });
             } else { // later bounces month by month: W acts on every slot alike, so month sums are exact
                 IntStream.range(0, total).parallel().forEach(r -> {
-                    int[] idx = l.idx()[r];
-                    float[] wt = l.w()[r];
-                    int m0 = r * 12;
-                    for (int m = 0; m < 12; m++) dst[m0 + m] = 0;
-                    for (int i = 0; i < idx.length; i++) {
-                        int base = idx[i] * 12;
-                        double wr = wt[i];
-                        for (int m = 0; m < 12; m++) dst[m0 + m] += wr * src[base + m];
-                    }
+                    monthBounce(r, l, src, dst);
                     finish(r, n, dst, reflMonth, added, totalAnnual);
                 });
             }
@@ -143,7 +153,7 @@ final class Reflection {
                 break;
             }
         }
-        if (monthHour != null) laterBouncesIntoSlots(firstPass, n, reflMonth, firstBounceMonth, monthHour, slotMonth, st);
+        if (monthHour != null) laterBouncesIntoSlots(fp, n, reflMonth, firstBounceMonth, monthHour, slotMonth, st);
         return new Outcome(reflMonth, monthHour, totalAnnual, java.util.Arrays.copyOf(bounceWh, used), converged);
     }
 
@@ -176,17 +186,11 @@ final class Reflection {
             final double[] src = cur, dst = next;
             final boolean first = b == 0;
             IntStream.range(0, total).parallel().forEach(r -> {
-                int[] idx = l.idx()[r];
-                float[] wt = l.w()[r];
-                int m0 = r * 12;
-                double g = first ? l.ghiW()[r] : 0;
-                for (int m = 0; m < 12; m++) dst[m0 + m] = 0;
-                for (int i = 0; i < idx.length; i++) {
-                    int base = idx[i] * 12;
-                    double wr = wt[i];
-                    for (int m = 0; m < 12; m++) dst[m0 + m] += wr * src[base + m];
+                monthBounce(r, l, src, dst);
+                if (first) {
+                    double g = l.ghiW()[r];
+                    for (int m = 0; m < 12; m++) dst[r * 12 + m] += g * ghiMonthWh[m];
                 }
-                if (first) for (int m = 0; m < 12; m++) dst[m0 + m] += g * ghiMonthWh[m];
                 finish(r, n, dst, reflMonth, added, totalAnnual);
             });
             double add = 0;
@@ -222,21 +226,21 @@ final class Reflection {
      * reflected again), else to the first pass, else to the hours. An approximation of the table
      * only: monthly and annual sums are exact.
      */
-    private static void laterBouncesIntoSlots(double[] firstPass, int n, double[][] reflMonth, double[] firstBounceMonth,
+    private static void laterBouncesIntoSlots(FirstPass fp, int n, double[][] reflMonth, double[] firstBounceMonth,
                                               float[] monthHour, int[] slotMonth, StepTable st) {
         IntStream.range(0, n).parallel().forEach(p -> {
             double[] later = new double[12], fpMonth = new double[12], hoursMonth = new double[12];
             for (int m = 0; m < 12; m++) later[m] = reflMonth[m][p] - firstBounceMonth[p * 12 + m];
             int base = p * SLOTS;
             for (int k = 0; k < SLOTS; k++) {
-                fpMonth[slotMonth[k]] += firstPass[base + k];
+                fpMonth[slotMonth[k]] += fp.slot(p, k);
                 hoursMonth[slotMonth[k]] += st.hours[k];
             }
             for (int k = 0; k < SLOTS; k++) {
                 int m = slotMonth[k];
                 if (!(later[m] > 0)) continue;
                 double share = firstBounceMonth[p * 12 + m] > 0 ? monthHour[base + k] / firstBounceMonth[p * 12 + m]
-                        : fpMonth[m] > 0 ? firstPass[base + k] / fpMonth[m]
+                        : fpMonth[m] > 0 ? fp.slot(p, k) / fpMonth[m]
                         : hoursMonth[m] > 0 ? st.hours[k] / hoursMonth[m] : 0;
                 monthHour[base + k] += (float) (later[m] * share);
             }

@@ -78,7 +78,7 @@ public final class ShadedIrradiation {
     public static IrradiationResult run(org.solmass.scene.Scene scene, Inputs in, PhaseProgress progress) {
         Receivers rc = in.receivers();
         int n = rc.analysed, total = rc.count;
-        double[] firstPass = new double[total * SLOTS];
+        FirstPass firstPass = new FirstPass(total, in.steps());
         double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
         double[][] beamM = new double[12][n], diffM = new double[12][n];
         double[] unshaded = new double[n], sunshine = new double[n];
@@ -94,7 +94,7 @@ public final class ShadedIrradiation {
         IntStream.range(0, total).parallel().forEach(r -> {
             Worker w = workers.get();
             w.firstPass(r, r < n);
-            System.arraycopy(w.slotTotal, 0, firstPass, r * SLOTS, SLOTS);
+            firstPass.put(r, w.slotTotal);
             refIdx[r] = Arrays.copyOf(w.refIdx, w.refCount);
             refW[r] = Arrays.copyOf(w.refW, w.refCount);
             ghiAlbedo[r] = (float) w.ghiAlbedo;
@@ -143,7 +143,7 @@ public final class ShadedIrradiation {
             if (monthHour != null) {
                 for (int k = 0; k < SLOTS; k++) {
                     double rk = crown == null ? monthHour[base + k] : monthHour[base + k] * crown[MonthHour.month(k) - 1];
-                    double t = firstPass[base + k] + rk; // first pass of p: its beam + sky diffuse
+                    double t = firstPass.slot(p, k) + rk; // first pass of p: its beam + sky diffuse
                     monthHour[base + k] = st.hours[k] > 0 ? (float) (t / st.hours[k]) : 0f;
                 }
             }

@@ -1,0 +1,69 @@
+package org.solmass.irradiation;
+
+import org.junit.jupiter.api.Test;
+import org.solmass.model.Vec3;
+import org.solmass.surface.SurfaceFrame;
+
+import java.util.SplittableRandom;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+/**
+ * The receiver found for a hit point is the one whose centre is nearest (the definition of the
+ * nearest-patch lookup; checked against a brute-force search over all centres).
+ */
+class ReflectorIndexTest {
+
+    /** Brute force: the lowest receiver among those at the least squared distance on surface s. */
+    private static int nearest(double[] lx, double[] ly, int[] surf, int s, double x, double y) {
+        int best = -1;
+        double bestD = Double.POSITIVE_INFINITY;
+        for (int r = 0; r < lx.length; r++) {
+            if (surf[r] != s) continue;
+            double dx = lx[r] - x, dy = ly[r] - y, d = dx * dx + dy * dy;
+            if (d < bestD) {
+                bestD = d;
+                best = r;
+            }
+        }
+        return best;
+    }
+
+    @Test
+    void hitPointsOnRegularPatchGridsFindTheNearestCentre() {
+        // two surfaces: a horizontal roof 20 x 12 m with 2 m patches, a south facade 30 x 9 m with 1.5 m patches
+        SurfaceFrame roof = SurfaceFrame.of(new Vec3(0, 0, 1), new Vec3(5, 7, 10));
+        SurfaceFrame wall = SurfaceFrame.of(new Vec3(0, -1, 0), new Vec3(-3, 0, 0));
+        SurfaceFrame[] frames = {roof, wall};
+        int nRoof = 10 * 6, nWall = 20 * 6, nr = nRoof + nWall;
+        int[] surf = new int[nr];
+        double[] centres = new double[3 * nr], lx = new double[nr], ly = new double[nr];
+        int r = 0;
+        for (int j = 0; j < 6; j++) for (int i = 0; i < 10; i++, r++) put(roof, 0, 1 + 2 * i, 1 + 2 * j, r, surf, centres, lx, ly);
+        for (int j = 0; j < 6; j++) for (int i = 0; i < 20; i++, r++) put(wall, 1, 0.75 + 1.5 * i, 0.75 + 1.5 * j, r, surf, centres, lx, ly);
+        ReflectorIndex idx = new ReflectorIndex(new int[] {0, 1, -1}, frames, surf, centres, 2.0, null);
+        SplittableRandom rnd = new SplittableRandom(7);
+        for (int k = 0; k < 20000; k++) {
+            int s = k % 2;
+            double w = s == 0 ? 20 : 30, h = s == 0 ? 12 : 9;
+            // points on the surface and up to 1 m beyond its edges (slivers a patch grid leaves out)
+            double x = -1 + rnd.nextDouble() * (w + 2), y = -1 + rnd.nextDouble() * (h + 2);
+            if (k % 7 == 0) x = -8 + rnd.nextDouble() * (w + 16); // beyond the listed buckets: the ring search
+            if (k % 50 == 0) x = s == 0 ? 2 * Math.floor(x / 2) : 0.75 * Math.floor(x / 0.75); // on bucket and bisector lines
+            Vec3 p = frames[s].toWorld(x, y);
+            assertEquals(nearest(lx, ly, surf, s, frames[s].localX(p.x(), p.y(), p.z()), frames[s].localY(p.x(), p.y(), p.z())),
+                    idx.onTriangle(s, p.x(), p.y(), p.z()), "point " + x + ", " + y + " on surface " + s);
+        }
+        assertEquals(-1, idx.onTriangle(2, 0, 0, 0), "a triangle without a surface has no receiver");
+    }
+
+    private static void put(SurfaceFrame f, int s, double x, double y, int r, int[] surf, double[] centres, double[] lx, double[] ly) {
+        Vec3 c = f.toWorld(x, y);
+        surf[r] = s;
+        centres[3 * r] = c.x();
+        centres[3 * r + 1] = c.y();
+        centres[3 * r + 2] = c.z();
+        lx[r] = f.localX(c.x(), c.y(), c.z());
+        ly[r] = f.localY(c.x(), c.y(), c.z());
+    }
+}
