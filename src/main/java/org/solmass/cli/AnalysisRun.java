@@ -149,9 +149,43 @@ public final class AnalysisRun {
         }
     }
 
-    private static Outcome compute(Study study, PhaseProgress progress) {
-        Map<String, Double> t = new LinkedHashMap<>();
-        Map<String, Long> counts = new LinkedHashMap<>();
+    /**
+     * An analysis up to the inputs of the irradiation stage, which need no scene: the model read and
+     * split from its trees, the patches, the context patches, the terrain, the per-triangle albedo of
+     * the whole scene, the weather and the pipeline options. The one-machine run and the city tiles
+     * (org.solmass.tiles) both start here.
+     *
+     * @param canopy tree crowns as their own scene, or null
+     * @param albedo albedo of every triangle of the whole scene (the model's, then the terrain's)
+     */
+    public record Prepared(Study study, GeoModel read, MassingModel model, org.solmass.scene.Canopy canopy,
+                           PatchSet patches, List<org.solmass.surface.Patch> contextPatches, SiteTerrain terrain,
+                           float[] albedo, WeatherSeries weather, IrradiationSetup.Options options, List<String> warnings) {
+        /** The whole scene's triangles: the model's, then the terrain's (9 floats each, world metres). */
+        public float[] soup() {
+            float[] m = model.triangleSoup();
+            if (terrain.triangleCount() == 0) return m;
+            float[] t = terrain.soup(), soup = java.util.Arrays.copyOf(m, m.length + t.length);
+            System.arraycopy(t, 0, soup, m.length, t.length);
+            return soup;
+        }
+
+        /** Whether the scene has the infinite ground plane (always with terrain). */
+        public boolean groundPlane() { return terrain.triangleCount() > 0 || !patches.hasGroundFaces(); }
+
+        /** Height of the ground plane: the model's ground level, or with terrain the lowest point of its mesh. */
+        public double groundZ() {
+            return terrain.triangleCount() == 0 ? patches.groundLevelZ() : Math.min(terrain.lowestZ(), patches.groundLevelZ());
+        }
+
+        /** Tree crowns as the irradiation stage takes them, or null. */
+        public CanopyShading canopyShading() {
+            return canopy == null ? null : new CanopyShading(canopy, study.vegetation().monthly(study.site().latitudeDeg()));
+        }
+    }
+
+    /** {@link Prepared} for a study; timings of "load" and "patches" go into {@code t}. */
+    public static Prepared prepare(Study study, PhaseProgress progress, Map<String, Double> t) {
         List<String> warnings = new ArrayList<>();
         long t0 = System.nanoTime();
 
@@ -201,9 +235,7 @@ public final class AnalysisRun {
         }
         t.put("patches", seconds(t1));
 
-        long t2 = System.nanoTime();
         SiteTerrain terrain = siteTerrain(study, patches);
-        Scene scene = scene(model, patches, terrain);
         float[] albedo = study.albedo().perTriangle(model, Surface.groundTriangles(patches.surfaces(), model.triangleCount()));
         if (terrain.triangleCount() > 0) { // terrain triangles follow the model's: ground, with the ground albedo
             int nm = albedo.length;
@@ -216,9 +248,26 @@ public final class AnalysisRun {
                 weather.timeBase() == TimeBase.AVERAGE_DAYS ? IrradiationSetup.SunSampling.EXACT
                         : IrradiationSetup.SunSampling.BINNED,
                 study.sunBins(), RUN_SEED, true);
+        return new Prepared(study, read, model, canopy, patches, contextPatches, terrain, albedo, weather, o, warnings);
+    }
+
+    private static Outcome compute(Study study, PhaseProgress progress) {
+        Map<String, Double> t = new LinkedHashMap<>();
+        Map<String, Long> counts = new LinkedHashMap<>();
+        Prepared pr = prepare(study, progress, t);
+        List<String> warnings = pr.warnings();
+        GeoModel read = pr.read();
+        MassingModel model = pr.model();
+        org.solmass.scene.Canopy canopy = pr.canopy();
+        PatchSet patches = pr.patches();
+        List<org.solmass.surface.Patch> contextPatches = pr.contextPatches();
+        WeatherSeries weather = pr.weather();
+
+        long t2 = System.nanoTime();
+        Scene scene = scene(pr);
         ShadedIrradiation.Inputs in = IrradiationSetup.build(scene, model, patches.surfaces(), patches.patches(),
-                contextPatches, albedo, weather, study.sky(), o);
-        if (canopy != null) in = in.withCanopy(new CanopyShading(canopy, study.vegetation().monthly(study.site().latitudeDeg())));
+                contextPatches, pr.albedo(), weather, study.sky(), pr.options());
+        if (canopy != null) in = in.withCanopy(pr.canopyShading());
         t.put("scene", seconds(t2));
         requireMemory(study, in, patches.patchCount());
 
@@ -242,7 +291,7 @@ public final class AnalysisRun {
         counts.put("steps", (long) weather.size());
         counts.put("sun_directions", (long) r.sunDirections());
         counts.put("rays_per_patch", (long) org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()));
-        if (terrain.triangleCount() > 0) counts.put("terrain_triangles", (long) terrain.triangleCount());
+        if (pr.terrain().triangleCount() > 0) counts.put("terrain_triangles", (long) pr.terrain().triangleCount());
         counts.put("reflection_bounces", (long) r.bounces().used());
         counts.put("reflection_max_bounces", (long) r.bounces().maxBounces());
         return new Outcome(study, model, patches, weather, r, table, warnings, counts, t, metrics, read.reference());
@@ -271,14 +320,8 @@ public final class AnalysisRun {
      * The scene: the model's triangles, then the terrain's (ground); the ground plane (at the model's
      * ground level, or with terrain at the lowest point of the terrain mesh) and the far horizon.
      */
-    static Scene scene(MassingModel model, PatchSet patches, SiteTerrain terrain) {
-        if (terrain.triangleCount() == 0) {
-            return Scene.build(model, !patches.hasGroundFaces(), patches.groundLevelZ()).withHorizon(terrain.horizon());
-        }
-        float[] m = model.triangleSoup(), t = terrain.soup();
-        float[] soup = java.util.Arrays.copyOf(m, m.length + t.length);
-        System.arraycopy(t, 0, soup, m.length, t.length);
-        return Scene.build(soup, true, Math.min(terrain.lowestZ(), patches.groundLevelZ())).withHorizon(terrain.horizon());
+    static Scene scene(Prepared pr) {
+        return Scene.build(pr.soup(), pr.groundPlane(), pr.groundZ()).withHorizon(pr.terrain().horizon());
     }
 
     /**
@@ -319,7 +362,7 @@ public final class AnalysisRun {
     }
 
     /** What the metrics read: the finished stages and the study's metric settings. */
-    static MetricContext metricContext(Study study, Scene scene, PatchSet patches, IrradiationResult r, WeatherSeries weather) {
+    public static MetricContext metricContext(Study study, Scene scene, PatchSet patches, IrradiationResult r, WeatherSeries weather) {
         return new MetricContext(scene, patches, r, weather, study.sky(), study.site(), study.climate().year(),
                 study.albedo().ground(), study.patchM(), study.rays(), RUN_SEED, study.metricSettings());
     }

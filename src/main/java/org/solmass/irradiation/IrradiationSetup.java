@@ -2,12 +2,10 @@ package org.solmass.irradiation;
 
 import org.solmass.climate.WeatherSeries;
 import org.solmass.model.MassingModel;
-import org.solmass.scene.HemisphereSampler;
 import org.solmass.scene.Scene;
 import org.solmass.sky.SkyModel;
 import org.solmass.surface.Patch;
 import org.solmass.surface.Surface;
-import org.solmass.surface.SurfaceFrame;
 
 import java.util.List;
 
@@ -74,68 +72,51 @@ public final class IrradiationSetup {
     public static ShadedIrradiation.Inputs build(Scene scene, MassingModel model, List<Surface> surfaces,
                                                  List<Patch> analysed, List<Patch> context, float[] triangleAlbedo,
                                                  WeatherSeries weather, SkyModel sky, Options o) {
-        int nt = scene.triangleCount(); // the model's triangles, then any terrain's
-        int[] triangleSurface = new int[nt];
-        java.util.Arrays.fill(triangleSurface, -1);
-        boolean[] isGround = Surface.groundTriangles(surfaces, nt);
-        java.util.Arrays.fill(isGround, model.triangleCount(), nt, true); // terrain triangles are ground
-        SurfaceFrame[] frames = new SurfaceFrame[surfaces.size()];
-        for (Surface s : surfaces) {
-            frames[s.id()] = s.frame();
-            for (int t : s.triangles()) triangleSurface[t] = s.id();
-        }
-        double[] probeGrid = null;
-        int probes = 0;
-        double groundZ = scene.groundZ();
-        if (o.shadedGround() && scene.hasGroundPlane()) {
-            probeGrid = probeGrid(model, analysed.size() + context.size());
-            probes = (int) (probeGrid[3] * probeGrid[4]);
-        }
-        int total = analysed.size() + context.size() + probes;
-        Receivers.Builder b = new Receivers.Builder(total, analysed.size());
-        double[] centres = new double[3 * total];
-        double[] origin = new double[3];
-        int r = 0;
-        for (List<Patch> list : List.of(analysed, context)) {
-            for (Patch p : list) {
-                scene.rayOrigin(p, origin);
-                b.add(origin, p.normal().x(), p.normal().y(), p.normal().z(),
-                        HemisphereSampler.patchSeed(p.id(), o.runSeed()), p.surface());
-                centres[3 * r] = p.centroid().x();
-                centres[3 * r + 1] = p.centroid().y();
-                centres[3 * r + 2] = p.centroid().z();
-                r++;
-            }
-        }
-        if (probeGrid != null) {
-            probeGrid[5] = r;
-            int nx = (int) probeGrid[3], ny = (int) probeGrid[4];
-            double eps = scene.epsilon();
-            for (int j = 0; j < ny; j++) {
-                for (int i = 0; i < nx; i++) {
-                    double x = probeGrid[0] + (i + 0.5) * probeGrid[2], y = probeGrid[1] + (j + 0.5) * probeGrid[2];
-                    origin[0] = x;
-                    origin[1] = y;
-                    origin[2] = groundZ + eps;
-                    b.add(origin, 0, 0, 1, HemisphereSampler.patchSeed("ground-" + i + "-" + j, o.runSeed()), -1);
-                    centres[3 * r] = x;
-                    centres[3 * r + 1] = y;
-                    centres[3 * r + 2] = groundZ;
-                    r++;
-                }
-            }
-        }
-        Receivers receivers = b.build();
-        ReflectorIndex index = new ReflectorIndex(triangleSurface, frames, receivers.surface, centres,
-                o.patchSizeM(), probeGrid);
-        SunDirections dirs = o.sunSampling() == SunSampling.EXACT ? SunDirections.exact(weather)
-                : SunDirections.binned(weather, new SkySubdivision(o.sunBins()));
-        StepTable steps = new StepTable(weather, dirs, sky);
-        return new ShadedIrradiation.Inputs(receivers, index, isGround, triangleAlbedo, o.groundAlbedo(),
-                o.shadedGround(), steps, dirs, o.raysPerPatch(), Math.min(o.raysPerPatch(), REFLECTOR_RAYS),
-                o.keepMonthHour(), o.bounceTolerance(), o.maxBounces());
+        ReceiverLayout layout = ReceiverLayout.of(scene.triangleCount(), scene.hasGroundPlane(), scene.groundZ(),
+                scene.epsilon(), model, surfaces, analysed, context, o);
+        return inputs(layout, null, triangleAlbedo, Sun.of(weather, sky, o), o);
     }
 
+    /**
+     * The inputs for a scene made of {@code triangles} of the whole scene (null: all of them, in
+     * order) with the receivers of {@code layout}: hits resolve to the whole model's receivers.
+     *
+     * @param triangleAlbedo albedo of every triangle of the whole scene
+     */
+    public static ShadedIrradiation.Inputs inputs(ReceiverLayout layout, int[] triangles, float[] triangleAlbedo,
+                                                  Sun sun, Options o) {
+        float[] albedo = triangleAlbedo;
+        if (triangles != null) {
+            albedo = new float[triangles.length];
+            for (int i = 0; i < triangles.length; i++) albedo[i] = triangleAlbedo[triangles[i]];
+        }
+        return new ShadedIrradiation.Inputs(layout.receivers, layout.index(triangles, o.patchSizeM()),
+                layout.groundFlags(triangles), albedo, o.groundAlbedo(), o.shadedGround(), sun.steps, sun.directions,
+                o.raysPerPatch(), Math.min(o.raysPerPatch(), REFLECTOR_RAYS), o.keepMonthHour(), o.bounceTolerance(),
+                o.maxBounces());
+    }
+
+    /**
+     * The sun directions (exact or binned, {@link Options#sunSampling()}) and the step table of a
+     * weather series and sky model: computed once per run and shared by every scene of it.
+     */
+    public static final class Sun {
+        final SunDirections directions;
+        final StepTable steps;
+
+        private Sun(SunDirections directions, StepTable steps) {
+            this.directions = directions;
+            this.steps = steps;
+        }
+
+        public static Sun of(WeatherSeries weather, SkyModel sky, Options o) {
+            SunDirections dirs = o.sunSampling() == SunSampling.EXACT ? SunDirections.exact(weather)
+                    : SunDirections.binned(weather, new SkySubdivision(o.sunBins()));
+            return new Sun(dirs, new StepTable(weather, dirs, sky));
+        }
+
+        public SunDirections directions() { return directions; }
+    }
     /**
      * Probe grid over the model's footprint widened by its height on every side (where most of the
      * ground a facade sees lies): {x0, y0, spacing, nx, ny, firstIndex}. Spacing 2 m, widened so that

@@ -147,6 +147,64 @@ final class Reflection {
         return new Outcome(reflMonth, monthHour, totalAnnual, java.util.Arrays.copyOf(bounceWh, used), converged);
     }
 
+    /**
+     * The same Neumann series in month space only (12 values per receiver), for first passes gathered
+     * from the tiles of a city (org.solmass.tiles), where the month-hour table is not an output.
+     * Bounce 1 is {@code W F + g GHI} with F and GHI summed per month: W is the same for every slot,
+     * so this equals the month sums of {@link #solve}'s slot-wise bounce 1, and monthly and annual
+     * results agree with it up to rounding; the stopping rule is the same.
+     *
+     * @param firstPassMonthWh first pass per receiver and month (receiver x 12), Wh/m2
+     * @param ghiMonthWh GHI per month, Wh/m2
+     */
+    static Outcome solveMonths(double[] firstPassMonthWh, Lists l, int analysed, double[] ghiMonthWh, double tolerance,
+                               int maxBounces) {
+        int total = l.idx().length, n = analysed;
+        double[] cur = firstPassMonthWh.clone(), next = new double[total * 12];
+        double[][] reflMonth = new double[12][n];
+        double[] totalAnnual = new double[total], added = new double[total];
+        for (int r = 0; r < total; r++) {
+            double s = 0;
+            for (int m = 0; m < 12; m++) s += firstPassMonthWh[r * 12 + m];
+            totalAnnual[r] = s;
+        }
+        double[] bounceWh = new double[Math.max(1, maxBounces)];
+        double reflected = 0;
+        int used = 0;
+        boolean converged = false;
+        for (int b = 0; b < maxBounces; b++) {
+            final double[] src = cur, dst = next;
+            final boolean first = b == 0;
+            IntStream.range(0, total).parallel().forEach(r -> {
+                int[] idx = l.idx()[r];
+                float[] wt = l.w()[r];
+                int m0 = r * 12;
+                double g = first ? l.ghiW()[r] : 0;
+                for (int m = 0; m < 12; m++) dst[m0 + m] = 0;
+                for (int i = 0; i < idx.length; i++) {
+                    int base = idx[i] * 12;
+                    double wr = wt[i];
+                    for (int m = 0; m < 12; m++) dst[m0 + m] += wr * src[base + m];
+                }
+                if (first) for (int m = 0; m < 12; m++) dst[m0 + m] += g * ghiMonthWh[m];
+                finish(r, n, dst, reflMonth, added, totalAnnual);
+            });
+            double add = 0;
+            for (int r = 0; r < n; r++) add += added[r];
+            reflected += add;
+            bounceWh[b] = add;
+            used = b + 1;
+            double[] t = cur;
+            cur = next;
+            next = t;
+            if (add <= tolerance * reflected) {
+                converged = true;
+                break;
+            }
+        }
+        return new Outcome(reflMonth, null, totalAnnual, java.util.Arrays.copyOf(bounceWh, used), converged);
+    }
+
     private static void finish(int r, int n, double[] dst, double[][] reflMonth, double[] added, double[] totalAnnual) {
         double sum = 0;
         int m0 = r * 12;

@@ -174,7 +174,7 @@ public final class ShadedIrradiation {
     }
 
     /** Per-thread state: samplers, scratch arrays; no allocation per ray or per step. */
-    private static final class Worker {
+    static final class Worker {
         final org.solmass.scene.Scene scene;
         final Inputs in;
         final HemisphereSampler sampler, reflectorSampler;

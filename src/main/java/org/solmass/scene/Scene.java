@@ -55,7 +55,7 @@ public final class Scene {
     final boolean farHorizon;
 
     private Scene(BvhBuilder.Result r, double[] bounds, double[] shift, boolean groundPlane, double groundZ,
-                  int triangleCount) {
+                  int triangleCount, double epsilonM) {
         this.nodes = r.nodes();
         this.tris = r.tris();
         this.triOriginal = r.triOriginal();
@@ -70,7 +70,7 @@ public final class Scene {
         double ex = bounds[3] - bounds[0], ey = bounds[4] - bounds[1], ez = bounds[5] - bounds[2];
         double d = Math.sqrt(ex * ex + ey * ey + ez * ez);
         this.diagonal = Double.isFinite(d) ? d : 0;
-        this.epsilon = Math.max(MIN_EPSILON_M, EPSILON_PER_DIAGONAL * diagonal);
+        this.epsilon = Double.isNaN(epsilonM) ? epsilonOf(diagonal) : epsilonM;
         this.horizon = HorizonProfile.NONE;
         this.farHorizon = false;
     }
@@ -139,8 +139,51 @@ public final class Scene {
      * world coordinates). Triangle indices reported by queries are indices into this soup.
      */
     public static Scene build(float[] soup, boolean infiniteGroundPlane, double groundZ) {
+        return build(soup, infiniteGroundPlane, groundZ, null);
+    }
+
+    /**
+     * The storage origin {@link #build(float[], boolean, double)} picks for a soup (the floor of its
+     * bounding box centre, world metres) followed by the ray-origin offset {@link #epsilon()} of that
+     * scene: {x, y, z, epsilon}. A part of a model built with the whole model's origin
+     * ({@link #build(float[], boolean, double, double[])}) stores its triangles bit for bit as the whole
+     * model's scene does (city tiles, org.solmass.tiles).
+     */
+    public static double[] storageFrame(float[] soup) {
+        double[] b = soupBounds(soup);
+        double[] f = new double[4];
+        if (soup.length > 0) for (int k = 0; k < 3; k++) f[k] = Math.floor((b[k] + b[k + 3]) / 2);
+        else b = new double[6];
+        double ex = b[3] - b[0], ey = b[4] - b[1], ez = b[5] - b[2];
+        double d = Math.sqrt(ex * ex + ey * ey + ez * ez);
+        f[3] = epsilonOf(Double.isFinite(d) ? d : 0);
+        return f;
+    }
+
+    private static double epsilonOf(double diagonal) {
+        return Math.max(MIN_EPSILON_M, EPSILON_PER_DIAGONAL * diagonal);
+    }
+
+    /**
+     * As {@link #build(float[], boolean, double)} with a given storage frame {x, y, z[, epsilon]}
+     * (world metres, whole numbers, as {@link #storageFrame} gives it; null: the soup's own): a part of
+     * a model built with the whole model's frame stores its triangles exactly as the whole model's
+     * scene does, so a ray meets a triangle at the same distance in both, and its rays leave patches
+     * from the same points ({@link #epsilon()} is the frame's fourth value when given).
+     */
+    public static Scene build(float[] soup, boolean infiniteGroundPlane, double groundZ, double[] storageOrigin) {
         if (soup.length % 9 != 0) throw new IllegalArgumentException("triangle soup length not a multiple of 9");
         int n = soup.length / 9;
+        double[] b = soupBounds(soup);
+        double[] shift = storageOrigin == null ? storageFrame(soup) : storageOrigin;
+        if (n == 0) b = new double[6];
+        double eps = storageOrigin != null && storageOrigin.length > 3 ? storageOrigin[3] : Double.NaN;
+        shift = new double[] {shift[0], shift[1], shift[2]};
+        BvhBuilder.Result r = new BvhBuilder(soup, shift).build();
+        return new Scene(r, b, shift, infiniteGroundPlane, groundZ, n, eps);
+    }
+
+    private static double[] soupBounds(float[] soup) {
         double[] b = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY,
                 Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
         for (int i = 0; i < soup.length; i += 3) {
@@ -149,11 +192,7 @@ public final class Scene {
                 b[k + 3] = Math.max(b[k + 3], soup[i + k]);
             }
         }
-        double[] shift = new double[3];
-        if (n > 0) for (int k = 0; k < 3; k++) shift[k] = Math.floor((b[k] + b[k + 3]) / 2);
-        else b = new double[6];
-        BvhBuilder.Result r = new BvhBuilder(soup, shift).build();
-        return new Scene(r, b, shift, infiniteGroundPlane, groundZ, n);
+        return b;
     }
 
     /**

@@ -1,0 +1,174 @@
+package org.solmass.irradiation;
+
+import org.solmass.scene.HemisphereSampler;
+import org.solmass.scene.Scene;
+
+import java.io.Serializable;
+import java.util.Arrays;
+import java.util.stream.IntStream;
+
+/**
+ * The pipeline of {@link ShadedIrradiation#run} cut into three stages that can run apart, for city
+ * tiles (org.solmass.tiles): every receiver keeps its global id of a {@link ReceiverLayout}, so its
+ * ray seed, its reflectors and its result are those of the one-machine run whenever its scene holds
+ * every obstruction it would see.
+ * <ol>
+ * <li>{@link #firstPass}: a subset of receivers against a scene (a tile and its halo): per receiver
+ * the first-pass month sums and its reflector list in global ids ({@link FirstPasses});</li>
+ * <li>{@link #reflect}: the Neumann series of {@link Reflection} over the first passes gathered from
+ * every tile, in month space ({@link Reflection#solveMonths}; the month-hour table is not a city
+ * output);</li>
+ * <li>{@link #finish}: the analysed patches of one tile with the reflected sums, as the
+ * {@link IrradiationResult} {@link ShadedIrradiation#run} would give for them.</li>
+ * </ol>
+ * The same formulas as {@link ShadedIrradiation} (its javadoc gives their sources); only the
+ * reflected light is summed month by month rather than slot by slot, which changes results by
+ * rounding alone.
+ */
+public final class StagedPasses {
+    private StagedPasses() {}
+
+    /**
+     * Stage 1: the first pass of {@code receivers} (global ids, ascending) against {@code scene}, with
+     * inputs from {@link IrradiationSetup#inputs} for that scene. Parallel over receivers; the result
+     * does not depend on the thread count.
+     */
+    public static FirstPasses firstPass(Scene scene, ShadedIrradiation.Inputs in, int[] receivers) {
+        int n = in.receivers().analysed;
+        FirstPasses out = new FirstPasses(receivers.length, in.canopy() != null);
+        ThreadLocal<ShadedIrradiation.Worker> workers = ThreadLocal.withInitial(() -> new ShadedIrradiation.Worker(scene, in));
+        IntStream.range(0, receivers.length).parallel().forEach(i -> {
+            int r = receivers[i];
+            ShadedIrradiation.Worker w = workers.get();
+            w.firstPass(r, r < n);
+            out.ids[i] = r;
+            for (int k = 0; k < ShadedIrradiation.SLOTS; k++) out.monthWh[12 * i + org.solmass.climate.MonthHour.month(k) - 1] += w.slotTotal[k];
+            out.refIdx[i] = Arrays.copyOf(w.refIdx, w.refCount);
+            out.refW[i] = Arrays.copyOf(w.refW, w.refCount);
+            out.ghiW[i] = (float) w.ghiAlbedo;
+            if (r < n) {
+                out.svf[i] = w.vf.sky();
+                out.gvf[i] = w.vf.ground();
+                out.obs[i] = w.vf.obstruction();
+                out.svfSe[i] = w.vf.skyStdError();
+                out.horizonVis[i] = w.horizonVis;
+                System.arraycopy(w.beamMonth, 0, out.beamMonthWh, 12 * i, 12);
+                System.arraycopy(w.diffMonth, 0, out.diffuseMonthWh, 12 * i, 12);
+                out.unshadedWh[i] = w.unshadedTotal;
+                out.sunshineH[i] = w.sunshineHours;
+                out.refW2[i] = Arrays.copyOf(w.refW2, w.refCount);
+                out.ghiW2[i] = (float) w.ghiAlbedo2;
+                if (out.canopyReflection != null) {
+                    float[] f = new float[12];
+                    w.canopyReflection(r, f);
+                    System.arraycopy(f, 0, out.canopyReflection, 12 * i, 12);
+                }
+            } else {
+                out.refW2[i] = new float[0];
+            }
+        });
+        return out;
+    }
+
+    /**
+     * What the reflection stage hands to the finish stage ({@link Serializable}).
+     *
+     * @param reflMonthWh reflected irradiation per analysed patch and month (patch x 12), Wh/m2
+     * @param totalAnnualWh first pass + reflected, annual, of every receiver, Wh/m2 (for the standard error)
+     * @param bounceWh energy added by each bounce, summed over the analysed patches, Wh/m2
+     * @param converged whether the last bounce met the tolerance
+     * @param tolerance the stopping fraction used
+     * @param maxBounces the largest number of bounces allowed
+     */
+    public record Reflected(double[] reflMonthWh, double[] totalAnnualWh, double[] bounceWh, boolean converged,
+                            double tolerance, int maxBounces) implements Serializable {
+        public int bounces() { return bounceWh.length; }
+    }
+
+    /**
+     * Stage 2: reflection between all receivers from their gathered first passes ({@code all} holds
+     * every receiver of the layout exactly once, {@link FirstPasses#concat}).
+     *
+     * @param analysed number of analysed patches of the layout (ids 0 .. analysed - 1)
+     */
+    public static Reflected reflect(FirstPasses all, int analysed, IrradiationSetup.Sun sun, double tolerance, int maxBounces) {
+        int total = all.size();
+        for (int i = 0; i < total; i++)
+            if (all.ids[i] != i) throw new IllegalArgumentException("first passes miss receiver " + i + " (every receiver once, in id order)");
+        Reflection.Lists lists = new Reflection.Lists(all.refIdx, all.refW, all.refW2, all.ghiW, all.ghiW2, 0);
+        double[] ghiMonth = new double[12];
+        StepTable st = sun.steps;
+        for (int k = 0; k < ShadedIrradiation.SLOTS; k++) ghiMonth[org.solmass.climate.MonthHour.month(k) - 1] += st.ghiWh[k];
+        Reflection.Outcome ro = Reflection.solveMonths(all.monthWh, lists, analysed, ghiMonth, tolerance, maxBounces);
+        double[] refl = new double[analysed * 12];
+        for (int m = 0; m < 12; m++) for (int p = 0; p < analysed; p++) refl[12 * p + m] = ro.reflMonthWh()[m][p];
+        return new Reflected(refl, ro.totalAnnualWh(), ro.bounceWh(), ro.converged(), tolerance, maxBounces);
+    }
+
+    /**
+     * Stage 3: the results of the analysed patches in {@code part} (entries that are not analysed
+     * patches are skipped), in its order, as {@link ShadedIrradiation#run} gives them (no month-hour
+     * table).
+     *
+     * @param raysPerPatch hemisphere rays of an analysed patch (for the standard error)
+     */
+    public static IrradiationResult finish(FirstPasses part, Reflected refl, IrradiationSetup.Sun sun, int raysPerPatch) {
+        int analysedTotal = refl.reflMonthWh().length / 12;
+        int[] rows = IntStream.range(0, part.size()).filter(i -> part.ids[i] < analysedTotal).toArray();
+        int n = rows.length;
+        StepTable st = sun.steps;
+        double background = 0, ghi = 0;
+        for (int k = 0; k < ShadedIrradiation.SLOTS; k++) {
+            background += st.backgroundWh[k];
+            ghi += st.ghiWh[k];
+        }
+        int[][] idx = new int[n][];
+        float[][] w = new float[n][], w2 = new float[n][];
+        float[] g = new float[n], g2 = new float[n];
+        for (int p = 0; p < n; p++) {
+            int i = rows[p];
+            idx[p] = part.refIdx[i];
+            w[p] = part.refW[i];
+            w2[p] = part.refW2[i];
+            g[p] = part.ghiW[i];
+            g2[p] = part.ghiW2[i];
+        }
+        Reflection.Lists lists = new Reflection.Lists(idx, w, w2, g, g2, HemisphereSampler.roundedRayCount(raysPerPatch));
+        double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
+        double[] annual = new double[n], beam = new double[n], diffuse = new double[n], reflected = new double[n];
+        double[] unshaded = new double[n], sunshine = new double[n], annualSe = new double[n];
+        double[][] monthly = new double[12][n];
+        for (int p = 0; p < n; p++) {
+            int i = rows[p], id = part.ids[i];
+            svf[p] = part.svf[i];
+            gvf[p] = part.gvf[i];
+            obs[p] = part.obs[i];
+            se[p] = part.svfSe[i];
+            hv[p] = part.horizonVis[i];
+            double b = 0, dfs = 0, ref = 0;
+            for (int m = 0; m < 12; m++) {
+                double rm = refl.reflMonthWh()[12 * id + m];
+                if (part.canopyReflection != null) rm *= part.canopyReflection[12 * i + m];
+                double bm = part.beamMonthWh[12 * i + m], dm = part.diffuseMonthWh[12 * i + m];
+                monthly[m][p] = (bm + dm + rm) / 1000;
+                b += bm;
+                dfs += dm;
+                ref += rm;
+            }
+            beam[p] = b / 1000;
+            diffuse[p] = dfs / 1000;
+            reflected[p] = ref / 1000;
+            double tot = 0;
+            for (int m = 0; m < 12; m++) tot += monthly[m][p];
+            annual[p] = tot;
+            annualSe[p] = Reflection.stdErrorWh(p, lists, svf[p], background, ghi, refl.totalAnnualWh()) / 1000;
+            unshaded[p] = part.unshadedWh[i] / 1000;
+            sunshine[p] = part.sunshineH[i];
+        }
+        double[] bounceKwh = new double[refl.bounces()];
+        for (int b = 0; b < bounceKwh.length; b++) bounceKwh[b] = refl.bounceWh()[b] / 1000;
+        return new IrradiationResult(svf, gvf, obs, se, hv, annual, beam, diffuse, reflected, unshaded, monthly, null,
+                sunshine, st.siteSunshineHours, sun.directions.count(), annualSe,
+                new IrradiationResult.Bounces(bounceKwh, refl.converged(), refl.tolerance(), refl.maxBounces()));
+    }
+}

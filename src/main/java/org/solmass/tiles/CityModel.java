@@ -1,0 +1,202 @@
+package org.solmass.tiles;
+
+import org.solmass.cli.AnalysisRun;
+import org.solmass.climate.TimeBase;
+import org.solmass.irradiation.FirstPasses;
+import org.solmass.irradiation.IrradiationColumns;
+import org.solmass.irradiation.IrradiationResult;
+import org.solmass.irradiation.IrradiationSetup;
+import org.solmass.irradiation.PhaseProgress;
+import org.solmass.irradiation.ReceiverLayout;
+import org.solmass.irradiation.ShadedIrradiation;
+import org.solmass.irradiation.StagedPasses;
+import org.solmass.metrics.Metrics;
+import org.solmass.model.MassingModel;
+import org.solmass.scene.HorizonProfile;
+import org.solmass.scene.Scene;
+import org.solmass.study.Study;
+import org.solmass.study.StudyReader;
+import org.solmass.surface.Patch;
+import org.solmass.surface.PatchSet;
+import org.solmass.table.ResultTable;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * A study prepared for a tiled (city-scale) run, and the three stages of such a run on its tiles.
+ * Not serializable: a task rebuilds it from the study file ({@link #load}) and keeps it for all the
+ * tiles it runs; what travels between stages is serializable ({@link CityPlan}, {@link Tile},
+ * {@link FirstPasses}, {@link StagedPasses.Reflected}).
+ *
+ * <p>A run, as {@link LocalCityRunner} does it on one machine:
+ * <pre>
+ *   CityModel city = CityModel.load(studyFile);
+ *   CityPlan plan = city.plan(CityOptions.defaults());
+ *   List&lt;FirstPasses&gt; firsts = plan.tiles().stream().map(city::firstPass).toList();   // stage 1, per tile
+ *   StagedPasses.Reflected refl = city.reflect(firsts);                                 // exchange + bounces
+ *   TileRows rows = city.finish(tile, firstOfTile, refl);                                // stage 3, per tile
+ * </pre>
+ * Every receiver has the id and ray seed of the one-machine run ({@link ReceiverLayout}), and each
+ * tile's scene is stored in the whole model's frame ({@link Scene#build(float[], boolean, double, double[])}),
+ * so where a tile's halo holds every block its receivers see, its rows equal those of
+ * {@code solmass analyse} up to rounding (TiledRunMatchesOneMachineTest).
+ */
+public final class CityModel {
+    private final Study study;
+    private final AnalysisRun.Prepared prepared;
+    private final ReceiverLayout layout;
+    private final IrradiationSetup.Sun sun;
+    private final float[] soup;
+    private final double[] frame;
+    /** Per block: min x, min y, max x, max y, max z (plan bounds and top), NaN for a block without triangles. */
+    private final double[][] blockBounds;
+    private final Map<Double, HeightRaster> rasters = new HashMap<>();
+
+    private CityModel(Study study, AnalysisRun.Prepared prepared) {
+        this.study = study;
+        this.prepared = prepared;
+        this.soup = prepared.soup();
+        this.frame = Scene.storageFrame(soup);
+        this.layout = ReceiverLayout.of(soup.length / 9, prepared.groundPlane(), prepared.groundZ(), frame[3],
+                prepared.model(), prepared.patches().surfaces(), prepared.patches().patches(), prepared.contextPatches(),
+                prepared.options());
+        this.sun = IrradiationSetup.Sun.of(prepared.weather(), study.sky(), prepared.options());
+        this.blockBounds = blockBounds(prepared.model());
+    }
+
+    /** The study file read and prepared (model, patches, weather) as {@code solmass analyse} does. */
+    public static CityModel load(Path studyFile) {
+        return of(StudyReader.read(studyFile));
+    }
+
+    /** A study prepared as {@code solmass analyse} does. */
+    public static CityModel of(Study study) {
+        return new CityModel(study, AnalysisRun.prepare(study, PhaseProgress.NONE, new java.util.LinkedHashMap<>()));
+    }
+
+    public Study study() { return study; }
+
+    public AnalysisRun.Prepared prepared() { return prepared; }
+
+    public ReceiverLayout layout() { return layout; }
+
+    /** The sun directions and step table, computed once for every tile. */
+    public IrradiationSetup.Sun sun() { return sun; }
+
+    /** The coarse height raster of the whole model at this cell size (built once, then kept). */
+    public synchronized HeightRaster raster(double cellM) {
+        return rasters.computeIfAbsent(cellM, c -> HeightRaster.of(prepared.model(), c));
+    }
+
+    /** The tiles, halo and far horizons for these options (see {@link CityPlan} for the rules). */
+    public CityPlan plan(CityOptions o) {
+        return Tiling.plan(this, o);
+    }
+
+    double[][] blockBounds() { return blockBounds; }
+
+    /** The scene of a tile: its blocks and the halo's (and any terrain), in the whole model's frame, with its far horizon. */
+    public Scene tileScene(Tile t) {
+        int[] tris = sceneTriangles(t);
+        float[] s = new float[9 * tris.length];
+        for (int i = 0; i < tris.length; i++) System.arraycopy(soup, 9 * tris[i], s, 9 * i, 9);
+        HorizonProfile far = t.horizonDeg() == null ? HorizonProfile.NONE : new HorizonProfile(t.horizonDeg());
+        return Scene.build(s, prepared.groundPlane(), prepared.groundZ(), frame)
+                .withHorizon(FarHorizon.max(prepared.terrain().horizon(), far));
+    }
+
+    /** Triangles of the whole scene in the tile's scene, ascending: its blocks', then every terrain triangle. */
+    public int[] sceneTriangles(Tile t) {
+        MassingModel m = prepared.model();
+        boolean[] in = new boolean[m.blockNames().size()];
+        for (int b : t.sceneBlocks()) in[b] = true;
+        int[] tb = m.triangleBlock();
+        int n = 0, total = soup.length / 9;
+        int[] out = new int[total];
+        for (int i = 0; i < total; i++) if (i >= tb.length || in[tb[i]]) out[n++] = i;
+        return Arrays.copyOf(out, n);
+    }
+
+    /** Stage 1: the first pass of the tile's receivers against its scene. */
+    public FirstPasses firstPass(Tile t) {
+        Scene scene = tileScene(t);
+        return StagedPasses.firstPass(scene, inputs(t), t.receivers());
+    }
+
+    private ShadedIrradiation.Inputs inputs(Tile t) {
+        ShadedIrradiation.Inputs in = IrradiationSetup.inputs(layout, sceneTriangles(t), prepared.albedo(), sun, prepared.options());
+        return prepared.canopy() == null ? in : in.withCanopy(prepared.canopyShading());
+    }
+
+    /** Exchange and bounces: the reflection between all receivers from every tile's first pass. */
+    public StagedPasses.Reflected reflect(List<FirstPasses> everyTile) {
+        IrradiationSetup.Options o = prepared.options();
+        return StagedPasses.reflect(FirstPasses.concat(everyTile), layout.analysed(), sun, o.bounceTolerance(), o.maxBounces());
+    }
+
+    /**
+     * The rows of one tile's analysed patches.
+     *
+     * @param table the columns of patches.csv for the tile's patches (re-indexed 0.. in the tile; ids global)
+     * @param patchIndex the whole model's index of each row's patch
+     * @param irradiation the irradiation stage's result for those rows
+     */
+    public record TileRows(Tile tile, ResultTable table, int[] patchIndex, IrradiationResult irradiation,
+                           Metrics.Outcome metrics) {}
+
+    /**
+     * Stage 3: the tile's rows with the same columns as patches.csv (irradiation and metrics). The
+     * metrics run on the tile's patches and scene; PV zones are numbered within the tile
+     * ({@link LocalCityRunner#merge} numbers them as the whole model does).
+     */
+    public TileRows finish(Tile t, FirstPasses ofTile, StagedPasses.Reflected refl) {
+        IrradiationResult r = StagedPasses.finish(ofTile, refl, sun, study.rays());
+        PatchSet all = prepared.patches();
+        int n = t.analysedCount(layout.analysed());
+        int[] index = new int[n];
+        List<Patch> patches = new ArrayList<>(n);
+        int k = 0;
+        for (int id : t.receivers()) {
+            if (id >= layout.analysed()) continue;
+            Patch p = all.patches().get(id);
+            index[k] = id;
+            patches.add(new Patch(k++, p.id(), p.block(), p.blockName(), p.surface(), p.kind(), p.centroid(), p.normal(),
+                    p.areaM2(), p.tiltDeg(), p.azimuthDeg(), p.outline()));
+        }
+        PatchSet tilePatches = new PatchSet(all.model(), all.options(), all.surfaces(), patches, all.analysedBlocks(),
+                all.hasGroundFaces(), all.groundLevelZ());
+        ResultTable table = new ResultTable(patches);
+        IrradiationColumns.addTo(table, r, prepared.weather().timeBase() == TimeBase.HOURLY_YEAR);
+        Metrics.Outcome metrics = Metrics.run(AnalysisRun.metricContext(study, tileScene(t), tilePatches, r, prepared.weather()), table);
+        return new TileRows(t, table, index, r, metrics);
+    }
+
+    private static double[][] blockBounds(MassingModel m) {
+        int nb = m.blockNames().size();
+        double[][] b = new double[nb][];
+        double[] v = m.vertices();
+        int[] tr = m.triangles(), tb = m.triangleBlock();
+        for (int t = 0; t < m.triangleCount(); t++) {
+            double[] bb = b[tb[t]];
+            if (bb == null) {
+                bb = new double[] {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY,
+                        Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
+                b[tb[t]] = bb;
+            }
+            for (int k = 0; k < 3; k++) {
+                int o = 3 * tr[3 * t + k];
+                bb[0] = Math.min(bb[0], v[o]);
+                bb[1] = Math.min(bb[1], v[o + 1]);
+                bb[2] = Math.max(bb[2], v[o]);
+                bb[3] = Math.max(bb[3], v[o + 1]);
+                bb[4] = Math.max(bb[4], v[o + 2]);
+            }
+        }
+        return b;
+    }
+}
