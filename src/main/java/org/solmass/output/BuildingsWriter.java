@@ -36,8 +36,10 @@ public final class BuildingsWriter {
      * @param roofAreaM2 area of the roof patches, m2
      * @param facadeAreaM2 area of the facade patches, m2
      * @param means area-weighted mean of each result column (NaN where no patch has a value)
+     * @param valueAreaM2 per result column, the area of the patches with a value (the weight of the mean), m2
      */
-    public record Building(String block, long patches, double areaM2, double roofAreaM2, double facadeAreaM2, double[] means) {}
+    public record Building(String block, long patches, double areaM2, double roofAreaM2, double facadeAreaM2, double[] means,
+                           double[] valueAreaM2) {}
 
     private BuildingsWriter() {}
 

@@ -41,13 +41,14 @@ public final class BuildingSummaries {
                 aggs.toArray(new org.apache.spark.sql.Column[0])).orderBy("block");
         List<BuildingsWriter.Building> out = new ArrayList<>();
         for (Row r : g.collectAsList()) {
-            double[] mean = new double[results.size()];
+            double[] mean = new double[results.size()], area = new double[results.size()];
             for (int c = 0; c < mean.length; c++) {
                 Object va = r.getAs("va_" + c), ar = r.getAs("a_" + c);
-                mean[c] = va == null || ar == null || ((Double) ar) <= 0 ? Double.NaN : (Double) va / (Double) ar;
+                area[c] = ar == null ? 0 : (Double) ar;
+                mean[c] = va == null || area[c] <= 0 ? Double.NaN : (Double) va / area[c];
             }
             out.add(new BuildingsWriter.Building(r.getAs("block"), r.<Long>getAs("patches"), r.<Double>getAs("area_m2"),
-                    r.<Double>getAs("roof_area_m2"), r.<Double>getAs("facade_area_m2"), mean));
+                    r.<Double>getAs("roof_area_m2"), r.<Double>getAs("facade_area_m2"), mean, area));
         }
         return out;
     }

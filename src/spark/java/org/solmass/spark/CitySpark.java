@@ -10,8 +10,8 @@ import java.nio.file.Path;
 
 /**
  * The Spark session of a city run. In local mode ({@code local[*]}, {@code local[2]}, {@code local[2,2]}
- * with task retries) the driver listens on 127.0.0.1 only, the web UI is off, Spark's scratch space and
- * SQL warehouse lie in a work folder the caller gives (removed by the caller), and the log shows
+ * with task retries) the driver listens on 127.0.0.1 only, the web UI is off, Spark's scratch space is
+ * java.io.tmpdir's, its SQL warehouse lies in a work folder the caller gives (removed by the caller), and the log shows
  * warnings and errors only ({@code solmass-spark-log4j2.properties}). Under {@code spark-submit} the
  * master and the cluster's settings come from there and are not overridden.
  */
@@ -25,7 +25,7 @@ public final class CitySpark {
      * A session for a run.
      *
      * @param master a Spark master URL, or null: the one spark-submit gave, else {@code local[*]}
-     * @param work a folder for Spark's scratch files and warehouse (created), used in local mode
+     * @param work a folder for Spark's SQL warehouse (created), used in local mode
      * @param partitions shuffle partitions (a few per core: the exchanges are small)
      */
     public static SparkSession session(String master, Path work, int partitions) {
@@ -46,7 +46,6 @@ public final class CitySpark {
             }
             b.config("spark.driver.bindAddress", "127.0.0.1")
                     .config("spark.driver.host", "127.0.0.1")
-                    .config("spark.local.dir", work.resolve("local").toString())
                     .config("spark.sql.warehouse.dir", work.resolve("warehouse").toUri().toString());
         }
         return b.getOrCreate();

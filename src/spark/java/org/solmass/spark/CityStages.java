@@ -162,9 +162,13 @@ final class CityStages {
         }
     }
 
+    /** How often the test hook threw in this JVM (local mode: the tests read it). */
+    static final java.util.concurrent.atomic.AtomicInteger HOOK_FIRED = new java.util.concurrent.atomic.AtomicInteger();
+
     static void failOnce(Settings s, String stage, int tile) {
         TaskContext tc = TaskContext.get();
         if (s.failOnceTile() == tile && s.failOnceStage().equals(stage) && tc != null && tc.attemptNumber() == 0) {
+            HOOK_FIRED.incrementAndGet();
             throw new IllegalStateException("test hook: tile " + tile + " fails its first attempt at " + stage);
         }
     }
