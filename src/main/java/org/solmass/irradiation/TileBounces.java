@@ -6,7 +6,7 @@ import java.util.function.IntFunction;
 /**
  * The reflection stage of a city run cut at tile boundaries, for a runner that keeps each tile's
  * first passes where they were computed and exchanges only the values a tile's reflector lists name
- * (org.solmass.spark). The same Neumann series as {@link Reflection#solveMonths} (its javadoc gives
+ * (the Spark runner, src/spark/java). The same Neumann series as {@link Reflection#solveMonths} (its javadoc gives
  * the source), term by term in month space:
  * <pre>  D_1 = W F + g GHI,   D_(k+1) = W D_k</pre>
  * with each receiver's row of W its reflector list in list order. One call of {@link #bounce} gives

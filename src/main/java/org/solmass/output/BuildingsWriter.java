@@ -19,7 +19,8 @@ import java.util.Map;
  * model, buildings.geojson (one Polygon feature per block: the convex hull in plan of the block's
  * vertices at its lowest height, exact for convex footprints and larger for others, with the same
  * values as properties). Columns: {@code block}, {@code patches}, {@code area_m2}, {@code roof_area_m2},
- * {@code facade_area_m2}, then each per-patch result column under its own name as the building's
+ * {@code facade_area_m2}, then each per-patch result column the caller gives (a city run: all but
+ * categories such as the PV zone number) under its own name as the building's
  * area-weighted mean (same unit, same decimals, {@link Column}). Layout: docs/city.md.
  */
 public final class BuildingsWriter {

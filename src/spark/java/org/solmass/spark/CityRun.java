@@ -60,9 +60,12 @@ final class CityRun {
         } finally {
             CityStages.forget(s.studyFile());
         }
+        StageProgress.label(org.apache.spark.api.java.JavaSparkContext.fromSparkContext(spark.sparkContext()), "buildings");
         Dataset<Row> rows = spark.read().parquet(parquet.toString());
-        List<BuildingsWriter.Building> buildings = BuildingSummaries.of(rows, o.columns());
-        ObjectNode totals = totals(buildings, o.columns());
+        // area-weighted means of every column but categories (a PV zone number has no mean)
+        List<Column> summarised = o.columns().stream().filter(c -> c.kind() != org.solmass.table.ColumnKind.CATEGORICAL).toList();
+        List<BuildingsWriter.Building> buildings = BuildingSummaries.of(rows, summarised);
+        ObjectNode totals = totals(buildings, summarised);
         ObjectNode index = index(parquet);
 
         Path target = dir.resolve(PARQUET), old = dir.resolve(OLD);
@@ -90,10 +93,10 @@ final class CityRun {
         List<Path> written;
         try (Publication pub = new Publication(claim)) {
             pub.write(PARQUET_INDEX, p -> AtomicFiles.writeString(p, StudyWriter.pretty(index)));
-            pub.write(BuildingsWriter.CSV, p -> BuildingsWriter.writeCsv(p, buildings, o.columns()));
+            pub.write(BuildingsWriter.CSV, p -> BuildingsWriter.writeCsv(p, buildings, summarised));
             if (geo != null) {
                 Map<String, double[]> footprints = BuildingsWriter.footprints(city.prepared().model());
-                pub.write(BuildingsWriter.GEOJSON, p -> BuildingsWriter.writeGeoJson(p, buildings, o.columns(), footprints, geo, cautions));
+                pub.write(BuildingsWriter.GEOJSON, p -> BuildingsWriter.writeGeoJson(p, buildings, summarised, footprints, geo, cautions));
             }
             ObjectNode summary = summary(spark, plan, o, totals, cautions, timings);
             pub.write(SUMMARY, p -> AtomicFiles.writeString(p, StudyWriter.pretty(summary)));
@@ -136,7 +139,8 @@ final class CityRun {
         p.put("first_pass_bytes_max", max);
         p.put("first_pass_bytes_mean", o.firstPassBytes().length == 0 ? 0 : sum / o.firstPassBytes().length);
         ObjectNode r = n.putObject("reflection");
-        ArrayNode b = r.putArray("bounces_kwh_m2");
+        r.put("note", "energy each bounce added, summed over the analysed patches (as the one-machine run stops on it)");
+        ArrayNode b = r.putArray("bounce_sums_kwh_m2");
         for (double w : o.bounceWh()) b.add(w / 1000);
         r.put("converged", o.converged());
         n.set("totals", totals);
@@ -155,9 +159,9 @@ final class CityRun {
             patches += b.patches();
         }
         n.put("patches", patches);
-        n.put("area_m2", Numbers.format(area, 2));
-        n.put("roof_area_m2", Numbers.format(roof, 2));
-        n.put("facade_area_m2", Numbers.format(facade, 2));
+        n.put("area_m2", Double.parseDouble(Numbers.format(area, 2)));
+        n.put("roof_area_m2", Double.parseDouble(Numbers.format(roof, 2)));
+        n.put("facade_area_m2", Double.parseDouble(Numbers.format(facade, 2)));
         ObjectNode means = n.putObject("area_weighted_means");
         for (int c = 0; c < columns.size(); c++) {
             double va = 0, a = 0;

@@ -1,9 +1,10 @@
 package org.solmass.spark;
 
 import org.apache.spark.scheduler.SparkListener;
+import org.apache.spark.scheduler.SparkListenerJobStart;
 import org.apache.spark.scheduler.SparkListenerStageCompleted;
-import org.apache.spark.scheduler.SparkListenerStageSubmitted;
 import org.apache.spark.scheduler.SparkListenerTaskEnd;
+import org.apache.spark.scheduler.StageInfo;
 
 import java.io.PrintStream;
 import java.util.Locale;
@@ -11,9 +12,10 @@ import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
 /**
- * Progress of a city run per stage on stderr: {@code city: first pass: 3/8 tiles}. A Spark stage is
- * counted when its job carries a description set by {@link #label} (the runner names each of its
- * jobs); tasks are counted as they succeed (a retried task counts once, when it succeeds). Lines are
+ * Progress of a city run per stage on stderr: {@code city: first pass: 3/8 tiles}. The last stage of
+ * each job whose description was set by {@link #label} is counted (the runner names each of its jobs;
+ * their last stage runs one task per tile; the shuffles before it are not shown); tasks are counted
+ * as they succeed (a retried task counts once, when it succeeds). Lines are
  * printed at most every {@code everyMs} milliseconds per stage, and always at a stage's end.
  */
 public final class StageProgress extends SparkListener {
@@ -44,11 +46,15 @@ public final class StageProgress extends SparkListener {
     }
 
     @Override
-    public void onStageSubmitted(SparkListenerStageSubmitted e) {
+    public void onJobStart(SparkListenerJobStart e) {
         java.util.Properties p = e.properties();
         String label = p == null ? null : p.getProperty("spark.job.description");
         if (label == null) return;
-        stages.put(e.stageInfo().stageId(), new Counter(label, e.stageInfo().numTasks()));
+        StageInfo last = null;
+        for (StageInfo si : scala.jdk.javaapi.CollectionConverters.asJava(e.stageInfos())) {
+            if (last == null || si.stageId() > last.stageId()) last = si;
+        }
+        if (last != null) stages.put(last.stageId(), new Counter(label, last.numTasks()));
     }
 
     @Override
