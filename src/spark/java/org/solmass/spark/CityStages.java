@@ -36,9 +36,10 @@ import java.util.stream.IntStream;
  * <ol>
  * <li>first pass, one task per tile ({@link CityModel#firstPass}); each tile's {@link FirstPasses}
  * stay where they were computed (persisted, partitioned by tile);</li>
- * <li>exchange and bounces, month space: per bounce, each receiver's last term goes to the tiles
- * whose reflector lists name it (a join keyed by receiver id, then grouped by tile: a tile receives
- * each value it needs once, nothing else), and each tile computes its receivers' next term
+ * <li>exchange and bounces, month space: once, the (receiver, tile that needs it) pairs of the
+ * reflector lists are joined by receiver id with the tile that owns each receiver; then per bounce
+ * each tile sends its receivers' last terms to the tiles that need them, in one shuffle grouped by
+ * tile (a tile receives each value it needs once, nothing else), and each tile computes its receivers' next term
  * ({@link TileBounces}); the driver adds the tiles' energies in tile order for the stopping rule;
  * then, once, the receivers' annual totals for the standard error;</li>
  * <li>finish, one task per tile ({@link CityModel#finish}): the rows of patches.csv, written as
@@ -202,12 +203,22 @@ final class CityStages {
         // 2. exchange and bounces
         long t1 = System.nanoTime();
         StageProgress.label(sc, "exchange");
+        // once: which receiver each tile needs, keyed by receiver id, joined with the tile that owns it,
+        // then grouped by owner: what each tile sends to which tiles at every bounce
         JavaPairRDD<Integer, Integer> needs = firsts.flatMapToPair(e -> {
             List<Tuple2<Integer, Integer>> l = new ArrayList<>();
             for (int j : TileBounces.needed(e._2())) l.add(new Tuple2<>(j, e._1()));
             return l.iterator();
-        }).partitionBy(hp).persist(StorageLevel.MEMORY_AND_DISK());
-        cached.add(needs);
+        }).partitionBy(hp);
+        JavaPairRDD<Integer, Integer> owners = firsts.flatMapToPair(e -> {
+            List<Tuple2<Integer, Integer>> l = new ArrayList<>();
+            for (int id : e._2().ids()) l.add(new Tuple2<>(id, e._1()));
+            return l.iterator();
+        }).partitionBy(hp);
+        JavaPairRDD<Integer, Sends> sends = needs.join(owners, hp)
+                .mapToPair(e -> new Tuple2<>(e._2()._2(), new int[] {e._1(), e._2()._1()}))
+                .groupByKey(tp).mapValues(Sends::of).persist(StorageLevel.MEMORY_AND_DISK());
+        cached.add(sends);
         JavaPairRDD<Integer, TileState> state = firsts.mapToPair(e -> new Tuple2<>(e._1(), TileState.initial(e._1(), e._2())))
                 .partitionBy(tp).persist(StorageLevel.MEMORY_AND_DISK());
         double tolerance = city.prepared().options().bounceTolerance();
@@ -219,12 +230,7 @@ final class CityStages {
         for (int b = 0; b < maxBounces; b++) {
             StageProgress.label(sc, "bounce " + (b + 1));
             boolean first = b == 0;
-            JavaPairRDD<Integer, Iterable<Tuple2<Integer, double[]>>> got = exchange(state.flatMapToPair(e -> {
-                TileState st = e._2();
-                List<Tuple2<Integer, double[]>> l = new ArrayList<>(st.ids.length);
-                for (int i = 0; i < st.ids.length; i++) l.add(new Tuple2<>(st.ids[i], Arrays.copyOfRange(st.term, 12 * i, 12 * i + 12)));
-                return l.iterator();
-            }), needs, hp, tp);
+            JavaPairRDD<Integer, Iterable<Tuple2<Integer, double[]>>> got = exchange(state, sends, tp, false);
             JavaPairRDD<Integer, TileState> next = firsts.join(state).leftOuterJoin(got).mapValues(x -> {
                 TileState st = x._1()._2();
                 if (first) failOnce(s, "bounce", st.tile);
@@ -246,12 +252,7 @@ final class CityStages {
         }
         cached.add(state);
         StageProgress.label(sc, "exchange of annual totals");
-        JavaPairRDD<Integer, Iterable<Tuple2<Integer, double[]>>> totals = exchange(state.flatMapToPair(e -> {
-            TileState st = e._2();
-            List<Tuple2<Integer, double[]>> l = new ArrayList<>(st.ids.length);
-            for (int i = 0; i < st.ids.length; i++) l.add(new Tuple2<>(st.ids[i], new double[] {st.totalAnnual[i]}));
-            return l.iterator();
-        }), needs, hp, tp);
+        JavaPairRDD<Integer, Iterable<Tuple2<Integer, double[]>>> totals = exchange(state, sends, tp, true);
         double[] bounces = Arrays.copyOf(bounceWh, used);
         boolean conv = converged;
         stageS.put("reflection", (System.nanoTime() - t1) / 1e9);
@@ -308,12 +309,54 @@ final class CityStages {
     }
 
     /**
-     * Sends each receiver's value to the tiles that need it: a join keyed by receiver id with the
-     * (receiver, tile) pairs of the reflector lists, then grouped by tile.
+     * What a tile sends at each bounce: pairs (its receiver, a tile whose reflector lists name it),
+     * ordered by receiver ({@link Serializable}).
      */
-    private static JavaPairRDD<Integer, Iterable<Tuple2<Integer, double[]>>> exchange(JavaPairRDD<Integer, double[]> values,
-            JavaPairRDD<Integer, Integer> needs, HashPartitioner hp, TilePartitioner tp) {
-        return needs.join(values, hp).mapToPair(e -> new Tuple2<>(e._2()._1(), new Tuple2<>(e._1(), e._2()._2()))).groupByKey(tp);
+    static final class Sends implements Serializable {
+        private static final long serialVersionUID = 1L;
+        final int[] receiver, to;
+
+        Sends(int[] receiver, int[] to) {
+            this.receiver = receiver;
+            this.to = to;
+        }
+
+        static Sends of(Iterable<int[]> pairs) {
+            List<int[]> l = new ArrayList<>();
+            pairs.forEach(l::add);
+            l.sort((a, b) -> a[0] != b[0] ? Integer.compare(a[0], b[0]) : Integer.compare(a[1], b[1]));
+            int[] r = new int[l.size()], t = new int[l.size()];
+            for (int i = 0; i < r.length; i++) {
+                r[i] = l.get(i)[0];
+                t[i] = l.get(i)[1];
+            }
+            return new Sends(r, t);
+        }
+    }
+
+    /**
+     * Each tile sends its receivers' values (the last term's 12 months, or with {@code totals} the
+     * annual total) to the tiles that need them, in one shuffle grouped by the receiving tile.
+     */
+    private static JavaPairRDD<Integer, Iterable<Tuple2<Integer, double[]>>> exchange(JavaPairRDD<Integer, TileState> state,
+            JavaPairRDD<Integer, Sends> sends, TilePartitioner tp, boolean totals) {
+        return state.join(sends).flatMapToPair(e -> {
+            TileState st = e._2()._1();
+            Sends out = e._2()._2();
+            List<Tuple2<Integer, Tuple2<Integer, double[]>>> l = new ArrayList<>(out.receiver.length);
+            int last = -1;
+            double[] v = null;
+            for (int k = 0; k < out.receiver.length; k++) {
+                int j = out.receiver[k];
+                if (j != last) {
+                    int i = Arrays.binarySearch(st.ids, j);
+                    v = totals ? new double[] {st.totalAnnual[i]} : Arrays.copyOfRange(st.term, 12 * i, 12 * i + 12);
+                    last = j;
+                }
+                l.add(new Tuple2<>(out.to[k], new Tuple2<>(j, v)));
+            }
+            return l.iterator();
+        }).groupByKey(tp);
     }
 
     /**
