@@ -74,6 +74,29 @@ public final class CityModel {
         return of(StudyReader.read(studyFile));
     }
 
+    private static CityModel last;
+    private static String lastKey;
+
+    /**
+     * {@link #load}, kept for the next call with the same file (path and modification time): the
+     * tasks of one JVM (a Spark executor) prepare the study once.
+     */
+    public static synchronized CityModel cached(Path studyFile) {
+        String key;
+        try {
+            key = studyFile.toAbsolutePath().normalize() + "@" + java.nio.file.Files.getLastModifiedTime(studyFile).toMillis();
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        if (!key.equals(lastKey)) {
+            last = null; // let the old one go before the new one is built
+            lastKey = null;
+            last = load(studyFile);
+            lastKey = key;
+        }
+        return last;
+    }
+
     /** A study prepared as {@code solmass analyse} does. */
     public static CityModel of(Study study) {
         return new CityModel(study, AnalysisRun.prepare(study, PhaseProgress.NONE, new java.util.LinkedHashMap<>()));
@@ -100,14 +123,25 @@ public final class CityModel {
 
     double[][] blockBounds() { return blockBounds; }
 
-    /** The scene of a tile: its blocks and the halo's (and any terrain), in the whole model's frame, with its far horizon. */
+    /**
+     * The scene of a tile: its blocks and the halo's (and any terrain), in the whole model's frame,
+     * with the far horizon of its lowest band (the one the metrics of {@link #finish} see).
+     */
     public Scene tileScene(Tile t) {
+        return baseScene(t).withHorizon(horizon(t, 0));
+    }
+
+    private Scene baseScene(Tile t) {
         int[] tris = sceneTriangles(t);
         float[] s = new float[9 * tris.length];
         for (int i = 0; i < tris.length; i++) System.arraycopy(soup, 9 * tris[i], s, 9 * i, 9);
-        HorizonProfile far = t.horizonDeg() == null ? HorizonProfile.NONE : new HorizonProfile(t.horizonDeg());
-        return Scene.build(s, prepared.groundPlane(), prepared.groundZ(), frame)
-                .withHorizon(FarHorizon.max(prepared.terrain().horizon(), far));
+        return Scene.build(s, prepared.groundPlane(), prepared.groundZ(), frame);
+    }
+
+    /** The far horizon of band k of a tile composed with the terrain's (the higher counts). */
+    private HorizonProfile horizon(Tile t, int band) {
+        double[] e = t.horizonDeg(band);
+        return FarHorizon.max(prepared.terrain().horizon(), e == null ? HorizonProfile.NONE : new HorizonProfile(e));
     }
 
     /** Triangles of the whole scene in the tile's scene, ascending: its blocks', then every terrain triangle. */
@@ -122,10 +156,22 @@ public final class CityModel {
         return Arrays.copyOf(out, n);
     }
 
-    /** Stage 1: the first pass of the tile's receivers against its scene. */
+    /**
+     * Stage 1: the first pass of the tile's receivers against its scene, each height band of receivers
+     * with its own far horizon ({@link Tile#band}; the tree is built once, {@link Scene#withHorizon}).
+     */
     public FirstPasses firstPass(Tile t) {
-        Scene scene = tileScene(t);
-        return StagedPasses.firstPass(scene, inputs(t), t.receivers());
+        Scene scene = baseScene(t);
+        ShadedIrradiation.Inputs in = inputs(t);
+        if (t.horizonDeg() == null) return StagedPasses.firstPass(scene.withHorizon(horizon(t, 0)), in, t.receivers());
+        Map<Integer, List<Integer>> byBand = new java.util.TreeMap<>();
+        for (int r : t.receivers()) byBand.computeIfAbsent(t.band(layout.centre(r, 2)), k -> new ArrayList<>()).add(r);
+        List<FirstPasses> parts = new ArrayList<>();
+        for (var e : byBand.entrySet()) {
+            int[] rec = e.getValue().stream().mapToInt(Integer::intValue).toArray();
+            parts.add(StagedPasses.firstPass(scene.withHorizon(horizon(t, e.getKey())), in, rec));
+        }
+        return FirstPasses.concat(parts);
     }
 
     private ShadedIrradiation.Inputs inputs(Tile t) {

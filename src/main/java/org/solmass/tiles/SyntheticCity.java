@@ -18,7 +18,7 @@ import java.util.SplittableRandom;
  * around an invented point), read back like any GeoJSON model (org.solmass.geo). Footprints
  * 12 to 28 m a side; heights 2 to 8 storeys of 3 m, and about one building in 40 a tower of 45 to
  * 100 m. Buildings are added row by row until the estimated patch count (roof and facade area over
- * the patch area) reaches the target, so 1e5 to 1e6 patches give about 150 to 1,500 buildings at
+ * the patch area) reaches the target, so 1e5 to 1e6 patches give about 220 to 2,200 buildings at
  * 2 m patches. Writes the GeoJSON and a study file beside it ({@link #write}).
  */
 public final class SyntheticCity {

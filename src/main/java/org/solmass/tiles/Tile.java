@@ -14,10 +14,31 @@ import java.io.Serializable;
  *                  analysed patches first, id = patch index; then context patches; then ground probes)
  * @param sceneBlocks block ids (index into the model's block names) whose plan bounds come within the
  *                    halo of {@code box}: the tile's scene, ascending
- * @param horizonDeg far horizon per azimuth {@code i 360 / n}, degrees, or null for none
+ * @param bandFloorM height of the lowest horizon band's floor (the model's ground level), metres
+ * @param bandM height of a horizon band, metres
+ * @param horizonDeg far horizon per band ({@link #band}) and azimuth {@code i 360 / n}, degrees; an
+ *                   entry is null where the band has no receiver or nothing rises; null for no far horizon at all
  */
-public record Tile(int index, int col, int row, double[] box, int[] receivers, int[] sceneBlocks, double[] horizonDeg)
-        implements Serializable {
+public record Tile(int index, int col, int row, double[] box, int[] receivers, int[] sceneBlocks, double bandFloorM,
+                   double bandM, double[][] horizonDeg) implements Serializable {
+
+    /**
+     * The far-horizon band of a receiver at height z: {@code floor((z - bandFloorM) / bandM)}, at least
+     * 0. Band k sees the horizon from its floor {@code bandFloorM + k bandM}, the lowest point of the
+     * band (conservative for every receiver in it).
+     */
+    public int band(double z) {
+        return band(z, bandFloorM, bandM);
+    }
+
+    static int band(double z, double floorM, double bandM) {
+        return Math.max(0, (int) Math.floor((z - floorM) / bandM));
+    }
+
+    /** The far horizon of band k, or null for none. */
+    public double[] horizonDeg(int k) {
+        return horizonDeg == null || k >= horizonDeg.length ? null : horizonDeg[k];
+    }
 
     /** Number of analysed patches among its receivers, given the layout's analysed count. */
     public int analysedCount(int analysedTotal) {

@@ -61,12 +61,24 @@ final class Tiling {
             List<Integer> blocks = new ArrayList<>();
             for (int b = 0; b < bb.length; b++)
                 if (bb[b] != null && FarHorizon.rectDistance(box, bb[b][0], bb[b][1], bb[b][2], bb[b][3]) <= halo) blocks.add(b);
-            double[] horizon = null;
+            double[][] horizon = null;
             if (raster != null && Double.isFinite(halo)) {
-                double[] e2 = FarHorizon.elevationsDeg(raster, box, halo, lowest, o.horizonAzimuths());
-                for (double v : e2) if (v > 0) { horizon = e2; break; }
+                int bands = 0;
+                for (int r : rec) bands = Math.max(bands, Tile.band(l.centre(r, 2), lowest, o.horizonBandM()) + 1);
+                boolean[] used = new boolean[bands];
+                for (int r : rec) used[Tile.band(l.centre(r, 2), lowest, o.horizonBandM())] = true;
+                horizon = new double[bands][];
+                boolean any = false;
+                for (int k = 0; k < bands; k++) {
+                    if (!used[k]) continue;
+                    double eye = lowest + (k + (o.conservativeHorizon() ? 0 : 0.5)) * o.horizonBandM();
+                    double[] e2 = FarHorizon.elevationsDeg(raster, box, halo, eye, o.horizonAzimuths(), o.conservativeHorizon());
+                    for (double v : e2) if (v > 0) { horizon[k] = e2; any = true; break; }
+                }
+                if (!any) horizon = null;
             }
-            tiles.add(new Tile(tiles.size(), col, row, box, rec, blocks.stream().mapToInt(Integer::intValue).toArray(), horizon));
+            tiles.add(new Tile(tiles.size(), col, row, box, rec, blocks.stream().mapToInt(Integer::intValue).toArray(), lowest,
+                    o.horizonBandM(), horizon));
         }
         return new CityPlan(o, halo, uncapped, alphaMin, tallest, lowest, n, na, List.copyOf(tiles));
     }

@@ -29,6 +29,10 @@ class HaloAndHorizonTest {
         // from a receiver 20 m up the same cell rises atan((H - z) / d)
         double[] up = FarHorizon.elevationsDeg(r, new double[] {0, 0, 0, 0}, 100, 20, 72);
         assertEquals(Math.toDegrees(Math.atan((h - 20) / d)), up[0], 1e-9);
+        // the best estimate measures d to the cell's centre: d + 0.5 m
+        double[] est = FarHorizon.elevationsDeg(r, new double[] {0, 0, 0, 0}, 100, 0, 72, false);
+        assertEquals(Math.toDegrees(Math.atan(h / (d + 0.5))), est[0], 1e-9);
+        assertEquals(0.0, est[36], 0.0);
         // within the halo the cell is geometry, not horizon
         double[] near = FarHorizon.elevationsDeg(r, new double[] {0, 0, 0, 0}, d + 1, 0, 72);
         assertEquals(0.0, near[0], 0.0);

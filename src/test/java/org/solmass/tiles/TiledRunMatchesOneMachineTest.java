@@ -25,26 +25,36 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class TiledRunMatchesOneMachineTest {
     @TempDir Path dir;
 
-    /** A street of five blocks (two of them context), shaded ground, sun hours on a date. */
-    static Path study(Path dir) throws Exception {
+    /** A street of five blocks (two of them context), shaded ground, sun hours on a date; {@code extra} study keys. */
+    static Path study(Path dir, String extraObj, String extraKeys) throws Exception {
         StringBuilder obj = new StringBuilder();
         obj.append(Boxes.onGround(0, 0, 12, 10, 15).obj("a"));
         obj.append(Boxes.onGround(20, 0, 30, 10, 24).obj("b"));
         obj.append(Boxes.onGround(0, 18, 10, 28, 9).obj("c"));
         obj.append(Boxes.onGround(22, 20, 32, 30, 30).obj("tower"));
         obj.append(Boxes.onGround(40, 5, 48, 15, 12).obj("d"));
+        obj.append(extraObj);
         Boxes.write(dir, "m.obj", obj.toString());
         Path sf = dir.resolve("s.json");
         Files.writeString(sf, "{\"model\": {\"file\": \"m.obj\", \"context\": [\"tower\", \"d\"]},"
                 + " \"site\": {\"latitude\": 48.0, \"longitude\": 11, \"zone\": \"+01:00\"},"
                 + " \"climate\": \"clear-sky\", \"patch_m\": 2, \"rays\": 64, \"ground_irradiance\": \"shaded\","
-                + " \"sun_hours\": {\"dates\": [\"03-21\"]}}");
+                + " \"sun_hours\": {\"dates\": [\"03-21\"]}" + extraKeys + "}");
         return sf;
     }
 
     @Test
     void tilesWithAFullHaloEqualTheOneMachineRunInEveryColumn() throws Exception {
-        Study study = StudyReader.read(study(dir));
+        assertTiledEqualsOneMachine(StudyReader.read(study(dir, "", "")));
+    }
+
+    @Test
+    void treesAttenuateAlikeInTilesAndInTheWholeModel() throws Exception {
+        String crown = Boxes.closed(14, 12, 3, 18, 16, 9).obj("tree_1"); // between the blocks a, b and c
+        assertTiledEqualsOneMachine(StudyReader.read(study(dir, crown, ", \"vegetation\": {\"blocks\": [\"tree_*\"]}")));
+    }
+
+    static void assertTiledEqualsOneMachine(Study study) {
         ResultTable one = AnalysisRun.run(study, PhaseProgress.NONE).table();
         CityModel city = CityModel.of(study);
         LocalCityRunner.CityRun tiled = LocalCityRunner.run(city, CityOptions.defaults().withTileM(15), PhaseProgress.NONE);

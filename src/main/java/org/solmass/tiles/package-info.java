@@ -1,0 +1,30 @@
+/**
+ * City scale in pure Java (no Spark): a study cut into square tiles of receivers, each computed
+ * against its own scene (its blocks and a halo of blocks around it, a far horizon beyond), with the
+ * staged passes of {@link org.solmass.irradiation.StagedPasses} and the receivers' global ids of
+ * {@link org.solmass.irradiation.ReceiverLayout}, so that a tiled run equals the one-machine run
+ * where the halo holds every obstruction. docs/city.md, section "Pure-Java core".
+ *
+ * <p>Public API (stable for the distributed runner in src/spark):
+ * <ul>
+ * <li>{@link org.solmass.tiles.CityModel}: {@code load(Path)}, {@code cached(Path)}, {@code of(Study)};
+ * {@code plan(CityOptions) -> CityPlan}; {@code firstPass(Tile) -> FirstPasses} (stage 1);
+ * {@code reflect(List<FirstPasses>) -> StagedPasses.Reflected} (exchange and bounces);
+ * {@code finish(Tile, FirstPasses, Reflected) -> TileRows} (stage 3); {@code tileScene(Tile)},
+ * {@code sceneTriangles(Tile)}, {@code layout()}, {@code sun()}, {@code prepared()}, {@code raster(double)}.</li>
+ * <li>{@link org.solmass.tiles.CityOptions} (tile side, halo cap, far horizon on/off, raster cell,
+ * azimuths, height band, conservative rule), {@link org.solmass.tiles.CityPlan},
+ * {@link org.solmass.tiles.Tile}: serializable.</li>
+ * <li>{@link org.solmass.tiles.Halo}, {@link org.solmass.tiles.HeightRaster},
+ * {@link org.solmass.tiles.FarHorizon}: the halo radius and the far horizon.</li>
+ * <li>{@link org.solmass.tiles.LocalCityRunner}: {@code run(CityModel, CityOptions, PhaseProgress)}
+ * tile after tile, {@code merge(List<Patch>, List<TileRows>)}: the reference run.</li>
+ * <li>{@link org.solmass.tiles.SyntheticCity}: {@code write(Path, Spec)}, an invented city.</li>
+ * </ul>
+ *
+ * <p>Limits: a {@link org.solmass.tiles.CityModel} holds the whole model and its patches (about
+ * 0.3 kB per patch) and each tile's reflector index spans every receiver (16 bytes each), which
+ * suits cities up to a few million patches per JVM; the metrics of stage 3 (sun hours on dates,
+ * vertical sky component) see the far horizon of the tile's lowest height band only.
+ */
+package org.solmass.tiles;
