@@ -91,7 +91,7 @@ public final class GeoJsonWriter {
         });
     }
 
-    private static void header(Writer w, GeoReference geo, List<String> cautions) throws IOException {
+    static void header(Writer w, GeoReference geo, List<String> cautions) throws IOException {
         StringBuilder sb = new StringBuilder("{\"type\":\"FeatureCollection\",\"solmass_crs\":");
         string(sb, geo.file().name());
         sb.append(",\"solmass_reference\":");
@@ -103,7 +103,7 @@ public final class GeoJsonWriter {
     }
 
     /** A closed ring of x,y,z triples (Solmass frame) as [lon, lat, z] positions, counter-clockwise in plan when {@code ccw}. */
-    private static void ring(StringBuilder sb, double[] xyz, GeoReference geo, boolean ccw) {
+    static void ring(StringBuilder sb, double[] xyz, GeoReference geo, boolean ccw) {
         int n = xyz.length / 3;
         Coordinate[] cs = new Coordinate[n + 1];
         for (int i = 0; i < n; i++) {
@@ -173,7 +173,7 @@ public final class GeoJsonWriter {
         return c;
     }
 
-    private static void centroid(StringBuilder sb, GeoReference geo, double x, double y, double z) {
+    static void centroid(StringBuilder sb, GeoReference geo, double x, double y, double z) {
         double[] f = geo.toFile(x, y, z);
         int d = geo.file().geographic() ? LONLAT_DECIMALS : METRE_DECIMALS;
         prop(sb, "crs_x", f[0], d);
@@ -181,14 +181,14 @@ public final class GeoJsonWriter {
         prop(sb, "crs_z", f[2], METRE_DECIMALS);
     }
 
-    private static void prop(StringBuilder sb, String name, double v, int decimals) {
+    static void prop(StringBuilder sb, String name, double v, int decimals) {
         sb.append(",\"").append(name).append("\":");
         if (Double.isFinite(v)) Numbers.append(sb, v, decimals);
         else sb.append("null");
     }
 
     /** A JSON string with the escapes RFC 8259 requires. */
-    private static void string(StringBuilder sb, String s) {
+    static void string(StringBuilder sb, String s) {
         sb.append('"');
         for (int i = 0; i < s.length(); i++) {
             char c = s.charAt(i);

@@ -1,0 +1,119 @@
+package org.solmass.spark;
+
+import org.solmass.cli.AnalysisRun;
+import org.solmass.irradiation.FirstPasses;
+import org.solmass.irradiation.PhaseProgress;
+import org.solmass.study.Study;
+import org.solmass.study.StudyReader;
+import org.solmass.tiles.CityModel;
+import org.solmass.tiles.CityOptions;
+import org.solmass.tiles.CityPlan;
+import org.solmass.tiles.SyntheticCity;
+import org.solmass.tiles.Tile;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryPoolMXBean;
+import java.lang.management.MemoryType;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+/**
+ * The city runner's benchmark (not part of the test suite; docs/city.md): on an invented synthetic
+ * city ({@link SyntheticCity}) of about N patches, the one-machine run ({@code AnalysisRun}, as
+ * {@code solmass analyse}, all cores) against {@code solmass city} on {@code local[2]}, as patches per
+ * second per core and their ratio; then, per tile size, the largest tile's first pass alone: its
+ * receivers, scene triangles, the bytes its {@link FirstPasses} hold and the peak heap while it runs
+ * (what one task needs, besides the prepared study every task holds).
+ * Run: {@code java -cp target/classes:$(cat target/city-classpath.txt) org.solmass.spark.CityBench --patches 100000}
+ * (with the launcher's JVM options; see the solmass script).
+ */
+@Command(name = "city-bench", mixinStandardHelpOptions = true, sortOptions = false,
+        description = "Times one machine against local[2] on an invented synthetic city; task memory per tile size.")
+public final class CityBench implements Callable<Integer> {
+    @Option(names = "--patches", defaultValue = "100000", paramLabel = "N", description = "target patches (default ${DEFAULT-VALUE})") long patches;
+    @Option(names = "--seed", defaultValue = "1", paramLabel = "N", description = "city seed (default ${DEFAULT-VALUE})") long seed;
+    @Option(names = "--master", defaultValue = "local[2]", paramLabel = "URL", description = "Spark master (default ${DEFAULT-VALUE})") String master;
+    @Option(names = "--tile-size", defaultValue = "250", paramLabel = "M", description = "tile side of the Spark run (default ${DEFAULT-VALUE} m)") double tileM;
+    @Option(names = "--halo-cap", paramLabel = "M", description = "largest halo radius (default: none)") Double haloCapM;
+    @Option(names = "--memory-tiles", split = ",", defaultValue = "125,250,500", paramLabel = "M", description = "tile sides for the memory table (default ${DEFAULT-VALUE})") double[] memoryTiles;
+    @Option(names = "--skip-one-machine", description = "only the Spark run and the memory table") boolean skipOne;
+
+    public static void main(String[] args) {
+        System.exit(new CommandLine(new CityBench()).execute(args));
+    }
+
+    @Override
+    public Integer call() throws Exception {
+        Path dir = Files.createTempDirectory("solmass-city-bench");
+        SyntheticCity.Written w = SyntheticCity.write(dir.resolve("city"), SyntheticCity.Spec.of(patches, seed));
+        Study study = StudyReader.read(w.study());
+        System.out.printf(Locale.ROOT, "invented city: %d buildings, about %d patches, tallest %.1f m%n", w.buildings(), w.estimatedPatches(), w.tallestM());
+        int cores = Runtime.getRuntime().availableProcessors();
+        double oneRate = Double.NaN;
+        if (!skipOne) {
+            System.gc();
+            long t0 = System.nanoTime();
+            AnalysisRun.Outcome o = AnalysisRun.run(study, PhaseProgress.NONE);
+            double s = (System.nanoTime() - t0) / 1e9;
+            long n = o.counts().get("patches");
+            oneRate = n / s / cores;
+            System.out.printf(Locale.ROOT, "one machine (%d cores): %d patches in %.1f s = %.1f patches/s/core; phases %s%n", cores, n, s, oneRate, o.timingsS());
+        }
+        CityJob job = new CityJob();
+        long t1 = System.nanoTime();
+        String[] args = haloCapM == null
+                ? new String[] {w.study().toString(), "--out", dir.resolve("out").toString(), "--master", master, "--tile-size", Double.toString(tileM), "-q"}
+                : new String[] {w.study().toString(), "--out", dir.resolve("out").toString(), "--master", master, "--tile-size", Double.toString(tileM),
+                "--halo-cap", Double.toString(haloCapM), "-q"};
+        int code = CityJob.commandLine(job).execute(args);
+        double s = (System.nanoTime() - t1) / 1e9;
+        if (code != 0) return code;
+        int sparkCores = Math.max(1, CitySpark.localCores(master));
+        long n = job.last.stages().rows();
+        double rate = n / s / sparkCores;
+        CityPlan plan = job.last.plan();
+        System.out.printf(Locale.ROOT, "%s (%d cores): %d patches, %d tiles of %.0f m, halo %.0f m: %.1f s (Spark start included) = %.1f patches/s/core;"
+                        + " stages %s%n", master, sparkCores, n, plan.tiles().size(), tileM, plan.haloM(), s, rate, job.last.stages().stageS());
+        if (!skipOne) System.out.printf(Locale.ROOT, "ratio %s / one machine, patches per second per core: %.2f%n", master, rate / oneRate);
+
+        System.out.printf(Locale.ROOT, "%n%-8s %6s %10s %12s %14s %16s %12s%n", "tile_m", "tiles", "halo_m", "receivers", "scene_tris", "first_pass_MB", "peak_heap_MB");
+        CityModel city = CityModel.of(study);
+        for (double tm : memoryTiles) {
+            CityOptions o = CityOptions.defaults().withTileM(tm);
+            if (haloCapM != null) o = o.withHaloCapM(haloCapM);
+            CityPlan p = city.plan(o);
+            Tile big = p.tiles().get(0);
+            for (Tile t : p.tiles()) if (t.receivers().length > big.receivers().length) big = t;
+            System.gc();
+            long before = heapUsed();
+            resetPeaks();
+            FirstPasses fp = city.firstPass(big);
+            double peak = (peakHeap() - before) / 1048576.0;
+            System.out.printf(Locale.ROOT, "%-8.0f %6d %10.0f %12d %14d %16.1f %12.0f%n", tm, p.tiles().size(), p.haloM(), big.receivers().length,
+                    city.sceneTriangles(big).length, fp.bytes() / 1048576.0, peak);
+        }
+        CityJob.deleteTree(dir);
+        return 0;
+    }
+
+    private static void resetPeaks() {
+        for (MemoryPoolMXBean p : ManagementFactory.getMemoryPoolMXBeans()) if (p.getType() == MemoryType.HEAP) p.resetPeakUsage();
+    }
+
+    private static long peakHeap() {
+        long sum = 0;
+        for (MemoryPoolMXBean p : ManagementFactory.getMemoryPoolMXBeans()) if (p.getType() == MemoryType.HEAP) sum += p.getPeakUsage().getUsed();
+        return sum;
+    }
+
+    private static long heapUsed() {
+        long sum = 0;
+        for (MemoryPoolMXBean p : ManagementFactory.getMemoryPoolMXBeans()) if (p.getType() == MemoryType.HEAP) sum += p.getUsage().getUsed();
+        return sum;
+    }
+}

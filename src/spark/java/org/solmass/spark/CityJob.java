@@ -1,0 +1,121 @@
+package org.solmass.spark;
+
+import org.apache.spark.sql.SparkSession;
+import org.solmass.Cautions;
+import org.solmass.cli.Main;
+import org.solmass.output.FolderClaim;
+import org.solmass.study.Study;
+import org.solmass.study.StudyReader;
+import org.solmass.tiles.CityModel;
+import org.solmass.tiles.CityOptions;
+import org.solmass.tiles.CityPlan;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import java.util.stream.Stream;
+
+/**
+ * {@code solmass city STUDY --out DIR}: a study cut into tiles and run as Spark jobs (docs/city.md).
+ * Local by default ({@code local[*]}: nothing to install); the same class is the main of
+ * {@code spark-submit} on a cluster. Exit codes as {@code solmass}: 0 done, 1 failed, 2 bad usage or input.
+ */
+@Command(name = "city", mixinStandardHelpOptions = true, sortOptions = false, versionProvider = Main.Version.class,
+        description = {"Runs a study cut into square tiles as Apache Spark jobs (city scale).",
+                "Writes per-patch Parquet (partitioned by tile), buildings.csv/.geojson, city-summary.json and run.json.",
+                Cautions.RESULTS})
+public final class CityJob implements Callable<Integer> {
+    @Parameters(index = "0", paramLabel = "STUDY", description = "study file (JSON)") Path study;
+    @Option(names = "--out", required = true, paramLabel = "DIR", description = "results folder") Path out;
+    @Option(names = "--master", paramLabel = "URL",
+            description = "Spark master (default: the one spark-submit gives, else local[*]; local[2,3]: 2 cores, 3 tries per task)") String master;
+    @Option(names = "--tile-size", paramLabel = "M", description = "tile side (default ${DEFAULT-VALUE} m)") double tileM = CityOptions.DEFAULT_TILE_M;
+    @Option(names = "--halo-cap", paramLabel = "M", description = "largest halo radius (default: none; the halo follows from the tallest building and the lowest sun)") Double haloCapM;
+    @Option(names = "--no-far-horizon", description = "no far-horizon profile beyond the halo") boolean noFarHorizon;
+    @Option(names = "-q", description = "no progress lines") boolean quiet;
+
+    /** Test hook: this tile's task fails on its first attempt at this stage (first-pass, bounce, finish, write). */
+    int failOnceTile = -1;
+    String failOnceStage = "";
+    /** What the last call ran (for tests and the benchmark). */
+    CityRun.Outcome last;
+
+    public static void main(String[] args) {
+        System.exit(commandLine().execute(args));
+    }
+
+    /** The command line with Solmass's usual exit codes for bad input and failures. */
+    static CommandLine commandLine() {
+        return commandLine(new CityJob());
+    }
+
+    static CommandLine commandLine(CityJob job) {
+        CommandLine cl = new CommandLine(job);
+        cl.setExecutionExceptionHandler((ex, line, parse) -> {
+            if (ex instanceof org.solmass.InputException) {
+                line.getErr().println("solmass: " + ex.getMessage());
+                return Main.EXIT_INPUT;
+            }
+            line.getErr().println("solmass: city failed: " + ex);
+            if (System.getenv("SOLMASS_DEBUG") != null) ex.printStackTrace(line.getErr());
+            return Main.EXIT_FAILED;
+        });
+        cl.setParameterExceptionHandler((ex, args) -> {
+            ex.getCommandLine().getErr().println("solmass: " + ex.getMessage());
+            ex.getCommandLine().getErr().println("Try 'solmass city --help'.");
+            return Main.EXIT_INPUT;
+        });
+        return cl;
+    }
+
+    @Override
+    public Integer call() throws IOException {
+        if (!(tileM > 0)) throw new CommandLine.ParameterException(new CommandLine(this), "--tile-size must be positive, got " + tileM);
+        if (haloCapM != null && !(haloCapM >= 0)) throw new CommandLine.ParameterException(new CommandLine(this), "--halo-cap must be 0 or more, got " + haloCapM);
+        Study s = StudyReader.read(study);
+        CityOptions o = CityOptions.defaults().withTileM(tileM).withFarHorizon(!noFarHorizon);
+        if (haloCapM != null) o = o.withHaloCapM(haloCapM);
+        try (FolderClaim claim = FolderClaim.claim(out, "--out", study, s.name())) {
+            Path work = Files.createTempDirectory("solmass-spark-");
+            try {
+                long t0 = System.nanoTime();
+                CityModel city = CityModel.of(s);
+                CityPlan plan = city.plan(o);
+                double prepareS = (System.nanoTime() - t0) / 1e9;
+                if (!quiet) System.err.printf(Locale.ROOT, "city: %d tiles of %.0f m, halo %.0f m (uncapped %.0f m, lowest sun %.1f deg, tallest %.1f m),"
+                                + " %,d patches, %,d receivers%n", plan.tiles().size(), o.tileM(), plan.haloM(), plan.uncappedHaloM(),
+                        plan.minSunElevationDeg(), plan.tallestM(), plan.analysedCount(), plan.receiverCount());
+                boolean shared = SparkSession.getDefaultSession().isDefined(); // a caller's session (tests) is left running
+                SparkSession spark = CitySpark.session(master, work, plan.tiles().size());
+                try {
+                    if (!quiet) spark.sparkContext().addSparkListener(new StageProgress(System.err, 2000));
+                    CityStages.Settings settings = CityStages.Settings.of(study).failingOnce(failOnceTile, failOnceStage);
+                    last = CityRun.run(spark, city, plan, settings, claim, prepareS);
+                } finally {
+                    if (!shared) spark.stop();
+                }
+                System.out.printf(Locale.ROOT, "city: %,d patches in %d tiles written to %s%n", last.stages().rows(), plan.tiles().size(), claim.folder());
+                System.out.println(Cautions.RESULTS);
+                return Main.EXIT_OK;
+            } finally {
+                deleteTree(work);
+            }
+        }
+    }
+
+    static void deleteTree(Path p) {
+        if (!Files.exists(p)) return;
+        try (Stream<Path> s = Files.walk(p)) {
+            for (Path q : (Iterable<Path>) s.sorted(Comparator.reverseOrder())::iterator) Files.deleteIfExists(q);
+        } catch (IOException e) {
+            // scratch space: left for the system's cleaner
+        }
+    }
+}

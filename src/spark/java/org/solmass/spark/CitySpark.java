@@ -1,0 +1,71 @@
+package org.solmass.spark;
+
+import org.apache.spark.SparkConf;
+import org.apache.spark.sql.SparkSession;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+/**
+ * The Spark session of a city run. In local mode ({@code local[*]}, {@code local[2]}, {@code local[2,2]}
+ * with task retries) the driver listens on 127.0.0.1 only, the web UI is off, Spark's scratch space is
+ * java.io.tmpdir's, its SQL warehouse lies in a work folder the caller gives (removed by the caller), and the log shows
+ * warnings and errors only ({@code solmass-spark-log4j2.properties}). Under {@code spark-submit} the
+ * master and the cluster's settings come from there and are not overridden.
+ */
+public final class CitySpark {
+    /** The log configuration resource (src/spark/resources). */
+    static final String LOG_CONFIG = "solmass-spark-log4j2.properties";
+
+    private CitySpark() {}
+
+    /**
+     * A session for a run.
+     *
+     * @param master a Spark master URL, or null: the one spark-submit gave, else {@code local[*]}
+     * @param work a folder for Spark's SQL warehouse (created), used in local mode
+     * @param partitions shuffle partitions (a few per core: the exchanges are small)
+     */
+    public static SparkSession session(String master, Path work, int partitions) {
+        quietLog();
+        SparkConf given = new SparkConf(); // spark.* system properties, as spark-submit sets them
+        String m = master != null ? master : given.contains("spark.master") ? given.get("spark.master") : "local[*]";
+        SparkSession.Builder b = SparkSession.builder().appName("solmass-city").master(m)
+                .config("spark.ui.enabled", "false")
+                .config("spark.ui.showConsoleProgress", "false")
+                .config("spark.sql.shuffle.partitions", Integer.toString(Math.max(1, partitions)))
+                .config("spark.sql.session.timeZone", "UTC")
+                .config("spark.sql.parquet.compression.codec", "snappy");
+        if (m.startsWith("local")) {
+            try {
+                Files.createDirectories(work);
+            } catch (IOException e) {
+                throw new UncheckedIOException("cannot create Spark's work folder " + work + ": " + e.getMessage(), e);
+            }
+            b.config("spark.driver.bindAddress", "127.0.0.1")
+                    .config("spark.driver.host", "127.0.0.1")
+                    .config("spark.sql.warehouse.dir", work.resolve("warehouse").toUri().toString());
+        }
+        return b.getOrCreate();
+    }
+
+    /**
+     * Points log4j 2 at the runner's configuration, unless the user or the cluster set one; must run
+     * before Spark's first log line (log4j reads the property once).
+     */
+    static void quietLog() {
+        if (System.getProperty("log4j2.configurationFile") == null && System.getProperty("log4j.configurationFile") == null) {
+            System.setProperty("log4j2.configurationFile", LOG_CONFIG);
+        }
+    }
+
+    /** The number of cores of a local master ({@code local[4]}: 4, {@code local[*]}: all, {@code local[2,3]}: 2), else 0. */
+    static int localCores(String master) {
+        if (master == null || !master.startsWith("local")) return 0;
+        java.util.regex.Matcher mm = java.util.regex.Pattern.compile("local\\[(\\*|\\d+)").matcher(master);
+        if (!mm.find()) return 1;
+        return mm.group(1).equals("*") ? Runtime.getRuntime().availableProcessors() : Integer.parseInt(mm.group(1));
+    }
+}

@@ -1,0 +1,378 @@
+package org.solmass.spark;
+
+import org.apache.spark.HashPartitioner;
+import org.apache.spark.Partitioner;
+import org.apache.spark.TaskContext;
+import org.apache.spark.api.java.JavaPairRDD;
+import org.apache.spark.api.java.JavaRDD;
+import org.apache.spark.api.java.JavaSparkContext;
+import org.apache.spark.api.java.Optional;
+import org.apache.spark.broadcast.Broadcast;
+import org.apache.spark.sql.Row;
+import org.apache.spark.sql.SparkSession;
+import org.apache.spark.storage.StorageLevel;
+import org.solmass.irradiation.FirstPasses;
+import org.solmass.irradiation.StagedPasses;
+import org.solmass.irradiation.TileBounces;
+import org.solmass.metrics.ColumnCatalogue;
+import org.solmass.table.Column;
+import org.solmass.tiles.CityModel;
+import org.solmass.tiles.CityPlan;
+import org.solmass.tiles.Tile;
+import scala.Tuple2;
+
+import java.io.Serializable;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.stream.IntStream;
+
+/**
+ * The stages of a city run as Spark jobs over the tiles of a {@link CityPlan} (docs/city.md):
+ * <ol>
+ * <li>first pass, one task per tile ({@link CityModel#firstPass}); each tile's {@link FirstPasses}
+ * stay where they were computed (persisted, partitioned by tile);</li>
+ * <li>exchange and bounces, month space: once, the (receiver, tile that needs it) pairs of the
+ * reflector lists are joined by receiver id with the tile that owns each receiver; then per bounce
+ * each tile sends its receivers' last terms to the tiles that need them, in one shuffle grouped by
+ * tile (a tile receives each value it needs once, nothing else), and each tile computes its receivers' next term
+ * ({@link TileBounces}); the driver adds the tiles' energies in tile order for the stopping rule;
+ * then, once, the receivers' annual totals for the standard error;</li>
+ * <li>finish, one task per tile ({@link CityModel#finish}): the rows of patches.csv, written as
+ * Parquet partitioned by tile, with the PV zones numbered as the whole model numbers them.</li>
+ * </ol>
+ * Each task rebuilds the prepared study from its file once per JVM ({@link #city}); in local mode the
+ * driver's own is used, so the sun, sky and climate tables are computed once. A task that fails is
+ * retried by Spark from the persisted stage before it; Spark's file commit keeps only one attempt's
+ * rows per tile.
+ */
+final class CityStages {
+    private CityStages() {}
+
+    /**
+     * What every task needs besides the plan ({@link Serializable}).
+     *
+     * @param studyFile the study file (absolute), read once per JVM
+     * @param failOnceTile test hook: this tile's task fails on its first attempt at {@code failOnceStage}; -1 for none
+     * @param failOnceStage "first-pass", "bounce", "finish" or "write"
+     */
+    record Settings(String studyFile, int failOnceTile, String failOnceStage) implements Serializable {
+        static Settings of(Path study) { return new Settings(study.toAbsolutePath().normalize().toString(), -1, ""); }
+
+        Settings failingOnce(int tile, String stage) { return new Settings(studyFile, tile, stage); }
+    }
+
+    /** What the stages produced (the Parquet rows are in {@code parquet}). */
+    record Outcome(List<Column> columns, double[] bounceWh, boolean converged, long rows, long[] firstPassBytes,
+                   Map<String, Double> stageS) {}
+
+    private static final Map<String, CityModel> CITIES = new ConcurrentHashMap<>();
+
+    /** The prepared study of this JVM (read from its file on first use). */
+    static CityModel city(String studyFile) {
+        return CITIES.computeIfAbsent(studyFile, f -> CityModel.load(Path.of(f)));
+    }
+
+    /** Makes the driver's prepared study the one its local tasks use. */
+    static void share(String studyFile, CityModel city) {
+        CITIES.put(studyFile, city);
+    }
+
+    /** Forgets the prepared studies (after a run). */
+    static void forget(String studyFile) {
+        CITIES.remove(studyFile);
+    }
+
+    /** The key of a (tile, tile-local PV zone) pair. */
+    static long zoneKey(int tile, int localZone) {
+        return ((long) tile << 32) | (localZone & 0xffffffffL);
+    }
+
+    /** Partition = tile index. */
+    static final class TilePartitioner extends Partitioner {
+        private final int tiles;
+
+        TilePartitioner(int tiles) { this.tiles = tiles; }
+
+        @Override public int numPartitions() { return tiles; }
+
+        @Override public int getPartition(Object key) { return (Integer) key; }
+
+        @Override public boolean equals(Object o) { return o instanceof TilePartitioner t && t.tiles == tiles; }
+
+        @Override public int hashCode() { return tiles; }
+    }
+
+    /** A tile's reflection sums between bounces ({@link Serializable}; a new one per bounce). */
+    static final class TileState implements Serializable {
+        private static final long serialVersionUID = 1L;
+        final int tile;
+        final int[] ids;
+        /** The last term (entry x 12), reflected months so far (entry x 12), first pass + reflected per entry, Wh/m2. */
+        final double[] term, reflMonth, totalAnnual;
+        /** The last term's energy over the tile's analysed patches. */
+        final double added;
+
+        TileState(int tile, int[] ids, double[] term, double[] reflMonth, double[] totalAnnual, double added) {
+            this.tile = tile;
+            this.ids = ids;
+            this.term = term;
+            this.reflMonth = reflMonth;
+            this.totalAnnual = totalAnnual;
+            this.added = added;
+        }
+
+        static TileState initial(int tile, FirstPasses fp) {
+            return new TileState(tile, fp.ids(), TileBounces.firstPassMonths(fp), new double[12 * fp.size()],
+                    TileBounces.firstPassAnnual(fp), 0);
+        }
+
+        TileState next(FirstPasses fp, Lookup source, boolean first, double[] ghiMonth, int analysedTotal) {
+            double[] t = TileBounces.bounce(fp, source::get, first, ghiMonth);
+            double[] rm = reflMonth.clone(), ta = totalAnnual.clone();
+            double added = TileBounces.accumulate(fp, t, analysedTotal, rm, ta);
+            return new TileState(tile, ids, t, rm, ta, added);
+        }
+    }
+
+    /** The values a tile received, by global id (binary search over the ids, ascending). */
+    static final class Lookup {
+        final int[] ids;
+        final double[][] values;
+
+        Lookup(Optional<Iterable<Tuple2<Integer, double[]>>> got) {
+            List<Tuple2<Integer, double[]>> l = new ArrayList<>();
+            if (got.isPresent()) got.get().forEach(l::add);
+            l.sort((a, b) -> Integer.compare(a._1(), b._1()));
+            ids = new int[l.size()];
+            values = new double[l.size()][];
+            for (int i = 0; i < ids.length; i++) {
+                ids[i] = l.get(i)._1();
+                values[i] = l.get(i)._2();
+            }
+        }
+
+        double[] get(int id) {
+            int i = Arrays.binarySearch(ids, id);
+            if (i < 0) throw new IllegalStateException("receiver " + id + " was not exchanged to this tile");
+            return values[i];
+        }
+    }
+
+    /** How often the test hook threw in this JVM (local mode: the tests read it). */
+    static final java.util.concurrent.atomic.AtomicInteger HOOK_FIRED = new java.util.concurrent.atomic.AtomicInteger();
+
+    static void failOnce(Settings s, String stage, int tile) {
+        TaskContext tc = TaskContext.get();
+        if (s.failOnceTile() == tile && s.failOnceStage().equals(stage) && tc != null && tc.attemptNumber() == 0) {
+            HOOK_FIRED.incrementAndGet();
+            throw new IllegalStateException("test hook: tile " + tile + " fails its first attempt at " + stage);
+        }
+    }
+
+    /** Runs the stages and writes the Parquet rows into {@code parquet} (a folder that must not exist yet). */
+    static Outcome run(SparkSession spark, CityModel city, CityPlan plan, Settings s, Path parquet) {
+        JavaSparkContext sc = JavaSparkContext.fromSparkContext(spark.sparkContext());
+        int nTiles = plan.tiles().size();
+        int analysed = plan.analysedCount(), receivers = plan.receiverCount();
+        TilePartitioner tp = new TilePartitioner(nTiles);
+        HashPartitioner hp = new HashPartitioner(nTiles);
+        Broadcast<CityPlan> bPlan = sc.broadcast(plan);
+        double[] ghiMonth = TileBounces.ghiMonthWh(city.sun());
+        Map<String, Double> stageS = new LinkedHashMap<>();
+        List<JavaPairRDD<?, ?>> cached = new ArrayList<>();
+
+        // 1. first pass per tile
+        long t0 = System.nanoTime();
+        StageProgress.label(sc, "first pass");
+        List<Integer> tiles = IntStream.range(0, nTiles).boxed().toList();
+        JavaPairRDD<Integer, FirstPasses> firsts = sc.parallelize(tiles, nTiles).mapToPair(t -> new Tuple2<>(t, t))
+                .partitionBy(tp).mapValues(t -> {
+                    failOnce(s, "first-pass", t);
+                    return city(s.studyFile()).firstPass(bPlan.value().tile(t));
+                }).persist(StorageLevel.MEMORY_AND_DISK());
+        cached.add(firsts);
+        long[] bytes = new long[nTiles];
+        for (Tuple2<Integer, Long> b : firsts.mapValues(FirstPasses::bytes).collect()) bytes[b._1()] = b._2();
+        stageS.put("first_pass", (System.nanoTime() - t0) / 1e9);
+
+        // 2. exchange and bounces
+        long t1 = System.nanoTime();
+        StageProgress.label(sc, "exchange");
+        // once: which receiver each tile needs, keyed by receiver id, joined with the tile that owns it,
+        // then grouped by owner: what each tile sends to which tiles at every bounce
+        JavaPairRDD<Integer, Integer> needs = firsts.flatMapToPair(e -> {
+            List<Tuple2<Integer, Integer>> l = new ArrayList<>();
+            for (int j : TileBounces.needed(e._2())) l.add(new Tuple2<>(j, e._1()));
+            return l.iterator();
+        }).partitionBy(hp);
+        JavaPairRDD<Integer, Integer> owners = firsts.flatMapToPair(e -> {
+            List<Tuple2<Integer, Integer>> l = new ArrayList<>();
+            for (int id : e._2().ids()) l.add(new Tuple2<>(id, e._1()));
+            return l.iterator();
+        }).partitionBy(hp);
+        JavaPairRDD<Integer, Sends> sends = needs.join(owners, hp)
+                .mapToPair(e -> new Tuple2<>(e._2()._2(), new int[] {e._1(), e._2()._1()}))
+                .groupByKey(tp).mapValues(Sends::of).persist(StorageLevel.MEMORY_AND_DISK());
+        cached.add(sends);
+        JavaPairRDD<Integer, TileState> state = firsts.mapToPair(e -> new Tuple2<>(e._1(), TileState.initial(e._1(), e._2())))
+                .partitionBy(tp).persist(StorageLevel.MEMORY_AND_DISK());
+        double tolerance = city.prepared().options().bounceTolerance();
+        int maxBounces = city.prepared().options().maxBounces();
+        double[] bounceWh = new double[Math.max(1, maxBounces)];
+        double reflected = 0;
+        int used = 0;
+        boolean converged = false;
+        for (int b = 0; b < maxBounces; b++) {
+            StageProgress.label(sc, "bounce " + (b + 1));
+            boolean first = b == 0;
+            JavaPairRDD<Integer, Iterable<Tuple2<Integer, double[]>>> got = exchange(state, sends, tp, false);
+            JavaPairRDD<Integer, TileState> next = firsts.join(state).leftOuterJoin(got).mapValues(x -> {
+                TileState st = x._1()._2();
+                if (first) failOnce(s, "bounce", st.tile);
+                return st.next(x._1()._1(), new Lookup(x._2()), first, ghiMonth, analysed);
+            }).persist(StorageLevel.MEMORY_AND_DISK());
+            double[] perTile = new double[nTiles];
+            for (Tuple2<Integer, Double> a : next.mapValues(st -> st.added).collect()) perTile[a._1()] = a._2();
+            double add = 0;
+            for (double a : perTile) add += a;
+            state.unpersist(false);
+            state = next;
+            reflected += add;
+            bounceWh[b] = add;
+            used = b + 1;
+            if (add <= tolerance * reflected) {
+                converged = true;
+                break;
+            }
+        }
+        cached.add(state);
+        StageProgress.label(sc, "exchange of annual totals");
+        JavaPairRDD<Integer, Iterable<Tuple2<Integer, double[]>>> totals = exchange(state, sends, tp, true);
+        double[] bounces = Arrays.copyOf(bounceWh, used);
+        boolean conv = converged;
+        stageS.put("reflection", (System.nanoTime() - t1) / 1e9);
+
+        // 3. finish per tile
+        long t2 = System.nanoTime();
+        StageProgress.label(sc, "finish");
+        JavaPairRDD<Integer, TileOut> out = firsts.join(state).leftOuterJoin(totals).mapValues(x -> {
+            FirstPasses fp = x._1()._1();
+            TileState st = x._1()._2();
+            int tile = st.tile;
+            failOnce(s, "finish", tile);
+            double[] refl = new double[12 * analysed], total = new double[receivers];
+            for (int i = 0; i < st.ids.length; i++) {
+                int id = st.ids[i];
+                if (id < analysed) System.arraycopy(st.reflMonth, 12 * i, refl, 12 * id, 12);
+                total[id] = st.totalAnnual[i];
+            }
+            Lookup got = new Lookup(x._2());
+            for (int i = 0; i < got.ids.length; i++) total[got.ids[i]] = got.values[i][0];
+            StagedPasses.Reflected r = new StagedPasses.Reflected(refl, total, bounces, conv, tolerance, maxBounces);
+            Tile t = bPlan.value().tile(tile);
+            CityModel.TileRows rows = city(s.studyFile()).finish(t, fp, r);
+            return new TileOut(tile, rows.table(), rows.patchIndex());
+        }).persist(StorageLevel.MEMORY_AND_DISK());
+        cached.add(out);
+        List<Tuple2<Integer, TileOut.Head>> heads = out.mapValues(TileOut::head).collect();
+        stageS.put("finish", (System.nanoTime() - t2) / 1e9);
+
+        // columns in tile order (first seen), PV zones numbered city-wide
+        List<String> names = new ArrayList<>();
+        List<TileOut.Head> byTile = new ArrayList<>();
+        for (Tuple2<Integer, TileOut.Head> h : heads) byTile.add(h._2());
+        byTile.sort((a, b) -> Integer.compare(a.tile(), b.tile()));
+        for (TileOut.Head h : byTile) for (String c : h.columns()) if (!names.contains(c)) names.add(c);
+        Map<Long, Integer> zoneNumber = zoneNumbers(byTile);
+        List<Column> columns = names.stream().map(ColumnCatalogue::of).toList();
+        Broadcast<Map<Long, Integer>> bZones = sc.broadcast(zoneNumber);
+
+        long t3 = System.nanoTime();
+        StageProgress.label(sc, "write");
+        JavaRDD<Row> rows = out.values().flatMap(o -> {
+            failOnce(s, "write", o.tile);
+            return o.rows(names, bZones.value()).iterator();
+        });
+        spark.createDataFrame(rows, PatchRows.schema(columns)).write().partitionBy(PatchRows.TILE).parquet(parquet.toString());
+        long count = 0;
+        for (TileOut.Head h : byTile) count += h.size();
+        stageS.put("write", (System.nanoTime() - t3) / 1e9);
+        for (JavaPairRDD<?, ?> c : cached) c.unpersist(false);
+        bPlan.destroy();
+        bZones.destroy();
+        return new Outcome(columns, bounces, conv, count, bytes, stageS);
+    }
+
+    /**
+     * What a tile sends at each bounce: pairs (its receiver, a tile whose reflector lists name it),
+     * ordered by receiver ({@link Serializable}).
+     */
+    static final class Sends implements Serializable {
+        private static final long serialVersionUID = 1L;
+        final int[] receiver, to;
+
+        Sends(int[] receiver, int[] to) {
+            this.receiver = receiver;
+            this.to = to;
+        }
+
+        static Sends of(Iterable<int[]> pairs) {
+            List<int[]> l = new ArrayList<>();
+            pairs.forEach(l::add);
+            l.sort((a, b) -> a[0] != b[0] ? Integer.compare(a[0], b[0]) : Integer.compare(a[1], b[1]));
+            int[] r = new int[l.size()], t = new int[l.size()];
+            for (int i = 0; i < r.length; i++) {
+                r[i] = l.get(i)[0];
+                t[i] = l.get(i)[1];
+            }
+            return new Sends(r, t);
+        }
+    }
+
+    /**
+     * Each tile sends its receivers' values (the last term's 12 months, or with {@code totals} the
+     * annual total) to the tiles that need them, in one shuffle grouped by the receiving tile.
+     */
+    private static JavaPairRDD<Integer, Iterable<Tuple2<Integer, double[]>>> exchange(JavaPairRDD<Integer, TileState> state,
+            JavaPairRDD<Integer, Sends> sends, TilePartitioner tp, boolean totals) {
+        return state.join(sends).flatMapToPair(e -> {
+            TileState st = e._2()._1();
+            Sends out = e._2()._2();
+            List<Tuple2<Integer, Tuple2<Integer, double[]>>> l = new ArrayList<>(out.receiver.length);
+            int last = -1;
+            double[] v = null;
+            for (int k = 0; k < out.receiver.length; k++) {
+                int j = out.receiver[k];
+                if (j != last) {
+                    int i = Arrays.binarySearch(st.ids, j);
+                    v = totals ? new double[] {st.totalAnnual[i]} : Arrays.copyOfRange(st.term, 12 * i, 12 * i + 12);
+                    last = j;
+                }
+                l.add(new Tuple2<>(out.to[k], new Tuple2<>(j, v)));
+            }
+            return l.iterator();
+        }).groupByKey(tp);
+    }
+
+    /**
+     * City-wide PV zone numbers, as the whole model numbers them ({@code metrics.PvZones}: by surface
+     * id, then first patch, from 1; the same rule as {@code tiles.LocalCityRunner.merge}).
+     */
+    static Map<Long, Integer> zoneNumbers(List<TileOut.Head> tiles) {
+        List<long[]> keys = new ArrayList<>(); // surface, first patch, tile, local zone
+        for (TileOut.Head t : tiles) {
+            for (int z = 0; z < t.zoneSurface().length; z++) {
+                if (t.zoneSurface()[z] >= 0) keys.add(new long[] {t.zoneSurface()[z], t.zoneFirstPatch()[z], t.tile(), z + 1});
+            }
+        }
+        keys.sort((a, b) -> a[0] != b[0] ? Long.compare(a[0], b[0]) : Long.compare(a[1], b[1]));
+        Map<Long, Integer> n = new LinkedHashMap<>();
+        for (int i = 0; i < keys.size(); i++) n.put(zoneKey((int) keys.get(i)[2], (int) keys.get(i)[3]), i + 1);
+        return n;
+    }
+}

@@ -1,0 +1,109 @@
+package org.solmass.spark;
+
+import org.apache.spark.sql.Row;
+import org.apache.spark.sql.RowFactory;
+import org.solmass.metrics.PvZonesMetric;
+import org.solmass.surface.Patch;
+import org.solmass.table.ResultTable;
+
+import java.io.Serializable;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * One tile's finished rows as plain arrays ({@link Serializable}, kept by Spark between the finish
+ * stage and the Parquet write): the patch columns of patches.csv, the result columns by name, the
+ * whole model's patch index of each row, and the tile's PV zones (numbered within the tile) with the
+ * surface and first patch that order them city-wide.
+ */
+final class TileOut implements Serializable {
+    private static final long serialVersionUID = 1L;
+
+    final int tile;
+    final int[] patchIndex;
+    final String[] ids, blocks, kinds;
+    final int[] surface;
+    /** x, y, z, nx, ny, nz, area_m2, tilt_deg, azimuth_deg per row. */
+    final double[] geometry;
+    final String[] columns;
+    final double[][] values;
+    /** Per local zone (1-based number z at [z - 1]): its surface and its first patch (whole-model index); -1 where unused. */
+    final long[] zoneSurface, zoneFirstPatch;
+
+    TileOut(int tile, ResultTable table, int[] patchIndex) {
+        this.tile = tile;
+        this.patchIndex = patchIndex.clone();
+        List<Patch> ps = table.patches();
+        int n = ps.size();
+        ids = new String[n];
+        blocks = new String[n];
+        kinds = new String[n];
+        surface = new int[n];
+        geometry = new double[9 * n];
+        for (int p = 0; p < n; p++) {
+            Patch q = ps.get(p);
+            ids[p] = q.id();
+            blocks[p] = q.blockName();
+            kinds[p] = q.kind().label();
+            surface[p] = q.surface();
+            double[] g = {q.centroid().x(), q.centroid().y(), q.centroid().z(), q.normal().x(), q.normal().y(), q.normal().z(),
+                    q.areaM2(), q.tiltDeg(), q.azimuthDeg()};
+            System.arraycopy(g, 0, geometry, 9 * p, 9);
+        }
+        columns = table.names().toArray(new String[0]);
+        values = new double[columns.length][];
+        for (int c = 0; c < columns.length; c++) values[c] = table.column(columns[c]).clone();
+        double[] z = table.has(PvZonesMetric.ZONE.name()) ? table.column(PvZonesMetric.ZONE.name()) : new double[0];
+        int zones = 0;
+        for (double v : z) if (!Double.isNaN(v)) zones = Math.max(zones, (int) v);
+        zoneSurface = new long[zones];
+        zoneFirstPatch = new long[zones];
+        java.util.Arrays.fill(zoneSurface, -1);
+        java.util.Arrays.fill(zoneFirstPatch, Long.MAX_VALUE);
+        for (int p = 0; p < z.length; p++) {
+            if (Double.isNaN(z[p])) continue;
+            int k = (int) z[p] - 1;
+            zoneSurface[k] = surface[p];
+            zoneFirstPatch[k] = Math.min(zoneFirstPatch[k], patchIndex[p]);
+        }
+    }
+
+    int size() { return ids.length; }
+
+    /** What the driver needs of a tile before the write: its columns, its PV zones, its row count. */
+    record Head(int tile, String[] columns, long[] zoneSurface, long[] zoneFirstPatch, int size) implements Serializable {}
+
+    Head head() { return new Head(tile, columns, zoneSurface, zoneFirstPatch, size()); }
+
+    /**
+     * The Parquet rows: patch columns, then {@code results} (NaN where this tile lacks one), then the
+     * tile; the PV zone renumbered city-wide with {@code zoneNumber} ((tile, local zone) key, see
+     * {@link CityStages#zoneKey}).
+     */
+    List<Row> rows(List<String> results, Map<Long, Integer> zoneNumber) {
+        int n = size(), base = 13;
+        double[][] v = new double[results.size()][];
+        for (int c = 0; c < v.length; c++) {
+            for (int k = 0; k < columns.length; k++) if (columns[k].equals(results.get(c))) v[c] = values[k];
+        }
+        int zoneCol = results.indexOf(PvZonesMetric.ZONE.name());
+        List<Row> rows = new ArrayList<>(n);
+        for (int p = 0; p < n; p++) {
+            Object[] o = new Object[base + v.length + 1];
+            o[0] = ids[p];
+            o[1] = blocks[p];
+            o[2] = surface[p];
+            o[3] = kinds[p];
+            for (int k = 0; k < 9; k++) o[4 + k] = geometry[9 * p + k];
+            for (int c = 0; c < v.length; c++) {
+                double x = v[c] == null ? Double.NaN : v[c][p];
+                if (c == zoneCol && !Double.isNaN(x)) x = zoneNumber.get(CityStages.zoneKey(tile, (int) x));
+                o[base + c] = x;
+            }
+            o[o.length - 1] = tile;
+            rows.add(RowFactory.create(o));
+        }
+        return rows;
+    }
+}

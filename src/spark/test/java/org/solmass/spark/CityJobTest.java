@@ -1,0 +1,156 @@
+package org.solmass.spark;
+
+import org.apache.spark.sql.Dataset;
+import org.apache.spark.sql.Row;
+import org.apache.spark.sql.SparkSession;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.solmass.cli.AnalysisRun;
+import org.solmass.irradiation.PhaseProgress;
+import org.solmass.output.PatchCsvWriter;
+import org.solmass.study.Study;
+import org.solmass.study.StudyReader;
+import org.solmass.table.ResultTable;
+import org.solmass.tiles.CityModel;
+import org.solmass.tiles.CityOptions;
+import org.solmass.tiles.LocalCityRunner;
+import org.solmass.tiles.SyntheticCity;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * Issue 19's checks on the Spark runner, local[2] with two tries per task ({@code local[2,2]}), on a
+ * small invented city ({@code tiles.SyntheticCity}, seeded, geo-referenced; shaded ground, so its
+ * ground probes reflect across tiles) cut into 50 m tiles whose halo covers the whole model:
+ * <ul>
+ * <li>the Parquet rows equal the one-machine run ({@code AnalysisRun}, as {@code solmass analyse})
+ * and the sequential tiled run ({@code tiles.LocalCityRunner}) within 1e-9 relative per patch and
+ * column (seeds come from patch ids, so the rays are the same);</li>
+ * <li>a task that fails once on purpose (first pass of one tile, then the Parquet write of one tile)
+ * is retried by Spark and the output holds every patch exactly once;</li>
+ * <li>the Parquet read back has patches.csv's columns in patches.csv's order, then the tile.</li>
+ * </ul>
+ */
+class CityJobTest {
+    static final String MASTER = "local[2,2]";
+    @TempDir static Path dir;
+    static SparkSession spark;
+    static Path studyFile;
+    static ResultTable oneMachine, tiledLocally;
+
+    @BeforeAll
+    static void startSparkAndRunTheReferences() throws Exception {
+        // an invented city of a few box buildings, geo-referenced (GeoJSON), 64 rays: small and quick
+        studyFile = SyntheticCity.write(dir.resolve("city"), new SyntheticCity.Spec(1500, 2.0, 7, 32632, 500_000, 5_316_000, 64)).study();
+        Study study = StudyReader.read(studyFile);
+        oneMachine = AnalysisRun.run(study, PhaseProgress.NONE).table();
+        tiledLocally = LocalCityRunner.run(CityModel.of(study), CityOptions.defaults().withTileM(50), PhaseProgress.NONE).table();
+        spark = CitySpark.session(MASTER, dir.resolve("spark"), 4);
+    }
+
+    @AfterAll
+    static void stopSpark() {
+        if (spark != null) spark.stop();
+    }
+
+    private Path run(String name, int failTile, String failStage) {
+        Path out = dir.resolve(name);
+        CityJob job = new CityJob();
+        job.failOnceTile = failTile;
+        job.failOnceStage = failStage;
+        int code = CityJob.commandLine(job).execute(studyFile.toString(), "--out", out.toString(), "--master", MASTER,
+                "--tile-size", "50", "-q");
+        assertEquals(0, code, "exit code");
+        assertTrue(job.last.plan().tiles().size() >= 4, "several tiles: " + job.last.plan().tiles().size());
+        return out;
+    }
+
+    private static Map<String, Row> rowsById(Path out) {
+        Dataset<Row> d = spark.read().parquet(out.resolve(CityRun.PARQUET).toString());
+        Map<String, Row> byId = new HashMap<>();
+        for (Row r : d.collectAsList()) {
+            Row before = byId.put(r.getString(0), r);
+            assertEquals(null, before, "patch " + r.getString(0) + " twice in the Parquet rows");
+        }
+        return byId;
+    }
+
+    private static void assertSameRows(ResultTable expected, Map<String, Row> rows, String what) {
+        assertEquals(expected.size(), rows.size(), what + ": every patch exactly once");
+        int compared = 0;
+        for (int p = 0; p < expected.size(); p++) {
+            String id = expected.patches().get(p).id();
+            Row r = rows.get(id);
+            assertTrue(r != null, what + ": patch " + id + " missing");
+            for (String c : expected.names()) {
+                double a = expected.column(c)[p], b = r.getDouble(r.fieldIndex(c));
+                if (Double.isNaN(a)) {
+                    assertTrue(Double.isNaN(b), what + ": " + c + " of " + id + ": NaN vs " + b);
+                    continue;
+                }
+                assertEquals(a, b, 1e-9 * Math.max(1e-12, Math.abs(a)), what + ": " + c + " of " + id);
+                compared++;
+            }
+        }
+        assertTrue(compared > 1000, what + ": values compared " + compared);
+    }
+
+    @Test
+    void aWriteTaskFailingOnceIsRetriedAndEveryPatchIsWrittenOnceWithTheOneMachineValuesAndPatchesCsvColumns() {
+        int fired = CityStages.HOOK_FIRED.get();
+        Path out = run("write-fails", 1, "write");
+        assertEquals(fired + 1, CityStages.HOOK_FIRED.get(), "the hook failed one task attempt");
+        Map<String, Row> rows = rowsById(out);
+        assertSameRows(oneMachine, rows, "against the one-machine run");
+        assertSameRows(tiledLocally, rows, "against the sequential tiled run");
+        List<String> expected = new ArrayList<>(PatchCsvWriter.PATCH_COLUMNS);
+        expected.addAll(oneMachine.names());
+        expected.add(PatchRows.TILE);
+        assertEquals(expected, List.of(spark.read().parquet(out.resolve(CityRun.PARQUET).toString()).columns()),
+                "Parquet read back: patches.csv's columns in order, then the tile");
+        assertTrue(Files.isRegularFile(out.resolve("run.json")) && Files.isRegularFile(out.resolve("buildings.csv"))
+                && Files.isRegularFile(out.resolve(CityRun.SUMMARY)) && Files.isRegularFile(out.resolve(CityRun.PARQUET_INDEX))
+                && Files.isRegularFile(out.resolve("buildings.geojson")), "outputs published");
+    }
+
+    /**
+     * buildings.csv: per block the area and the area-weighted annual mean as {@code table.AreaStats}
+     * defines them, from the one-machine rows (the file rounds to the column's 2 decimals).
+     */
+    private static void assertBuildingsCsvHoldsEachBlocksAreaAndAreaWeightedMean(Path out) throws Exception {
+        List<String> lines = Files.readAllLines(out.resolve("buildings.csv"));
+        List<String> header = List.of(lines.get(0).split(","));
+        int annual = header.indexOf("annual_kwh_m2"), area = header.indexOf("area_m2");
+        Map<String, List<Integer>> byBlock = new HashMap<>();
+        for (int p = 0; p < oneMachine.size(); p++) byBlock.computeIfAbsent(oneMachine.patches().get(p).blockName(), k -> new ArrayList<>()).add(p);
+        assertEquals(byBlock.size(), lines.size() - 1, "one row per building");
+        for (String line : lines.subList(1, lines.size())) {
+            String[] c = line.split(",");
+            List<org.solmass.surface.Patch> ps = new ArrayList<>();
+            double[] v = byBlock.get(c[0]).stream().mapToDouble(p -> oneMachine.column("annual_kwh_m2")[p]).toArray();
+            for (int p : byBlock.get(c[0])) ps.add(oneMachine.patches().get(p));
+            org.solmass.table.AreaStats st = org.solmass.table.AreaStats.of(ps, v);
+            assertEquals(st.areaM2(), Double.parseDouble(c[area]), 0.005 + 1e-9, c[0] + " area");
+            assertEquals(st.mean(), Double.parseDouble(c[annual]), 0.005 + 1e-9, c[0] + " annual mean");
+        }
+    }
+
+    @Test
+    void aFirstPassTaskFailingOnceIsRetriedAndEveryPatchIsWrittenOnceAndBuildingsCsvHoldsAreaWeightedMeans() throws Exception {
+        int fired = CityStages.HOOK_FIRED.get();
+        Path out = run("first-pass-fails", 1, "first-pass");
+        assertEquals(fired + 1, CityStages.HOOK_FIRED.get(), "the hook failed one task attempt");
+        assertSameRows(oneMachine, rowsById(out), "against the one-machine run");
+        assertBuildingsCsvHoldsEachBlocksAreaAndAreaWeightedMean(out);
+    }
+}
