@@ -209,6 +209,19 @@ final class Reflection {
         return new Outcome(reflMonth, null, totalAnnual, java.util.Arrays.copyOf(bounceWh, used), converged);
     }
 
+    /** Receiver r's 12 months in {@code dst}: its list's weights times the month sums of {@code src}, in list order. */
+    private static void monthBounce(int r, Lists l, double[] src, double[] dst) {
+        int[] idx = l.idx()[r];
+        float[] wt = l.w()[r];
+        int m0 = r * 12;
+        for (int m = 0; m < 12; m++) dst[m0 + m] = 0;
+        for (int i = 0; i < idx.length; i++) {
+            int base = idx[i] * 12;
+            double wr = wt[i];
+            for (int m = 0; m < 12; m++) dst[m0 + m] += wr * src[base + m];
+        }
+    }
+
     private static void finish(int r, int n, double[] dst, double[][] reflMonth, double[] added, double[] totalAnnual) {
         double sum = 0;
         int m0 = r * 12;
