@@ -359,7 +359,7 @@ public final class ShadedIrradiation {
             if (skyView != null) {
                 if (canopy != null) skyView.slotSumsThroughCrowns(st.skyWh, skySlot); // docs/method.md "Vegetation"
                 else skyView.slotSums(skyView.visible, st.skyWh, skySlot);
-                if (analysed) skyView.slotSums(skyView.unobstructed, st.skyWh, skyUSlot);
+                if (analysed) skyView.unobstructedSlotSums(nx, ny, nz, st.skyWh, skyUSlot);
             }
             for (int k = 0; k < SLOTS; k++) {
                 if (canopy != null) { // the month's sky and horizon band seen through the crowns

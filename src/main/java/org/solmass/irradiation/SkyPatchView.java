@@ -37,6 +37,15 @@ final class SkyPatchView {
     private int extraCount;
     /** Per month (0 = January): the visible shares through the tree crowns ({@link #throughCrowns}). */
     final double[][] visibleMonth;
+    /** The normal {@link #unobstructed} was last filled for (bits of x, y, z), and whether it is set. */
+    private long cachedNx, cachedNy, cachedNz;
+    private boolean cachedShares;
+    /** The normal and radiance table the last {@link #unobstructedSlotSums} output belongs to. */
+    private long sumsNx, sumsNy, sumsNz;
+    private double[] sumsTable, sumsOut;
+    /** Slot ranges {@code [k0, k1)} where some patch of the radiance table is not zero (pairs), and their table. */
+    private int[] lightRanges;
+    private double[] rangesTable;
 
     SkyPatchView(SkyPatches patches, BundleTracer bundle) {
         this.patches = patches;
@@ -57,7 +66,14 @@ final class SkyPatchView {
      * (directions and classes), tracing one ray into each patch in front that no ray reached.
      */
     void measure(double ox, double oy, double oz, double nx, double ny, double nz, double[] dir, int[] cls, int n) {
-        patches.cosineShares(nx, ny, nz, unobstructed);
+        long bx = Double.doubleToRawLongBits(nx), by = Double.doubleToRawLongBits(ny), bz = Double.doubleToRawLongBits(nz);
+        if (!cachedShares || bx != cachedNx || by != cachedNy || bz != cachedNz) { // a function of the normal alone
+            patches.cosineShares(nx, ny, nz, unobstructed);
+            cachedNx = bx;
+            cachedNy = by;
+            cachedNz = bz;
+            cachedShares = true;
+        }
         Arrays.fill(rays, 0);
         Arrays.fill(seen, 0);
         if (rayPatch.length < n) rayPatch = new int[n];
@@ -140,12 +156,49 @@ final class SkyPatchView {
      */
     void slotSums(double[] shares, double[] skyWh, double[] out) {
         int slots = out.length;
+        int[] ranges = lightRanges(skyWh, slots);
         Arrays.fill(out, 0);
         for (int p = 0; p < np; p++) {
             double w = shares[p];
             if (w == 0) continue;
             int base = p * slots;
-            for (int k = 0; k < slots; k++) out[k] += w * skyWh[base + k];
+            for (int r = 0; r < ranges.length; r += 2) { // slots outside the ranges add w * 0 to 0: skipped
+                for (int k = ranges[r]; k < ranges[r + 1]; k++) out[k] += w * skyWh[base + k];
+            }
         }
+    }
+
+    /**
+     * {@link #slotSums} of the {@link #unobstructed} shares of the normal last {@link #measure}d
+     * ({@code nx, ny, nz}): they depend on the normal alone, so the sums are kept for the next receiver
+     * with the same normal and table (every face of a surface, every ground probe) instead of redone.
+     */
+    void unobstructedSlotSums(double nx, double ny, double nz, double[] skyWh, double[] out) {
+        long bx = Double.doubleToRawLongBits(nx), by = Double.doubleToRawLongBits(ny), bz = Double.doubleToRawLongBits(nz);
+        if (out == sumsOut && skyWh == sumsTable && bx == sumsNx && by == sumsNy && bz == sumsNz) return;
+        slotSums(unobstructed, skyWh, out);
+        sumsOut = out;
+        sumsTable = skyWh;
+        sumsNx = bx;
+        sumsNy = by;
+        sumsNz = bz;
+    }
+
+    /** Runs of slots where some patch's radiance is not zero (night slots are zero for every patch). */
+    private int[] lightRanges(double[] skyWh, int slots) {
+        if (skyWh == rangesTable) return lightRanges;
+        boolean[] lit = new boolean[slots];
+        for (int p = 0; p < np; p++) {
+            for (int k = 0; k < slots; k++) if (skyWh[p * slots + k] != 0) lit[k] = true;
+        }
+        int[] r = new int[slots + 1];
+        int n = 0;
+        for (int k = 0; k < slots; k++) {
+            if (lit[k] && (k == 0 || !lit[k - 1])) r[n++] = k;
+            if (lit[k] && (k == slots - 1 || !lit[k + 1])) r[n++] = k + 1;
+        }
+        lightRanges = Arrays.copyOf(r, n);
+        rangesTable = skyWh;
+        return lightRanges;
     }
 }
