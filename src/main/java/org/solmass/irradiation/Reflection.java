@@ -97,10 +97,7 @@ final class Reflection {
         });
         int[] slotMonth = new int[SLOTS];
         for (int k = 0; k < SLOTS; k++) slotMonth[k] = org.solmass.climate.MonthHour.month(k) - 1;
-        double[] bounceWh = new double[Math.max(1, maxBounces)];
-        double reflected = 0;
-        int used = 0;
-        boolean converged = false;
+        Series series = new Series(maxBounces, tolerance);
         progress.begin("reflection", maxBounces);
         for (int b = 0; b < maxBounces; b++) {
             final double[] src = cur, dst = next;
@@ -139,22 +136,15 @@ final class Reflection {
                     finish(r, n, dst, reflMonth, added, totalAnnual);
                 });
             }
-            double add = 0;
-            for (int r = 0; r < n; r++) add += added[r];
-            reflected += add;
-            bounceWh[b] = add;
-            used = b + 1;
+            boolean stop = series.record(added, n);
             double[] t = cur;
             cur = next;
             next = t;
-            progress.advance(used);
-            if (add <= tolerance * reflected) {
-                converged = true;
-                break;
-            }
+            progress.advance(series.used);
+            if (stop) break;
         }
         if (monthHour != null) laterBouncesIntoSlots(fp, n, reflMonth, firstBounceMonth, monthHour, slotMonth, st);
-        return new Outcome(reflMonth, monthHour, totalAnnual, java.util.Arrays.copyOf(bounceWh, used), converged);
+        return new Outcome(reflMonth, monthHour, totalAnnual, series.bounces(), series.converged);
     }
 
     /**
@@ -178,10 +168,7 @@ final class Reflection {
             for (int m = 0; m < 12; m++) s += firstPassMonthWh[r * 12 + m];
             totalAnnual[r] = s;
         }
-        double[] bounceWh = new double[Math.max(1, maxBounces)];
-        double reflected = 0;
-        int used = 0;
-        boolean converged = false;
+        Series series = new Series(maxBounces, tolerance);
         for (int b = 0; b < maxBounces; b++) {
             final double[] src = cur, dst = next;
             final boolean first = b == 0;
@@ -193,20 +180,42 @@ final class Reflection {
                 }
                 finish(r, n, dst, reflMonth, added, totalAnnual);
             });
-            double add = 0;
-            for (int r = 0; r < n; r++) add += added[r];
-            reflected += add;
-            bounceWh[b] = add;
-            used = b + 1;
+            boolean stop = series.record(added, n);
             double[] t = cur;
             cur = next;
             next = t;
-            if (add <= tolerance * reflected) {
-                converged = true;
-                break;
-            }
+            if (stop) break;
         }
-        return new Outcome(reflMonth, null, totalAnnual, java.util.Arrays.copyOf(bounceWh, used), converged);
+        return new Outcome(reflMonth, null, totalAnnual, series.bounces(), series.converged);
+    }
+
+    /**
+     * The stopping rule's bookkeeping, shared by both solves: the energy each bounce adds over the
+     * analysed patches (summed in receiver order) and whether the last one met the tolerance.
+     */
+    private static final class Series {
+        private final double[] bounceWh;
+        private final double tolerance;
+        private double reflected;
+        int used;
+        boolean converged;
+
+        Series(int maxBounces, double tolerance) {
+            bounceWh = new double[Math.max(1, maxBounces)];
+            this.tolerance = tolerance;
+        }
+
+        /** Records the bounce whose per-receiver additions are {@code added}; true when the series may stop. */
+        boolean record(double[] added, int analysed) {
+            double add = 0;
+            for (int r = 0; r < analysed; r++) add += added[r];
+            reflected += add;
+            bounceWh[used++] = add;
+            converged = add <= tolerance * reflected;
+            return converged;
+        }
+
+        double[] bounces() { return java.util.Arrays.copyOf(bounceWh, used); }
     }
 
     /** Receiver r's 12 months in {@code dst}: its list's weights times the month sums of {@code src}, in list order. */
