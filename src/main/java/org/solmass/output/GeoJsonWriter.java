@@ -22,7 +22,9 @@ import java.util.List;
  * the RFC requires; each feature's properties give, besides its values, its centroid in the model's
  * own CRS ({@code crs_x}, {@code crs_y}, {@code crs_z}; mm), and the collection names that CRS in a
  * foreign member {@code "solmass_crs"} with the caution. Written as text by hand, one feature a line,
- * each number with its column's decimals ({@link Numbers}).
+ * each number with its column's decimals ({@link Numbers}). zones.geojson of a model without
+ * geo-reference (an OBJ model; the city run writes it, {@code spark.CityRun}) is in local metres
+ * (x east, y north, z up, mm), as modules.geojson is, and says so in a {@code "coordinates"} member.
  */
 public final class GeoJsonWriter {
     public static final String PATCHES = "patches.geojson", ZONES = "zones.geojson";
@@ -60,7 +62,11 @@ public final class GeoJsonWriter {
         });
     }
 
-    /** zones.geojson: one MultiPolygon feature per PV roof zone with zones.csv's columns as properties. */
+    /**
+     * zones.geojson: one MultiPolygon feature per PV roof zone with zones.csv's columns as properties.
+     *
+     * @param geo the model's geo-reference, or null for local metres
+     */
     public static void writeZones(Path file, List<PvZones.Zone> zones, GeoReference geo, List<String> cautions) {
         AtomicFiles.writeText(file, w -> {
             header(w, geo, cautions);
@@ -92,24 +98,34 @@ public final class GeoJsonWriter {
     }
 
     static void header(Writer w, GeoReference geo, List<String> cautions) throws IOException {
-        StringBuilder sb = new StringBuilder("{\"type\":\"FeatureCollection\",\"solmass_crs\":");
-        string(sb, geo.file().name());
-        sb.append(",\"solmass_reference\":");
-        string(sb, geo.describe());
+        StringBuilder sb = new StringBuilder("{\"type\":\"FeatureCollection\",");
+        if (geo == null) {
+            sb.append("\"coordinates\":\"local metres: x east, y north, z up (no CRS)\"");
+        } else {
+            sb.append("\"solmass_crs\":");
+            string(sb, geo.file().name());
+            sb.append(",\"solmass_reference\":");
+            string(sb, geo.describe());
+        }
         sb.append(",\"caution\":");
         string(sb, String.join(" ", cautions));
         sb.append(",\"features\":[\n");
         w.write(sb.toString());
     }
 
-    /** A closed ring of x,y,z triples (Solmass frame) as [lon, lat, z] positions, counter-clockwise in plan when {@code ccw}. */
+    /**
+     * A closed ring of x,y,z triples (Solmass frame) as [lon, lat, z] positions (with {@code geo} null:
+     * [x, y, z] local metres), counter-clockwise in plan when {@code ccw}.
+     */
     static void ring(StringBuilder sb, double[] xyz, GeoReference geo, boolean ccw) {
         int n = xyz.length / 3;
         Coordinate[] cs = new Coordinate[n + 1];
         for (int i = 0; i < n; i++) {
-            double[] ll = geo.toWgs84(xyz[3 * i], xyz[3 * i + 1], xyz[3 * i + 2]);
+            double[] ll = geo == null ? new double[] {xyz[3 * i], xyz[3 * i + 1], xyz[3 * i + 2]}
+                    : geo.toWgs84(xyz[3 * i], xyz[3 * i + 1], xyz[3 * i + 2]);
             cs[i] = new Coordinate(ll[0], ll[1], ll[2]);
         }
+        int xy = geo == null ? METRE_DECIMALS : LONLAT_DECIMALS;
         cs[n] = cs[0];
         boolean reverse = n >= 3 && Orientation.isCCW(cs) != ccw;
         sb.append('[');
@@ -117,9 +133,9 @@ public final class GeoJsonWriter {
             Coordinate c = cs[reverse ? n - k : k];
             if (k > 0) sb.append(',');
             sb.append('[');
-            Numbers.append(sb, c.x, LONLAT_DECIMALS);
+            Numbers.append(sb, c.x, xy);
             sb.append(',');
-            Numbers.append(sb, c.y, LONLAT_DECIMALS);
+            Numbers.append(sb, c.y, xy);
             sb.append(',');
             Numbers.append(sb, c.z, METRE_DECIMALS);
             sb.append(']');
@@ -173,7 +189,9 @@ public final class GeoJsonWriter {
         return c;
     }
 
+    /** The centroid in the model's CRS ({@code crs_x}, ...); nothing without a geo-reference (the geometry is in local metres). */
     static void centroid(StringBuilder sb, GeoReference geo, double x, double y, double z) {
+        if (geo == null) return;
         double[] f = geo.toFile(x, y, z);
         int d = geo.file().geographic() ? LONLAT_DECIMALS : METRE_DECIMALS;
         prop(sb, "crs_x", f[0], d);

@@ -12,6 +12,7 @@ import org.solmass.geo.GeoReference;
 import org.solmass.output.AtomicFiles;
 import org.solmass.output.BuildingsWriter;
 import org.solmass.output.FolderClaim;
+import org.solmass.output.GeoJsonWriter;
 import org.solmass.output.Publication;
 import org.solmass.output.RunRecord;
 import org.solmass.study.StudyWriter;
@@ -37,7 +38,7 @@ import java.util.stream.Stream;
  * per-patch Parquet into a hidden staging folder; the building summaries are computed from it; then
  * the folder is published: {@value #PARQUET} is moved into place (an earlier run's removed first),
  * and the files go through {@link Publication} (staged, then renamed, run.json last with the manifest),
- * among them {@value #PARQUET_INDEX}, which lists every Parquet file with its size and SHA-256, so
+ * among them zones.geojson (the PV zones, city-wide numbers, {@code output.GeoJsonWriter}) and {@value #PARQUET_INDEX}, which lists every Parquet file with its size and SHA-256, so
  * run.json's manifest covers the Parquet folder too.
  */
 final class CityRun {
@@ -98,6 +99,8 @@ final class CityRun {
                 Map<String, double[]> footprints = BuildingsWriter.footprints(city.prepared().model());
                 pub.write(BuildingsWriter.GEOJSON, p -> BuildingsWriter.writeGeoJson(p, buildings, summarised, footprints, geo, cautions));
             }
+            // as the one-machine run's zones.geojson (WGS84), or local metres for an OBJ model
+            if (o.zones() != null) pub.write(GeoJsonWriter.ZONES, p -> GeoJsonWriter.writeZones(p, o.zones(), geo, cautions));
             ObjectNode summary = summary(spark, plan, o, totals, cautions, timings);
             pub.write(SUMMARY, p -> AtomicFiles.writeString(p, StudyWriter.pretty(summary)));
             written = new ArrayList<>(List.of(target));

@@ -15,6 +15,7 @@ import org.solmass.irradiation.FirstPasses;
 import org.solmass.irradiation.StagedPasses;
 import org.solmass.irradiation.TileBounces;
 import org.solmass.metrics.ColumnCatalogue;
+import org.solmass.metrics.PvZones;
 import org.solmass.table.Column;
 import org.solmass.tiles.CityModel;
 import org.solmass.tiles.CityPlan;
@@ -66,9 +67,12 @@ final class CityStages {
         Settings failingOnce(int tile, String stage) { return new Settings(studyFile, tile, stage); }
     }
 
-    /** What the stages produced (the Parquet rows are in {@code parquet}). */
+    /**
+     * What the stages produced (the Parquet rows are in {@code parquet}); {@code zones}: the PV zones
+     * with their city-wide numbers, in number order, or null when the run finds no PV zones.
+     */
     record Outcome(List<Column> columns, double[] bounceWh, boolean converged, long rows, long[] firstPassBytes,
-                   Map<String, Double> stageS) {}
+                   Map<String, Double> stageS, List<PvZones.Zone> zones) {}
 
     private static final Map<String, CityModel> CITIES = new ConcurrentHashMap<>();
 
@@ -276,7 +280,7 @@ final class CityStages {
             StagedPasses.Reflected r = new StagedPasses.Reflected(refl, total, bounces, conv, tolerance, maxBounces);
             Tile t = bPlan.value().tile(tile);
             CityModel.TileRows rows = city(s.studyFile()).finish(t, fp, r);
-            return new TileOut(tile, rows.table(), rows.patchIndex());
+            return new TileOut(tile, rows.table(), rows.patchIndex(), rows.metrics());
         }).persist(StorageLevel.MEMORY_AND_DISK());
         cached.add(out);
         List<Tuple2<Integer, TileOut.Head>> heads = out.mapValues(TileOut::head).collect();
@@ -291,6 +295,7 @@ final class CityStages {
         Map<Long, Integer> zoneNumber = zoneNumbers(byTile);
         List<Column> columns = names.stream().map(ColumnCatalogue::of).toList();
         Broadcast<Map<Long, Integer>> bZones = sc.broadcast(zoneNumber);
+        List<PvZones.Zone> zones = cityZones(byTile, zoneNumber);
 
         long t3 = System.nanoTime();
         StageProgress.label(sc, "write");
@@ -305,7 +310,7 @@ final class CityStages {
         for (JavaPairRDD<?, ?> c : cached) c.unpersist(false);
         bPlan.destroy();
         bZones.destroy();
-        return new Outcome(columns, bounces, conv, count, bytes, stageS);
+        return new Outcome(columns, bounces, conv, count, bytes, stageS, zones);
     }
 
     /**
@@ -374,5 +379,17 @@ final class CityStages {
         Map<Long, Integer> n = new LinkedHashMap<>();
         for (int i = 0; i < keys.size(); i++) n.put(zoneKey((int) keys.get(i)[2], (int) keys.get(i)[3]), i + 1);
         return n;
+    }
+
+    /** The tiles' PV zones with their city-wide numbers ({@link #zoneNumbers}), in number order; null when no tile found PV zones. */
+    static List<PvZones.Zone> cityZones(List<TileOut.Head> tiles, Map<Long, Integer> zoneNumber) {
+        List<PvZones.Zone> zones = null;
+        for (TileOut.Head t : tiles) {
+            if (t.zones() == null) continue;
+            if (zones == null) zones = new ArrayList<>();
+            for (TileOut.ZoneOut z : t.zones()) zones.add(z.zone(zoneNumber.get(zoneKey(t.tile(), z.localId()))));
+        }
+        if (zones != null) zones.sort((a, b) -> Integer.compare(a.id(), b.id()));
+        return zones;
     }
 }

@@ -2,6 +2,8 @@ package org.solmass.spark;
 
 import org.apache.spark.sql.Row;
 import org.apache.spark.sql.RowFactory;
+import org.solmass.metrics.Metrics;
+import org.solmass.metrics.PvZones;
 import org.solmass.metrics.PvZonesMetric;
 import org.solmass.surface.Patch;
 import org.solmass.table.ResultTable;
@@ -15,7 +17,8 @@ import java.util.Map;
  * One tile's finished rows as plain arrays ({@link Serializable}, kept by Spark between the finish
  * stage and the Parquet write): the patch columns of patches.csv, the result columns by name, the
  * whole model's patch index of each row, and the tile's PV zones (numbered within the tile) with the
- * surface and first patch that order them city-wide.
+ * surface and first patch that order them city-wide, and their outlines and figures for zones.geojson
+ * ({@link ZoneOut}).
  */
 final class TileOut implements Serializable {
     private static final long serialVersionUID = 1L;
@@ -30,8 +33,10 @@ final class TileOut implements Serializable {
     final double[][] values;
     /** Per local zone (1-based number z at [z - 1]): its surface and its first patch (whole-model index); -1 where unused. */
     final long[] zoneSurface, zoneFirstPatch;
+    /** The tile's PV zones (local numbers) for zones.geojson; null when the run finds no PV zones. */
+    final ZoneOut[] zones;
 
-    TileOut(int tile, ResultTable table, int[] patchIndex) {
+    TileOut(int tile, ResultTable table, int[] patchIndex, Metrics.Outcome metrics) {
         this.tile = tile;
         this.patchIndex = patchIndex.clone();
         List<Patch> ps = table.patches();
@@ -67,14 +72,40 @@ final class TileOut implements Serializable {
             zoneSurface[k] = surface[p];
             zoneFirstPatch[k] = Math.min(zoneFirstPatch[k], patchIndex[p]);
         }
+        PvZonesMetric.Found found = metrics == null ? null : metrics.find(PvZonesMetric.Found.class).orElse(null);
+        this.zones = found == null ? null : found.zones().zones().stream().map(q -> ZoneOut.of(q, this.patchIndex)).toArray(ZoneOut[]::new);
+    }
+
+    /**
+     * One PV zone of a tile as {@code output.GeoJsonWriter.writeZones} needs it ({@link Serializable}):
+     * {@link PvZones.Zone}'s fields but the outline in the surface's frame (only the module layout,
+     * done in the tile, uses it); patches as whole-model indices.
+     */
+    record ZoneOut(int localId, int block, String blockName, int surface, String surfaceLabel, int[] patches,
+                   double areaM2, double meanKwhM2, double totalKwh, double meanShadingLossPct, double yieldKwh,
+                   double tiltDeg, double azimuthDeg, double[][] outlines) implements Serializable {
+        static ZoneOut of(PvZones.Zone z, int[] patchIndex) {
+            int[] ps = new int[z.patches().length];
+            for (int i = 0; i < ps.length; i++) ps[i] = patchIndex[z.patches()[i]];
+            java.util.Arrays.sort(ps);
+            return new ZoneOut(z.id(), z.block(), z.blockName(), z.surface(), z.surfaceLabel(), ps, z.areaM2(), z.meanKwhM2(),
+                    z.totalKwh(), z.meanShadingLossPct(), z.yieldKwh(), z.tiltDeg(), z.azimuthDeg(),
+                    z.outlines().toArray(new double[0][]));
+        }
+
+        /** The zone with its city-wide number (no outline in the surface's frame: null). */
+        PvZones.Zone zone(int id) {
+            return new PvZones.Zone(id, block, blockName, surface, surfaceLabel, patches, areaM2, meanKwhM2, totalKwh,
+                    meanShadingLossPct, yieldKwh, tiltDeg, azimuthDeg, List.of(outlines), null);
+        }
     }
 
     int size() { return ids.length; }
 
-    /** What the driver needs of a tile before the write: its columns, its PV zones, its row count. */
-    record Head(int tile, String[] columns, long[] zoneSurface, long[] zoneFirstPatch, int size) implements Serializable {}
+    /** What the driver needs of a tile before the write: its columns, its PV zones (keys and, for zones.geojson, figures), its row count. */
+    record Head(int tile, String[] columns, long[] zoneSurface, long[] zoneFirstPatch, ZoneOut[] zones, int size) implements Serializable {}
 
-    Head head() { return new Head(tile, columns, zoneSurface, zoneFirstPatch, size()); }
+    Head head() { return new Head(tile, columns, zoneSurface, zoneFirstPatch, zones, size()); }
 
     /**
      * The Parquet rows: patch columns, then {@code results} (NaN where this tile lacks one), then the

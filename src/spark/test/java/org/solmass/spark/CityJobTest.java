@@ -38,7 +38,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * column (seeds come from patch ids, so the rays are the same);</li>
  * <li>a task that fails once on purpose (first pass of one tile, then the Parquet write of one tile)
  * is retried by Spark and the output holds every patch exactly once;</li>
- * <li>the Parquet read back has patches.csv's columns in patches.csv's order, then the tile.</li>
+ * <li>the Parquet read back has patches.csv's columns in patches.csv's order, then the tile;</li>
+ * <li>zones.geojson holds every PV zone of the one-machine run once, with its number and area.</li>
  * </ul>
  */
 class CityJobTest {
@@ -47,13 +48,16 @@ class CityJobTest {
     static SparkSession spark;
     static Path studyFile;
     static ResultTable oneMachine, tiledLocally;
+    static List<org.solmass.metrics.PvZones.Zone> oneMachineZones;
 
     @BeforeAll
     static void startSparkAndRunTheReferences() throws Exception {
         // an invented city of a few box buildings, geo-referenced (GeoJSON), 64 rays: small and quick
         studyFile = SyntheticCity.write(dir.resolve("city"), new SyntheticCity.Spec(1500, 2.0, 7, 32632, 500_000, 5_316_000, 64)).study();
         Study study = StudyReader.read(studyFile);
-        oneMachine = AnalysisRun.run(study, PhaseProgress.NONE).table();
+        AnalysisRun.Outcome one = AnalysisRun.run(study, PhaseProgress.NONE);
+        oneMachine = one.table();
+        oneMachineZones = one.metrics().find(org.solmass.metrics.PvZonesMetric.Found.class).orElseThrow().zones().zones();
         tiledLocally = LocalCityRunner.run(CityModel.of(study), CityOptions.defaults().withTileM(50), PhaseProgress.NONE).table();
         spark = CitySpark.session(MASTER, dir.resolve("spark"), 4);
     }
@@ -145,12 +149,46 @@ class CityJobTest {
         }
     }
 
+    /**
+     * zones.geojson: one feature per PV zone of the one-machine run ({@code metrics.PvZones}), each
+     * city-wide number 1..n once, each zone's area as the one-machine zone of that number (the file
+     * rounds to 2 decimals, so 0.005 m2 per zone), the same total zone area, the caution in the file,
+     * and listed in run.json's manifest.
+     */
+    private static void assertZonesGeoJsonHoldsTheOneMachineZonesOnce(Path out) throws Exception {
+        assertTrue(!oneMachineZones.isEmpty(), "the one-machine run finds PV zones");
+        com.fasterxml.jackson.databind.JsonNode fc = new com.fasterxml.jackson.databind.ObjectMapper()
+                .readTree(out.resolve(org.solmass.output.GeoJsonWriter.ZONES).toFile());
+        assertTrue(fc.path("caution").asText().contains(org.solmass.Cautions.RESULTS), "caution in zones.geojson");
+        com.fasterxml.jackson.databind.JsonNode features = fc.path("features");
+        assertEquals(oneMachineZones.size(), features.size(), "zones.geojson: as many zones as the one-machine run");
+        Map<Integer, Double> areaById = new HashMap<>();
+        double total = 0, expectedTotal = 0;
+        for (com.fasterxml.jackson.databind.JsonNode f : features) {
+            int id = f.path("properties").path("zone").asInt();
+            double a = f.path("properties").path("area_m2").asDouble();
+            assertEquals(null, areaById.put(id, a), "zone " + id + " twice in zones.geojson");
+            assertEquals("MultiPolygon", f.path("geometry").path("type").asText(), "zone " + id + " geometry");
+            total += a;
+        }
+        for (org.solmass.metrics.PvZones.Zone z : oneMachineZones) {
+            Double a = areaById.get(z.id());
+            assertTrue(a != null, "zone " + z.id() + " missing from zones.geojson");
+            assertEquals(z.areaM2(), a, 0.005 + 1e-9, "zone " + z.id() + " area");
+            expectedTotal += z.areaM2();
+        }
+        assertEquals(expectedTotal, total, 0.005 * oneMachineZones.size() + 1e-9, "total zone area");
+        assertTrue(Files.readString(out.resolve("run.json")).contains(org.solmass.output.GeoJsonWriter.ZONES),
+                "zones.geojson in run.json's manifest");
+    }
+
     @Test
-    void aFirstPassTaskFailingOnceIsRetriedAndEveryPatchIsWrittenOnceAndBuildingsCsvHoldsAreaWeightedMeans() throws Exception {
+    void aFirstPassTaskFailingOnceIsRetriedAndEveryPatchIsWrittenOnceAndBuildingsCsvAndZonesGeoJsonMatchOneMachine() throws Exception {
         int fired = CityStages.HOOK_FIRED.get();
         Path out = run("first-pass-fails", 1, "first-pass");
         assertEquals(fired + 1, CityStages.HOOK_FIRED.get(), "the hook failed one task attempt");
         assertSameRows(oneMachine, rowsById(out), "against the one-machine run");
         assertBuildingsCsvHoldsEachBlocksAreaAndAreaWeightedMean(out);
+        assertZonesGeoJsonHoldsTheOneMachineZonesOnce(out);
     }
 }
