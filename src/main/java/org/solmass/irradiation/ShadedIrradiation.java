@@ -147,20 +147,13 @@ public final class ShadedIrradiation {
                     monthHour[base + k] = st.hours[k] > 0 ? (float) (t / st.hours[k]) : 0f;
                 }
             }
-            double b = 0, dfs = 0, ref = 0;
+            double[] bm = new double[12], dm = new double[12], rm = new double[12];
             for (int m = 0; m < 12; m++) {
-                double rm = crown == null ? ro.reflMonthWh()[m][p] : ro.reflMonthWh()[m][p] * crown[m];
-                monthly[m][p] = (beamM[m][p] + diffM[m][p] + rm) / 1000;
-                b += beamM[m][p];
-                dfs += diffM[m][p];
-                ref += rm;
+                rm[m] = crown == null ? ro.reflMonthWh()[m][p] : ro.reflMonthWh()[m][p] * crown[m];
+                bm[m] = beamM[m][p];
+                dm[m] = diffM[m][p];
             }
-            beam[p] = b / 1000;
-            diffuse[p] = dfs / 1000;
-            reflected[p] = ref / 1000;
-            double tot = 0;
-            for (int m = 0; m < 12; m++) tot += monthly[m][p];
-            annual[p] = tot;
+            patchTotals(p, bm, dm, rm, monthly, beam, diffuse, reflected, annual);
             annualSe[p] = Reflection.stdErrorWh(p, lists, svf[p], bgAnnual, ghiAnnual, ro.totalAnnualWh()) / 1000;
             long d = done.incrementAndGet();
             if (d % everyB == 0 || d == n) progress.advance(d);
@@ -171,6 +164,28 @@ public final class ShadedIrradiation {
         return new IrradiationResult(svf, gvf, obs, se, hv, annual, beam, diffuse, reflected, unshaded,
                 monthly, monthHour, sunshine, st.siteSunshineHours, in.sun().count(), annualSe,
                 new IrradiationResult.Bounces(bounceKwh, ro.converged(), in.bounceTolerance(), in.maxBounces()));
+    }
+
+    /**
+     * Analysed patch p's monthly and annual sums in kWh/m2 from its beam, sky diffuse and reflected
+     * irradiation per month (Wh/m2), in month order: the one place both the one-machine run and the
+     * tiles' finish stage ({@link StagedPasses}) add them up.
+     */
+    static void patchTotals(int p, double[] beamWh, double[] diffuseWh, double[] reflectedWh, double[][] monthly,
+                            double[] beam, double[] diffuse, double[] reflected, double[] annual) {
+        double b = 0, dfs = 0, ref = 0;
+        for (int m = 0; m < 12; m++) {
+            monthly[m][p] = (beamWh[m] + diffuseWh[m] + reflectedWh[m]) / 1000;
+            b += beamWh[m];
+            dfs += diffuseWh[m];
+            ref += reflectedWh[m];
+        }
+        beam[p] = b / 1000;
+        diffuse[p] = dfs / 1000;
+        reflected[p] = ref / 1000;
+        double tot = 0;
+        for (int m = 0; m < 12; m++) tot += monthly[m][p];
+        annual[p] = tot;
     }
 
     /** Per-thread state: samplers, scratch arrays; no allocation per ray or per step. */

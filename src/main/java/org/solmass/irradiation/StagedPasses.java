@@ -145,22 +145,14 @@ public final class StagedPasses {
             obs[p] = part.obs[i];
             se[p] = part.svfSe[i];
             hv[p] = part.horizonVis[i];
-            double b = 0, dfs = 0, ref = 0;
+            double[] bm = new double[12], dm = new double[12], rm = new double[12];
             for (int m = 0; m < 12; m++) {
-                double rm = refl.reflMonthWh()[12 * id + m];
-                if (part.canopyReflection != null) rm *= part.canopyReflection[12 * i + m];
-                double bm = part.beamMonthWh[12 * i + m], dm = part.diffuseMonthWh[12 * i + m];
-                monthly[m][p] = (bm + dm + rm) / 1000;
-                b += bm;
-                dfs += dm;
-                ref += rm;
+                rm[m] = refl.reflMonthWh()[12 * id + m];
+                if (part.canopyReflection != null) rm[m] *= part.canopyReflection[12 * i + m];
+                bm[m] = part.beamMonthWh[12 * i + m];
+                dm[m] = part.diffuseMonthWh[12 * i + m];
             }
-            beam[p] = b / 1000;
-            diffuse[p] = dfs / 1000;
-            reflected[p] = ref / 1000;
-            double tot = 0;
-            for (int m = 0; m < 12; m++) tot += monthly[m][p];
-            annual[p] = tot;
+            ShadedIrradiation.patchTotals(p, bm, dm, rm, monthly, beam, diffuse, reflected, annual);
             annualSe[p] = Reflection.stdErrorWh(p, lists, svf[p], background, ghi, refl.totalAnnualWh()) / 1000;
             unshaded[p] = part.unshadedWh[i] / 1000;
             sunshine[p] = part.sunshineH[i];
