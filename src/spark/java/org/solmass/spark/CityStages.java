@@ -72,7 +72,7 @@ final class CityStages {
      * {@code buildings}: per block the means of the {@code summarised} columns ({@link BuildingSummaries}).
      */
     record Outcome(List<Column> columns, double[] bounceWh, boolean converged, long rows, long[] firstPassBytes,
-                   Map<String, Double> stageS, List<PvZones.Zone> zones, ZoneRows zoneRows, List<Column> summarised,
+                   Map<String, Double> stageS, List<PvZones.Zone> zones, TileOut.ZoneRows zoneRows, List<Column> summarised,
                    List<org.solmass.output.BuildingsWriter.Building> buildings) {}
 
     private static final Map<String, CityModel> CITIES = new ConcurrentHashMap<>();
@@ -297,7 +297,7 @@ final class CityStages {
         List<Column> columns = names.stream().map(ColumnCatalogue::of).toList();
         Broadcast<Map<Long, Integer>> bZones = sc.broadcast(zoneNumber);
         List<PvZones.Zone> zones = cityZones(byTile, zoneNumber);
-        ZoneRows zoneRows = zoneRows(byTile, zoneNumber);
+        TileOut.ZoneRows zoneRows = TileOut.zoneRows(byTile, zoneNumber);
 
         long t3 = System.nanoTime();
         StageProgress.label(sc, "write");
@@ -393,27 +393,5 @@ final class CityStages {
         }
         if (zones != null) zones.sort((a, b) -> Integer.compare(a.id(), b.id()));
         return zones;
-    }
-
-    /**
-     * zones.csv's rows: the city-wide numbers ({@link #zoneNumbers}) in order, each with the row its
-     * tile printed after the number ({@code output.ZoneCsvWriter#afterNumber}); the PV zones' notes
-     * for the summary (the first tile's: they hold only site-wide figures and settings).
-     */
-    record ZoneRows(int[] numbers, List<String> afterNumber, List<String> notes) {}
-
-    /** The tiles' zones.csv rows in city-wide number order; null when no tile found PV zones. */
-    static ZoneRows zoneRows(List<TileOut.Head> tiles, Map<Long, Integer> zoneNumber) {
-        List<Map.Entry<Integer, String>> rows = null;
-        List<String> notes = null;
-        for (TileOut.Head t : tiles) {
-            if (t.zones() == null) continue;
-            if (rows == null) rows = new ArrayList<>();
-            if (notes == null) notes = List.of(t.pvNotes());
-            for (TileOut.ZoneOut z : t.zones()) rows.add(Map.entry(zoneNumber.get(zoneKey(t.tile(), z.localId())), z.csvRow()));
-        }
-        if (rows == null) return null;
-        rows.sort(Map.Entry.comparingByKey());
-        return new ZoneRows(rows.stream().mapToInt(Map.Entry::getKey).toArray(), rows.stream().map(Map.Entry::getValue).toList(), notes);
     }
 }

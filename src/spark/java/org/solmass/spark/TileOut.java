@@ -8,6 +8,7 @@ import org.solmass.surface.Patch;
 import org.solmass.table.ResultTable;
 
 import java.io.Serializable;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
@@ -144,5 +145,27 @@ final class TileOut implements Serializable {
     double[] column(String name) {
         for (int k = 0; k < columns.length; k++) if (columns[k].equals(name)) return values[k];
         return null;
+    }
+
+    /**
+     * zones.csv's rows: the city-wide numbers ({@link CityStages#zoneNumbers}) in order, each with the row its
+     * tile printed after the number ({@code output.ZoneCsvWriter#afterNumber}); the PV zones' notes
+     * for the summary (the first tile's: they hold only site-wide figures and settings).
+     */
+    record ZoneRows(int[] numbers, List<String> afterNumber, List<String> notes) {}
+
+    /** The tiles' zones.csv rows in city-wide number order; null when no tile found PV zones. */
+    static ZoneRows zoneRows(List<TileOut.Head> tiles, Map<Long, Integer> zoneNumber) {
+        List<Map.Entry<Integer, String>> rows = null;
+        List<String> notes = null;
+        for (TileOut.Head t : tiles) {
+            if (t.zones() == null) continue;
+            if (rows == null) rows = new ArrayList<>();
+            if (notes == null) notes = List.of(t.pvNotes());
+            for (TileOut.ZoneOut z : t.zones()) rows.add(Map.entry(zoneNumber.get(CityStages.zoneKey(t.tile(), z.localId())), z.csvRow()));
+        }
+        if (rows == null) return null;
+        rows.sort(Map.Entry.comparingByKey());
+        return new ZoneRows(rows.stream().mapToInt(Map.Entry::getKey).toArray(), rows.stream().map(Map.Entry::getValue).toList(), notes);
     }
 }
