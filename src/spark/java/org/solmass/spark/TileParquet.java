@@ -41,8 +41,8 @@ import java.util.Map;
  * Spark SQL writes for {@code partitionBy("tile")}: the same Parquet schema (message
  * {@code spark_schema}, required patch columns, optional result columns), the same key-value
  * metadata (Spark's version and the row schema with each column's unit, label and decimals, which
- * Spark reads back as the fields' metadata), Snappy pages; doubles without a dictionary (patch values
- * hardly repeat), text and integers with one.
+ * Spark reads back as the fields' metadata), Snappy pages; doubles and the patch id without a
+ * dictionary (they hardly repeat), block, kind and surface with one.
  *
  * <p>The write goes through Spark's Hadoop commit protocol ({@code saveAsNewAPIHadoopFile}: each
  * task writes into its attempt's folder, the output commit coordinator lets one attempt per tile
@@ -136,7 +136,10 @@ public final class TileParquet {
         meta.put(SPARK_ROW_METADATA, schema.json());
         Builder b = new Builder(file, type, meta, r).withConf(conf).withWriteMode(ParquetFileWriter.Mode.CREATE)
                 .withCompressionCodec(CompressionCodecName.SNAPPY).withDictionaryEncoding(true);
-        for (StructField f : schema.fields()) if (f.dataType() == DataTypes.DoubleType) b = b.withDictionaryEncoding(f.name(), false);
+        for (StructField f : schema.fields()) {
+            // a patch's values and its id hardly repeat: a dictionary would be tried and dropped on every page
+            if (f.dataType() == DataTypes.DoubleType || f.name().equals("patch_id")) b = b.withDictionaryEncoding(f.name(), false);
+        }
         try (ParquetWriter<Integer> w = b.build()) {
             int n = r.size();
             for (int p = 0; p < n; p++) {
