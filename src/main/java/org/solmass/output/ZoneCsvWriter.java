@@ -40,47 +40,65 @@ public final class ZoneCsvWriter {
      * @param yields per zone (same order): modules and yield
      */
     public static void write(Path file, List<PvZones.Zone> zones, double[] orientationLossPct, List<ZoneYield> yields) {
+        int[] numbers = new int[zones.size()];
+        List<String> rows = new ArrayList<>(zones.size());
+        for (int i = 0; i < zones.size(); i++) {
+            numbers[i] = zones.get(i).id();
+            rows.add(afterNumber(zones.get(i), orientationLossPct[i], yields.get(i)));
+        }
+        write(file, numbers, rows);
+    }
+
+    /**
+     * Writes zones.csv from rows already printed ({@link #afterNumber}), e.g. by the tiles of a city
+     * run, each with its zone number.
+     *
+     * @param numbers the zone number of each row
+     * @param afterNumber per row (same order): its text after the number
+     */
+    public static void write(Path file, int[] numbers, List<String> afterNumber) {
         AtomicFiles.writeText(file, w -> {
             w.write(String.join(",", COLUMNS) + "\n");
-            StringBuilder sb = new StringBuilder(512);
-            for (int i = 0; i < zones.size(); i++) {
-                PvZones.Zone z = zones.get(i);
-                ZoneYield y = yields.get(i);
-                sb.setLength(0);
-                sb.append(z.id()).append(',');
-                PatchCsvWriter.text(sb, z.blockName());
-                sb.append(',').append(z.surfaceLabel()).append(',').append(z.patches().length);
-                num(sb, z.areaM2(), 2);
-                num(sb, z.tiltDeg(), 2);
-                num(sb, z.azimuthDeg(), 2);
-                num(sb, z.meanKwhM2(), 2);
-                num(sb, z.totalKwh(), 1);
-                num(sb, z.meanShadingLossPct(), 2);
-                num(sb, orientationLossPct[i], 2);
-                sb.append(',').append(y.racked() ? "racked" : "flush").append(',').append(y.modules());
-                num(sb, y.kwp(), 2);
-                num(sb, y.tiltDeg(), 2);
-                num(sb, y.azimuthDeg(), 2);
-                num(sb, y.poaKwhM2(), 2);
-                num(sb, y.poaUnobstructedKwhM2(), 2);
-                num(sb, y.shadingLossPct(), 2);
-                org.solmass.pv.EnergyBalance e = y.year();
-                num(sb, e.referenceWh() / 1000, 1);
-                num(sb, e.shadingWh() / 1000, 1);
-                num(sb, e.incidenceWh() / 1000, 1);
-                num(sb, e.mismatchWh() / 1000, 1);
-                num(sb, e.temperatureWh() / 1000, 1);
-                num(sb, e.dcOtherWh() / 1000, 1);
-                num(sb, e.inverterWh() / 1000, 1);
-                num(sb, e.clippingWh() / 1000, 1);
-                num(sb, y.yieldKwh(), 1);
-                num(sb, y.specificYieldKwhKwp(), 1);
-                num(sb, y.performanceRatio(), 3);
-                for (int m = 1; m <= 12; m++) num(sb, y.monthYieldKwh(m), 1);
-                sb.append('\n');
-                w.write(sb.toString());
-            }
+            for (int i = 0; i < numbers.length; i++) w.write(numbers[i] + "," + afterNumber.get(i) + "\n");
         });
+    }
+
+    /**
+     * One zone's row without its number and line end: the columns after {@code zone}, printed as
+     * {@link #write} prints them.
+     */
+    public static String afterNumber(PvZones.Zone z, double orientationLossPct, ZoneYield y) {
+        StringBuilder sb = new StringBuilder(512);
+        PatchCsvWriter.text(sb, z.blockName());
+        sb.append(',').append(z.surfaceLabel()).append(',').append(z.patches().length);
+        num(sb, z.areaM2(), 2);
+        num(sb, z.tiltDeg(), 2);
+        num(sb, z.azimuthDeg(), 2);
+        num(sb, z.meanKwhM2(), 2);
+        num(sb, z.totalKwh(), 1);
+        num(sb, z.meanShadingLossPct(), 2);
+        num(sb, orientationLossPct, 2);
+        sb.append(',').append(y.racked() ? "racked" : "flush").append(',').append(y.modules());
+        num(sb, y.kwp(), 2);
+        num(sb, y.tiltDeg(), 2);
+        num(sb, y.azimuthDeg(), 2);
+        num(sb, y.poaKwhM2(), 2);
+        num(sb, y.poaUnobstructedKwhM2(), 2);
+        num(sb, y.shadingLossPct(), 2);
+        org.solmass.pv.EnergyBalance e = y.year();
+        num(sb, e.referenceWh() / 1000, 1);
+        num(sb, e.shadingWh() / 1000, 1);
+        num(sb, e.incidenceWh() / 1000, 1);
+        num(sb, e.mismatchWh() / 1000, 1);
+        num(sb, e.temperatureWh() / 1000, 1);
+        num(sb, e.dcOtherWh() / 1000, 1);
+        num(sb, e.inverterWh() / 1000, 1);
+        num(sb, e.clippingWh() / 1000, 1);
+        num(sb, y.yieldKwh(), 1);
+        num(sb, y.specificYieldKwhKwp(), 1);
+        num(sb, y.performanceRatio(), 3);
+        for (int m = 1; m <= 12; m++) num(sb, y.monthYieldKwh(m), 1);
+        return sb.toString();
     }
 
     private static void num(StringBuilder sb, double v, int decimals) {

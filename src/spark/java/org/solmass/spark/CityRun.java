@@ -3,8 +3,6 @@ package org.solmass.spark;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import org.apache.spark.sql.Dataset;
-import org.apache.spark.sql.Row;
 import org.apache.spark.sql.SparkSession;
 import org.solmass.Cautions;
 import org.solmass.cli.Main;
@@ -15,6 +13,7 @@ import org.solmass.output.FolderClaim;
 import org.solmass.output.GeoJsonWriter;
 import org.solmass.output.Publication;
 import org.solmass.output.RunRecord;
+import org.solmass.output.ZoneCsvWriter;
 import org.solmass.study.StudyWriter;
 import org.solmass.table.Column;
 import org.solmass.table.Numbers;
@@ -35,10 +34,11 @@ import java.util.stream.Stream;
 
 /**
  * One city run into a claimed results folder: the Spark stages ({@link CityStages}) write the
- * per-patch Parquet into a hidden staging folder; the building summaries are computed from it; then
+ * per-patch Parquet into a hidden staging folder and sum the buildings from the same rows; then
  * the folder is published: {@value #PARQUET} is moved into place (an earlier run's removed first),
  * and the files go through {@link Publication} (staged, then renamed, run.json last with the manifest),
- * among them zones.geojson (the PV zones, city-wide numbers, {@code output.GeoJsonWriter}) and {@value #PARQUET_INDEX}, which lists every Parquet file with its size and SHA-256, so
+ * among them zones.geojson and zones.csv (the PV zones, city-wide numbers, {@code output.GeoJsonWriter},
+ * {@code output.ZoneCsvWriter}) and {@value #PARQUET_INDEX}, which lists every Parquet file with its size and SHA-256, so
  * run.json's manifest covers the Parquet folder too.
  */
 final class CityRun {
@@ -61,11 +61,9 @@ final class CityRun {
         } finally {
             CityStages.forget(s.studyFile());
         }
-        StageProgress.label(org.apache.spark.api.java.JavaSparkContext.fromSparkContext(spark.sparkContext()), "buildings");
-        Dataset<Row> rows = spark.read().parquet(parquet.toString());
         // area-weighted means of every column but categories (a PV zone number has no mean)
-        List<Column> summarised = o.columns().stream().filter(c -> c.kind() != org.solmass.table.ColumnKind.CATEGORICAL).toList();
-        List<BuildingsWriter.Building> buildings = BuildingSummaries.of(rows, summarised);
+        List<Column> summarised = o.summarised();
+        List<BuildingsWriter.Building> buildings = o.buildings();
         ObjectNode totals = totals(buildings, summarised);
         ObjectNode index = index(parquet);
 
@@ -101,7 +99,11 @@ final class CityRun {
             }
             // as the one-machine run's zones.geojson (WGS84), or local metres for an OBJ model
             if (o.zones() != null) pub.write(GeoJsonWriter.ZONES, p -> GeoJsonWriter.writeZones(p, o.zones(), geo, cautions));
-            ObjectNode summary = summary(spark, plan, o, totals, cautions, timings);
+            // as the one-machine run's zones.csv: the rows the tiles printed, city-wide numbers
+            if (o.zoneRows() != null) pub.write(ZoneCsvWriter.FILE_NAME, p -> ZoneCsvWriter.write(p, o.zoneRows().numbers(), o.zoneRows().afterNumber()));
+            List<String> texts = new ArrayList<>(cautions); // as summary.json: the cautions, then the PV zones' notes
+            if (o.zoneRows() != null) texts.addAll(o.zoneRows().notes());
+            ObjectNode summary = summary(spark, plan, o, totals, texts, timings);
             pub.write(SUMMARY, p -> AtomicFiles.writeString(p, StudyWriter.pretty(summary)));
             written = new ArrayList<>(List.of(target));
             written.addAll(pub.publish(record));

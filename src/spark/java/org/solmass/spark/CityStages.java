@@ -4,11 +4,9 @@ import org.apache.spark.HashPartitioner;
 import org.apache.spark.Partitioner;
 import org.apache.spark.TaskContext;
 import org.apache.spark.api.java.JavaPairRDD;
-import org.apache.spark.api.java.JavaRDD;
 import org.apache.spark.api.java.JavaSparkContext;
 import org.apache.spark.api.java.Optional;
 import org.apache.spark.broadcast.Broadcast;
-import org.apache.spark.sql.Row;
 import org.apache.spark.sql.SparkSession;
 import org.apache.spark.storage.StorageLevel;
 import org.solmass.irradiation.FirstPasses;
@@ -69,10 +67,13 @@ final class CityStages {
 
     /**
      * What the stages produced (the Parquet rows are in {@code parquet}); {@code zones}: the PV zones
-     * with their city-wide numbers, in number order, or null when the run finds no PV zones.
+     * with their city-wide numbers, in number order, or null when the run finds no PV zones ({@code zoneRows}:
+     * their zones.csv rows, or null likewise);
+     * {@code buildings}: per block the means of the {@code summarised} columns ({@link BuildingSummaries}).
      */
     record Outcome(List<Column> columns, double[] bounceWh, boolean converged, long rows, long[] firstPassBytes,
-                   Map<String, Double> stageS, List<PvZones.Zone> zones) {}
+                   Map<String, Double> stageS, List<PvZones.Zone> zones, TileOut.ZoneRows zoneRows, List<Column> summarised,
+                   List<org.solmass.output.BuildingsWriter.Building> buildings) {}
 
     private static final Map<String, CityModel> CITIES = new ConcurrentHashMap<>();
 
@@ -296,21 +297,22 @@ final class CityStages {
         List<Column> columns = names.stream().map(ColumnCatalogue::of).toList();
         Broadcast<Map<Long, Integer>> bZones = sc.broadcast(zoneNumber);
         List<PvZones.Zone> zones = cityZones(byTile, zoneNumber);
+        TileOut.ZoneRows zoneRows = TileOut.zoneRows(byTile, zoneNumber);
 
         long t3 = System.nanoTime();
         StageProgress.label(sc, "write");
-        JavaRDD<Row> rows = out.values().flatMap(o -> {
-            failOnce(s, "write", o.tile);
-            return o.rows(names, bZones.value()).iterator();
-        });
-        spark.createDataFrame(rows, PatchRows.schema(columns)).write().partitionBy(PatchRows.TILE).parquet(parquet.toString());
+        TileParquet.write(sc, out, PatchRows.fileSchema(columns), names, bZones, s, parquet);
         long count = 0;
         for (TileOut.Head h : byTile) count += h.size();
         stageS.put("write", (System.nanoTime() - t3) / 1e9);
+        // per building (a block lies in one tile): area-weighted means of every column but categories
+        StageProgress.label(sc, "buildings");
+        List<Column> summarised = columns.stream().filter(c -> c.kind() != org.solmass.table.ColumnKind.CATEGORICAL).toList();
+        List<org.solmass.output.BuildingsWriter.Building> buildings = BuildingSummaries.of(out, summarised.stream().map(Column::name).toList());
         for (JavaPairRDD<?, ?> c : cached) c.unpersist(false);
         bPlan.destroy();
         bZones.destroy();
-        return new Outcome(columns, bounces, conv, count, bytes, stageS, zones);
+        return new Outcome(columns, bounces, conv, count, bytes, stageS, zones, zoneRows, summarised, buildings);
     }
 
     /**

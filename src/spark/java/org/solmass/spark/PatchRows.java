@@ -17,7 +17,7 @@ import java.util.List;
  * ({@link PatchCsvWriter#PATCH_COLUMNS}, then the result columns as the column registry declares them,
  * {@link Column}), and the tile the patch belongs to ({@value #TILE}, the partition column, so it is
  * the folder name {@code tile=K} on disk and the last column when read back). Values are the full
- * doubles (patches.csv rounds each column to its decimals); rows are made by {@link TileOut#rows}; each result column's unit, label and
+ * doubles (patches.csv rounds each column to its decimals); the files are written by {@link TileParquet}; each result column's unit, label and
  * decimals travel in the Spark field's metadata.
  */
 public final class PatchRows {
@@ -26,8 +26,17 @@ public final class PatchRows {
 
     private PatchRows() {}
 
-    /** The schema of the rows for these result columns (in order). */
+    /** The schema of the rows for these result columns (in order), the tile last (as read back). */
     public static StructType schema(List<Column> results) {
+        return fileSchema(results).add(DataTypes.createStructField(TILE, DataTypes.IntegerType, false));
+    }
+
+    /**
+     * The schema of the rows in a file (without the tile, which is the folder's name): patch columns
+     * (not nullable), then the result columns (nullable, each with its unit, label, decimals and kind
+     * as field metadata).
+     */
+    public static StructType fileSchema(List<Column> results) {
         List<StructField> f = new ArrayList<>();
         for (String n : PatchCsvWriter.PATCH_COLUMNS) f.add(DataTypes.createStructField(n, patchType(n), false));
         for (Column c : results) {
@@ -36,7 +45,6 @@ public final class PatchRows {
                     .putLong("decimals", c.decimals()).putString("kind", c.kind().name()).build();
             f.add(DataTypes.createStructField(c.name(), DataTypes.DoubleType, true, m));
         }
-        f.add(DataTypes.createStructField(TILE, DataTypes.IntegerType, false));
         return DataTypes.createStructType(f);
     }
 

@@ -1,10 +1,9 @@
 package org.solmass.spark;
 
-import org.apache.spark.sql.Row;
-import org.apache.spark.sql.RowFactory;
 import org.solmass.metrics.Metrics;
 import org.solmass.metrics.PvZones;
 import org.solmass.metrics.PvZonesMetric;
+import org.solmass.output.ZoneCsvWriter;
 import org.solmass.surface.Patch;
 import org.solmass.table.ResultTable;
 
@@ -18,7 +17,7 @@ import java.util.Map;
  * stage and the Parquet write): the patch columns of patches.csv, the result columns by name, the
  * whole model's patch index of each row, and the tile's PV zones (numbered within the tile) with the
  * surface and first patch that order them city-wide, and their outlines and figures for zones.geojson
- * ({@link ZoneOut}).
+ * and their zones.csv rows ({@link ZoneOut}).
  */
 final class TileOut implements Serializable {
     private static final long serialVersionUID = 1L;
@@ -35,6 +34,8 @@ final class TileOut implements Serializable {
     final long[] zoneSurface, zoneFirstPatch;
     /** The tile's PV zones (local numbers) for zones.geojson; null when the run finds no PV zones. */
     final ZoneOut[] zones;
+    /** The PV zones' notes for the summary (how the suitability and the yield are figured, the same in every tile); null without PV zones. */
+    final String[] pvNotes;
 
     TileOut(int tile, ResultTable table, int[] patchIndex, Metrics.Outcome metrics) {
         this.tile = tile;
@@ -73,24 +74,31 @@ final class TileOut implements Serializable {
             zoneFirstPatch[k] = Math.min(zoneFirstPatch[k], patchIndex[p]);
         }
         PvZonesMetric.Found found = metrics == null ? null : metrics.find(PvZonesMetric.Found.class).orElse(null);
-        this.zones = found == null ? null : found.zones().zones().stream().map(q -> ZoneOut.of(q, this.patchIndex)).toArray(ZoneOut[]::new);
+        List<PvZones.Zone> zs = found == null ? null : found.zones().zones();
+        this.pvNotes = found == null ? null : found.notes().toArray(new String[0]);
+        this.zones = zs == null ? null : new ZoneOut[zs.size()];
+        for (int i = 0; zs != null && i < zs.size(); i++) {
+            this.zones[i] = ZoneOut.of(zs.get(i), this.patchIndex, ZoneCsvWriter.afterNumber(zs.get(i), found.orientationLossPct()[i], found.yieldOf(i)));
+        }
     }
 
     /**
      * One PV zone of a tile as {@code output.GeoJsonWriter.writeZones} needs it ({@link Serializable}):
      * {@link PvZones.Zone}'s fields but the outline in the surface's frame (only the module layout,
-     * done in the tile, uses it); patches as whole-model indices.
+     * done in the tile, uses it); patches as whole-model indices; {@code csvRow}: its zones.csv row
+     * after the number, printed in the tile ({@code output.ZoneCsvWriter#afterNumber}: modules and
+     * yield, which stay in the tile).
      */
     record ZoneOut(int localId, int block, String blockName, int surface, String surfaceLabel, int[] patches,
                    double areaM2, double meanKwhM2, double totalKwh, double meanShadingLossPct, double yieldKwh,
-                   double tiltDeg, double azimuthDeg, double[][] outlines) implements Serializable {
-        static ZoneOut of(PvZones.Zone z, int[] patchIndex) {
+                   double tiltDeg, double azimuthDeg, double[][] outlines, String csvRow) implements Serializable {
+        static ZoneOut of(PvZones.Zone z, int[] patchIndex, String csvRow) {
             int[] ps = new int[z.patches().length];
             for (int i = 0; i < ps.length; i++) ps[i] = patchIndex[z.patches()[i]];
             java.util.Arrays.sort(ps);
             return new ZoneOut(z.id(), z.block(), z.blockName(), z.surface(), z.surfaceLabel(), ps, z.areaM2(), z.meanKwhM2(),
                     z.totalKwh(), z.meanShadingLossPct(), z.yieldKwh(), z.tiltDeg(), z.azimuthDeg(),
-                    z.outlines().toArray(new double[0][]));
+                    z.outlines().toArray(new double[0][]), csvRow);
         }
 
         /** The zone with its city-wide number (no outline in the surface's frame: null). */
@@ -103,38 +111,61 @@ final class TileOut implements Serializable {
     int size() { return ids.length; }
 
     /** What the driver needs of a tile before the write: its columns, its PV zones (keys and, for zones.geojson, figures), its row count. */
-    record Head(int tile, String[] columns, long[] zoneSurface, long[] zoneFirstPatch, ZoneOut[] zones, int size) implements Serializable {}
+    record Head(int tile, String[] columns, long[] zoneSurface, long[] zoneFirstPatch, ZoneOut[] zones, String[] pvNotes, int size)
+            implements Serializable {}
 
-    Head head() { return new Head(tile, columns, zoneSurface, zoneFirstPatch, zones, size()); }
+    Head head() { return new Head(tile, columns, zoneSurface, zoneFirstPatch, zones, pvNotes, size()); }
 
     /**
-     * The Parquet rows: patch columns, then {@code results} (NaN where this tile lacks one), then the
-     * tile; the PV zone renumbered city-wide with {@code zoneNumber} ((tile, local zone) key, see
-     * {@link CityStages#zoneKey}).
+     * The rows as the Parquet file holds them ({@link TileParquet.Rows}): patch columns, then
+     * {@code results} in that order (NaN where this tile lacks one), the PV zone renumbered city-wide
+     * with {@code zoneNumber} ((tile, local zone) key, see {@link CityStages#zoneKey}). Shares this
+     * tile's arrays but the renumbered zone column.
      */
-    List<Row> rows(List<String> results, Map<Long, Integer> zoneNumber) {
-        int n = size(), base = 13;
+    TileParquet.Rows forWrite(List<String> results, Map<Long, Integer> zoneNumber, CityStages.Settings settings) {
+        int n = size();
         double[][] v = new double[results.size()][];
         for (int c = 0; c < v.length; c++) {
-            for (int k = 0; k < columns.length; k++) if (columns[k].equals(results.get(c))) v[c] = values[k];
+            v[c] = column(results.get(c));
+            if (v[c] == null) {
+                v[c] = new double[n];
+                java.util.Arrays.fill(v[c], Double.NaN);
+            }
         }
         int zoneCol = results.indexOf(PvZonesMetric.ZONE.name());
-        List<Row> rows = new ArrayList<>(n);
-        for (int p = 0; p < n; p++) {
-            Object[] o = new Object[base + v.length + 1];
-            o[0] = ids[p];
-            o[1] = blocks[p];
-            o[2] = surface[p];
-            o[3] = kinds[p];
-            for (int k = 0; k < 9; k++) o[4 + k] = geometry[9 * p + k];
-            for (int c = 0; c < v.length; c++) {
-                double x = v[c] == null ? Double.NaN : v[c][p];
-                if (c == zoneCol && !Double.isNaN(x)) x = zoneNumber.get(CityStages.zoneKey(tile, (int) x));
-                o[base + c] = x;
-            }
-            o[o.length - 1] = tile;
-            rows.add(RowFactory.create(o));
+        if (zoneCol >= 0) {
+            double[] z = v[zoneCol].clone();
+            for (int p = 0; p < n; p++) if (!Double.isNaN(z[p])) z[p] = zoneNumber.get(CityStages.zoneKey(tile, (int) z[p]));
+            v[zoneCol] = z;
         }
-        return rows;
+        return new TileParquet.Rows(tile, ids, blocks, kinds, surface, geometry, v, settings);
+    }
+
+    /** This tile's values of a result column, or null when it has none. */
+    double[] column(String name) {
+        for (int k = 0; k < columns.length; k++) if (columns[k].equals(name)) return values[k];
+        return null;
+    }
+
+    /**
+     * zones.csv's rows: the city-wide numbers ({@link CityStages#zoneNumbers}) in order, each with the row its
+     * tile printed after the number ({@code output.ZoneCsvWriter#afterNumber}); the PV zones' notes
+     * for the summary (the first tile's: they hold only site-wide figures and settings).
+     */
+    record ZoneRows(int[] numbers, List<String> afterNumber, List<String> notes) {}
+
+    /** The tiles' zones.csv rows in city-wide number order; null when no tile found PV zones. */
+    static ZoneRows zoneRows(List<TileOut.Head> tiles, Map<Long, Integer> zoneNumber) {
+        List<Map.Entry<Integer, String>> rows = null;
+        List<String> notes = null;
+        for (TileOut.Head t : tiles) {
+            if (t.zones() == null) continue;
+            if (rows == null) rows = new ArrayList<>();
+            if (notes == null) notes = List.of(t.pvNotes());
+            for (TileOut.ZoneOut z : t.zones()) rows.add(Map.entry(zoneNumber.get(CityStages.zoneKey(t.tile(), z.localId())), z.csvRow()));
+        }
+        if (rows == null) return null;
+        rows.sort(Map.Entry.comparingByKey());
+        return new ZoneRows(rows.stream().mapToInt(Map.Entry::getKey).toArray(), rows.stream().map(Map.Entry::getValue).toList(), notes);
     }
 }

@@ -39,7 +39,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * <li>a task that fails once on purpose (first pass of one tile, then the Parquet write of one tile)
  * is retried by Spark and the output holds every patch exactly once;</li>
  * <li>the Parquet read back has patches.csv's columns in patches.csv's order, then the tile;</li>
- * <li>zones.geojson holds every PV zone of the one-machine run once, with its number and area.</li>
+ * <li>zones.geojson holds every PV zone of the one-machine run once, with its number and area;
+ * zones.csv has the one-machine run's rows (the columns that do not come from the module rays, as the same text);</li>
+ * <li>the Parquet fields carry the column registry's unit, label and decimals.</li>
  * </ul>
  */
 class CityJobTest {
@@ -49,6 +51,7 @@ class CityJobTest {
     static Path studyFile;
     static ResultTable oneMachine, tiledLocally;
     static List<org.solmass.metrics.PvZones.Zone> oneMachineZones;
+    static org.solmass.metrics.PvZonesMetric.Found oneMachineFound;
 
     @BeforeAll
     static void startSparkAndRunTheReferences() throws Exception {
@@ -57,7 +60,8 @@ class CityJobTest {
         Study study = StudyReader.read(studyFile);
         AnalysisRun.Outcome one = AnalysisRun.run(study, PhaseProgress.NONE);
         oneMachine = one.table();
-        oneMachineZones = one.metrics().find(org.solmass.metrics.PvZonesMetric.Found.class).orElseThrow().zones().zones();
+        oneMachineFound = one.metrics().find(org.solmass.metrics.PvZonesMetric.Found.class).orElseThrow();
+        oneMachineZones = oneMachineFound.zones().zones();
         tiledLocally = LocalCityRunner.run(CityModel.of(study), CityOptions.defaults().withTileM(50), PhaseProgress.NONE).table();
         spark = CitySpark.session(MASTER, dir.resolve("spark"), 4);
     }
@@ -110,7 +114,7 @@ class CityJobTest {
     }
 
     @Test
-    void aWriteTaskFailingOnceIsRetriedAndEveryPatchIsWrittenOnceWithTheOneMachineValuesAndPatchesCsvColumns() {
+    void aWriteTaskFailingOnceIsRetriedAndEveryPatchIsWrittenOnceWithTheOneMachineValuesAndPatchesCsvColumns() throws Exception {
         int fired = CityStages.HOOK_FIRED.get();
         Path out = run("write-fails", 1, "write");
         assertEquals(fired + 1, CityStages.HOOK_FIRED.get(), "the hook failed one task attempt");
@@ -122,9 +126,78 @@ class CityJobTest {
         expected.add(PatchRows.TILE);
         assertEquals(expected, List.of(spark.read().parquet(out.resolve(CityRun.PARQUET).toString()).columns()),
                 "Parquet read back: patches.csv's columns in order, then the tile");
+        assertParquetFieldsCarryTheColumnRegistrysUnitLabelAndDecimalsAndOneFilePerTile(out);
         assertTrue(Files.isRegularFile(out.resolve("run.json")) && Files.isRegularFile(out.resolve("buildings.csv"))
                 && Files.isRegularFile(out.resolve(CityRun.SUMMARY)) && Files.isRegularFile(out.resolve(CityRun.PARQUET_INDEX))
                 && Files.isRegularFile(out.resolve("buildings.geojson")), "outputs published");
+    }
+
+    /**
+     * The Parquet fields read back carry each result column's unit, label and decimals as the column
+     * registry declares them ({@code table.Column}); each tile's folder holds one data file and no
+     * attempt's leftovers remain (Spark's commit protocol, after a failed write attempt).
+     */
+    private static void assertParquetFieldsCarryTheColumnRegistrysUnitLabelAndDecimalsAndOneFilePerTile(Path out) throws Exception {
+        org.apache.spark.sql.types.StructType schema = spark.read().parquet(out.resolve(CityRun.PARQUET).toString()).schema();
+        for (String name : oneMachine.names()) {
+            org.solmass.table.Column c = org.solmass.metrics.ColumnCatalogue.of(name);
+            org.apache.spark.sql.types.Metadata m = schema.apply(name).metadata();
+            assertEquals(c.unit().symbol(), m.getString("unit"), name + " unit");
+            assertEquals(c.label(), m.getString("label"), name + " label");
+            assertEquals(c.decimals(), m.getLong("decimals"), name + " decimals");
+            assertEquals(org.apache.spark.sql.types.DataTypes.DoubleType, schema.apply(name).dataType(), name + " type");
+        }
+        try (java.util.stream.Stream<Path> files = Files.walk(out.resolve(CityRun.PARQUET))) {
+            Map<String, Integer> perTile = new HashMap<>();
+            for (Path f : files.filter(Files::isRegularFile).toList()) {
+                String name = f.getFileName().toString();
+                if (name.startsWith(".") || name.startsWith("_")) continue; // checksums, _SUCCESS
+                assertTrue(name.endsWith(".parquet"), "only Parquet files: " + f);
+                perTile.merge(f.getParent().getFileName().toString(), 1, Integer::sum);
+            }
+            assertTrue(perTile.size() >= 4, "tiles with rows: " + perTile);
+            perTile.forEach((t, n) -> assertEquals(1, n, "data files in " + t));
+        }
+        assertTrue(!Files.exists(out.resolve(CityRun.PARQUET).resolve("_temporary")), "no attempt folders left");
+    }
+
+    /**
+     * zones.csv: written by the same writer as {@code analyse}'s ({@code output.ZoneCsvWriter}), the
+     * same header, the same zones in the same order with the same numbers, and the same printed
+     * text in every column that does not come from the module rays (zone, block, surface, patches,
+     * area, tilt, azimuth, mean and total irradiation, shading and orientation loss, mounting,
+     * modules, kWp, module tilt and azimuth, unobstructed plane-of-array irradiation, reference
+     * energy). The columns from the module rays (plane-of-array irradiation with obstruction, the
+     * losses after it, yield, monthly yield) are not compared: a tile's PV stage sees only its own
+     * tile's racks and seeds its module rays with tile-local zone and module numbers, so they differ
+     * from the one-machine run by the rays' sampling (docs/city.md, "Not yet"). The PV zones' notes
+     * (the yield is indicative) are in city-summary.json's cautions, as in analyse's summary.json;
+     * zones.csv is in run.json's manifest.
+     */
+    private static void assertZonesCsvHasTheOneMachineRowsAndNotes(Path out) throws Exception {
+        Path expectedFile = dir.resolve("one-machine-zones.csv");
+        org.solmass.output.ZoneCsvWriter.write(expectedFile, oneMachineFound.zones().zones(), oneMachineFound.orientationLossPct(),
+                oneMachineFound.arrays().zones());
+        List<String> expected = Files.readAllLines(expectedFile), got = Files.readAllLines(out.resolve("zones.csv"));
+        assertEquals(expected.get(0), got.get(0), "zones.csv header");
+        assertEquals(expected.size(), got.size(), "zones.csv: as many zones as the one-machine run");
+        List<String> header = List.of(expected.get(0).split(","));
+        List<String> compared = new ArrayList<>(header.subList(0, header.indexOf("module_azimuth_deg") + 1));
+        compared.add("poa_unobstructed_kwh_m2");
+        compared.add("reference_kwh");
+        for (int r = 1; r < expected.size(); r++) {
+            String[] e = expected.get(r).split(","), g = got.get(r).split(",");
+            assertEquals(e.length, g.length, "zones.csv row " + r + " columns");
+            for (String c : compared) assertEquals(e[header.indexOf(c)], g[header.indexOf(c)], "zones.csv row " + r + ", " + c);
+            for (String c : header) if (!compared.contains(c) && !c.equals("mounting")) Double.parseDouble(g[header.indexOf(c)]);
+        }
+        String summary = Files.readString(out.resolve(CityRun.SUMMARY));
+        com.fasterxml.jackson.databind.JsonNode cautions = new com.fasterxml.jackson.databind.ObjectMapper().readTree(summary).path("cautions");
+        List<String> texts = new ArrayList<>();
+        cautions.forEach(n -> texts.add(n.asText()));
+        assertTrue(texts.contains(org.solmass.Cautions.RESULTS), "the caution in city-summary.json");
+        assertTrue(texts.containsAll(oneMachineFound.notes()), "the PV zones' notes in city-summary.json: " + texts);
+        assertTrue(Files.readString(out.resolve("run.json")).contains("\"zones.csv\""), "zones.csv in run.json's manifest");
     }
 
     /**
@@ -183,12 +256,13 @@ class CityJobTest {
     }
 
     @Test
-    void aFirstPassTaskFailingOnceIsRetriedAndEveryPatchIsWrittenOnceAndBuildingsCsvAndZonesGeoJsonMatchOneMachine() throws Exception {
+    void aFirstPassTaskFailingOnceIsRetriedAndEveryPatchIsWrittenOnceAndBuildingsCsvAndZonesMatchOneMachine() throws Exception {
         int fired = CityStages.HOOK_FIRED.get();
         Path out = run("first-pass-fails", 1, "first-pass");
         assertEquals(fired + 1, CityStages.HOOK_FIRED.get(), "the hook failed one task attempt");
         assertSameRows(oneMachine, rowsById(out), "against the one-machine run");
         assertBuildingsCsvHoldsEachBlocksAreaAndAreaWeightedMean(out);
         assertZonesGeoJsonHoldsTheOneMachineZonesOnce(out);
+        assertZonesCsvHasTheOneMachineRowsAndNotes(out);
     }
 }
