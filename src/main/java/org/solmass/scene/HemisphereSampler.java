@@ -11,7 +11,8 @@ import org.solmass.surface.Patch;
  * <p>Sampling: the unit square is cut into a k x k grid of equal cells, one jittered point per cell
  * (stratified sampling, Cochran, Sampling Techniques, 3rd ed., 1977, ch. 5), mapped to the unit disk
  * by the concentric map of Shirley and Chiu, 1997, "A low distortion map between disk and square",
- * Journal of Graphics Tools 2(3), and lifted to the hemisphere by Malley's method
+ * Journal of Graphics Tools 2(3) (sine and cosine from fdlibm's kernels, see {@link #cosineDirection}),
+ * and lifted to the hemisphere by Malley's method
  * {@code z = sqrt(1 - x^2 - y^2)} (Pharr, Jakob and Humphreys, Physically Based Rendering, 3rd ed.,
  * 2016, section 13.6.3), which gives directions with density cos(theta)/pi. Both maps preserve area
  * ratios, so every cell carries the same share 1/k^2 of the cosine-weighted hemisphere. The tangent
