@@ -176,27 +176,37 @@ public final class BundleTracer {
 
     private void trace(double wox, double woy, double woz, int count, int queued, boolean[] out) {
         if (queued == 0) return;
-        sort(count);
+        keys(count);
         float ox = (float) (wox - scene.shiftX), oy = (float) (woy - scene.shiftY), oz = (float) (woz - scene.shiftZ);
         if (simd != null) {
-            simd.trace(list, octantStart, octantCount, ox, oy, oz, dx, dy, dz, lim, out);
+            simd.trace(count, key, bucketCount, CELLS * CELLS, ox, oy, oz, dx, dy, dz, lim, out);
             return;
         }
+        sort(count);
         for (int o = 0; o < 8; o++) {
             if (octantCount[o] > 0) stream(o, octantStart[o], octantCount[o], queued, ox, oy, oz, out);
         }
     }
 
-    /** Counting sort of the live rays (lim >= 0) into {@code list} by octant and cell; fills the octant runs. */
-    private void sort(int count) {
+    /** Sort key of each live ray (lim >= 0; -1 for the others): octant, then cell; counts per key in bucketCount. */
+    private void keys(int count) {
         final int[] cnt = bucketCount, key = this.key;
         java.util.Arrays.fill(cnt, 0);
         for (int s = 0; s < count; s++) {
             if (lim[s] < 0) { key[s] = -1; continue; }
-            int k = octant(dx[s], dy[s], dz[s]) * CELLS * CELLS + cell(dx[s], dy[s]);
+            int k = key(dx[s], dy[s], dz[s]);
             key[s] = k;
             cnt[k]++;
         }
+    }
+
+    private static int key(float dx, float dy, float dz) {
+        return octant(dx, dy, dz) * CELLS * CELLS + cell(dx, dy);
+    }
+
+    /** Counting sort of the keyed rays ({@link #keys}) into {@code list} by octant and cell; fills the octant runs. */
+    private void sort(int count) {
+        final int[] cnt = bucketCount, key = this.key;
         int at = 0;
         for (int k = 0; k < cnt.length; k++) {
             int c = cnt[k];
@@ -233,21 +243,25 @@ public final class BundleTracer {
             leafTri = new int[count];
             hitT = new float[count];
         }
+        final int[] cnt = bucketCount;
+        java.util.Arrays.fill(cnt, 0);
+        boolean plane = scene.groundPlane;
+        double rise = scene.groundZ - oz;
         for (int s = 0; s < count; s++) {
-            double ddz = dir[3 * s + 2], tg = Double.POSITIVE_INFINITY;
-            if (scene.groundPlane && ddz != 0) { // as Tracer.groundT
-                double t = (scene.groundZ - oz) / ddz;
-                if (t > 0) tg = t;
-            }
+            double ddz = dir[3 * s + 2], t = rise / ddz; // as Tracer.groundT
+            double tg = plane && ddz != 0 && t > 0 ? t : Double.POSITIVE_INFINITY;
             groundT[s] = tg;
-            dx[s] = (float) dir[3 * s];
-            dy[s] = (float) dir[3 * s + 1];
-            dz[s] = (float) ddz;
+            float fx = (float) dir[3 * s], fy = (float) dir[3 * s + 1], fz = (float) ddz;
+            dx[s] = fx;
+            dy[s] = fy;
+            dz[s] = fz;
             lim[s] = (float) Math.min(tg, Float.MAX_VALUE);
+            int k = key(fx, fy, fz);
+            key[s] = k;
+            cnt[k]++;
         }
-        sort(count);
         float fox = (float) (ox - scene.shiftX), foy = (float) (oy - scene.shiftY), foz = (float) (oz - scene.shiftZ);
-        simd.closest(list, octantStart, octantCount, fox, foy, foz, dx, dy, dz, lim, leafTri, hitT);
+        simd.closest(count, key, cnt, CELLS * CELLS, fox, foy, foz, dx, dy, dz, lim, leafTri, hitT);
         for (int s = 0; s < count; s++) {
             if (leafTri[s] >= 0) {
                 tri[s] = scene.triOriginal[leafTri[s]];

@@ -11,7 +11,8 @@ import org.solmass.surface.Patch;
  * <p>Sampling: the unit square is cut into a k x k grid of equal cells, one jittered point per cell
  * (stratified sampling, Cochran, Sampling Techniques, 3rd ed., 1977, ch. 5), mapped to the unit disk
  * by the concentric map of Shirley and Chiu, 1997, "A low distortion map between disk and square",
- * Journal of Graphics Tools 2(3), and lifted to the hemisphere by Malley's method
+ * Journal of Graphics Tools 2(3) (sine and cosine from fdlibm's kernels, see {@link #cosineDirection}),
+ * and lifted to the hemisphere by Malley's method
  * {@code z = sqrt(1 - x^2 - y^2)} (Pharr, Jakob and Humphreys, Physically Based Rendering, 3rd ed.,
  * 2016, section 13.6.3), which gives directions with density cos(theta)/pi. Both maps preserve area
  * ratios, so every cell carries the same share 1/k^2 of the cosine-weighted hemisphere. The tangent
@@ -45,6 +46,8 @@ public final class HemisphereSampler {
     private final double[] groundT, hitDist;
     private final boolean[] blocked;
     private final int[] hitTri;
+    /** The vector direction maker, or null without the vector module. */
+    private final VectorDirections lanes;
 
     /** @param requestedRays rays per patch, positive; rounded to a square grid (see class doc) */
     public HemisphereSampler(Scene scene, int requestedRays) {
@@ -56,6 +59,7 @@ public final class HemisphereSampler {
         this.blocked = new boolean[count];
         this.hitTri = new int[count];
         this.hitDist = new double[count];
+        this.lanes = BundleTracer.SIMD_AVAILABLE ? new VectorDirections(side) : null;
     }
 
     /** Side k of the k x k stratification grid used for a request of {@code requestedRays}. */
@@ -88,9 +92,7 @@ public final class HemisphereSampler {
         return mix(h ^ mix(runSeed + GOLDEN));
     }
 
-    private static final long GOLDEN = 0x9e3779b97f4a7c15L;
-
-    private static long mix(long z) {
+    static long mix(long z) {
         z = (z ^ (z >>> 30)) * 0xbf58476d1ce4e5b9L;
         z = (z ^ (z >>> 27)) * 0x94d049bb133111ebL;
         return z ^ (z >>> 31);
@@ -98,9 +100,17 @@ public final class HemisphereSampler {
 
     /**
      * Fills {@code dir[3s..3s+2]} with the unit world direction of ray s (s &lt; {@link #rayCount()})
-     * about the unit normal (nx,ny,nz), jittered from {@code streamSeed}.
+     * about the unit normal (nx,ny,nz), jittered from {@code streamSeed}. With the vector module
+     * loaded the rays are made several at a time ({@link VectorDirections}), with the same arithmetic
+     * as {@link #cosineDirection}, so the directions are the same bit for bit.
      */
     public void directions(double nx, double ny, double nz, long streamSeed, double[] dir) {
+        if (lanes != null) lanes.directions(nx, ny, nz, streamSeed, dir);
+        else scalarDirections(side, nx, ny, nz, streamSeed, dir);
+    }
+
+    /** {@link #directions} one ray at a time, for a k x k grid of side {@code side}. */
+    static void scalarDirections(int side, double nx, double ny, double nz, long streamSeed, double[] dir) {
         long state = streamSeed;
         double inv = 1.0 / side;
         int s = 0;
@@ -115,10 +125,21 @@ public final class HemisphereSampler {
         }
     }
 
+    /** Increment of the SplitMix64 state per draw (the golden-ratio gamma of Steele, Lea and Flood, 2014). */
+    static final long GOLDEN = 0x9e3779b97f4a7c15L;
+
     /**
      * Maps a point (u, v) of the unit square to a direction of density cos(theta)/pi about the unit
      * normal n (concentric map, Malley's method, tangent frame of Duff et al., see the class doc)
-     * into {@code dir[3s..3s+2]}. The one place where a square point becomes a ray direction.
+     * into {@code dir[3s..3s+2]}. The one place where a square point becomes a ray direction
+     * ({@link VectorDirections} does the same operations lane by lane).
+     *
+     * <p>The concentric map takes (a, b) = (2u - 1, 2v - 1) to radius r and angle theta: r = a,
+     * theta = (pi/4)(b/a) where |a| &gt; |b|, else r = b, theta = pi/2 - (pi/4)(a/b) (Shirley and
+     * Chiu, 1997, eq. 4 and its second wedge). In the second wedge cos(theta) = sin(phi) and
+     * sin(theta) = cos(phi) with phi = (pi/4)(a/b), so both wedges need the sine and cosine of an
+     * angle in [-pi/4, pi/4] only, which {@link #sinKernel} and {@link #cosKernel} give without range
+     * reduction or branches (the wedge is chosen by selects; half of the branches would mispredict).
      */
     public static void cosineDirection(double u, double v, double nx, double ny, double nz, double[] dir, int s) {
         double sign = Math.copySign(1.0, nz);
@@ -126,18 +147,61 @@ public final class HemisphereSampler {
         double t1x = 1 + sign * nx * nx * a, t1y = sign * b, t1z = -sign * nx;
         double t2x = b, t2y = sign + ny * ny * a, t2z = -ny;
         double ua = 2 * u - 1, ub = 2 * v - 1;
-        double x, y;
-        if (ua == 0 && ub == 0) { x = 0; y = 0; }
-        else { // the two wedges of the map, chosen by selects rather than a branch (half of them would mispredict)
-            boolean aMajor = Math.abs(ua) > Math.abs(ub);
-            double r = aMajor ? ua : ub;
-            double th = aMajor ? Math.PI / 4 * (ub / ua) : Math.PI / 2 - Math.PI / 4 * (ua / ub);
-            x = r * Math.cos(th); y = r * Math.sin(th);
-        }
+        boolean aMajor = Math.abs(ua) > Math.abs(ub);
+        double r = aMajor ? ua : ub;
+        double phi = r == 0 ? 0 : Math.PI / 4 * ((aMajor ? ub : ua) / r); // r == 0 only at the centre
+        double c = cosKernel(phi), sn = sinKernel(phi);
+        double x = r * (aMajor ? c : sn), y = r * (aMajor ? sn : c);
         double z = Math.sqrt(Math.max(0, 1 - x * x - y * y));
         dir[3 * s] = x * t1x + y * t2x + z * nx;
         dir[3 * s + 1] = x * t1y + y * t2y + z * ny;
         dir[3 * s + 2] = x * t1z + y * t2z + z * nz;
+    }
+
+    /*
+     * Sine and cosine on [-pi/4, pi/4]: the kernels __kernel_sin and __kernel_cos of fdlibm 5.3
+     * (Sun Microsystems, 1993; k_sin.c and k_cos.c, the library behind java.lang.StrictMath), with a
+     * zero tail: minimax polynomials of degree 13 and 14, error below 1 ulp (k_sin.c, k_cos.c
+     * comments). For |x| <= pi/4 StrictMath.sin and StrictMath.cos are exactly these kernels, so the
+     * values equal StrictMath's bit for bit (tested); unlike Math.sin/cos they are the same on every
+     * platform, and plain multiplications and additions, so the same arithmetic runs in vector lanes.
+     */
+    static final double S1 = -1.66666666666666324348e-01, S2 = 8.33333333332248946124e-03,
+            S3 = -1.98412698298579493134e-04, S4 = 2.75573137070700676789e-06,
+            S5 = -2.50507602534068634195e-08, S6 = 1.58969099521155010221e-10;
+    static final double C1 = 4.16666666666666019037e-02, C2 = -1.38888888888741095749e-03,
+            C3 = 2.48015872894767294178e-05, C4 = -2.75573143513906633035e-07,
+            C5 = 2.08757232129817482790e-09, C6 = -1.13596475577881948265e-11;
+    /** |x| below 2^-27: sin x = x and cos x = 1 in double precision (fdlibm's early exits). */
+    static final double TINY_ANGLE = 0x1.0p-27;
+    /** fdlibm's cosine switches to its second form at |x| = 0.3 (high word 0x3FD33333). */
+    static final double COS_SPLIT = Double.longBitsToDouble(0x3FD3333300000000L);
+    /** From here on (high word above 0x3FE90000, |x| &gt; 0.78125) fdlibm's cosine takes qx = 0.28125. */
+    static final double COS_QX_FIXED = Double.longBitsToDouble(0x3FE9000100000000L);
+
+    /** sin x for |x| &lt;= pi/4 (fdlibm __kernel_sin(x, 0, 0)). */
+    static double sinKernel(double x) {
+        if (Math.abs(x) < TINY_ANGLE) return x;
+        double z = x * x, v = z * x;
+        double r = S2 + z * (S3 + z * (S4 + z * (S5 + z * S6)));
+        return x + v * (S1 + z * r);
+    }
+
+    /** cos x for |x| &lt;= pi/4 (fdlibm __kernel_cos(x, 0)). */
+    static double cosKernel(double x) {
+        double ax = Math.abs(x);
+        if (ax < TINY_ANGLE) return 1;
+        double z = x * x;
+        double r = z * (C1 + z * (C2 + z * (C3 + z * (C4 + z * (C5 + z * C6)))));
+        if (ax < COS_SPLIT) return 1 - (0.5 * z - z * r);
+        double qx = ax >= COS_QX_FIXED ? 0.28125 : cosQx(ax);
+        double hz = 0.5 * z - qx, a = 1 - qx;
+        return a - (hz - z * r);
+    }
+
+    /** fdlibm's qx for 0.3 &lt;= |x| &lt; COS_QX_FIXED: |x|/4 with the low 32 bits of the double cleared. */
+    static double cosQx(double ax) {
+        return Double.longBitsToDouble((Double.doubleToRawLongBits(ax) & 0xFFFFFFFF00000000L) - 0x0020000000000000L);
     }
 
     /**

@@ -65,13 +65,15 @@ final class VectorOcclusion {
 
     /**
      * Traces the rays of a bundle from the shifted origin o and sets {@code out[ray]} for every ray
-     * that is blocked. {@code list} holds the ray indices sorted by direction octant, octant o's run
-     * at {@code [octStart[o], octStart[o] + octCount[o])}. Each run is cut into packets of LANES rays
-     * (the last one padded with retired lanes), so that a packet's lanes share their direction signs.
+     * that is blocked. The rays are laid out in packets by their sort keys ({@link #pack}), so that
+     * a packet's lanes share their direction signs.
      */
-    void trace(int[] list, int[] octStart, int[] octCount, float ox, float oy, float oz,
+    void trace(int count, int[] key, int[] bucketCount, int bucketsPerOctant, float ox, float oy, float oz,
                float[] dx, float[] dy, float[] dz, float[] lim, boolean[] out) {
-        run(list, octStart, octCount, ox, oy, oz, dx, dy, dz, lim, out, null, null);
+        closestMode = false;
+        int k = pack(count, key, bucketCount, bucketsPerOctant, dx, dy, dz, lim);
+        stream(k / LANES, ox, oy, oz);
+        for (int j = 0; j < k; j++) if (pray[j] >= 0 && plim[j] < 0) out[pray[j]] = true;
     }
 
     /**
@@ -80,53 +82,67 @@ final class VectorOcclusion {
      * float of {@code Tracer}'s Moller-Trumbore). Lanes keep their best t as their limit, so boxes
      * beyond it are culled, as in the single-ray closest-hit traversal.
      */
-    void closest(int[] list, int[] octStart, int[] octCount, float ox, float oy, float oz,
+    void closest(int count, int[] key, int[] bucketCount, int bucketsPerOctant, float ox, float oy, float oz,
                  float[] dx, float[] dy, float[] dz, float[] lim, int[] leafTri, float[] hitT) {
-        run(list, octStart, octCount, ox, oy, oz, dx, dy, dz, lim, null, leafTri, hitT);
+        closestMode = true;
+        int k = pack(count, key, bucketCount, bucketsPerOctant, dx, dy, dz, lim);
+        java.util.Arrays.fill(pbest, 0, k, NONE);
+        stream(k / LANES, ox, oy, oz);
+        for (int j = 0; j < k; j++) {
+            int ray = pray[j];
+            if (ray < 0) continue;
+            leafTri[ray] = Float.floatToRawIntBits(pbest[j]);
+            hitT[ray] = plim[j];
+        }
     }
 
-    private void run(int[] list, int[] octStart, int[] octCount, float ox, float oy, float oz,
-                     float[] dx, float[] dy, float[] dz, float[] lim, boolean[] out, int[] leafTri, float[] hitT) {
-        closestMode = leafTri != null;
+    /**
+     * Counting sort of the rays straight into packets: ray s with {@code key[s] >= 0} (direction
+     * octant x bucketsPerOctant + direction cell; -1 for a ray already decided) goes after the rays of
+     * smaller keys and of its own key with smaller index; each octant's run is padded with retired
+     * lanes to whole packets. {@code bucketCount} holds the rays per key (it is overwritten). Fills
+     * the packet arrays, their inverse directions and the packet list; returns the lanes used.
+     */
+    private int pack(int count, int[] key, int[] bucketCount, int bucketsPerOctant,
+                     float[] dx, float[] dy, float[] dz, float[] lim) {
         int packets = 0;
-        for (int o = 0; o < 8; o++) packets += (octCount[o] + LANES - 1) / LANES;
-        ensure(packets);
-        int k = 0, pk = 0;
-        for (int o = 0; o < 8; o++) {
-            int c = octCount[o];
-            if (c == 0) continue;
-            int padded = (c + LANES - 1) / LANES * LANES;
-            for (int j = 0; j < padded; j++, k++) { // packet-contiguous copies; padding lanes are retired
-                if (j < c) {
-                    int i = list[octStart[o] + j];
-                    px[k] = dx[i]; py[k] = dy[i]; pz[k] = dz[i];
-                    plim[k] = lim[i];
-                    pray[k] = i;
-                } else {
-                    px[k] = 1; py[k] = 1; pz[k] = 1;
-                    plim[k] = RETIRED;
-                    pray[k] = -1;
-                }
-            }
-            for (int j = 0; j < padded / LANES; j++) pOctant[pk++] = o;
+        for (int o = 0, b = 0; o < 8; o++) {
+            int c = 0;
+            for (int e = b + bucketsPerOctant; b < e; b++) c += bucketCount[b];
+            packets += (c + LANES - 1) / LANES;
         }
-        for (int q = 0; q < k; q += LANES) { // inverse directions, as the single-ray tracer takes them
+        ensure(packets);
+        int at = 0, pk = 0;
+        for (int o = 0, b = 0; o < 8; o++) {
+            int first = at;
+            for (int e = b + bucketsPerOctant; b < e; b++) { // bucket b's first lane
+                int c = bucketCount[b];
+                bucketCount[b] = at;
+                at += c;
+            }
+            int end = first + (at - first + LANES - 1) / LANES * LANES;
+            for (; at < end; at++) { // padding lanes are retired
+                px[at] = 1; py[at] = 1; pz[at] = 1;
+                plim[at] = RETIRED;
+                pray[at] = -1;
+            }
+            while (pk < end / LANES) pOctant[pk++] = o;
+        }
+        for (int s = 0; s < count; s++) {
+            int kk = key[s];
+            if (kk < 0) continue;
+            int j = bucketCount[kk]++;
+            px[j] = dx[s]; py[j] = dy[s]; pz[j] = dz[s];
+            plim[j] = lim[s];
+            pray[j] = s;
+        }
+        for (int q = 0; q < at; q += LANES) { // inverse directions, as the single-ray tracer takes them
             inverse(px, pix, q);
             inverse(py, piy, q);
             inverse(pz, piz, q);
         }
         for (int j = 0; j < packets; j++) plist[j] = j;
-        if (closestMode) java.util.Arrays.fill(pbest, 0, k, NONE);
-        stream(packets, ox, oy, oz);
-        if (closestMode) {
-            for (int j = 0; j < k; j++) {
-                if (pray[j] < 0) continue;
-                leafTri[pray[j]] = Float.floatToRawIntBits(pbest[j]);
-                hitT[pray[j]] = plim[j];
-            }
-        } else {
-            for (int j = 0; j < k; j++) if (pray[j] >= 0 && plim[j] < 0) out[pray[j]] = true;
-        }
+        return at;
     }
 
     private static final int SIGN = 0x80000000, TINY_BITS = Float.floatToRawIntBits(BundleTracer.TINY_DIR);

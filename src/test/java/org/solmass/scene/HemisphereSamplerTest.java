@@ -63,4 +63,51 @@ class HemisphereSamplerTest {
         new HemisphereSampler(s, 100).directions(0, 0, 1, 42, b);
         assertArrayEquals(a, b);
     }
+
+    @Test
+    void sineAndCosineKernelsEqualStrictMathOnTheConcentricMapsRange() {
+        // java.lang.StrictMath is fdlibm 5.3, whose sin and cos are exactly __kernel_sin/__kernel_cos
+        // for |x| <= pi/4 (fdlibm s_sin.c, s_cos.c); the kernels must give its values bit for bit.
+        SplittableRandom r = new SplittableRandom(11);
+        double[] edges = {0.0, -0.0, Math.PI / 4, -Math.PI / 4, 0x1.0p-27, Math.nextDown(0x1.0p-27), 1e-300,
+                HemisphereSampler.COS_SPLIT, Math.nextDown(HemisphereSampler.COS_SPLIT),
+                HemisphereSampler.COS_QX_FIXED, Math.nextDown(HemisphereSampler.COS_QX_FIXED), 0.78125, 0.3};
+        for (double x : edges) {
+            for (double v : new double[] {x, -x}) {
+                assertEquals(Double.doubleToRawLongBits(StrictMath.sin(v)), Double.doubleToRawLongBits(HemisphereSampler.sinKernel(v)), "sin " + v);
+                assertEquals(Double.doubleToRawLongBits(StrictMath.cos(v)), Double.doubleToRawLongBits(HemisphereSampler.cosKernel(v)), "cos " + v);
+            }
+        }
+        for (int i = 0; i < 2_000_000; i++) {
+            double v = r.nextDouble(-Math.PI / 4, Math.PI / 4);
+            if (i % 4 == 0) v = Math.scalb(v, -r.nextInt(40)); // small angles too
+            assertEquals(Double.doubleToRawLongBits(StrictMath.sin(v)), Double.doubleToRawLongBits(HemisphereSampler.sinKernel(v)), "sin " + v);
+            assertEquals(Double.doubleToRawLongBits(StrictMath.cos(v)), Double.doubleToRawLongBits(HemisphereSampler.cosKernel(v)), "cos " + v);
+        }
+    }
+
+    @Test
+    void vectorDirectionsEqualScalarDirectionsBitForBit() {
+        org.junit.jupiter.api.Assumptions.assumeTrue(BundleTracer.SIMD_AVAILABLE, "vector module not loaded");
+        SplittableRandom r = new SplittableRandom(5);
+        for (int side : new int[] {1, 2, 3, 7, 10, 32, 45}) {
+            VectorDirections v = new VectorDirections(side);
+            double[] a = new double[3 * side * side], b = new double[3 * side * side];
+            for (int k = 0; k < 60; k++) {
+                double nx = r.nextGaussian(), ny = r.nextGaussian(), nz = r.nextGaussian();
+                double l = Math.sqrt(nx * nx + ny * ny + nz * nz);
+                nx /= l; ny /= l; nz /= l;
+                if (k == 0) { nx = 0; ny = 0; nz = -1; }
+                if (k == 1) { nx = 0; ny = 0; nz = 1; }
+                if (k == 2) { nx = 1; ny = 0; nz = 0; }
+                if (k == 3) { nx = 0; ny = -1; nz = 0; }
+                long seed = r.nextLong();
+                HemisphereSampler.scalarDirections(side, nx, ny, nz, seed, a);
+                v.directions(nx, ny, nz, seed, b);
+                for (int i = 0; i < a.length; i++) {
+                    assertEquals(Double.doubleToRawLongBits(a[i]), Double.doubleToRawLongBits(b[i]), "side " + side + " component " + i);
+                }
+            }
+        }
+    }
 }
