@@ -2,12 +2,15 @@ package org.solmass.spark;
 
 import org.solmass.cli.AnalysisRun;
 import org.solmass.irradiation.FirstPasses;
+import org.solmass.irradiation.IrradiationSetup;
+import org.solmass.irradiation.StagedPasses;
 import org.solmass.irradiation.PhaseProgress;
 import org.solmass.study.Study;
 import org.solmass.study.StudyReader;
 import org.solmass.tiles.CityModel;
 import org.solmass.tiles.CityOptions;
 import org.solmass.tiles.CityPlan;
+import org.solmass.tiles.CityTables;
 import org.solmass.tiles.SyntheticCity;
 import org.solmass.tiles.Tile;
 import picocli.CommandLine;
@@ -28,7 +31,9 @@ import java.util.concurrent.Callable;
  * {@code solmass analyse}, all cores) against {@code solmass city} on {@code local[2]}, as patches per
  * second per core and their ratio; then, per tile size, the largest tile's first pass alone: its
  * receivers, scene triangles, the bytes its {@link FirstPasses} hold and the peak heap while it runs
- * (what one task needs, besides the prepared study every task holds).
+ * (what one task needs, besides the prepared study every task holds); the size of the tables the
+ * driver broadcasts and an executor's set-up with and without them; and the peak heap of the largest
+ * tile's finish task with the whole layout's reflection arrays and with the tile's own.
  * Run: {@code java -cp target/classes:$(cat target/city-classpath.txt) org.solmass.spark.CityBench --patches 100000}
  * (with the launcher's JVM options; see the solmass script).
  */
@@ -81,8 +86,19 @@ public final class CityBench implements Callable<Integer> {
                         + " stages %s%n", master, sparkCores, n, plan.tiles().size(), tileM, plan.haloM(), s, rate, job.last.stages().stageS());
         if (!skipOne) System.out.printf(Locale.ROOT, "ratio %s / one machine, patches per second per core: %.2f%n", master, rate / oneRate);
 
-        System.out.printf(Locale.ROOT, "%n%-8s %6s %10s %12s %14s %16s %12s%n", "tile_m", "tiles", "halo_m", "receivers", "scene_tris", "first_pass_MB", "peak_heap_MB");
         CityModel city = CityModel.of(study);
+        executorSetUp(w.study(), city);
+
+        // the whole layout's reflection, once (from the Spark run's tiling): what the finish tasks below read
+        CityOptions ro = CityOptions.defaults().withTileM(tileM);
+        if (haloCapM != null) ro = ro.withHaloCapM(haloCapM);
+        java.util.List<FirstPasses> firsts = new java.util.ArrayList<>();
+        for (Tile t : city.plan(ro).tiles()) firsts.add(city.firstPass(t));
+        StagedPasses.Reflected whole = city.reflect(firsts);
+        firsts = null;
+
+        System.out.printf(Locale.ROOT, "%n%-8s %6s %10s %12s %14s %16s %12s %12s %12s%n", "tile_m", "tiles", "halo_m", "receivers", "scene_tris",
+                "first_pass_MB", "peak_heap_MB", "finish_all_MB", "finish_own_MB");
         for (double tm : memoryTiles) {
             CityOptions o = CityOptions.defaults().withTileM(tm);
             if (haloCapM != null) o = o.withHaloCapM(haloCapM);
@@ -94,11 +110,72 @@ public final class CityBench implements Callable<Integer> {
             resetPeaks();
             FirstPasses fp = city.firstPass(big);
             double peak = (peakHeap() - before) / 1048576.0;
-            System.out.printf(Locale.ROOT, "%-8.0f %6d %10.0f %12d %14d %16.1f %12.0f%n", tm, p.tiles().size(), p.haloM(), big.receivers().length,
-                    city.sceneTriangles(big).length, fp.bytes() / 1048576.0, peak);
+            double[] finish = finishHeap(city, p, big, fp, whole);
+            System.out.printf(Locale.ROOT, "%-8.0f %6d %10.0f %12d %14d %16.1f %12.0f %12.1f %12.1f%n", tm, p.tiles().size(), p.haloM(), big.receivers().length,
+                    city.sceneTriangles(big).length, fp.bytes() / 1048576.0, peak, finish[0], finish[1]);
         }
         CityJob.deleteTree(dir);
         return 0;
+    }
+
+    /**
+     * What an executor's set-up costs with and without the driver's tables (weather, sun directions,
+     * step table; {@link CityTables}): their size as sent, and the study prepared from its file alone
+     * or with them, interleaved, twice each.
+     */
+    private static void executorSetUp(Path studyFile, CityModel driver) {
+        long e0 = System.nanoTime();
+        byte[] bytes = driver.tables().encode();
+        double encodeS = (System.nanoTime() - e0) / 1e9;
+        long d0 = System.nanoTime();
+        CityTables.decode(bytes);
+        double decodeS = (System.nanoTime() - d0) / 1e9;
+        System.out.printf(Locale.ROOT, "%ntables broadcast: %d bytes (%d steps, %d sun directions), encoded in %.3f s, decoded in %.3f s%n",
+                bytes.length, driver.prepared().weather().size(), driver.sun().directions().count(), encodeS, decodeS);
+        for (int round = 0; round < 2; round++) {
+            System.gc();
+            long computed = IrradiationSetup.Sun.computedCount();
+            long t0 = System.nanoTime();
+            CityModel.load(studyFile);
+            double alone = (System.nanoTime() - t0) / 1e9;
+            long computedAlone = IrradiationSetup.Sun.computedCount() - computed;
+            System.gc();
+            computed = IrradiationSetup.Sun.computedCount();
+            long t1 = System.nanoTime();
+            CityModel.load(studyFile, CityTables.decode(bytes));
+            double with = (System.nanoTime() - t1) / 1e9;
+            System.out.printf(Locale.ROOT, "executor set-up: from the study file %.2f s (sun tables computed %d), with the tables %.2f s (computed %d)%n",
+                    alone, computedAlone, with, IrradiationSetup.Sun.computedCount() - computed);
+        }
+    }
+
+    /**
+     * Peak heap of a finish task on {@code big}, MB, as the task builds its input and runs: {whole
+     * layout's arrays (12 doubles per analysed patch of the city, one per receiver, filled where the
+     * tile reads, as the finish stage did before), the tile's own ({@link StagedPasses.TileReflected})}.
+     */
+    private static double[] finishHeap(CityModel city, CityPlan p, Tile big, FirstPasses fp, StagedPasses.Reflected whole) {
+        double[] out = new double[2];
+        int analysed = p.analysedCount();
+        for (int form = 0; form < 2; form++) {
+            System.gc();
+            long before = heapUsed();
+            resetPeaks();
+            if (form == 0) {
+                double[] refl = new double[12 * analysed], total = new double[p.receiverCount()];
+                for (int i = 0; i < fp.size(); i++) {
+                    int id = fp.id(i);
+                    if (id < analysed) System.arraycopy(whole.reflMonthWh(), 12 * id, refl, 12 * id, 12);
+                }
+                for (int j : org.solmass.irradiation.TileBounces.needed(fp)) total[j] = whole.totalAnnualWh()[j];
+                for (int i = 0; i < fp.size(); i++) total[fp.id(i)] = whole.totalAnnualWh()[fp.id(i)];
+                city.finish(big, fp, new StagedPasses.Reflected(refl, total, whole.bounceWh(), whole.converged(), whole.tolerance(), whole.maxBounces()));
+            } else {
+                city.finish(big, fp, StagedPasses.TileReflected.of(fp, whole));
+            }
+            out[form] = (peakHeap() - before) / 1048576.0;
+        }
+        return out;
     }
 
     private static void resetPeaks() {
