@@ -83,6 +83,9 @@ public final class StagedPasses {
     public record Reflected(double[] reflMonthWh, double[] totalAnnualWh, double[] bounceWh, boolean converged,
                             double tolerance, int maxBounces) implements Serializable {
         public int bounces() { return bounceWh.length; }
+
+        /** Bytes of its arrays: 12 doubles per analysed patch and one per receiver of the whole layout. */
+        public long bytes() { return 8L * (reflMonthWh.length + totalAnnualWh.length + bounceWh.length); }
     }
 
     /**
@@ -104,6 +107,11 @@ public final class StagedPasses {
     public record TileReflected(int analysedTotal, int[] ids, double[] reflMonthWh, int[] totalIds, double[] totalAnnualWh,
                                 double[] bounceWh, boolean converged, double tolerance, int maxBounces) implements Serializable {
         public int bounces() { return bounceWh.length; }
+
+        /** Bytes of its arrays (what a finish task receives besides its first pass). */
+        public long bytes() {
+            return 4L * ids.length + 8L * reflMonthWh.length + 4L * totalIds.length + 8L * totalAnnualWh.length + 8L * bounceWh.length;
+        }
 
         /** The part of the whole layout's sums that a tile with this first pass reads. */
         public static TileReflected of(FirstPasses part, Reflected whole) {

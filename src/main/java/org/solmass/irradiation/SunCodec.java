@@ -5,6 +5,7 @@ import org.solmass.sky.SkyPatches;
 import java.io.DataInput;
 import java.io.DataOutput;
 import java.io.IOException;
+import java.nio.ByteBuffer;
 
 /**
  * The sun directions and the step table of a run ({@link IrradiationSetup.Sun}) written as bytes and
@@ -64,43 +65,62 @@ public final class SunCodec {
         return new IrradiationSetup.Sun(dirs, st);
     }
 
-    /** Length (-1 for null), then each value's raw bits. */
+    /** Length (-1 for null), then each value's raw bits (big-endian), in one write. */
     public static void writeDoubles(DataOutput out, double[] a) throws IOException {
         out.writeInt(a == null ? -1 : a.length);
-        if (a != null) for (double v : a) out.writeLong(Double.doubleToRawLongBits(v));
+        if (a == null) return;
+        ByteBuffer b = ByteBuffer.allocate(8 * a.length);
+        for (double v : a) b.putLong(Double.doubleToRawLongBits(v));
+        out.write(b.array());
     }
 
     public static double[] readDoubles(DataInput in) throws IOException {
         int n = in.readInt();
         if (n < 0) return null;
+        ByteBuffer b = read(in, 8L * n);
         double[] a = new double[n];
-        for (int i = 0; i < n; i++) a[i] = Double.longBitsToDouble(in.readLong());
+        for (int i = 0; i < n; i++) a[i] = Double.longBitsToDouble(b.getLong());
         return a;
     }
 
     public static void writeFloats(DataOutput out, float[] a) throws IOException {
         out.writeInt(a == null ? -1 : a.length);
-        if (a != null) for (float v : a) out.writeInt(Float.floatToRawIntBits(v));
+        if (a == null) return;
+        ByteBuffer b = ByteBuffer.allocate(4 * a.length);
+        for (float v : a) b.putInt(Float.floatToRawIntBits(v));
+        out.write(b.array());
     }
 
     public static float[] readFloats(DataInput in) throws IOException {
         int n = in.readInt();
         if (n < 0) return null;
+        ByteBuffer b = read(in, 4L * n);
         float[] a = new float[n];
-        for (int i = 0; i < n; i++) a[i] = Float.intBitsToFloat(in.readInt());
+        for (int i = 0; i < n; i++) a[i] = Float.intBitsToFloat(b.getInt());
         return a;
     }
 
     public static void writeInts(DataOutput out, int[] a) throws IOException {
         out.writeInt(a == null ? -1 : a.length);
-        if (a != null) for (int v : a) out.writeInt(v);
+        if (a == null) return;
+        ByteBuffer b = ByteBuffer.allocate(4 * a.length);
+        for (int v : a) b.putInt(v);
+        out.write(b.array());
     }
 
     public static int[] readInts(DataInput in) throws IOException {
         int n = in.readInt();
         if (n < 0) return null;
+        ByteBuffer b = read(in, 4L * n);
         int[] a = new int[n];
-        for (int i = 0; i < n; i++) a[i] = in.readInt();
+        for (int i = 0; i < n; i++) a[i] = b.getInt();
         return a;
+    }
+
+    private static ByteBuffer read(DataInput in, long bytes) throws IOException {
+        if (bytes > Integer.MAX_VALUE) throw new IOException("an array of " + bytes + " bytes");
+        byte[] b = new byte[(int) bytes];
+        in.readFully(b);
+        return ByteBuffer.wrap(b);
     }
 }

@@ -47,6 +47,7 @@ public final class CityBench implements Callable<Integer> {
     @Option(names = "--halo-cap", paramLabel = "M", description = "largest halo radius (default: none)") Double haloCapM;
     @Option(names = "--memory-tiles", split = ",", defaultValue = "125,250,500", paramLabel = "M", description = "tile sides for the memory table (default ${DEFAULT-VALUE})") double[] memoryTiles;
     @Option(names = "--skip-one-machine", description = "only the Spark run and the memory table") boolean skipOne;
+    @Option(names = "--memory-only", description = "only the tables, the executor set-up and the memory table") boolean memoryOnly;
 
     public static void main(String[] args) {
         System.exit(new CommandLine(new CityBench()).execute(args));
@@ -60,7 +61,7 @@ public final class CityBench implements Callable<Integer> {
         System.out.printf(Locale.ROOT, "invented city: %d buildings, about %d patches, tallest %.1f m%n", w.buildings(), w.estimatedPatches(), w.tallestM());
         int cores = Runtime.getRuntime().availableProcessors();
         double oneRate = Double.NaN;
-        if (!skipOne) {
+        if (!skipOne && !memoryOnly) {
             System.gc();
             long t0 = System.nanoTime();
             AnalysisRun.Outcome o = AnalysisRun.run(study, PhaseProgress.NONE);
@@ -69,6 +70,17 @@ public final class CityBench implements Callable<Integer> {
             oneRate = n / s / cores;
             System.out.printf(Locale.ROOT, "one machine (%d cores): %d patches in %.1f s = %.1f patches/s/core; phases %s%n", cores, n, s, oneRate, o.timingsS());
         }
+        if (!memoryOnly) {
+            int code = spark(dir, w, oneRate);
+            if (code != 0) return code;
+        }
+        memory(w, CityModel.of(study));
+        CityJob.deleteTree(dir);
+        return 0;
+    }
+
+    /** The Spark run of the city, as {@code solmass city} does it: patches per second per core, and against one machine. */
+    private int spark(Path dir, SyntheticCity.Written w, double oneRate) {
         CityJob job = new CityJob();
         long t1 = System.nanoTime();
         String[] args = haloCapM == null
@@ -85,8 +97,11 @@ public final class CityBench implements Callable<Integer> {
         System.out.printf(Locale.ROOT, "%s (%d cores): %d patches, %d tiles of %.0f m, halo %.0f m: %.1f s (Spark start included) = %.1f patches/s/core;"
                         + " stages %s%n", master, sparkCores, n, plan.tiles().size(), tileM, plan.haloM(), s, rate, job.last.stages().stageS());
         if (!skipOne) System.out.printf(Locale.ROOT, "ratio %s / one machine, patches per second per core: %.2f%n", master, rate / oneRate);
+        return 0;
+    }
 
-        CityModel city = CityModel.of(study);
+    /** Per tile size, the largest tile's first pass and finish task alone (what one task holds). */
+    private void memory(SyntheticCity.Written w, CityModel city) {
         executorSetUp(w.study(), city);
 
         // the whole layout's reflection, once (from the Spark run's tiling): what the finish tasks below read
@@ -97,8 +112,8 @@ public final class CityBench implements Callable<Integer> {
         StagedPasses.Reflected whole = city.reflect(firsts);
         firsts = null;
 
-        System.out.printf(Locale.ROOT, "%n%-8s %6s %10s %12s %14s %16s %12s %12s %12s%n", "tile_m", "tiles", "halo_m", "receivers", "scene_tris",
-                "first_pass_MB", "peak_heap_MB", "finish_all_MB", "finish_own_MB");
+        System.out.printf(Locale.ROOT, "%n%-8s %6s %10s %12s %14s %16s %12s %12s %12s %12s %12s%n", "tile_m", "tiles", "halo_m", "receivers", "scene_tris",
+                "first_pass_MB", "peak_heap_MB", "in_all_MB", "in_own_MB", "finish_all_MB", "finish_own_MB");
         for (double tm : memoryTiles) {
             CityOptions o = CityOptions.defaults().withTileM(tm);
             if (haloCapM != null) o = o.withHaloCapM(haloCapM);
@@ -111,11 +126,10 @@ public final class CityBench implements Callable<Integer> {
             FirstPasses fp = city.firstPass(big);
             double peak = (peakHeap() - before) / 1048576.0;
             double[] finish = finishHeap(city, p, big, fp, whole);
-            System.out.printf(Locale.ROOT, "%-8.0f %6d %10.0f %12d %14d %16.1f %12.0f %12.1f %12.1f%n", tm, p.tiles().size(), p.haloM(), big.receivers().length,
-                    city.sceneTriangles(big).length, fp.bytes() / 1048576.0, peak, finish[0], finish[1]);
+            System.out.printf(Locale.ROOT, "%-8.0f %6d %10.0f %12d %14d %16.1f %12.0f %12.2f %12.2f %12.1f %12.1f%n", tm, p.tiles().size(), p.haloM(),
+                    big.receivers().length, city.sceneTriangles(big).length, fp.bytes() / 1048576.0, peak, whole.bytes() / 1048576.0,
+                    StagedPasses.TileReflected.of(fp, whole).bytes() / 1048576.0, finish[0], finish[1]);
         }
-        CityJob.deleteTree(dir);
-        return 0;
     }
 
     /**
