@@ -191,7 +191,7 @@ public final class AnalysisRun {
 
     /**
      * {@link Prepared} for a study with its weather series already loaded ({@link #loadWeather}; a city
-     * run's executors get it from the driver, org.solmass.tiles.CityTables), or null to load it.
+     * run's executors get it from the driver's tables), or null to load it.
      */
     public static Prepared prepare(Study study, PhaseProgress progress, Map<String, Double> t, WeatherSeries loaded) {
         List<String> warnings = new ArrayList<>();

@@ -10,10 +10,10 @@ import java.nio.ByteBuffer;
 /**
  * The sun directions and the step table of a run ({@link IrradiationSetup.Sun}) written as bytes and
  * read back, so that a city run's driver computes them once and its executors read them
- * (org.solmass.tiles.CityTables) instead of computing them again. Every number goes with its raw
+ * (the city package's tables) instead of computing them again. Every number goes with its raw
  * bits ({@link Double#doubleToRawLongBits}, {@link Float#floatToRawIntBits}): the tables read back
  * hold the same doubles as those written, and every result made from them is the same to the last bit.
- * The array helpers serve the weather series too (CityTables).
+ * The array helpers serve the city tables' weather series too.
  */
 public final class SunCodec {
     /** First int of the bytes ("SUN1"), to refuse bytes of another kind. */
