@@ -112,8 +112,8 @@ public final class CityBench implements Callable<Integer> {
         StagedPasses.Reflected whole = city.reflect(firsts);
         firsts = null;
 
-        System.out.printf(Locale.ROOT, "%n%-8s %6s %10s %12s %14s %16s %12s %12s %12s %12s %12s%n", "tile_m", "tiles", "halo_m", "receivers", "scene_tris",
-                "first_pass_MB", "peak_heap_MB", "in_all_MB", "in_own_MB", "finish_all_MB", "finish_own_MB");
+        System.out.printf(Locale.ROOT, "%n%-8s %6s %10s %12s %14s %16s %12s %12s %12s %12s %12s %12s %12s%n", "tile_m", "tiles", "halo_m", "receivers", "scene_tris",
+                "first_pass_MB", "peak_heap_MB", "in_all_MB", "in_own_MB", "irr_all_MB", "irr_own_MB", "finish_all_MB", "finish_own_MB");
         for (double tm : memoryTiles) {
             CityOptions o = CityOptions.defaults().withTileM(tm);
             if (haloCapM != null) o = o.withHaloCapM(haloCapM);
@@ -126,9 +126,9 @@ public final class CityBench implements Callable<Integer> {
             FirstPasses fp = city.firstPass(big);
             double peak = (peakHeap() - before) / 1048576.0;
             double[] finish = finishHeap(city, p, big, fp, whole);
-            System.out.printf(Locale.ROOT, "%-8.0f %6d %10.0f %12d %14d %16.1f %12.0f %12.2f %12.2f %12.1f %12.1f%n", tm, p.tiles().size(), p.haloM(),
+            System.out.printf(Locale.ROOT, "%-8.0f %6d %10.0f %12d %14d %16.1f %12.0f %12.2f %12.2f %12.1f %12.1f %12.1f %12.1f%n", tm, p.tiles().size(), p.haloM(),
                     big.receivers().length, city.sceneTriangles(big).length, fp.bytes() / 1048576.0, peak, whole.bytes() / 1048576.0,
-                    StagedPasses.TileReflected.of(fp, whole).bytes() / 1048576.0, finish[0], finish[1]);
+                    StagedPasses.TileReflected.of(fp, whole).bytes() / 1048576.0, finish[0], finish[1], finish[2], finish[3]);
         }
     }
 
@@ -164,32 +164,44 @@ public final class CityBench implements Callable<Integer> {
     }
 
     /**
-     * Peak heap of a finish task on {@code big}, MB, as the task builds its input and runs: {whole
-     * layout's arrays (12 doubles per analysed patch of the city, one per receiver, filled where the
-     * tile reads, as the finish stage did before), the tile's own ({@link StagedPasses.TileReflected})}.
+     * Peak heap of a finish task on {@code big}, MB, as the task builds its input and runs, with the
+     * whole layout's arrays (12 doubles per analysed patch of the city, one per receiver, filled where
+     * the tile reads, as the finish stage did before) and with the tile's own ({@link StagedPasses.TileReflected}):
+     * {irradiation part (input + {@code StagedPasses.finish}) whole, own; whole finish (with the metrics) whole, own}.
      */
     private static double[] finishHeap(CityModel city, CityPlan p, Tile big, FirstPasses fp, StagedPasses.Reflected whole) {
-        double[] out = new double[2];
-        int analysed = p.analysedCount();
-        for (int form = 0; form < 2; form++) {
-            System.gc();
-            long before = heapUsed();
-            resetPeaks();
-            if (form == 0) {
-                double[] refl = new double[12 * analysed], total = new double[p.receiverCount()];
-                for (int i = 0; i < fp.size(); i++) {
-                    int id = fp.id(i);
-                    if (id < analysed) System.arraycopy(whole.reflMonthWh(), 12 * id, refl, 12 * id, 12);
+        double[] out = new double[4];
+        for (int part = 0; part < 2; part++) {
+            for (int form = 0; form < 2; form++) {
+                System.gc();
+                long before = heapUsed();
+                resetPeaks();
+                if (form == 0) {
+                    StagedPasses.Reflected r = wholeInput(p, fp, whole);
+                    if (part == 0) StagedPasses.finish(fp, r, city.sun(), city.study().rays());
+                    else city.finish(big, fp, r);
+                } else {
+                    StagedPasses.TileReflected r = StagedPasses.TileReflected.of(fp, whole);
+                    if (part == 0) StagedPasses.finish(fp, r, city.sun(), city.study().rays());
+                    else city.finish(big, fp, r);
                 }
-                for (int j : org.solmass.irradiation.TileBounces.needed(fp)) total[j] = whole.totalAnnualWh()[j];
-                for (int i = 0; i < fp.size(); i++) total[fp.id(i)] = whole.totalAnnualWh()[fp.id(i)];
-                city.finish(big, fp, new StagedPasses.Reflected(refl, total, whole.bounceWh(), whole.converged(), whole.tolerance(), whole.maxBounces()));
-            } else {
-                city.finish(big, fp, StagedPasses.TileReflected.of(fp, whole));
+                out[2 * part + form] = (peakHeap() - before) / 1048576.0;
             }
-            out[form] = (peakHeap() - before) / 1048576.0;
         }
         return out;
+    }
+
+    /** The whole layout's arrays as the finish task built them before: filled where the tile reads. */
+    private static StagedPasses.Reflected wholeInput(CityPlan p, FirstPasses fp, StagedPasses.Reflected whole) {
+        int analysed = p.analysedCount();
+        double[] refl = new double[12 * analysed], total = new double[p.receiverCount()];
+        for (int i = 0; i < fp.size(); i++) {
+            int id = fp.id(i);
+            if (id < analysed) System.arraycopy(whole.reflMonthWh(), 12 * id, refl, 12 * id, 12);
+            total[id] = whole.totalAnnualWh()[id];
+        }
+        for (int j : org.solmass.irradiation.TileBounces.needed(fp)) total[j] = whole.totalAnnualWh()[j];
+        return new StagedPasses.Reflected(refl, total, whole.bounceWh(), whole.converged(), whole.tolerance(), whole.maxBounces());
     }
 
     private static void resetPeaks() {
