@@ -212,18 +212,7 @@ public final class StagedPasses {
             background += st.backgroundWh[k];
             ghi += st.ghiWh[k];
         }
-        int[][] idx = new int[n][];
-        float[][] w = new float[n][], w2 = new float[n][];
-        float[] g = new float[n], g2 = new float[n];
-        for (int p = 0; p < n; p++) {
-            int i = rows[p];
-            idx[p] = localIds(part.refIdx[i], refl.totalIds());
-            w[p] = part.refW[i];
-            w2[p] = part.refW2[i];
-            g[p] = part.ghiW[i];
-            g2[p] = part.ghiW2[i];
-        }
-        Reflection.Lists lists = new Reflection.Lists(idx, w, w2, g, g2, HemisphereSampler.roundedRayCount(raysPerPatch));
+        int rays = HemisphereSampler.roundedRayCount(raysPerPatch);
         double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
         double[] annual = new double[n], beam = new double[n], diffuse = new double[n], reflected = new double[n];
         double[] unshaded = new double[n], sunshine = new double[n], annualSe = new double[n];
@@ -244,7 +233,11 @@ public final class StagedPasses {
                 dm[m] = part.diffuseMonthWh[12 * i + m];
             }
             ShadedIrradiation.patchTotals(p, bm, dm, rm, monthly, beam, diffuse, reflected, annual);
-            annualSe[p] = Reflection.stdErrorWh(p, lists, svf[p], background, ghi, refl.totalAnnualWh()) / 1000;
+            // one patch's reflector list at a time, its ids as positions in the tile's totals (no copy of every list)
+            Reflection.Lists row = new Reflection.Lists(new int[][] {localIds(part.refIdx[i], refl.totalIds())},
+                    new float[][] {part.refW[i]}, new float[][] {part.refW2[i]}, new float[] {part.ghiW[i]},
+                    new float[] {part.ghiW2[i]}, rays);
+            annualSe[p] = Reflection.stdErrorWh(0, row, svf[p], background, ghi, refl.totalAnnualWh()) / 1000;
             unshaded[p] = part.unshadedWh[i] / 1000;
             sunshine[p] = part.sunshineH[i];
         }
