@@ -212,7 +212,13 @@ public final class StagedPasses {
             background += st.backgroundWh[k];
             ghi += st.ghiWh[k];
         }
-        int rays = HemisphereSampler.roundedRayCount(raysPerPatch);
+        // one patch's reflector list at a time, its ids as positions in the tile's totals: one set of
+        // arrays for every patch (a buffer per list length), no copy of every list
+        int[][] idxRow = new int[1][];
+        float[][] wRow = new float[1][], w2Row = new float[1][];
+        float[] gRow = new float[1], g2Row = new float[1];
+        Reflection.Lists row = new Reflection.Lists(idxRow, wRow, w2Row, gRow, g2Row, HemisphereSampler.roundedRayCount(raysPerPatch));
+        int[][] byLength = new int[1][];
         double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
         double[] annual = new double[n], beam = new double[n], diffuse = new double[n], reflected = new double[n];
         double[] unshaded = new double[n], sunshine = new double[n], annualSe = new double[n];
@@ -233,10 +239,14 @@ public final class StagedPasses {
                 dm[m] = part.diffuseMonthWh[12 * i + m];
             }
             ShadedIrradiation.patchTotals(p, bm, dm, rm, monthly, beam, diffuse, reflected, annual);
-            // one patch's reflector list at a time, its ids as positions in the tile's totals (no copy of every list)
-            Reflection.Lists row = new Reflection.Lists(new int[][] {localIds(part.refIdx[i], refl.totalIds())},
-                    new float[][] {part.refW[i]}, new float[][] {part.refW2[i]}, new float[] {part.ghiW[i]},
-                    new float[] {part.ghiW2[i]}, rays);
+            int len = part.refIdx[i].length;
+            if (len >= byLength.length) byLength = Arrays.copyOf(byLength, Math.max(len + 1, 2 * byLength.length));
+            if (byLength[len] == null) byLength[len] = new int[len];
+            idxRow[0] = localIds(part.refIdx[i], refl.totalIds(), byLength[len]);
+            wRow[0] = part.refW[i];
+            w2Row[0] = part.refW2[i];
+            gRow[0] = part.ghiW[i];
+            g2Row[0] = part.ghiW2[i];
             annualSe[p] = Reflection.stdErrorWh(0, row, svf[p], background, ghi, refl.totalAnnualWh()) / 1000;
             unshaded[p] = part.unshadedWh[i] / 1000;
             sunshine[p] = part.sunshineH[i];
@@ -248,9 +258,8 @@ public final class StagedPasses {
                 new IrradiationResult.Bounces(bounceKwh, refl.converged(), refl.tolerance(), refl.maxBounces()));
     }
 
-    /** Global receiver ids as positions in {@code ids} (ascending). */
-    private static int[] localIds(int[] global, int[] ids) {
-        int[] out = new int[global.length];
+    /** Global receiver ids as positions in {@code ids} (ascending), into {@code out} (the same length). */
+    private static int[] localIds(int[] global, int[] ids, int[] out) {
         for (int k = 0; k < global.length; k++) {
             out[k] = Arrays.binarySearch(ids, global[k]);
             if (out[k] < 0) throw new IllegalArgumentException("no annual total for receiver " + global[k]);
