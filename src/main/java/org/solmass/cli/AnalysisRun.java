@@ -186,6 +186,14 @@ public final class AnalysisRun {
 
     /** {@link Prepared} for a study; timings of "load" and "patches" go into {@code t}. */
     public static Prepared prepare(Study study, PhaseProgress progress, Map<String, Double> t) {
+        return prepare(study, progress, t, null);
+    }
+
+    /**
+     * {@link Prepared} for a study with its weather series already loaded ({@link #loadWeather}; a city
+     * run's executors get it from the driver's tables), or null to load it.
+     */
+    public static Prepared prepare(Study study, PhaseProgress progress, Map<String, Double> t, WeatherSeries loaded) {
         List<String> warnings = new ArrayList<>();
         long t0 = System.nanoTime();
 
@@ -195,7 +203,7 @@ public final class AnalysisRun {
         warnings.addAll(read.warnings());
         String mismatch = siteMismatch(study, read.reference());
         if (mismatch != null) warnings.add(mismatch);
-        WeatherSeries weather = loadWeather(study);
+        WeatherSeries weather = loaded != null ? loaded : loadWeather(study);
         for (String x : weather.report().repairs()) warnings.add("climate repaired: " + x);
         for (String x : weather.report().warnings()) warnings.add("climate: " + x);
         for (Warning x : Plausibility.check(model, study.site(), weather)) warnings.add(x.toString());

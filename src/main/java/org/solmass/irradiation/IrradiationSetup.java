@@ -104,12 +104,19 @@ public final class IrradiationSetup {
         final SunDirections directions;
         final StepTable steps;
 
-        private Sun(SunDirections directions, StepTable steps) {
+        /** How many times this JVM computed the tables ({@link #of}): a city run's tests and benchmark read it. */
+        private static final java.util.concurrent.atomic.AtomicLong COMPUTED = new java.util.concurrent.atomic.AtomicLong();
+
+        Sun(SunDirections directions, StepTable steps) {
             this.directions = directions;
             this.steps = steps;
         }
 
+        /** The number of {@link #of} calls in this JVM so far (tables read back by {@link SunCodec} do not count). */
+        public static long computedCount() { return COMPUTED.get(); }
+
         public static Sun of(WeatherSeries weather, SkyModel sky, Options o) {
+            COMPUTED.incrementAndGet();
             SunDirections dirs = o.sunSampling() == SunSampling.EXACT ? SunDirections.exact(weather)
                     : SunDirections.binned(weather, new SkySubdivision(o.sunBins()));
             return new Sun(dirs, new StepTable(weather, dirs, sky));

@@ -83,6 +83,88 @@ public final class StagedPasses {
     public record Reflected(double[] reflMonthWh, double[] totalAnnualWh, double[] bounceWh, boolean converged,
                             double tolerance, int maxBounces) implements Serializable {
         public int bounces() { return bounceWh.length; }
+
+        /** Bytes of its arrays: 12 doubles per analysed patch and one per receiver of the whole layout. */
+        public long bytes() { return 8L * (reflMonthWh.length + totalAnnualWh.length + bounceWh.length); }
+    }
+
+    /**
+     * What the finish stage of one tile needs of the reflection ({@link Serializable}): its size follows
+     * the tile (its analysed patches and the receivers their reflector lists read), not the whole
+     * layout as {@link Reflected}'s does.
+     *
+     * @param analysedTotal analysed patches of the whole layout (ids 0 .. analysedTotal - 1)
+     * @param ids the tile's analysed patches, global ids, ascending
+     * @param reflMonthWh reflected irradiation per entry of {@code ids} and month (entry x 12), Wh/m2
+     * @param totalIds receivers whose annual total the tile reads, global ids, ascending: at least every
+     *                 reflector of its analysed patches
+     * @param totalAnnualWh first pass + reflected, annual, per entry of {@code totalIds}, Wh/m2
+     * @param bounceWh energy added by each bounce, summed over every analysed patch of the layout, Wh/m2
+     * @param converged whether the last bounce met the tolerance
+     * @param tolerance the stopping fraction used
+     * @param maxBounces the largest number of bounces allowed
+     */
+    public record TileReflected(int analysedTotal, int[] ids, double[] reflMonthWh, int[] totalIds, double[] totalAnnualWh,
+                                double[] bounceWh, boolean converged, double tolerance, int maxBounces) implements Serializable {
+        public int bounces() { return bounceWh.length; }
+
+        /** Bytes of its arrays (what a finish task receives besides its first pass). */
+        public long bytes() {
+            return 4L * ids.length + 8L * reflMonthWh.length + 4L * totalIds.length + 8L * totalAnnualWh.length + 8L * bounceWh.length;
+        }
+
+        /** The part of the whole layout's sums that a tile with this first pass reads. */
+        public static TileReflected of(FirstPasses part, Reflected whole) {
+            int analysed = whole.reflMonthWh().length / 12;
+            int n = part.size();
+            double[] refl = new double[12 * n], own = new double[n];
+            for (int i = 0; i < n; i++) {
+                int id = part.ids[i];
+                if (id < analysed) System.arraycopy(whole.reflMonthWh(), 12 * id, refl, 12 * i, 12);
+                own[i] = whole.totalAnnualWh()[id];
+            }
+            int[] read = TileBounces.needed(part);
+            double[] got = new double[read.length];
+            for (int k = 0; k < read.length; k++) got[k] = whole.totalAnnualWh()[read[k]];
+            return of(analysed, part.ids, refl, own, read, got, whole.bounceWh(), whole.converged(), whole.tolerance(),
+                    whole.maxBounces());
+        }
+
+        /**
+         * From a tile's own receivers and the annual totals it received (a distributed run's finish task).
+         *
+         * @param ownIds the tile's receivers, global ids, ascending
+         * @param ownReflMonthWh reflected irradiation per entry of {@code ownIds} and month (entry x 12; read for analysed patches only)
+         * @param ownTotalAnnualWh first pass + reflected, annual, per entry of {@code ownIds}
+         * @param gotIds receivers of other tiles (or its own) whose totals it received, ascending
+         * @param gotTotalAnnualWh their annual totals (a receiver in both lists has the same total in both)
+         */
+        public static TileReflected of(int analysedTotal, int[] ownIds, double[] ownReflMonthWh, double[] ownTotalAnnualWh,
+                                       int[] gotIds, double[] gotTotalAnnualWh, double[] bounceWh, boolean converged,
+                                       double tolerance, int maxBounces) {
+            int na = 0;
+            for (int id : ownIds) if (id < analysedTotal) na++;
+            int[] ids = new int[na];
+            double[] refl = new double[12 * na];
+            for (int i = 0, k = 0; i < ownIds.length; i++) {
+                if (ownIds[i] >= analysedTotal) continue;
+                ids[k] = ownIds[i];
+                System.arraycopy(ownReflMonthWh, 12 * i, refl, 12 * k++, 12);
+            }
+            int[] tIds = new int[ownIds.length + gotIds.length];
+            double[] tWh = new double[tIds.length];
+            int a = 0, b = 0, m = 0;
+            while (a < ownIds.length || b < gotIds.length) { // merge, ascending; own first on a tie
+                boolean own = b == gotIds.length || (a < ownIds.length && ownIds[a] <= gotIds[b]);
+                int id = own ? ownIds[a] : gotIds[b];
+                double v = own ? ownTotalAnnualWh[a++] : gotTotalAnnualWh[b++];
+                if (m > 0 && tIds[m - 1] == id) continue;
+                tIds[m] = id;
+                tWh[m++] = v;
+            }
+            return new TileReflected(analysedTotal, ids, refl, Arrays.copyOf(tIds, m), Arrays.copyOf(tWh, m), bounceWh,
+                    converged, tolerance, maxBounces);
+        }
     }
 
     /**
@@ -113,7 +195,15 @@ public final class StagedPasses {
      * @param raysPerPatch hemisphere rays of an analysed patch (for the standard error)
      */
     public static IrradiationResult finish(FirstPasses part, Reflected refl, IrradiationSetup.Sun sun, int raysPerPatch) {
-        int analysedTotal = refl.reflMonthWh().length / 12;
+        return finish(part, TileReflected.of(part, refl), sun, raysPerPatch);
+    }
+
+    /**
+     * Stage 3 with the tile's own part of the reflection ({@link TileReflected}): the same results as
+     * with the whole layout's, from arrays the size of the tile.
+     */
+    public static IrradiationResult finish(FirstPasses part, TileReflected refl, IrradiationSetup.Sun sun, int raysPerPatch) {
+        int analysedTotal = refl.analysedTotal();
         int[] rows = IntStream.range(0, part.size()).filter(i -> part.ids[i] < analysedTotal).toArray();
         int n = rows.length;
         StepTable st = sun.steps;
@@ -122,24 +212,20 @@ public final class StagedPasses {
             background += st.backgroundWh[k];
             ghi += st.ghiWh[k];
         }
-        int[][] idx = new int[n][];
-        float[][] w = new float[n][], w2 = new float[n][];
-        float[] g = new float[n], g2 = new float[n];
-        for (int p = 0; p < n; p++) {
-            int i = rows[p];
-            idx[p] = part.refIdx[i];
-            w[p] = part.refW[i];
-            w2[p] = part.refW2[i];
-            g[p] = part.ghiW[i];
-            g2[p] = part.ghiW2[i];
-        }
-        Reflection.Lists lists = new Reflection.Lists(idx, w, w2, g, g2, HemisphereSampler.roundedRayCount(raysPerPatch));
+        // one patch's reflector list at a time, its ids as positions in the tile's totals: one set of
+        // arrays for every patch (a buffer per list length), no copy of every list
+        int[][] idxRow = new int[1][];
+        float[][] wRow = new float[1][], w2Row = new float[1][];
+        float[] gRow = new float[1], g2Row = new float[1];
+        Reflection.Lists row = new Reflection.Lists(idxRow, wRow, w2Row, gRow, g2Row, HemisphereSampler.roundedRayCount(raysPerPatch));
+        int[][] byLength = new int[1][];
         double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
         double[] annual = new double[n], beam = new double[n], diffuse = new double[n], reflected = new double[n];
         double[] unshaded = new double[n], sunshine = new double[n], annualSe = new double[n];
         double[][] monthly = new double[12][n];
         for (int p = 0; p < n; p++) {
-            int i = rows[p], id = part.ids[i];
+            int i = rows[p], id = part.ids[i], r = Arrays.binarySearch(refl.ids(), id);
+            if (r < 0) throw new IllegalArgumentException("no reflected sums for patch " + id);
             svf[p] = part.svf[i];
             gvf[p] = part.gvf[i];
             obs[p] = part.obs[i];
@@ -147,13 +233,21 @@ public final class StagedPasses {
             hv[p] = part.horizonVis[i];
             double[] bm = new double[12], dm = new double[12], rm = new double[12];
             for (int m = 0; m < 12; m++) {
-                rm[m] = refl.reflMonthWh()[12 * id + m];
+                rm[m] = refl.reflMonthWh()[12 * r + m];
                 if (part.canopyReflection != null) rm[m] *= part.canopyReflection[12 * i + m];
                 bm[m] = part.beamMonthWh[12 * i + m];
                 dm[m] = part.diffuseMonthWh[12 * i + m];
             }
             ShadedIrradiation.patchTotals(p, bm, dm, rm, monthly, beam, diffuse, reflected, annual);
-            annualSe[p] = Reflection.stdErrorWh(p, lists, svf[p], background, ghi, refl.totalAnnualWh()) / 1000;
+            int len = part.refIdx[i].length;
+            if (len >= byLength.length) byLength = Arrays.copyOf(byLength, Math.max(len + 1, 2 * byLength.length));
+            if (byLength[len] == null) byLength[len] = new int[len];
+            idxRow[0] = localIds(part.refIdx[i], refl.totalIds(), byLength[len]);
+            wRow[0] = part.refW[i];
+            w2Row[0] = part.refW2[i];
+            gRow[0] = part.ghiW[i];
+            g2Row[0] = part.ghiW2[i];
+            annualSe[p] = Reflection.stdErrorWh(0, row, svf[p], background, ghi, refl.totalAnnualWh()) / 1000;
             unshaded[p] = part.unshadedWh[i] / 1000;
             sunshine[p] = part.sunshineH[i];
         }
@@ -162,5 +256,14 @@ public final class StagedPasses {
         return new IrradiationResult(svf, gvf, obs, se, hv, annual, beam, diffuse, reflected, unshaded, monthly, null,
                 sunshine, st.siteSunshineHours, sun.directions.count(), annualSe,
                 new IrradiationResult.Bounces(bounceKwh, refl.converged(), refl.tolerance(), refl.maxBounces()));
+    }
+
+    /** Global receiver ids as positions in {@code ids} (ascending), into {@code out} (the same length). */
+    private static int[] localIds(int[] global, int[] ids, int[] out) {
+        for (int k = 0; k < global.length; k++) {
+            out[k] = Arrays.binarySearch(ids, global[k]);
+            if (out[k] < 0) throw new IllegalArgumentException("no annual total for receiver " + global[k]);
+        }
+        return out;
     }
 }

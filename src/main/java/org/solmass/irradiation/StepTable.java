@@ -119,6 +119,30 @@ final class StepTable {
         siteSunshineHours = site;
     }
 
+    /**
+     * A table read back ({@link SunCodec}): the arrays as written; {@code perSlot} holds, in this
+     * order, the background, horizon, GHI, DHI and hours per slot.
+     */
+    StepTable(float[] sx, float[] sy, float[] sz, int[] direction, int[] slot, double[] beamWh, double[] circumsolarWh,
+              double[] sunshineHours, double siteSunshineHours, float[] cosZenith, double[][] perSlot,
+              SkyPatches skyPatches, double[] skyWh) {
+        this.count = sx.length;
+        this.sx = sx;
+        this.sy = sy;
+        this.sz = sz;
+        this.direction = direction;
+        this.slot = slot;
+        this.beamWh = beamWh;
+        this.circumsolarWh = circumsolarWh;
+        this.sunshineHours = sunshineHours;
+        this.siteSunshineHours = siteSunshineHours;
+        this.cosZenith = cosZenith;
+        double[][] into = {backgroundWh, horizonWh, ghiWh, dhiWh, hours};
+        for (int i = 0; i < into.length; i++) System.arraycopy(perSlot[i], 0, into[i], 0, SLOTS);
+        this.skyPatches = skyPatches;
+        this.skyWh = skyWh;
+    }
+
     /** Whether a step's DNI counts as sunshine (at or above the WMO threshold). */
     static boolean isSunshine(double dniWm2) {
         return dniWm2 >= SUNSHINE_DNI_WM2;

@@ -20,7 +20,7 @@ public final class SunDirections {
     /** Per step of the series: the direction index standing for it, or -1 when the sun is down. */
     final int[] stepDirection;
 
-    private SunDirections(float[] directions, int[] stepDirection) {
+    SunDirections(float[] directions, int[] stepDirection) {
         this.directions = directions;
         this.stepDirection = stepDirection;
     }

@@ -29,8 +29,8 @@ import java.util.Map;
 
 /**
  * A study prepared for a tiled (city-scale) run, and the three stages of such a run on its tiles.
- * Not serializable: a task rebuilds it from the study file ({@link #load}) and keeps it for all the
- * tiles it runs; what travels between stages is serializable ({@link CityPlan}, {@link Tile},
+ * Not serializable: a task rebuilds it from the study file and the driver's {@link #tables}
+ * ({@link #load(Path, CityTables)}) and keeps it for all the tiles it runs; what travels between stages is serializable ({@link CityPlan}, {@link Tile},
  * {@link FirstPasses}, {@link StagedPasses.Reflected}).
  *
  * <p>A run, as {@link LocalCityRunner} does it on one machine:
@@ -57,7 +57,7 @@ public final class CityModel {
     private final double[][] blockBounds;
     private final Map<Double, HeightRaster> rasters = new HashMap<>();
 
-    private CityModel(Study study, AnalysisRun.Prepared prepared) {
+    private CityModel(Study study, AnalysisRun.Prepared prepared, IrradiationSetup.Sun sun) {
         this.study = study;
         this.prepared = prepared;
         this.soup = prepared.soup();
@@ -65,13 +65,22 @@ public final class CityModel {
         this.layout = ReceiverLayout.of(soup.length / 9, prepared.groundPlane(), prepared.groundZ(), frame[3],
                 prepared.model(), prepared.patches().surfaces(), prepared.patches().patches(), prepared.contextPatches(),
                 prepared.options());
-        this.sun = IrradiationSetup.Sun.of(prepared.weather(), study.sky(), prepared.options());
+        this.sun = sun != null ? sun : IrradiationSetup.Sun.of(prepared.weather(), study.sky(), prepared.options());
         this.blockBounds = blockBounds(prepared.model());
     }
 
     /** The study file read and prepared (model, patches, weather) as {@code solmass analyse} does. */
     public static CityModel load(Path studyFile) {
         return of(StudyReader.read(studyFile));
+    }
+
+    /**
+     * The study file read and prepared with the tables the driver computed from the same file
+     * ({@link #tables}, sent as bytes): the climate is not read and the sun and sky tables are not
+     * computed again (a Spark executor's set-up).
+     */
+    public static CityModel load(Path studyFile, CityTables tables) {
+        return of(StudyReader.read(studyFile), tables);
     }
 
     private static CityModel last;
@@ -99,8 +108,17 @@ public final class CityModel {
 
     /** A study prepared as {@code solmass analyse} does. */
     public static CityModel of(Study study) {
-        return new CityModel(study, AnalysisRun.prepare(study, PhaseProgress.NONE, new java.util.LinkedHashMap<>()));
+        return new CityModel(study, AnalysisRun.prepare(study, PhaseProgress.NONE, new java.util.LinkedHashMap<>()), null);
     }
+
+    /** A study prepared with tables computed from it before ({@link #tables}): weather, sun and step table as given. */
+    public static CityModel of(Study study, CityTables tables) {
+        return new CityModel(study, AnalysisRun.prepare(study, PhaseProgress.NONE, new java.util.LinkedHashMap<>(), tables.weather()),
+                tables.sun());
+    }
+
+    /** The tables every tile shares (weather, sun directions, step table), to send to the executors ({@link CityTables#encode}). */
+    public CityTables tables() { return new CityTables(prepared.weather(), sun); }
 
     public Study study() { return study; }
 
@@ -201,6 +219,14 @@ public final class CityModel {
      * ({@link LocalCityRunner#merge} numbers them as the whole model does).
      */
     public TileRows finish(Tile t, FirstPasses ofTile, StagedPasses.Reflected refl) {
+        return finish(t, ofTile, StagedPasses.TileReflected.of(ofTile, refl));
+    }
+
+    /**
+     * Stage 3 with the tile's own part of the reflection (what a distributed run's finish task
+     * receives; its arrays follow the tile, not the city): the same rows as {@link #finish(Tile, FirstPasses, StagedPasses.Reflected)}.
+     */
+    public TileRows finish(Tile t, FirstPasses ofTile, StagedPasses.TileReflected refl) {
         IrradiationResult r = StagedPasses.finish(ofTile, refl, sun, study.rays());
         PatchSet all = prepared.patches();
         int n = t.analysedCount(layout.analysed());

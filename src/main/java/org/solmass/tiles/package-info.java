@@ -7,11 +7,15 @@
  *
  * <p>Public API (stable for the distributed runner in src/spark):
  * <ul>
- * <li>{@link org.solmass.tiles.CityModel}: {@code load(Path)}, {@code cached(Path)}, {@code of(Study)};
+ * <li>{@link org.solmass.tiles.CityModel}: {@code load(Path)}, {@code load(Path, CityTables)},
+ * {@code cached(Path)}, {@code of(Study)}, {@code of(Study, CityTables)}; {@code tables()};
  * {@code plan(CityOptions) -> CityPlan}; {@code firstPass(Tile) -> FirstPasses} (stage 1);
  * {@code reflect(List<FirstPasses>) -> StagedPasses.Reflected} (exchange and bounces);
- * {@code finish(Tile, FirstPasses, Reflected) -> TileRows} (stage 3); {@code tileScene(Tile)},
+ * {@code finish(Tile, FirstPasses, TileReflected or Reflected) -> TileRows} (stage 3); {@code tileScene(Tile)},
  * {@code sceneTriangles(Tile)}, {@code layout()}, {@code sun()}, {@code prepared()}, {@code raster(double)}.</li>
+ * <li>{@link org.solmass.tiles.CityTables}: the weather, sun directions and step table every tile
+ * shares, {@code encode() -> byte[]} and {@code decode(byte[])} with every number's raw bits (what a
+ * distributed run's driver broadcasts).</li>
  * <li>{@link org.solmass.tiles.CityOptions} (tile side, halo cap, far horizon on/off, raster cell,
  * azimuths, height band, conservative rule), {@link org.solmass.tiles.CityPlan},
  * {@link org.solmass.tiles.Tile}: serializable.</li>

@@ -2,12 +2,15 @@ package org.solmass.spark;
 
 import org.solmass.cli.AnalysisRun;
 import org.solmass.irradiation.FirstPasses;
+import org.solmass.irradiation.IrradiationSetup;
+import org.solmass.irradiation.StagedPasses;
 import org.solmass.irradiation.PhaseProgress;
 import org.solmass.study.Study;
 import org.solmass.study.StudyReader;
 import org.solmass.tiles.CityModel;
 import org.solmass.tiles.CityOptions;
 import org.solmass.tiles.CityPlan;
+import org.solmass.tiles.CityTables;
 import org.solmass.tiles.SyntheticCity;
 import org.solmass.tiles.Tile;
 import picocli.CommandLine;
@@ -28,7 +31,9 @@ import java.util.concurrent.Callable;
  * {@code solmass analyse}, all cores) against {@code solmass city} on {@code local[2]}, as patches per
  * second per core and their ratio; then, per tile size, the largest tile's first pass alone: its
  * receivers, scene triangles, the bytes its {@link FirstPasses} hold and the peak heap while it runs
- * (what one task needs, besides the prepared study every task holds).
+ * (what one task needs, besides the prepared study every task holds); the size of the tables the
+ * driver broadcasts and an executor's set-up with and without them; and the peak heap of the largest
+ * tile's finish task with the whole layout's reflection arrays and with the tile's own.
  * Run: {@code java -cp target/classes:$(cat target/city-classpath.txt) org.solmass.spark.CityBench --patches 100000}
  * (with the launcher's JVM options; see the solmass script).
  */
@@ -42,6 +47,7 @@ public final class CityBench implements Callable<Integer> {
     @Option(names = "--halo-cap", paramLabel = "M", description = "largest halo radius (default: none)") Double haloCapM;
     @Option(names = "--memory-tiles", split = ",", defaultValue = "125,250,500", paramLabel = "M", description = "tile sides for the memory table (default ${DEFAULT-VALUE})") double[] memoryTiles;
     @Option(names = "--skip-one-machine", description = "only the Spark run and the memory table") boolean skipOne;
+    @Option(names = "--memory-only", description = "only the tables, the executor set-up and the memory table") boolean memoryOnly;
 
     public static void main(String[] args) {
         System.exit(new CommandLine(new CityBench()).execute(args));
@@ -55,7 +61,7 @@ public final class CityBench implements Callable<Integer> {
         System.out.printf(Locale.ROOT, "invented city: %d buildings, about %d patches, tallest %.1f m%n", w.buildings(), w.estimatedPatches(), w.tallestM());
         int cores = Runtime.getRuntime().availableProcessors();
         double oneRate = Double.NaN;
-        if (!skipOne) {
+        if (!skipOne && !memoryOnly) {
             System.gc();
             long t0 = System.nanoTime();
             AnalysisRun.Outcome o = AnalysisRun.run(study, PhaseProgress.NONE);
@@ -64,6 +70,17 @@ public final class CityBench implements Callable<Integer> {
             oneRate = n / s / cores;
             System.out.printf(Locale.ROOT, "one machine (%d cores): %d patches in %.1f s = %.1f patches/s/core; phases %s%n", cores, n, s, oneRate, o.timingsS());
         }
+        if (!memoryOnly) {
+            int code = spark(dir, w, oneRate);
+            if (code != 0) return code;
+        }
+        memory(w, CityModel.of(study));
+        CityJob.deleteTree(dir);
+        return 0;
+    }
+
+    /** The Spark run of the city, as {@code solmass city} does it: patches per second per core, and against one machine. */
+    private int spark(Path dir, SyntheticCity.Written w, double oneRate) {
         CityJob job = new CityJob();
         long t1 = System.nanoTime();
         String[] args = haloCapM == null
@@ -80,9 +97,23 @@ public final class CityBench implements Callable<Integer> {
         System.out.printf(Locale.ROOT, "%s (%d cores): %d patches, %d tiles of %.0f m, halo %.0f m: %.1f s (Spark start included) = %.1f patches/s/core;"
                         + " stages %s%n", master, sparkCores, n, plan.tiles().size(), tileM, plan.haloM(), s, rate, job.last.stages().stageS());
         if (!skipOne) System.out.printf(Locale.ROOT, "ratio %s / one machine, patches per second per core: %.2f%n", master, rate / oneRate);
+        return 0;
+    }
 
-        System.out.printf(Locale.ROOT, "%n%-8s %6s %10s %12s %14s %16s %12s%n", "tile_m", "tiles", "halo_m", "receivers", "scene_tris", "first_pass_MB", "peak_heap_MB");
-        CityModel city = CityModel.of(study);
+    /** Per tile size, the largest tile's first pass and finish task alone (what one task holds). */
+    private void memory(SyntheticCity.Written w, CityModel city) {
+        executorSetUp(w.study(), city);
+
+        // the whole layout's reflection, once (from the Spark run's tiling): what the finish tasks below read
+        CityOptions ro = CityOptions.defaults().withTileM(tileM);
+        if (haloCapM != null) ro = ro.withHaloCapM(haloCapM);
+        java.util.List<FirstPasses> firsts = new java.util.ArrayList<>();
+        for (Tile t : city.plan(ro).tiles()) firsts.add(city.firstPass(t));
+        StagedPasses.Reflected whole = city.reflect(firsts);
+        firsts = null;
+
+        System.out.printf(Locale.ROOT, "%n%-8s %6s %10s %12s %14s %16s %12s %12s %12s %12s %12s %12s %12s%n", "tile_m", "tiles", "halo_m", "receivers", "scene_tris",
+                "first_pass_MB", "peak_heap_MB", "in_all_MB", "in_own_MB", "irr_all_MB", "irr_own_MB", "finish_all_MB", "finish_own_MB");
         for (double tm : memoryTiles) {
             CityOptions o = CityOptions.defaults().withTileM(tm);
             if (haloCapM != null) o = o.withHaloCapM(haloCapM);
@@ -94,11 +125,83 @@ public final class CityBench implements Callable<Integer> {
             resetPeaks();
             FirstPasses fp = city.firstPass(big);
             double peak = (peakHeap() - before) / 1048576.0;
-            System.out.printf(Locale.ROOT, "%-8.0f %6d %10.0f %12d %14d %16.1f %12.0f%n", tm, p.tiles().size(), p.haloM(), big.receivers().length,
-                    city.sceneTriangles(big).length, fp.bytes() / 1048576.0, peak);
+            double[] finish = finishHeap(city, p, big, fp, whole);
+            System.out.printf(Locale.ROOT, "%-8.0f %6d %10.0f %12d %14d %16.1f %12.0f %12.2f %12.2f %12.1f %12.1f %12.1f %12.1f%n", tm, p.tiles().size(), p.haloM(),
+                    big.receivers().length, city.sceneTriangles(big).length, fp.bytes() / 1048576.0, peak, whole.bytes() / 1048576.0,
+                    StagedPasses.TileReflected.of(fp, whole).bytes() / 1048576.0, finish[0], finish[1], finish[2], finish[3]);
         }
-        CityJob.deleteTree(dir);
-        return 0;
+    }
+
+    /**
+     * What an executor's set-up costs with and without the driver's tables (weather, sun directions,
+     * step table; {@link CityTables}): their size as sent, and the study prepared from its file alone
+     * or with them, interleaved, twice each.
+     */
+    private static void executorSetUp(Path studyFile, CityModel driver) {
+        long e0 = System.nanoTime();
+        byte[] bytes = driver.tables().encode();
+        double encodeS = (System.nanoTime() - e0) / 1e9;
+        long d0 = System.nanoTime();
+        CityTables.decode(bytes);
+        double decodeS = (System.nanoTime() - d0) / 1e9;
+        System.out.printf(Locale.ROOT, "%ntables broadcast: %d bytes (%d steps, %d sun directions), encoded in %.3f s, decoded in %.3f s%n",
+                bytes.length, driver.prepared().weather().size(), driver.sun().directions().count(), encodeS, decodeS);
+        for (int round = 0; round < 2; round++) {
+            System.gc();
+            long computed = IrradiationSetup.Sun.computedCount();
+            long t0 = System.nanoTime();
+            CityModel.load(studyFile);
+            double alone = (System.nanoTime() - t0) / 1e9;
+            long computedAlone = IrradiationSetup.Sun.computedCount() - computed;
+            System.gc();
+            computed = IrradiationSetup.Sun.computedCount();
+            long t1 = System.nanoTime();
+            CityModel.load(studyFile, CityTables.decode(bytes));
+            double with = (System.nanoTime() - t1) / 1e9;
+            System.out.printf(Locale.ROOT, "executor set-up: from the study file %.2f s (sun tables computed %d), with the tables %.2f s (computed %d)%n",
+                    alone, computedAlone, with, IrradiationSetup.Sun.computedCount() - computed);
+        }
+    }
+
+    /**
+     * Peak heap of a finish task on {@code big}, MB, as the task builds its input and runs, with the
+     * whole layout's arrays (12 doubles per analysed patch of the city, one per receiver, filled where
+     * the tile reads, as the finish stage did before) and with the tile's own ({@link StagedPasses.TileReflected}):
+     * {irradiation part (input + {@code StagedPasses.finish}) whole, own; whole finish (with the metrics) whole, own}.
+     */
+    private static double[] finishHeap(CityModel city, CityPlan p, Tile big, FirstPasses fp, StagedPasses.Reflected whole) {
+        double[] out = new double[4];
+        for (int part = 0; part < 2; part++) {
+            for (int form = 0; form < 2; form++) {
+                System.gc();
+                long before = heapUsed();
+                resetPeaks();
+                if (form == 0) {
+                    StagedPasses.Reflected r = wholeInput(p, fp, whole);
+                    if (part == 0) StagedPasses.finish(fp, r, city.sun(), city.study().rays());
+                    else city.finish(big, fp, r);
+                } else {
+                    StagedPasses.TileReflected r = StagedPasses.TileReflected.of(fp, whole);
+                    if (part == 0) StagedPasses.finish(fp, r, city.sun(), city.study().rays());
+                    else city.finish(big, fp, r);
+                }
+                out[2 * part + form] = (peakHeap() - before) / 1048576.0;
+            }
+        }
+        return out;
+    }
+
+    /** The whole layout's arrays as the finish task built them before: filled where the tile reads. */
+    private static StagedPasses.Reflected wholeInput(CityPlan p, FirstPasses fp, StagedPasses.Reflected whole) {
+        int analysed = p.analysedCount();
+        double[] refl = new double[12 * analysed], total = new double[p.receiverCount()];
+        for (int i = 0; i < fp.size(); i++) {
+            int id = fp.id(i);
+            if (id < analysed) System.arraycopy(whole.reflMonthWh(), 12 * id, refl, 12 * id, 12);
+            total[id] = whole.totalAnnualWh()[id];
+        }
+        for (int j : org.solmass.irradiation.TileBounces.needed(fp)) total[j] = whole.totalAnnualWh()[j];
+        return new StagedPasses.Reflected(refl, total, whole.bounceWh(), whole.converged(), whole.tolerance(), whole.maxBounces());
     }
 
     private static void resetPeaks() {

@@ -17,6 +17,7 @@ import org.solmass.metrics.PvZones;
 import org.solmass.table.Column;
 import org.solmass.tiles.CityModel;
 import org.solmass.tiles.CityPlan;
+import org.solmass.tiles.CityTables;
 import org.solmass.tiles.Tile;
 import scala.Tuple2;
 
@@ -44,8 +45,9 @@ import java.util.stream.IntStream;
  * <li>finish, one task per tile ({@link CityModel#finish}): the rows of patches.csv, written as
  * Parquet partitioned by tile, with the PV zones numbered as the whole model numbers them.</li>
  * </ol>
- * Each task rebuilds the prepared study from its file once per JVM ({@link #city}); in local mode the
- * driver's own is used, so the sun, sky and climate tables are computed once. A task that fails is
+ * Each task rebuilds the prepared study from its file once per JVM ({@link #city}) with the weather,
+ * sun and sky tables the driver computed and broadcast ({@link CityTables}); in local mode the
+ * driver's own prepared study is used. A task that fails is
  * retried by Spark from the persisted stage before it; Spark's file commit keeps only one attempt's
  * rows per tile.
  */
@@ -77,9 +79,12 @@ final class CityStages {
 
     private static final Map<String, CityModel> CITIES = new ConcurrentHashMap<>();
 
-    /** The prepared study of this JVM (read from its file on first use). */
-    static CityModel city(String studyFile) {
-        return CITIES.computeIfAbsent(studyFile, f -> CityModel.load(Path.of(f)));
+    /**
+     * The prepared study of this JVM: on first use read from its file with the driver's tables
+     * ({@link CityTables}: weather, sun directions, step table), which are not computed again.
+     */
+    static CityModel city(String studyFile, Broadcast<byte[]> tables) {
+        return CITIES.computeIfAbsent(studyFile, f -> CityModel.load(Path.of(f), CityTables.decode(tables.value())));
     }
 
     /** Makes the driver's prepared study the one its local tasks use. */
@@ -183,10 +188,11 @@ final class CityStages {
     static Outcome run(SparkSession spark, CityModel city, CityPlan plan, Settings s, Path parquet) {
         JavaSparkContext sc = JavaSparkContext.fromSparkContext(spark.sparkContext());
         int nTiles = plan.tiles().size();
-        int analysed = plan.analysedCount(), receivers = plan.receiverCount();
+        int analysed = plan.analysedCount();
         TilePartitioner tp = new TilePartitioner(nTiles);
         HashPartitioner hp = new HashPartitioner(nTiles);
         Broadcast<CityPlan> bPlan = sc.broadcast(plan);
+        Broadcast<byte[]> bTables = sc.broadcast(city.tables().encode());
         double[] ghiMonth = TileBounces.ghiMonthWh(city.sun());
         Map<String, Double> stageS = new LinkedHashMap<>();
         List<JavaPairRDD<?, ?>> cached = new ArrayList<>();
@@ -198,7 +204,7 @@ final class CityStages {
         JavaPairRDD<Integer, FirstPasses> firsts = sc.parallelize(tiles, nTiles).mapToPair(t -> new Tuple2<>(t, t))
                 .partitionBy(tp).mapValues(t -> {
                     failOnce(s, "first-pass", t);
-                    return city(s.studyFile()).firstPass(bPlan.value().tile(t));
+                    return city(s.studyFile(), bTables).firstPass(bPlan.value().tile(t));
                 }).persist(StorageLevel.MEMORY_AND_DISK());
         cached.add(firsts);
         long[] bytes = new long[nTiles];
@@ -270,17 +276,14 @@ final class CityStages {
             TileState st = x._1()._2();
             int tile = st.tile;
             failOnce(s, "finish", tile);
-            double[] refl = new double[12 * analysed], total = new double[receivers];
-            for (int i = 0; i < st.ids.length; i++) {
-                int id = st.ids[i];
-                if (id < analysed) System.arraycopy(st.reflMonth, 12 * i, refl, 12 * id, 12);
-                total[id] = st.totalAnnual[i];
-            }
+            // the tile's own sums and the totals it received: arrays the size of the tile, not the city
             Lookup got = new Lookup(x._2());
-            for (int i = 0; i < got.ids.length; i++) total[got.ids[i]] = got.values[i][0];
-            StagedPasses.Reflected r = new StagedPasses.Reflected(refl, total, bounces, conv, tolerance, maxBounces);
+            double[] gotTotal = new double[got.ids.length];
+            for (int i = 0; i < gotTotal.length; i++) gotTotal[i] = got.values[i][0];
+            StagedPasses.TileReflected r = StagedPasses.TileReflected.of(analysed, st.ids, st.reflMonth, st.totalAnnual,
+                    got.ids, gotTotal, bounces, conv, tolerance, maxBounces);
             Tile t = bPlan.value().tile(tile);
-            CityModel.TileRows rows = city(s.studyFile()).finish(t, fp, r);
+            CityModel.TileRows rows = city(s.studyFile(), bTables).finish(t, fp, r);
             return new TileOut(tile, rows.table(), rows.patchIndex(), rows.metrics());
         }).persist(StorageLevel.MEMORY_AND_DISK());
         cached.add(out);
@@ -311,6 +314,7 @@ final class CityStages {
         List<org.solmass.output.BuildingsWriter.Building> buildings = BuildingSummaries.of(out, summarised.stream().map(Column::name).toList());
         for (JavaPairRDD<?, ?> c : cached) c.unpersist(false);
         bPlan.destroy();
+        bTables.destroy();
         bZones.destroy();
         return new Outcome(columns, bounces, conv, count, bytes, stageS, zones, zoneRows, summarised, buildings);
     }

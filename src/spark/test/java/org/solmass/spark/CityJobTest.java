@@ -15,6 +15,7 @@ import org.solmass.study.StudyReader;
 import org.solmass.table.ResultTable;
 import org.solmass.tiles.CityModel;
 import org.solmass.tiles.CityOptions;
+import org.solmass.tiles.CityPlan;
 import org.solmass.tiles.LocalCityRunner;
 import org.solmass.tiles.SyntheticCity;
 
@@ -26,6 +27,7 @@ import java.util.List;
 import java.util.Map;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
@@ -264,5 +266,28 @@ class CityJobTest {
         assertBuildingsCsvHoldsEachBlocksAreaAndAreaWeightedMean(out);
         assertZonesGeoJsonHoldsTheOneMachineZonesOnce(out);
         assertZonesCsvHasTheOneMachineRowsAndNotes(out);
+    }
+
+    /**
+     * Tasks that build their own prepared study, as a cluster's executors do (the driver's is not
+     * shared): from the study file and the tables the driver broadcast ({@code tiles.CityTables}),
+     * computing no sun or step table, with the same rows as the sequential tiled run.
+     */
+    @Test
+    void tasksBuildingTheirOwnModelFromTheBroadcastTablesComputeNoTablesAndGiveTheSameRows() {
+        CityModel city = CityModel.load(studyFile);
+        CityPlan plan = city.plan(CityOptions.defaults().withTileM(50));
+        CityStages.Settings s = CityStages.Settings.of(studyFile);
+        CityStages.forget(s.studyFile());
+        long computed = org.solmass.irradiation.IrradiationSetup.Sun.computedCount();
+        Path out = dir.resolve("own-models");
+        try {
+            CityStages.run(spark, city, plan, s, out.resolve(CityRun.PARQUET));
+            assertNotSame(city, CityStages.city(s.studyFile(), null), "the tasks built their own prepared study");
+        } finally {
+            CityStages.forget(s.studyFile());
+        }
+        assertEquals(computed, org.solmass.irradiation.IrradiationSetup.Sun.computedCount(), "no sun or step table computed by a task");
+        assertSameRows(tiledLocally, rowsById(out), "tasks with their own prepared study, against the sequential tiled run");
     }
 }
