@@ -1,6 +1,6 @@
 package org.solmass.irradiation;
 
-import java.util.Arrays;
+import java.util.function.IntConsumer;
 import java.util.function.IntUnaryOperator;
 
 /**
@@ -26,20 +26,9 @@ public final class TileBounces {
         return g;
     }
 
-    /** The global ids the part's reflector lists name, ascending, each once: what the tile needs from others. */
-    public static int[] needed(FirstPasses part) {
-        int n = 0;
-        for (int[] l : part.refIdx) n += l.length;
-        int[] all = new int[n];
-        int k = 0;
-        for (int[] l : part.refIdx) {
-            System.arraycopy(l, 0, all, k, l.length);
-            k += l.length;
-        }
-        Arrays.sort(all);
-        int m = 0;
-        for (int i = 0; i < all.length; i++) if (m == 0 || all[i] != all[m - 1]) all[m++] = all[i];
-        return Arrays.copyOf(all, m);
+    /** Calls {@code use} with each global id the part's reflector lists name, receivers in entry order, each list in order (repeats included). */
+    public static void forEachReflector(FirstPasses part, IntConsumer use) {
+        for (int[] l : part.refIdx) for (int j : l) use.accept(j);
     }
 
     /** The part's first pass months (entry x 12), Wh/m2: the source of bounce 1. */

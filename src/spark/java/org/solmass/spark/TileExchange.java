@@ -88,21 +88,26 @@ final class TileExchange {
          * @param owner {@link #owners}
          */
         static Route of(int tile, FirstPasses fp, int[] owner) {
-            int[] ids = fp.ids(), need = TileBounces.needed(fp);
-            long[] key = new long[need.length]; // owner tile, id
-            int k = 0;
-            for (int j : need) {
-                if (Arrays.binarySearch(ids, j) >= 0) continue;
+            int[] ids = fp.ids();
+            SlotMap slot = new SlotMap(ids.length);
+            for (int i = 0; i < ids.length; i++) slot.put(ids[i], i);
+            long[][] key = {new long[64]}; // owner tile, id of each id not held, first seen
+            int[] k = {0};
+            TileBounces.forEachReflector(fp, j -> {
+                if (slot.get(j) >= 0) return;
                 if (owner[j] < 0 || owner[j] == tile) throw new IllegalStateException("receiver " + j + " named by tile " + tile + " has no other owner");
-                key[k++] = ((long) owner[j] << 32) | j;
-            }
-            key = Arrays.copyOf(key, k);
-            Arrays.sort(key);
-            int[] foreign = new int[k];
+                slot.put(j, Integer.MAX_VALUE); // placeholder until sorted below
+                if (k[0] == key[0].length) key[0] = Arrays.copyOf(key[0], 2 * k[0]);
+                key[0][k[0]++] = ((long) owner[j] << 32) | j;
+            });
+            long[] keys = Arrays.copyOf(key[0], k[0]);
+            Arrays.sort(keys);
+            int[] foreign = new int[keys.length];
             List<int[]> runs = new ArrayList<>(); // tile, count
-            for (int i = 0; i < k; i++) {
-                foreign[i] = (int) key[i];
-                int o = (int) (key[i] >>> 32);
+            for (int i = 0; i < keys.length; i++) {
+                foreign[i] = (int) keys[i];
+                slot.put(foreign[i], ids.length + i);
+                int o = (int) (keys[i] >>> 32);
                 if (runs.isEmpty() || runs.get(runs.size() - 1)[0] != o) runs.add(new int[] {o, 0});
                 runs.get(runs.size() - 1)[1]++;
             }
@@ -111,16 +116,7 @@ final class TileExchange {
                 from[i] = runs.get(i)[0];
                 count[i] = runs.get(i)[1];
             }
-            long[] byId = new long[k]; // id, slot
-            for (int i = 0; i < k; i++) byId[i] = ((long) foreign[i] << 32) | (ids.length + i);
-            Arrays.sort(byId);
-            int[] sortedIds = new int[k];
-            for (int i = 0; i < k; i++) sortedIds[i] = (int) (byId[i] >>> 32);
-            int[] slots = TileBounces.slots(fp, j -> {
-                int p = Arrays.binarySearch(ids, j);
-                return p >= 0 ? p : (int) byId[Arrays.binarySearch(sortedIds, j)];
-            });
-            return new Route(tile, ids.length, from, count, foreign, slots);
+            return new Route(tile, ids.length, from, count, foreign, TileBounces.slots(fp, slot::get));
         }
 
         /** One request per tile it receives from, keyed by that tile. */
@@ -199,6 +195,52 @@ final class TileExchange {
                 l.add(new Tuple2<>(to[i], new Packet(tile, v)));
             }
             return l;
+        }
+    }
+
+    /** Global id -> slot, open addressing with linear probing (ids are non-negative; -1 marks an empty cell). */
+    static final class SlotMap {
+        private int[] keys, values;
+        private int size, shift;
+
+        SlotMap(int expected) {
+            allocate(Integer.highestOneBit(Math.max(16, 2 * expected)) << 1);
+        }
+
+        private void allocate(int cap) {
+            keys = new int[cap];
+            values = new int[cap];
+            Arrays.fill(keys, -1);
+            shift = 32 - Integer.numberOfTrailingZeros(cap);
+            size = 0;
+        }
+
+        /** Fibonacci hashing (Knuth, The Art of Computer Programming vol. 3, 6.4): the top bits of id times 2^32 / golden ratio. */
+        private int cell(int id) { return (id * 0x9E3779B9) >>> shift; }
+
+        /** The slot of {@code id}, or -1 when absent. */
+        int get(int id) {
+            int mask = keys.length - 1;
+            for (int c = cell(id); ; c = (c + 1) & mask) {
+                if (keys[c] == id) return values[c];
+                if (keys[c] < 0) return -1;
+            }
+        }
+
+        void put(int id, int value) {
+            if (2 * (size + 1) > keys.length) grow();
+            int mask = keys.length - 1;
+            int c = cell(id);
+            while (keys[c] >= 0 && keys[c] != id) c = (c + 1) & mask;
+            if (keys[c] < 0) size++;
+            keys[c] = id;
+            values[c] = value;
+        }
+
+        private void grow() {
+            int[] k = keys, v = values;
+            allocate(2 * k.length);
+            for (int i = 0; i < k.length; i++) if (k[i] >= 0) put(k[i], v[i]);
         }
     }
 }
