@@ -1,7 +1,7 @@
 package org.solmass.irradiation;
 
-import java.util.Arrays;
-import java.util.function.IntFunction;
+import java.util.function.IntConsumer;
+import java.util.function.IntUnaryOperator;
 
 /**
  * The reflection stage of a city run cut at tile boundaries, for a runner that keeps each tile's
@@ -26,20 +26,9 @@ public final class TileBounces {
         return g;
     }
 
-    /** The global ids the part's reflector lists name, ascending, each once: what the tile needs from others. */
-    public static int[] needed(FirstPasses part) {
-        int n = 0;
-        for (int[] l : part.refIdx) n += l.length;
-        int[] all = new int[n];
-        int k = 0;
-        for (int[] l : part.refIdx) {
-            System.arraycopy(l, 0, all, k, l.length);
-            k += l.length;
-        }
-        Arrays.sort(all);
-        int m = 0;
-        for (int i = 0; i < all.length; i++) if (m == 0 || all[i] != all[m - 1]) all[m++] = all[i];
-        return Arrays.copyOf(all, m);
+    /** Calls {@code use} with each global id the part's reflector lists name, receivers in entry order, each list in order (repeats included). */
+    public static void forEachReflector(FirstPasses part, IntConsumer use) {
+        for (int[] l : part.refIdx) for (int j : l) use.accept(j);
     }
 
     /** The part's first pass months (entry x 12), Wh/m2: the source of bounce 1. */
@@ -59,25 +48,39 @@ public final class TileBounces {
     }
 
     /**
+     * The part's reflector lists as slots of a flat source array: {@code slotOf} of each list entry's
+     * global id, receivers in entry order, each list in list order (what {@link #bounce} reads).
+     */
+    public static int[] slots(FirstPasses part, IntUnaryOperator slotOf) {
+        int n = 0;
+        for (int[] l : part.refIdx) n += l.length;
+        int[] slots = new int[n];
+        int k = 0;
+        for (int[] l : part.refIdx) for (int j : l) slots[k++] = slotOf.applyAsInt(j);
+        return slots;
+    }
+
+    /**
      * One term of the series for the part's receivers (entry x 12), Wh/m2.
      *
-     * @param source the previous term's 12 months of a global id (the first pass for bounce 1); never
-     *               asked for an id outside {@link #needed}
+     * @param slots {@link #slots}: where each reflector-list entry's values lie in {@code source}
+     * @param source the previous term (the first pass for bounce 1), 12 months per slot starting at
+     *               {@code 12 * slot}, Wh/m2
      * @param first whether this is bounce 1 (adds {@code g GHI})
      * @param ghiMonthWh {@link #ghiMonthWh}
      */
-    public static double[] bounce(FirstPasses part, IntFunction<double[]> source, boolean first, double[] ghiMonthWh) {
+    public static double[] bounce(FirstPasses part, int[] slots, double[] source, boolean first, double[] ghiMonthWh) {
         int n = part.size();
         double[] dst = new double[12 * n];
+        int k = 0;
         for (int r = 0; r < n; r++) {
-            int[] idx = part.refIdx[r];
             float[] wt = part.refW[r];
-            int m0 = r * 12;
+            int len = part.refIdx[r].length, m0 = r * 12;
             double g = first ? part.ghiW[r] : 0;
-            for (int i = 0; i < idx.length; i++) {
-                double[] src = source.apply(idx[i]);
+            for (int i = 0; i < len; i++, k++) {
+                int base = 12 * slots[k];
                 double wr = wt[i];
-                for (int m = 0; m < 12; m++) dst[m0 + m] += wr * src[m];
+                for (int m = 0; m < 12; m++) dst[m0 + m] += wr * source[base + m];
             }
             if (first) for (int m = 0; m < 12; m++) dst[m0 + m] += g * ghiMonthWh[m];
         }

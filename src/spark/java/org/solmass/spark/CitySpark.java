@@ -13,7 +13,10 @@ import java.nio.file.Path;
  * with task retries) the driver listens on 127.0.0.1 only, the web UI is off, Spark's scratch space is
  * java.io.tmpdir's, its SQL warehouse lies in a work folder the caller gives (removed by the caller), and the log shows
  * warnings and errors only ({@code solmass-spark-log4j2.properties}). Under {@code spark-submit} the
- * master and the cluster's settings come from there and are not overridden.
+ * master and the cluster's settings come from there and are not overridden. Unless the configuration
+ * names a serializer, the serializer is Kryo with {@link CityKryo}'s registrations (and a 1 GB
+ * largest buffer: a tile's first pass or rows are tens of MB), where the JVM lets Kryo start
+ * ({@link #kryoUsable}).
  */
 public final class CitySpark {
     /** The log configuration resource (src/spark/resources). */
@@ -38,6 +41,11 @@ public final class CitySpark {
                 .config("spark.sql.shuffle.partitions", Integer.toString(Math.max(1, partitions)))
                 .config("spark.sql.session.timeZone", "UTC")
                 .config("spark.sql.parquet.compression.codec", "snappy");
+        if (!given.contains("spark.serializer") && kryoUsable()) {
+            b.config("spark.serializer", "org.apache.spark.serializer.KryoSerializer")
+                    .config("spark.kryo.registrator", CityKryo.class.getName())
+                    .config("spark.kryoserializer.buffer.max", "1g");
+        }
         if (m.startsWith("local")) {
             try {
                 Files.createDirectories(work);
@@ -49,6 +57,16 @@ public final class CitySpark {
                     .config("spark.sql.warehouse.dir", work.resolve("warehouse").toUri().toString());
         }
         return b.getOrCreate();
+    }
+
+    /**
+     * Whether Spark's Kryo serializer can start in this JVM: it reads the fields of
+     * {@code java.nio.HeapByteBuffer}, so java.nio must be open to the runner
+     * ({@code --add-opens=java.base/java.nio=ALL-UNNAMED}, which spark-submit, the launcher and the
+     * Surefire configuration give); without it the run keeps Spark's Java serializer.
+     */
+    static boolean kryoUsable() {
+        return java.nio.ByteBuffer.class.getModule().isOpen("java.nio", CitySpark.class.getModule());
     }
 
     /**

@@ -1,6 +1,5 @@
 package org.solmass.spark;
 
-import org.apache.spark.HashPartitioner;
 import org.apache.spark.Partitioner;
 import org.apache.spark.TaskContext;
 import org.apache.spark.api.java.JavaPairRDD;
@@ -36,10 +35,11 @@ import java.util.stream.IntStream;
  * <ol>
  * <li>first pass, one task per tile ({@link CityModel#firstPass}); each tile's {@link FirstPasses}
  * stay where they were computed (persisted, partitioned by tile);</li>
- * <li>exchange and bounces, month space: once, the (receiver, tile that needs it) pairs of the
- * reflector lists are joined by receiver id with the tile that owns each receiver; then per bounce
- * each tile sends its receivers' last terms to the tiles that need them, in one shuffle grouped by
- * tile (a tile receives each value it needs once, nothing else), and each tile computes its receivers' next term
+ * <li>exchange and bounces, month space: once, each tile works out from its reflector lists and the
+ * plan which receivers it needs from which other tile ({@link TileExchange.Route}) and sends each
+ * owner one request; then per bounce each tile sends every tile that asked one packet of flat
+ * arrays (the last terms of the ids asked for), in one shuffle grouped by receiving tile, and each
+ * tile computes its receivers' next term from its own values and the packets
  * ({@link TileBounces}); the driver adds the tiles' energies in tile order for the stopping rule;
  * then, once, the receivers' annual totals for the standard error;</li>
  * <li>finish, one task per tile ({@link CityModel#finish}): the rows of patches.csv, written as
@@ -117,61 +117,49 @@ final class CityStages {
         @Override public int hashCode() { return tiles; }
     }
 
-    /** A tile's reflection sums between bounces ({@link Serializable}; a new one per bounce). */
+    /** A tile's reflection sums between bounces ({@link Serializable}; a new one per bounce, sharing ids and route). */
     static final class TileState implements Serializable {
         private static final long serialVersionUID = 1L;
         final int tile;
         final int[] ids;
+        /** Where its reflector lists read and what it receives ({@link TileExchange.Route}). */
+        final TileExchange.Route route;
         /** The last term (entry x 12), reflected months so far (entry x 12), first pass + reflected per entry, Wh/m2. */
         final double[] term, reflMonth, totalAnnual;
         /** The last term's energy over the tile's analysed patches. */
         final double added;
 
-        TileState(int tile, int[] ids, double[] term, double[] reflMonth, double[] totalAnnual, double added) {
+        TileState(int tile, int[] ids, TileExchange.Route route, double[] term, double[] reflMonth, double[] totalAnnual, double added) {
             this.tile = tile;
             this.ids = ids;
+            this.route = route;
             this.term = term;
             this.reflMonth = reflMonth;
             this.totalAnnual = totalAnnual;
             this.added = added;
         }
 
-        static TileState initial(int tile, FirstPasses fp) {
-            return new TileState(tile, fp.ids(), TileBounces.firstPassMonths(fp), new double[12 * fp.size()],
-                    TileBounces.firstPassAnnual(fp), 0);
+        static TileState initial(int tile, FirstPasses fp, int[] owner) {
+            return new TileState(tile, fp.ids(), TileExchange.Route.of(tile, fp, owner), TileBounces.firstPassMonths(fp),
+                    new double[12 * fp.size()], TileBounces.firstPassAnnual(fp), 0);
         }
 
-        TileState next(FirstPasses fp, Lookup source, boolean first, double[] ghiMonth, int analysedTotal) {
-            double[] t = TileBounces.bounce(fp, source::get, first, ghiMonth);
+        /** The next term from the packets received (the other tiles' last terms this tile needs). */
+        TileState next(FirstPasses fp, Optional<Iterable<TileExchange.Packet>> got, boolean first, double[] ghiMonth, int analysedTotal) {
+            double[] t = TileBounces.bounce(fp, route.slots, route.source(term, got, 12), first, ghiMonth);
             double[] rm = reflMonth.clone(), ta = totalAnnual.clone();
             double added = TileBounces.accumulate(fp, t, analysedTotal, rm, ta);
-            return new TileState(tile, ids, t, rm, ta, added);
+            return new TileState(tile, ids, route, t, rm, ta, added);
+        }
+
+        /** The other tiles' values this tile received (one per id, e.g. the annual totals). */
+        Lookup received(Optional<Iterable<TileExchange.Packet>> got) {
+            return new Lookup(route.foreign, route.source(new double[0], got, 1));
         }
     }
 
-    /** The values a tile received, by global id (binary search over the ids, ascending). */
-    static final class Lookup {
-        final int[] ids;
-        final double[][] values;
-
-        Lookup(Optional<Iterable<Tuple2<Integer, double[]>>> got) {
-            List<Tuple2<Integer, double[]>> l = new ArrayList<>();
-            if (got.isPresent()) got.get().forEach(l::add);
-            l.sort((a, b) -> Integer.compare(a._1(), b._1()));
-            ids = new int[l.size()];
-            values = new double[l.size()][];
-            for (int i = 0; i < ids.length; i++) {
-                ids[i] = l.get(i)._1();
-                values[i] = l.get(i)._2();
-            }
-        }
-
-        double[] get(int id) {
-            int i = Arrays.binarySearch(ids, id);
-            if (i < 0) throw new IllegalStateException("receiver " + id + " was not exchanged to this tile");
-            return values[i];
-        }
-    }
+    /** Values a tile received: {@code values[i]} belongs to global id {@code ids[i]}. */
+    record Lookup(int[] ids, double[] values) {}
 
     /** How often the test hook threw in this JVM (local mode: the tests read it). */
     static final java.util.concurrent.atomic.AtomicInteger HOOK_FIRED = new java.util.concurrent.atomic.AtomicInteger();
@@ -190,7 +178,6 @@ final class CityStages {
         int nTiles = plan.tiles().size();
         int analysed = plan.analysedCount();
         TilePartitioner tp = new TilePartitioner(nTiles);
-        HashPartitioner hp = new HashPartitioner(nTiles);
         Broadcast<CityPlan> bPlan = sc.broadcast(plan);
         Broadcast<byte[]> bTables = sc.broadcast(city.tables().encode());
         double[] ghiMonth = TileBounces.ghiMonthWh(city.sun());
@@ -214,24 +201,17 @@ final class CityStages {
         // 2. exchange and bounces
         long t1 = System.nanoTime();
         StageProgress.label(sc, "exchange");
-        // once: which receiver each tile needs, keyed by receiver id, joined with the tile that owns it,
-        // then grouped by owner: what each tile sends to which tiles at every bounce
-        JavaPairRDD<Integer, Integer> needs = firsts.flatMapToPair(e -> {
-            List<Tuple2<Integer, Integer>> l = new ArrayList<>();
-            for (int j : TileBounces.needed(e._2())) l.add(new Tuple2<>(j, e._1()));
+        // once, per tile from its own first pass and the plan: which receivers it needs from which tile
+        // (TileExchange.Route); the requests go to the owners, which keep them as what they send
+        Broadcast<int[]> bOwner = sc.broadcast(TileExchange.owners(plan));
+        JavaPairRDD<Integer, TileState> state = firsts.mapPartitionsToPair(it -> {
+            List<Tuple2<Integer, TileState>> l = new ArrayList<>(1);
+            it.forEachRemaining(e -> l.add(new Tuple2<>(e._1(), TileState.initial(e._1(), e._2(), bOwner.value()))));
             return l.iterator();
-        }).partitionBy(hp);
-        JavaPairRDD<Integer, Integer> owners = firsts.flatMapToPair(e -> {
-            List<Tuple2<Integer, Integer>> l = new ArrayList<>();
-            for (int id : e._2().ids()) l.add(new Tuple2<>(id, e._1()));
-            return l.iterator();
-        }).partitionBy(hp);
-        JavaPairRDD<Integer, Sends> sends = needs.join(owners, hp)
-                .mapToPair(e -> new Tuple2<>(e._2()._2(), new int[] {e._1(), e._2()._1()}))
-                .groupByKey(tp).mapValues(Sends::of).persist(StorageLevel.MEMORY_AND_DISK());
+        }, true).persist(StorageLevel.MEMORY_AND_DISK());
+        JavaPairRDD<Integer, TileExchange.Sends> sends = state.flatMapToPair(e -> e._2().route.requests().iterator())
+                .groupByKey(tp).mapValues(TileExchange.Sends::of).persist(StorageLevel.MEMORY_AND_DISK());
         cached.add(sends);
-        JavaPairRDD<Integer, TileState> state = firsts.mapToPair(e -> new Tuple2<>(e._1(), TileState.initial(e._1(), e._2())))
-                .partitionBy(tp).persist(StorageLevel.MEMORY_AND_DISK());
         double tolerance = city.prepared().options().bounceTolerance();
         int maxBounces = city.prepared().options().maxBounces();
         double[] bounceWh = new double[Math.max(1, maxBounces)];
@@ -241,11 +221,11 @@ final class CityStages {
         for (int b = 0; b < maxBounces; b++) {
             StageProgress.label(sc, "bounce " + (b + 1));
             boolean first = b == 0;
-            JavaPairRDD<Integer, Iterable<Tuple2<Integer, double[]>>> got = exchange(state, sends, tp, false);
+            JavaPairRDD<Integer, Iterable<TileExchange.Packet>> got = exchange(state, sends, tp, false);
             JavaPairRDD<Integer, TileState> next = firsts.join(state).leftOuterJoin(got).mapValues(x -> {
                 TileState st = x._1()._2();
                 if (first) failOnce(s, "bounce", st.tile);
-                return st.next(x._1()._1(), new Lookup(x._2()), first, ghiMonth, analysed);
+                return st.next(x._1()._1(), x._2(), first, ghiMonth, analysed);
             }).persist(StorageLevel.MEMORY_AND_DISK());
             double[] perTile = new double[nTiles];
             for (Tuple2<Integer, Double> a : next.mapValues(st -> st.added).collect()) perTile[a._1()] = a._2();
@@ -263,7 +243,7 @@ final class CityStages {
         }
         cached.add(state);
         StageProgress.label(sc, "exchange of annual totals");
-        JavaPairRDD<Integer, Iterable<Tuple2<Integer, double[]>>> totals = exchange(state, sends, tp, true);
+        JavaPairRDD<Integer, Iterable<TileExchange.Packet>> totals = exchange(state, sends, tp, true);
         double[] bounces = Arrays.copyOf(bounceWh, used);
         boolean conv = converged;
         stageS.put("reflection", (System.nanoTime() - t1) / 1e9);
@@ -277,11 +257,17 @@ final class CityStages {
             int tile = st.tile;
             failOnce(s, "finish", tile);
             // the tile's own sums and the totals it received: arrays the size of the tile, not the city
-            Lookup got = new Lookup(x._2());
-            double[] gotTotal = new double[got.ids.length];
-            for (int i = 0; i < gotTotal.length; i++) gotTotal[i] = got.values[i][0];
+            Lookup got = st.received(x._2()); // ordered by owner tile, then id: sorted by id for the merge
+            int[] order = IntStream.range(0, got.ids().length).boxed()
+                    .sorted((a, b) -> Integer.compare(got.ids()[a], got.ids()[b])).mapToInt(Integer::intValue).toArray();
+            int[] gotIds = new int[order.length];
+            double[] gotTotal = new double[order.length];
+            for (int i = 0; i < order.length; i++) {
+                gotIds[i] = got.ids()[order[i]];
+                gotTotal[i] = got.values()[order[i]];
+            }
             StagedPasses.TileReflected r = StagedPasses.TileReflected.of(analysed, st.ids, st.reflMonth, st.totalAnnual,
-                    got.ids, gotTotal, bounces, conv, tolerance, maxBounces);
+                    gotIds, gotTotal, bounces, conv, tolerance, maxBounces);
             Tile t = bPlan.value().tile(tile);
             CityModel.TileRows rows = city(s.studyFile(), bTables).finish(t, fp, r);
             return new TileOut(tile, rows.table(), rows.patchIndex(), rows.metrics());
@@ -315,58 +301,22 @@ final class CityStages {
         for (JavaPairRDD<?, ?> c : cached) c.unpersist(false);
         bPlan.destroy();
         bTables.destroy();
+        bOwner.destroy();
         bZones.destroy();
         return new Outcome(columns, bounces, conv, count, bytes, stageS, zones, zoneRows, summarised, buildings);
     }
 
     /**
-     * What a tile sends at each bounce: pairs (its receiver, a tile whose reflector lists name it),
-     * ordered by receiver ({@link Serializable}).
-     */
-    static final class Sends implements Serializable {
-        private static final long serialVersionUID = 1L;
-        final int[] receiver, to;
-
-        Sends(int[] receiver, int[] to) {
-            this.receiver = receiver;
-            this.to = to;
-        }
-
-        static Sends of(Iterable<int[]> pairs) {
-            List<int[]> l = new ArrayList<>();
-            pairs.forEach(l::add);
-            l.sort((a, b) -> a[0] != b[0] ? Integer.compare(a[0], b[0]) : Integer.compare(a[1], b[1]));
-            int[] r = new int[l.size()], t = new int[l.size()];
-            for (int i = 0; i < r.length; i++) {
-                r[i] = l.get(i)[0];
-                t[i] = l.get(i)[1];
-            }
-            return new Sends(r, t);
-        }
-    }
-
-    /**
      * Each tile sends its receivers' values (the last term's 12 months, or with {@code totals} the
-     * annual total) to the tiles that need them, in one shuffle grouped by the receiving tile.
+     * annual total) to the tiles that need them: one {@link TileExchange.Packet} per (sending tile,
+     * receiving tile) pair, in one shuffle grouped by the receiving tile. A tile's own values stay.
      */
-    private static JavaPairRDD<Integer, Iterable<Tuple2<Integer, double[]>>> exchange(JavaPairRDD<Integer, TileState> state,
-            JavaPairRDD<Integer, Sends> sends, TilePartitioner tp, boolean totals) {
+    private static JavaPairRDD<Integer, Iterable<TileExchange.Packet>> exchange(JavaPairRDD<Integer, TileState> state,
+            JavaPairRDD<Integer, TileExchange.Sends> sends, TilePartitioner tp, boolean totals) {
         return state.join(sends).flatMapToPair(e -> {
             TileState st = e._2()._1();
-            Sends out = e._2()._2();
-            List<Tuple2<Integer, Tuple2<Integer, double[]>>> l = new ArrayList<>(out.receiver.length);
-            int last = -1;
-            double[] v = null;
-            for (int k = 0; k < out.receiver.length; k++) {
-                int j = out.receiver[k];
-                if (j != last) {
-                    int i = Arrays.binarySearch(st.ids, j);
-                    v = totals ? new double[] {st.totalAnnual[i]} : Arrays.copyOfRange(st.term, 12 * i, 12 * i + 12);
-                    last = j;
-                }
-                l.add(new Tuple2<>(out.to[k], new Tuple2<>(j, v)));
-            }
-            return l.iterator();
+            return totals ? e._2()._2().packets(st.tile, st.ids, st.totalAnnual, 1).iterator()
+                    : e._2()._2().packets(st.tile, st.ids, st.term, 12).iterator();
         }).groupByKey(tp);
     }
 

@@ -203,6 +203,30 @@ class CityJobTest {
     }
 
     /**
+     * Stage 2 (exchange and bounces) keeps each receiver's arithmetic of the sequential tiled runner
+     * ({@code irradiation.TileBounces}: the same terms added in the same order), so with a bounce task
+     * failing once and retried from the persisted state every value equals that run's to the last bit.
+     */
+    @Test
+    void aBounceTaskFailingOnceIsRetriedAndEveryValueEqualsTheSequentialTiledRunToTheLastBit() {
+        int fired = CityStages.HOOK_FIRED.get();
+        Path out = run("bounce-fails", 1, "bounce");
+        assertEquals(fired + 1, CityStages.HOOK_FIRED.get(), "the hook failed one task attempt");
+        Map<String, Row> rows = rowsById(out);
+        assertEquals(tiledLocally.size(), rows.size(), "every patch exactly once");
+        int compared = 0;
+        for (int p = 0; p < tiledLocally.size(); p++) {
+            Row r = rows.get(tiledLocally.patches().get(p).id());
+            for (String c : tiledLocally.names()) {
+                double a = tiledLocally.column(c)[p], b = r.getDouble(r.fieldIndex(c));
+                assertEquals(Double.doubleToLongBits(a), Double.doubleToLongBits(b), c + " of patch " + p + ": " + a + " vs " + b);
+                compared++;
+            }
+        }
+        assertTrue(compared > 1000, "values compared " + compared);
+    }
+
+    /**
      * buildings.csv: per block the area and the area-weighted annual mean as {@code table.AreaStats}
      * defines them, from the one-machine rows (the file rounds to the column's 2 decimals).
      */
