@@ -26,6 +26,22 @@ public final class TileBounces {
         return g;
     }
 
+    /** The global ids the part's reflector lists name, ascending, each once: the totals a tile's finish reads. */
+    public static int[] needed(FirstPasses part) {
+        int n = 0;
+        for (int[] l : part.refIdx) n += l.length;
+        int[] all = new int[n];
+        int k = 0;
+        for (int[] l : part.refIdx) {
+            System.arraycopy(l, 0, all, k, l.length);
+            k += l.length;
+        }
+        java.util.Arrays.sort(all);
+        int m = 0;
+        for (int i = 0; i < all.length; i++) if (m == 0 || all[i] != all[m - 1]) all[m++] = all[i];
+        return java.util.Arrays.copyOf(all, m);
+    }
+
     /** Calls {@code use} with each global id the part's reflector lists name, receivers in entry order, each list in order (repeats included). */
     public static void forEachReflector(FirstPasses part, IntConsumer use) {
         for (int[] l : part.refIdx) for (int j : l) use.accept(j);
