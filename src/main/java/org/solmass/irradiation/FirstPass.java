@@ -27,8 +27,13 @@ final class FirstPass {
     final double[] annual;
 
     FirstPass(int receivers, StepTable st) {
-        boolean[] lit = litSlots(st);
-        int n = liveSlots(st);
+        this(receivers, litSlots(st));
+    }
+
+    /** Rows for the slots marked in {@code lit} (288 entries). */
+    FirstPass(int receivers, boolean[] lit) {
+        int n = 0;
+        for (boolean b : lit) if (b) n++;
         live = new int[n];
         liveMonth = new int[n];
         position = new int[SLOTS];
