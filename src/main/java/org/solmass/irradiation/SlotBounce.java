@@ -30,6 +30,8 @@ final class SlotBounce {
     private final boolean simd;
     /** Sums of the block's receivers, receiver (r - r0) kept slot i at {@code (r - r0) * stride + i}. */
     final double[] acc;
+    /** One receiver's sums in the scalar kernel. */
+    private final double[] row;
 
     /** Scratch for rows of {@code fp}'s layout; the SIMD kernel when {@code simd} ({@link BundleTracer#SIMD_AVAILABLE} must hold). */
     SlotBounce(FirstPass fp, boolean simd) {
@@ -37,6 +39,7 @@ final class SlotBounce {
         stride = fp.stride();
         this.simd = simd;
         acc = new double[BLOCK * stride];
+        row = new double[stride];
     }
 
     /** Scratch with the SIMD kernel when the vector module is loaded. */
@@ -55,17 +58,17 @@ final class SlotBounce {
             SlotBounceSimd.sum(r0, r1, l, fp.values, stride, acc);
             return;
         }
-        double[] f = fp.values;
+        double[] f = fp.values; // the plain loop into one row, as C2 compiles it best, then into the block
         for (int r = r0; r < r1; r++) {
-            int a = (r - r0) * stride;
-            java.util.Arrays.fill(acc, a, a + stride, 0);
+            java.util.Arrays.fill(row, 0);
             int[] idx = l.idx()[r];
             float[] w = l.w()[r];
             for (int i = 0; i < idx.length; i++) {
                 int base = idx[i] * stride;
                 double wr = w[i];
-                for (int k = 0; k < stride; k++) acc[a + k] += wr * f[base + k];
+                for (int k = 0; k < stride; k++) row[k] += wr * f[base + k];
             }
+            System.arraycopy(row, 0, acc, (r - r0) * stride, stride);
         }
     }
 }
