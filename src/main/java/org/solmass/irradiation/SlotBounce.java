@@ -12,11 +12,11 @@ import org.solmass.scene.BundleTracer;
  * from anywhere in an array of hundreds of MB, so the plain loop (each row whole into a sum array)
  * waits on memory and on its stores. Neighbouring patches of one surface see mostly the same
  * reflectors: a block of {@link #BLOCK} consecutive receivers names each distinct reflector about
- * 10 times. With the JDK's vector module (the SIMD kernel, {@link SlotBounceSimd}) the block is
+ * 10 times. With the SIMD kernel ({@link SlotBounceSimd}, on request: {@link #SIMD_BY_DEFAULT}) the block is
  * summed a few slots at a time (32 with 512-bit vectors): the block's row pieces of those slots
  * (about 1 MB) stay in the core's cache across its receivers, and each receiver's sums stay in
- * vector registers while its list is walked, so nothing is stored per term. Without the module
- * each receiver's list is walked row by row as before.
+ * vector registers while its list is walked, so nothing is stored per term. Otherwise (the
+ * default) each receiver's list is walked row by row as before.
  *
  * <p>Exactness: in every kernel each slot's sum starts at 0 and adds the terms in list order, one
  * product rounded then one sum rounded per term, as the plain loop does: every slot sum is the same
@@ -42,9 +42,18 @@ final class SlotBounce {
         row = new double[stride];
     }
 
-    /** Scratch with the SIMD kernel when the vector module is loaded. */
+    /**
+     * Whether bounce 1 uses the SIMD kernel: only on request ({@code -Dsolmass.slotSimd=true}) with the
+     * vector module loaded. Measured in the pipeline (bench-analysis --patches 30000, load 9-12 on 2
+     * cores) it took 2.0 s wall / 2.35 s CPU against the scalar loop's 1.6 s / 1.6 s: a single run
+     * pays for the Vector API code before C2 has compiled it, which outweighs the gain seen warm
+     * (CPU 2.3-3.3 s against 4.9-5.4 s at 113,467 patches in one JVM). Off until shown faster cold.
+     */
+    static final boolean SIMD_BY_DEFAULT = BundleTracer.SIMD_AVAILABLE && Boolean.getBoolean("solmass.slotSimd");
+
+    /** Scratch with the kernel chosen by {@link #SIMD_BY_DEFAULT}. */
     SlotBounce(FirstPass fp) {
-        this(fp, BundleTracer.SIMD_AVAILABLE);
+        this(fp, SIMD_BY_DEFAULT);
     }
 
     /**
