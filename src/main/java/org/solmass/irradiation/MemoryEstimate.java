@@ -12,7 +12,7 @@ import java.util.Locale;
  * <ul>
  * <li>per receiver (analysed patch, context patch or ground probe): the first-pass month-hour slot
  *     sums of the slots that can hold light ({@link FirstPass}: at most 288, about half of them in an
- *     hourly year; 8 bytes a slot: they are the sums later weighted into other patches'
+ *     hourly year, padded to a multiple of 8; 8 bytes a slot: they are the sums later weighted into other patches'
  *     reflection, so they stay doubles) with their annual sum, the current and the next reflection
  *     bounce as month sums, {@code 2 x double[12]} ({@link Reflection}: the same whatever the number
  *     of bounces; the first holds the first pass's month sums during bounce 1), its
@@ -23,7 +23,8 @@ import java.util.Locale;
  *     the standard error) per hemisphere ray, about 40 per-patch result doubles (components, standard
  *     error, 3 x 12 months, the reflected months) and the result table's columns, and the month-hour
  *     table {@code float[288]} with bounce 1's month sums {@code double[12]} when it is kept;</li>
- * <li>per worker thread: the ray scratch arrays; per sun-up step: the step table ({@link StepTable}:
+ * <li>per worker thread: the ray scratch arrays and the slot sums of one block of receivers in
+ *     reflection's bounce 1 ({@link SlotBounce}); per sun-up step: the step table ({@link StepTable}:
  *     sun vector, direction, slot, beam, circumsolar, cos zenith and sunshine entries).</li>
  * </ul>
  * The receiver count grows as 1 / patch size squared, which gives the suggested patch size.
@@ -62,11 +63,13 @@ public record MemoryEstimate(long bytes, long countBytes) {
      * hold light; all 288 when not yet known).
      */
     static MemoryEstimate of(long receivers, long analysed, int raysPerPatch, int steps,
-                             boolean keepMonthHour, int threads, int firstPassSlots) {
+                             boolean keepMonthHour, int threads, int keptSlots) {
+        int firstPassSlots = FirstPass.rowLength(keptSlots);
         long counts = receivers * (firstPassSlots * 8L + PER_RECEIVER_BESIDES_SLOTS)
                 + (receivers - analysed) * PER_REFLECTOR_ONLY_PER_RAY * Math.min(raysPerPatch, IrradiationSetup.REFLECTOR_RAYS)
                 + analysed * (PER_PATCH_FIXED + PER_PATCH_PER_RAY * raysPerPatch + (keepMonthHour ? StepTable.SLOTS * 4L + 12 * 8 : 0));
-        long fixed = (long) threads * raysPerPatch * PER_THREAD_PER_RAY + (long) steps * PER_STEP;
+        long fixed = (long) threads * (raysPerPatch * PER_THREAD_PER_RAY + 16 + SlotBounce.BLOCK * firstPassSlots * 8L)
+                + (long) steps * PER_STEP;
         return new MemoryEstimate(counts + fixed, counts);
     }
 

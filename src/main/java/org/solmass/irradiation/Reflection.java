@@ -91,8 +91,9 @@ final class Reflection {
         // receivers without a month-hour table take bounce 1 in month space: W acts on every slot alike
         int slotted = keepMonthHour ? n : 0;
         double[] fpMonth = cur; // bounce 1 reads no earlier bounce: cur holds the first pass's month sums meanwhile
+        int stride = fp.stride();
         IntStream.range(0, total).parallel().forEach(r -> {
-            int base = r * ns, m0 = r * 12;
+            int base = r * stride, m0 = r * 12;
             for (int i = 0; i < ns; i++) fpMonth[m0 + liveMonth[i]] += firstPass[base + i];
         });
         int[] slotMonth = new int[SLOTS];
@@ -102,32 +103,28 @@ final class Reflection {
         for (int b = 0; b < maxBounces; b++) {
             final double[] src = cur, dst = next;
             if (b == 0) { // bounce 1: slot by slot where the month-hour table needs its profile
-                ThreadLocal<double[]> scratch = ThreadLocal.withInitial(() -> new double[ns]);
-                IntStream.range(0, total).parallel().forEach(r -> {
-                    int m0 = r * 12;
-                    for (int m = 0; m < 12; m++) dst[m0 + m] = 0;
-                    int[] idx = l.idx()[r];
-                    float[] wt = l.w()[r];
-                    double g = l.ghiW()[r];
-                    if (r >= slotted) {
-                        monthBounce(r, l, fpMonth, dst);
-                        for (int m = 0; m < 12; m++) dst[m0 + m] += g * ghiMonth[m];
-                        finish(r, n, dst, reflMonth, added, totalAnnual);
-                        return;
-                    }
-                    double[] acc = scratch.get();
-                    java.util.Arrays.fill(acc, 0);
-                    for (int i = 0; i < idx.length; i++) {
-                        int base = idx[i] * ns;
-                        double wr = wt[i];
-                        for (int k = 0; k < ns; k++) acc[k] += wr * firstPass[base + k];
-                    }
-                    for (int k = 0; k < ns; k++) acc[k] += g * ghiLive[k];
-                    for (int k = 0; k < ns; k++) dst[m0 + liveMonth[k]] += acc[k];
-                    if (r < n && monthHour != null) {
-                        for (int k = 0; k < ns; k++) monthHour[r * SLOTS + live[k]] = (float) acc[k];
+                ThreadLocal<SlotBounce> scratch = ThreadLocal.withInitial(() -> new SlotBounce(fp));
+                int blocks = (slotted + SlotBounce.BLOCK - 1) / SlotBounce.BLOCK;
+                IntStream.range(0, blocks).parallel().forEach(bk -> {
+                    int r0 = bk * SlotBounce.BLOCK, r1 = Math.min(slotted, r0 + SlotBounce.BLOCK);
+                    SlotBounce sb = scratch.get();
+                    sb.sum(r0, r1, l, fp);
+                    double[] acc = sb.acc;
+                    for (int r = r0; r < r1; r++) {
+                        int m0 = r * 12, a = (r - r0) * stride;
+                        double g = l.ghiW()[r];
+                        for (int m = 0; m < 12; m++) dst[m0 + m] = 0;
+                        for (int k = 0; k < ns; k++) acc[a + k] += g * ghiLive[k];
+                        for (int k = 0; k < ns; k++) dst[m0 + liveMonth[k]] += acc[a + k];
+                        for (int k = 0; k < ns; k++) monthHour[r * SLOTS + live[k]] = (float) acc[a + k];
                         System.arraycopy(dst, m0, firstBounceMonth, m0, 12);
+                        finish(r, n, dst, reflMonth, added, totalAnnual);
                     }
+                });
+                IntStream.range(slotted, total).parallel().forEach(r -> {
+                    monthBounce(r, l, fpMonth, dst);
+                    double g = l.ghiW()[r];
+                    for (int m = 0; m < 12; m++) dst[r * 12 + m] += g * ghiMonth[m];
                     finish(r, n, dst, reflMonth, added, totalAnnual);
                 });
             } else { // later bounces month by month: W acts on every slot alike, so month sums are exact
@@ -218,17 +215,44 @@ final class Reflection {
         double[] bounces() { return java.util.Arrays.copyOf(bounceWh, used); }
     }
 
-    /** Receiver r's 12 months in {@code dst}: its list's weights times the month sums of {@code src}, in list order. */
+    /**
+     * Receiver r's 12 months in {@code dst}: its list's weights times the month sums of {@code src}, in
+     * list order (each month's sum starts at 0 and adds one rounded product per term; twelve locals
+     * keep the sums in registers).
+     */
     private static void monthBounce(int r, Lists l, double[] src, double[] dst) {
         int[] idx = l.idx()[r];
         float[] wt = l.w()[r];
-        int m0 = r * 12;
-        for (int m = 0; m < 12; m++) dst[m0 + m] = 0;
+        double s0 = 0, s1 = 0, s2 = 0, s3 = 0, s4 = 0, s5 = 0, s6 = 0, s7 = 0, s8 = 0, s9 = 0, s10 = 0, s11 = 0;
         for (int i = 0; i < idx.length; i++) {
-            int base = idx[i] * 12;
+            int b = idx[i] * 12;
             double wr = wt[i];
-            for (int m = 0; m < 12; m++) dst[m0 + m] += wr * src[base + m];
+            s0 += wr * src[b];
+            s1 += wr * src[b + 1];
+            s2 += wr * src[b + 2];
+            s3 += wr * src[b + 3];
+            s4 += wr * src[b + 4];
+            s5 += wr * src[b + 5];
+            s6 += wr * src[b + 6];
+            s7 += wr * src[b + 7];
+            s8 += wr * src[b + 8];
+            s9 += wr * src[b + 9];
+            s10 += wr * src[b + 10];
+            s11 += wr * src[b + 11];
         }
+        int m0 = r * 12;
+        dst[m0] = s0;
+        dst[m0 + 1] = s1;
+        dst[m0 + 2] = s2;
+        dst[m0 + 3] = s3;
+        dst[m0 + 4] = s4;
+        dst[m0 + 5] = s5;
+        dst[m0 + 6] = s6;
+        dst[m0 + 7] = s7;
+        dst[m0 + 8] = s8;
+        dst[m0 + 9] = s9;
+        dst[m0 + 10] = s10;
+        dst[m0 + 11] = s11;
     }
 
     private static void finish(int r, int n, double[] dst, double[][] reflMonth, double[] added, double[] totalAnnual) {
