@@ -9,9 +9,10 @@ import java.util.Arrays;
  *
  * <p>The list is defined by sorting the hits' keys (reflector, albedo bits) and summing each run of
  * equal reflectors in key order. A reflector almost always shows one albedo (it lies on one face),
- * so its run is one value added once per ray: the hits are grouped as they come (a per-thread map
- * from receiver index to group) and only the distinct reflectors are sorted, which gives the sums of
- * the sorted keys term for term. Only when some reflector shows two albedos are all keys sorted.
+ * so its run is one value added once per ray: the hits' keys are noted as they come, then grouped
+ * in that order (a per-thread map from receiver index to group) and only the distinct reflectors
+ * are sorted, which gives the sums of the sorted keys term for term. Only when some reflector shows
+ * two albedos are all keys sorted.
  *
  * <p>The distinct reflectors (about 150 of 250 hits for 1,024 rays) are sorted by a least
  * significant digit radix sort, 8 bits a pass (Knuth, The Art of Computer Programming vol. 3,
@@ -31,6 +32,8 @@ final class ReflectorGroups {
     /** Fewer distinct reflectors than this are sorted by {@link Arrays#sort(int[], int, int)}. */
     private static final int RADIX_MIN = 48;
     private int hits, groups;
+    /** What the first read of the per-receiver table gave (kept, so the reads stay). */
+    private int touched;
     private boolean mixedAlbedo;
 
     /** @param receivers receivers of the run (reflector indices lie below); @param maxRays most hits of one receiver */
@@ -45,20 +48,33 @@ final class ReflectorGroups {
         sortB = new int[maxRays];
     }
 
-    /** Notes one ray hit on reflector {@code rec} of albedo {@code rho}. */
+    /** Notes one ray hit on reflector {@code rec} of albedo {@code rho} (its key; grouped in {@link #finish}). */
     void add(int rec, float rho) {
-        int bits = Float.floatToRawIntBits(rho);
-        key[hits++] = ((long) rec << 32) | bits;
-        int at = groupOf[rec];
-        if (at < 0) {
-            at = groups;
-            groupOf[rec] = at;
-            groupRec[groups++] = rec;
-            groupAlbedo[at] = bits;
-            groupCount[at] = 1;
-        } else {
-            groupCount[at]++;
-            if (groupAlbedo[at] != bits) mixedAlbedo = true;
+        key[hits++] = ((long) rec << 32) | Float.floatToRawIntBits(rho);
+    }
+
+    /**
+     * Groups the hits noted, in order. The per-receiver table is read for every hit first, in a loop
+     * without branches on what it reads, so that its cache misses overlap instead of stalling the
+     * grouping one by one (and the ray loop that notes the hits carries no such branch either).
+     */
+    private void group() {
+        int n = hits, seen = 0;
+        for (int i = 0; i < n; i++) seen |= groupOf[(int) (key[i] >>> 32)];
+        touched = seen;
+        for (int i = 0; i < n; i++) {
+            int rec = (int) (key[i] >>> 32), bits = (int) key[i];
+            int at = groupOf[rec];
+            if (at < 0) {
+                at = groups;
+                groupOf[rec] = at;
+                groupRec[groups++] = rec;
+                groupAlbedo[at] = bits;
+                groupCount[at] = 1;
+            } else {
+                groupCount[at]++;
+                if (groupAlbedo[at] != bits) mixedAlbedo = true;
+            }
         }
     }
 
@@ -67,6 +83,7 @@ final class ReflectorGroups {
      * returns its length and forgets the hits.
      */
     int finish(int rays, int[] refIdx, float[] refW, float[] refW2) {
+        group();
         double inv = 1.0 / rays;
         int m = 0;
         if (!mixedAlbedo) {
