@@ -322,19 +322,42 @@ final class ReflectorIndex {
     int onTriangle(int tri, double px, double py, double pz) {
         int s = triangleSurface[tri];
         if (s < 0) return -1;
+        int o = REC * s;
+        double x = localX(o, px, py, pz), y = localY(o, px, py, pz);
+        if (!inBox(o, x, y)) return gnx[s] == 0 ? -1 : ringSearch(s, x, y);
+        return cellAnswer(record(s, x, y), x, y);
+    }
+
+    /** SurfaceFrame.localX of the surface at record o, term by term. */
+    private double localX(int o, double px, double py, double pz) {
         double[] f = surf;
-        int o = REC * s; // SurfaceFrame.localX and localY, term by term
-        double qx = px - f[o], qy = py - f[o + 1], qz = pz - f[o + 2];
-        double x = qx * f[o + 3] + qy * f[o + 4] + qz * f[o + 5];
-        double y = qx * f[o + 6] + qy * f[o + 7] + qz * f[o + 8];
-        if (!(x >= f[o + 9] && x <= f[o + 10] && y >= f[o + 11] && y <= f[o + 12])) {
-            return gnx[s] == 0 ? -1 : ringSearch(s, x, y);
-        }
-        double fx = (x - f[o + 13]) / cell, fy = (y - f[o + 14]) / cell;
+        return (px - f[o]) * f[o + 3] + (py - f[o + 1]) * f[o + 4] + (pz - f[o + 2]) * f[o + 5];
+    }
+
+    /** SurfaceFrame.localY of the surface at record o, term by term. */
+    private double localY(int o, double px, double py, double pz) {
+        double[] f = surf;
+        return (px - f[o]) * f[o + 6] + (py - f[o + 1]) * f[o + 7] + (pz - f[o + 2]) * f[o + 8];
+    }
+
+    /** Whether local (x, y) lies in the listed box of the surface at record o (never for a surface without receivers). */
+    private boolean inBox(int o, double x, double y) {
+        double[] f = surf;
+        return x >= f[o + 9] && x <= f[o + 10] && y >= f[o + 11] && y <= f[o + 12];
+    }
+
+    /** Start of the record in {@link #cells} of the bucket of surface s holding local (x, y) (in the listed box). */
+    private int record(int s, double x, double y) {
+        int o = REC * s;
+        double fx = (x - surf[o + 13]) / cell, fy = (y - surf[o + 14]) / cell;
         int nx = grid[3 * s], ny = grid[3 * s + 1];
         int ci = Math.max(0, Math.min(nx - 1, (int) fx)), cj = Math.max(0, Math.min(ny - 1, (int) fy));
+        return (grid[3 * s + 2] + cj * nx + ci) * BUCKET;
+    }
+
+    /** The receiver of the cell of bucket record b holding local (x, y): its own, or the nearest of its list. */
+    private int cellAnswer(int b, double x, double y) {
         int[] c = cells;
-        int b = (grid[3 * s + 2] + cj * nx + ci) * BUCKET;
         int si = (x >= Float.intBitsToFloat(c[b]) ? 1 : 0) + (x >= Float.intBitsToFloat(c[b + 1]) ? 1 : 0);
         int sj = (y >= Float.intBitsToFloat(c[b + 2]) ? 1 : 0) + (y >= Float.intBitsToFloat(c[b + 3]) ? 1 : 0);
         int e = c[b + 4 + 3 * sj + si];
@@ -351,6 +374,82 @@ final class ReflectorIndex {
             }
         }
         return best;
+    }
+
+    /** A batch of lookups for one thread, at most {@code max} points at a time ({@link Batch}). */
+    Batch batch(int max) {
+        return new Batch(max);
+    }
+
+    /**
+     * The lookups of one receiver's hits, answered together: the same receivers as
+     * {@link #onTriangle} point by point. The bucket records of all points are read first, in a loop
+     * without branches on what it reads, so their cache misses overlap rather than stall the lookups
+     * one by one. Per thread; allocates nothing after construction.
+     */
+    final class Batch {
+        private final int[] tri, rec, at;
+        private final double[] p, xy;
+        private final float[] albedo;
+        private int n, touched;
+
+        private Batch(int max) {
+            tri = new int[max];
+            rec = new int[max];
+            at = new int[max];
+            p = new double[3 * max];
+            xy = new double[2 * max];
+            albedo = new float[max];
+        }
+
+        /** Notes a hit on triangle t at world point p with the albedo it reflects with. */
+        void put(int t, double px, double py, double pz, float rho) {
+            tri[n] = t;
+            p[3 * n] = px;
+            p[3 * n + 1] = py;
+            p[3 * n + 2] = pz;
+            albedo[n++] = rho;
+        }
+
+        /** Points noted since the last {@link #clear()}. */
+        int size() { return n; }
+
+        /** Receiver of point i after {@link #resolve()}, or -1. */
+        int receiver(int i) { return rec[i]; }
+
+        /** Albedo noted with point i. */
+        float albedo(int i) { return albedo[i]; }
+
+        /** Forgets the points. */
+        void clear() { n = 0; }
+
+        /** Finds the receiver of every point noted. */
+        void resolve() {
+            for (int i = 0; i < n; i++) {
+                at[i] = 0;
+                int s = triangleSurface[tri[i]];
+                if (s < 0) {
+                    rec[i] = -1;
+                    continue;
+                }
+                int o = REC * s;
+                double x = localX(o, p[3 * i], p[3 * i + 1], p[3 * i + 2]), y = localY(o, p[3 * i], p[3 * i + 1], p[3 * i + 2]);
+                if (!inBox(o, x, y)) {
+                    rec[i] = gnx[s] == 0 ? -1 : ringSearch(s, x, y);
+                    continue;
+                }
+                rec[i] = Integer.MIN_VALUE; // in a bucket: answered below
+                at[i] = record(s, x, y);
+                xy[2 * i] = x;
+                xy[2 * i + 1] = y;
+            }
+            int seen = 0;
+            if (cells.length > 0) {
+                for (int i = 0; i < n; i++) seen |= cells[at[i]] | cells[at[i] + BUCKET - 4]; // both cache lines of a record
+            }
+            touched = seen;
+            for (int i = 0; i < n; i++) if (rec[i] == Integer.MIN_VALUE) rec[i] = cellAnswer(at[i], xy[2 * i], xy[2 * i + 1]);
+        }
     }
 
     /** The nearest centre of the ring set of the point's bucket (points beyond the listed box). */
