@@ -212,6 +212,8 @@ public final class ShadedIrradiation {
         final float[] refW, refW2;
         /** The reflectors the hemisphere rays hit, gathered per receiver ({@link ReflectorGroups}). */
         final ReflectorGroups reflectors;
+        /** The hits' lookups of the nearest receiver, answered together ({@link ReflectorIndex.Batch}). */
+        final ReflectorIndex.Batch lookups;
         final HorizonBand horizon = new HorizonBand();
         /** Per-normal step terms of the opaque step loop ({@link StepTerms}). */
         final StepTerms stepTerms;
@@ -245,6 +247,7 @@ public final class ShadedIrradiation {
             refW = new float[maxRays];
             refW2 = new float[maxRays];
             reflectors = new ReflectorGroups(in.receivers().count, maxRays);
+            lookups = in.reflectors().batch(maxRays);
             stepTerms = new StepTerms(in.steps());
             skyView = in.steps().skyPatches != null ? new SkyPatchView(in.steps().skyPatches, bundle) : null;
         }
@@ -275,6 +278,7 @@ public final class ShadedIrradiation {
 
         private void collectReflectors(int rays, double ox, double oy, double oz) {
             ReflectorIndex idx = in.reflectors();
+            lookups.clear();
             float[] albedo = in.triangleAlbedo();
             boolean shaded = in.shadedGround();
             double ga = in.groundAlbedo();
@@ -293,8 +297,7 @@ public final class ShadedIrradiation {
                         ghi2 += rho * rho;
                         continue;
                     }
-                    int rec = idx.onTriangle(t, hx, hy, hz);
-                    if (rec >= 0) reflectors.add(rec, rho);
+                    lookups.put(t, hx, hy, hz, rho); // its receiver below: a reflector list does not depend on the order of its hits
                 } else if (t == Tracer.GROUND && shaded) {
                     int probe = idx.probeAt(hx, hy);
                     if (probe >= 0) reflectors.add(probe, (float) gt);
@@ -307,6 +310,8 @@ public final class ShadedIrradiation {
                     ghi2 += gt * gt;
                 }
             }
+            lookups.resolve();
+            for (int i = 0; i < lookups.size(); i++) if (lookups.receiver(i) >= 0) reflectors.add(lookups.receiver(i), lookups.albedo(i));
             double inv = 1.0 / rays;
             refCount = reflectors.finish(rays, refIdx, refW, refW2);
             ghiAlbedo = ghi * inv;

@@ -57,6 +57,42 @@ class ReflectorIndexTest {
         assertEquals(-1, idx.onTriangle(2, 0, 0, 0), "a triangle without a surface has no receiver");
     }
 
+    @Test
+    void hitPointsAmongJitteredCentresFindTheNearestCentre() {
+        // centres of a 1.6 m grid each moved up to 0.1 of the spacing (edge pieces, merged cells), on a sloped
+        // roof; buckets of the spacing and of 1.5 times it. Within 0.85 spacings of every point lies a centre and
+        // the index looks at least one bucket (one spacing) beyond its own, so its answer must be the nearest.
+        SurfaceFrame roof = SurfaceFrame.of(new Vec3(0.3, -0.4, 0.866), new Vec3(120, -40, 15));
+        double sp = 1.6;
+        int nx = 23, ny = 17, nr = nx * ny;
+        for (double cellM : new double[] {sp, 1.5 * sp}) {
+            SplittableRandom rnd = new SplittableRandom(11);
+            int[] surf = new int[nr];
+            double[] centres = new double[3 * nr], lx = new double[nr], ly = new double[nr];
+            for (int j = 0, r = 0; j < ny; j++) {
+                for (int i = 0; i < nx; i++, r++) {
+                    double x = sp * (i + 0.5 + 0.2 * (rnd.nextDouble() - 0.5)), y = sp * (j + 0.5 + 0.2 * (rnd.nextDouble() - 0.5));
+                    if (rnd.nextInt(6) == 0) { // some centres exactly on the grid, as full cells have them
+                        x = sp * (i + 0.5);
+                        y = sp * (j + 0.5);
+                    }
+                    put(roof, 0, x, y, r, surf, centres, lx, ly);
+                }
+            }
+            ReflectorIndex idx = new ReflectorIndex(new int[] {0}, new SurfaceFrame[] {roof}, surf, centres, cellM, null);
+            for (int k = 0; k < 40000; k++) {
+                double x = sp * nx * rnd.nextDouble(), y = sp * ny * rnd.nextDouble();
+                if (k % 3 == 0) { // near a bisector of two grid nodes, within a micrometre or so
+                    x = sp * Math.floor(x / sp) + (rnd.nextDouble() - 0.5) * Math.pow(10, -4 - rnd.nextInt(6));
+                }
+                if (k % 5 == 0) y = sp * Math.floor(y / sp) + (rnd.nextDouble() - 0.5) * Math.pow(10, -4 - rnd.nextInt(6));
+                Vec3 p = roof.toWorld(x, y);
+                assertEquals(nearest(lx, ly, surf, 0, roof.localX(p.x(), p.y(), p.z()), roof.localY(p.x(), p.y(), p.z())),
+                        idx.onTriangle(0, p.x(), p.y(), p.z()), "point " + x + ", " + y + " with buckets of " + cellM + " m");
+            }
+        }
+    }
+
     private static void put(SurfaceFrame f, int s, double x, double y, int r, int[] surf, double[] centres, double[] lx, double[] ly) {
         Vec3 c = f.toWorld(x, y);
         surf[r] = s;
