@@ -135,15 +135,25 @@ public final class ReceiverLayout {
      */
     ReflectorIndex index(int[] triangles, double cellM) {
         if (triangles == null) return new ReflectorIndex(triangleSurface, frames, receivers.surface, centres, cellM, probeGrid);
+        // a scene of some of the model's triangles (a city tile and its halo): the whole layout's index,
+        // built once per layout and cell size, with the scene's triangles mapped to their surfaces.
+        // A surface's buckets depend on its own receivers only, and only surfaces of the scene's
+        // triangles are ever looked up, so the answers are those of an index of the scene alone.
         int[] ts = new int[triangles.length];
-        boolean[] present = new boolean[frames.length];
-        for (int i = 0; i < triangles.length; i++) {
-            ts[i] = triangleSurface[triangles[i]];
-            if (ts[i] >= 0) present[ts[i]] = true;
+        for (int i = 0; i < triangles.length; i++) ts[i] = triangleSurface[triangles[i]];
+        return wholeIndex(cellM).withTriangleSurfaces(ts);
+    }
+
+    private ReflectorIndex whole;
+    private double wholeCellM = Double.NaN;
+
+    /** The index of every receiver of the layout (built on first use per cell size; tiles share it). */
+    private synchronized ReflectorIndex wholeIndex(double cellM) {
+        if (whole == null || Double.compare(wholeCellM, cellM) != 0) {
+            whole = new ReflectorIndex(triangleSurface, frames, receivers.surface, centres, cellM, probeGrid);
+            wholeCellM = cellM;
         }
-        int[] rs = receivers.surface.clone();
-        for (int r = 0; r < rs.length; r++) if (rs[r] >= 0 && !present[rs[r]]) rs[r] = -1;
-        return new ReflectorIndex(ts, frames, rs, centres, cellM, probeGrid);
+        return whole;
     }
 
     /** Ground flags of the scene made of {@code triangles} of the whole scene (null: all). */

@@ -69,6 +69,39 @@ final class ReflectorIndex {
     private final int pnx, pny, probeBase;
 
     /**
+     * The same index for another scene made of the same model's triangles: {@code triangleSurface}
+     * maps that scene's triangles to surface ids; every other table is shared, not copied. A surface's
+     * buckets depend only on its own receivers, so a lookup on a triangle of that scene answers what
+     * an index built for the scene alone answers (a city tile: {@link ReceiverLayout#index}).
+     */
+    ReflectorIndex withTriangleSurfaces(int[] triangleSurface) {
+        return new ReflectorIndex(this, triangleSurface);
+    }
+
+    private ReflectorIndex(ReflectorIndex o, int[] triangleSurface) {
+        this.triangleSurface = triangleSurface;
+        surf = o.surf;
+        grid = o.grid;
+        gx0 = o.gx0;
+        gy0 = o.gy0;
+        gnx = o.gnx;
+        gny = o.gny;
+        gStart = o.gStart;
+        cell = o.cell;
+        bucketStart = o.bucketStart;
+        items = o.items;
+        lxy = o.lxy;
+        cells = o.cells;
+        lists = o.lists;
+        px0 = o.px0;
+        py0 = o.py0;
+        pSpacing = o.pSpacing;
+        pnx = o.pnx;
+        pny = o.pny;
+        probeBase = o.probeBase;
+    }
+
+    /**
      * @param triangleSurface surface id of every model triangle, -1 where none
      * @param frames frame of every surface id
      * @param receiverSurface surface id per receiver (-1 for probes)
