@@ -17,7 +17,7 @@ import java.util.Locale;
  *     bounce as month sums, {@code 2 x double[12]} ({@link Reflection}: the same whatever the number
  *     of bounces; the first holds the first pass's month sums during bounce 1), its
  *     annual total and last-bounce sum, origin, normal, seed, surface and
- *     reflector index entries (with about 4 candidates of its bucket, int + 2 doubles each, {@link ReflectorIndex}), and its reflector list with its GHI weight; a reflector-only receiver's
+ *     reflector index share (about 80 B: 16 B of local coordinates, and per bucket of about one receiver a record of 16 ints and about 20 B of cell lists, {@link ReflectorIndex}), and its reflector list with its GHI weight; a reflector-only receiver's
  *     list holds up to one reference (int + float) per reflector ray;</li>
  * <li>per analysed patch: up to one reflector reference (int + float + the float of squared albedo for
  *     the standard error) per hemisphere ray, about 40 per-patch result doubles (components, standard

@@ -83,29 +83,6 @@ public final class CityModel {
         return of(StudyReader.read(studyFile), tables);
     }
 
-    private static CityModel last;
-    private static String lastKey;
-
-    /**
-     * {@link #load}, kept for the next call with the same file (path and modification time): the
-     * tasks of one JVM (a Spark executor) prepare the study once.
-     */
-    public static synchronized CityModel cached(Path studyFile) {
-        String key;
-        try {
-            key = studyFile.toAbsolutePath().normalize() + "@" + java.nio.file.Files.getLastModifiedTime(studyFile).toMillis();
-        } catch (java.io.IOException e) {
-            throw new java.io.UncheckedIOException(e);
-        }
-        if (!key.equals(lastKey)) {
-            last = null; // let the old one go before the new one is built
-            lastKey = null;
-            last = load(studyFile);
-            lastKey = key;
-        }
-        return last;
-    }
-
     /** A study prepared as {@code solmass analyse} does. */
     public static CityModel of(Study study) {
         return new CityModel(study, AnalysisRun.prepare(study, PhaseProgress.NONE, new java.util.LinkedHashMap<>()), null);

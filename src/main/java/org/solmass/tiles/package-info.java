@@ -8,7 +8,7 @@
  * <p>Public API (stable for the distributed runner in src/spark):
  * <ul>
  * <li>{@link org.solmass.tiles.CityModel}: {@code load(Path)}, {@code load(Path, CityTables)},
- * {@code cached(Path)}, {@code of(Study)}, {@code of(Study, CityTables)}; {@code tables()};
+ * {@code of(Study)}, {@code of(Study, CityTables)}; {@code tables()};
  * {@code plan(CityOptions) -> CityPlan}; {@code firstPass(Tile) -> FirstPasses} (stage 1);
  * {@code reflect(List<FirstPasses>) -> StagedPasses.Reflected} (exchange and bounces);
  * {@code finish(Tile, FirstPasses, TileReflected or Reflected) -> TileRows} (stage 3); {@code tileScene(Tile)},

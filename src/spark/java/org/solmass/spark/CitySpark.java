@@ -39,8 +39,7 @@ public final class CitySpark {
                 .config("spark.ui.enabled", "false")
                 .config("spark.ui.showConsoleProgress", "false")
                 .config("spark.sql.shuffle.partitions", Integer.toString(Math.max(1, partitions)))
-                .config("spark.sql.session.timeZone", "UTC")
-                .config("spark.sql.parquet.compression.codec", "snappy");
+                .config("spark.sql.session.timeZone", "UTC");
         if (!given.contains("spark.serializer") && kryoUsable()) {
             b.config("spark.serializer", "org.apache.spark.serializer.KryoSerializer")
                     .config("spark.kryo.registrator", CityKryo.class.getName())
