@@ -17,8 +17,18 @@ import java.util.List;
 public final class IrradiationSetup {
     /** Ground probes at most, for the shaded-ground option; spacing grows for large sites. */
     static final int MAX_PROBES = 20_000;
-    /** Hemisphere rays of reflector-only receivers (context patches, ground probes). */
+    /**
+     * Hemisphere rays that sample reflected light: all rays of reflector-only receivers (context
+     * patches, ground probes), and the stratified subset of an analysed patch's rays
+     * ({@link org.solmass.scene.HemisphereSampler#sampleForReflection}; its view factors use all its
+     * rays). Our choice, from the error study in docs/method.md ("Reflection rays").
+     */
     public static final int REFLECTOR_RAYS = 256;
+
+    /** Rays of an analysed patch traced with {@code raysPerPatch} requested rays that sample reflected light. */
+    public static int reflectionRays(int raysPerPatch) {
+        return org.solmass.scene.HemisphereSampler.reflectionRayCount(raysPerPatch, Math.min(raysPerPatch, REFLECTOR_RAYS));
+    }
 
     private IrradiationSetup() {}
 

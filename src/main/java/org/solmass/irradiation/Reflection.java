@@ -52,9 +52,17 @@ final class Reflection {
      * @param w2 {@code (1/N) sum rho^2} per entry, analysed patches only (for the standard error)
      * @param ghiW weight of hits lit by GHI, per receiver
      * @param ghiW2 {@code (1/N) sum rho^2} of those hits, analysed patches only
-     * @param rays hemisphere rays N per receiver kind: analysed patches
+     * @param rays hemisphere rays N of an analysed patch (its view factors)
+     * @param reflectionRays rays of an analysed patch that sample reflected light (its lists and
+     *                       {@code ghiW}: the subset of {@link org.solmass.scene.HemisphereSampler#sampleForReflection})
      */
-    record Lists(int[][] idx, float[][] w, float[][] w2, float[] ghiW, float[] ghiW2, int rays) {}
+    record Lists(int[][] idx, float[][] w, float[][] w2, float[] ghiW, float[] ghiW2, int rays, int reflectionRays) {
+        /** Lists of analysed patches traced with {@code raysPerPatch} requested rays (subset as {@link IrradiationSetup#reflectionRays}). */
+        static Lists of(int[][] idx, float[][] w, float[][] w2, float[] ghiW, float[] ghiW2, int raysPerPatch) {
+            return new Lists(idx, w, w2, ghiW, ghiW2, org.solmass.scene.HemisphereSampler.roundedRayCount(raysPerPatch),
+                    IrradiationSetup.reflectionRays(raysPerPatch));
+        }
+    }
 
     /**
      * The outcome for the analysed patches.
@@ -295,13 +303,18 @@ final class Reflection {
 
     /**
      * Standard error of an analysed patch's annual irradiation from its hemisphere rays, Wh/m2.
-     * Each ray s is one sample {@code Y_s} of the hemisphere part of the annual sum: the sky
-     * background per unit sky view factor {@code B} when it reaches the sky, {@code rho E_j} when it
-     * hits receiver j (E_j its annual total after all bounces), {@code rho GHI} for GHI-lit hits, 0
-     * otherwise; the estimate is their mean. The sample variance over N rays gives
-     * {@code SE = sqrt(s^2 / N)}, {@code s^2 = N/(N-1) (mean(Y^2) - mean(Y)^2)}, with mean(Y^2)
-     * taken from the lists ({@code sum_j w2_j E_j^2}). This treats the rays as independent: the
-     * sampler stratifies them, whose variance is never larger (stratified sampling, e.g. Owen,
+     * Each ray s is one sample of the hemisphere part of the annual sum, in two parts: {@code X_s},
+     * the sky background per unit sky view factor {@code B} when it reaches the sky (0 otherwise),
+     * over all N1 rays ({@link Lists#rays}); {@code Y_s}, {@code rho E_j} when it hits receiver j
+     * (E_j its annual total after all bounces), {@code rho GHI} for GHI-lit hits, 0 otherwise, over the
+     * N2 reflection rays, a subset of the N1 ({@link Lists#reflectionRays}). The estimate is
+     * {@code mean(X) + mean(Y)}; since a ray is either sky or a hit, {@code X_s Y_s = 0} and
+     * {@code Cov(X, Y) = -E[X] E[Y]}, and with the subset drawn from the same rays
+     * {@code Var = Var(X)/N1 + Var(Y)/N2 + 2 Cov(X, Y)/N1}. Each variance is the sample variance
+     * {@code N/(N-1) (mean(Z^2) - mean(Z)^2)} (mean(Y^2) from the lists: {@code sum_j w2_j E_j^2}),
+     * the covariance term {@code -2 mean(X) mean(Y)/(N1 - 1)}, so that for N1 = N2 this is the
+     * variance of the per-ray sum {@code X_s + Y_s} over N rays. This treats the rays as independent:
+     * the sampler stratifies them, whose variance is never larger (stratified sampling, e.g. Owen,
      * Monte Carlo theory, methods and examples, 2013, ch. 8), so the value is an upper bound in
      * expectation. Left out: the noise of the E_j themselves (their own rays, independent, weighted
      * by w_j^2) and the nearest-patch discretisation (a bias, not noise). Sun and horizon band rays
@@ -309,18 +322,19 @@ final class Reflection {
      */
     static double stdErrorWh(int p, Lists l, double skyShare, double backgroundAnnualWh, double ghiAnnualWh,
                              double[] totalAnnualWh) {
-        int rays = l.rays();
-        if (rays < 2) return Double.NaN;
-        double mean = skyShare * backgroundAnnualWh + l.ghiW()[p] * ghiAnnualWh;
-        double sq = skyShare * backgroundAnnualWh * backgroundAnnualWh + l.ghiW2()[p] * ghiAnnualWh * ghiAnnualWh;
+        int n1 = l.rays(), n2 = l.reflectionRays();
+        if (n1 < 2 || n2 < 2) return Double.NaN;
+        double mx = skyShare * backgroundAnnualWh, sqx = skyShare * backgroundAnnualWh * backgroundAnnualWh;
+        double my = l.ghiW()[p] * ghiAnnualWh, sqy = l.ghiW2()[p] * ghiAnnualWh * ghiAnnualWh;
         int[] idx = l.idx()[p];
         float[] w = l.w()[p], w2 = l.w2()[p];
         for (int i = 0; i < idx.length; i++) {
             double e = totalAnnualWh[idx[i]];
-            mean += w[i] * e;
-            sq += w2[i] * e * e;
+            my += w[i] * e;
+            sqy += w2[i] * e * e;
         }
-        double var = Math.max(0, sq - mean * mean) * rays / (rays - 1.0);
-        return Math.sqrt(var / rays);
+        double var = (sqx - mx * mx) / (n1 - 1.0) + (sqy - my * my) / (n2 - 1.0) - 2 * mx * my / (n1 - 1.0);
+        return Math.sqrt(Math.max(0, var));
     }
+
 }

@@ -119,8 +119,7 @@ public final class ShadedIrradiation {
         });
 
         StepTable st = in.steps();
-        Reflection.Lists lists = new Reflection.Lists(refIdx, refW, refW2, ghiAlbedo, ghiAlbedo2,
-                HemisphereSampler.roundedRayCount(in.raysPerPatch()));
+        Reflection.Lists lists = Reflection.Lists.of(refIdx, refW, refW2, ghiAlbedo, ghiAlbedo2, in.raysPerPatch());
         Reflection.Outcome ro = Reflection.solve(firstPass, lists, n, st, in.bounceTolerance(), in.maxBounces(),
                 in.keepMonthHour(), progress);
 
@@ -193,6 +192,11 @@ public final class ShadedIrradiation {
         final org.solmass.scene.Scene scene;
         final Inputs in;
         final HemisphereSampler sampler, reflectorSampler;
+        /** Block side of an analysed patch's reflection subset ({@link HemisphereSampler#reflectionBlock}). */
+        final int reflectionBlock;
+        /** The rays of the current receiver that sample reflected light, ascending, and their number. */
+        final int[] subset;
+        int subsetCount;
         final org.solmass.scene.BundleTracer bundle;
         /** Directions, weights and sun indices of the rays traced as one bundle (horizon band or sun). */
         final double[] bundleDir, bundleW;
@@ -237,6 +241,8 @@ public final class ShadedIrradiation {
             sunIndex = new int[bundleMax];
             blocked = new boolean[bundleMax];
             int maxRays = Math.max(sampler.rayCount(), reflectorSampler.rayCount());
+            reflectionBlock = HemisphereSampler.reflectionBlock(sampler.gridSide(), in.reflectorRays());
+            subset = new int[maxRays];
             dir = new double[3 * maxRays];
             cls = new int[maxRays];
             tri = new int[maxRays];
@@ -258,13 +264,15 @@ public final class ShadedIrradiation {
             double ox = rc.origin[3 * r], oy = rc.origin[3 * r + 1], oz = rc.origin[3 * r + 2];
             double nx = rc.normal[3 * r], ny = rc.normal[3 * r + 1], nz = rc.normal[3 * r + 2];
             HemisphereSampler hs = analysed ? sampler : reflectorSampler;
-            hs.sample(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), dir, cls, tri, dist);
+            // every ray for the view factors; the first hits where reflection needs them (with crowns: all, for their legs)
+            subsetCount = hs.sampleForReflection(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), canopy != null,
+                    analysed ? reflectionBlock : 1, dir, cls, tri, dist, subset);
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
             if (skyView != null) skyView.measure(ox, oy, oz, nx, ny, nz, dir, cls, hs.rayCount());
             if (canopy != null) canopy.sky(ox, oy, oz, dir, cls, hs.rayCount());
             if (canopy != null) canopy.hits(ox, oy, oz, dir, cls, dist, hs.rayCount()); // crowns on each reflection leg
             if (canopy != null && skyView != null) skyView.throughCrowns(canopy, ox, oy, oz, cls, hs.rayCount());
-            collectReflectors(hs.rayCount(), ox, oy, oz); // every receiver: reflectors reflect what they receive
+            collectReflectors(ox, oy, oz); // every receiver: reflectors reflect what they receive
             // a horizontal reflector-only receiver (ground probe) weights the horizon band by sin(tilt) = 0
             horizonVis = analysed || rc.sinTilt(r) > 0 ? horizon.visibility(bundle, ox, oy, oz, nx, ny, nz, canopy) : 0;
             sunVisibility(ox, oy, oz, nx, ny, nz);
@@ -276,15 +284,17 @@ public final class ShadedIrradiation {
             canopy.reflection(cls, tri, sampler.rayCount(), in.triangleAlbedo(), in.groundAlbedo(), out);
         }
 
-        private void collectReflectors(int rays, double ox, double oy, double oz) {
+        /** The reflector list of the current receiver from its reflection rays ({@link #subset}). */
+        private void collectReflectors(double ox, double oy, double oz) {
+            int rays = subsetCount;
             ReflectorIndex idx = in.reflectors();
             lookups.clear();
             float[] albedo = in.triangleAlbedo();
             boolean shaded = in.shadedGround();
             double ga = in.groundAlbedo();
             double ghi = 0, ghi2 = 0;
-            for (int s = 0; s < rays; s++) {
-                int k = cls[s];
+            for (int q = 0; q < rays; q++) {
+                int s = subset[q], k = cls[s];
                 if (k == HemisphereSampler.SKY) continue;
                 int t = tri[s];
                 // the crowns this ray crosses before its hit, in its weight: every reflection leg passes them (exactly 1 without)

@@ -177,7 +177,7 @@ public final class StagedPasses {
         int total = all.size();
         for (int i = 0; i < total; i++)
             if (all.ids[i] != i) throw new IllegalArgumentException("first passes miss receiver " + i + " (every receiver once, in id order)");
-        Reflection.Lists lists = new Reflection.Lists(all.refIdx, all.refW, all.refW2, all.ghiW, all.ghiW2, 0);
+        Reflection.Lists lists = new Reflection.Lists(all.refIdx, all.refW, all.refW2, all.ghiW, all.ghiW2, 0, 0);
         double[] ghiMonth = new double[12];
         StepTable st = sun.steps;
         for (int k = 0; k < ShadedIrradiation.SLOTS; k++) ghiMonth[org.solmass.climate.MonthHour.month(k) - 1] += st.ghiWh[k];
@@ -217,7 +217,7 @@ public final class StagedPasses {
         int[][] idxRow = new int[1][];
         float[][] wRow = new float[1][], w2Row = new float[1][];
         float[] gRow = new float[1], g2Row = new float[1];
-        Reflection.Lists row = new Reflection.Lists(idxRow, wRow, w2Row, gRow, g2Row, HemisphereSampler.roundedRayCount(raysPerPatch));
+        Reflection.Lists row = Reflection.Lists.of(idxRow, wRow, w2Row, gRow, g2Row, raysPerPatch);
         int[][] byLength = new int[1][];
         double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
         double[] annual = new double[n], beam = new double[n], diffuse = new double[n], reflected = new double[n];

@@ -46,6 +46,10 @@ public final class HemisphereSampler {
     private final double[] groundT, hitDist;
     private final boolean[] blocked;
     private final int[] hitTri;
+    /** Scratch of {@link #sampleForReflection}: directions of a part of the rays, their ray numbers, subset marks. */
+    private final double[] partDir;
+    private final int[] restRay;
+    private final boolean[] inSubset;
     /** The vector direction maker, or null without the vector module. */
     private final VectorDirections lanes;
 
@@ -59,6 +63,9 @@ public final class HemisphereSampler {
         this.blocked = new boolean[count];
         this.hitTri = new int[count];
         this.hitDist = new double[count];
+        this.partDir = new double[3 * count];
+        this.restRay = new int[count];
+        this.inSubset = new boolean[count];
         this.lanes = BundleTracer.SIMD_AVAILABLE ? new VectorDirections(side) : null;
     }
 
@@ -225,6 +232,115 @@ public final class HemisphereSampler {
         directions(nx, ny, nz, streamSeed, dir);
         bundle.closestHit(ox, oy, oz, dir, count, tri, dist); // the patch's rays go through the tree together
         for (int s = 0; s < count; s++) cls[s] = classOf(tri[s], dir[3 * s + 2], triangleIsGround);
+    }
+
+    /**
+     * Side f of the square blocks of strata that each give one reflection ray ({@link #sampleForReflection}):
+     * the largest divisor f of the grid side k with {@code (k / f)^2 >= reflectionRays} (1024 rays and 256
+     * reflection rays: f = 2, a 16 x 16 grid of 2 x 2 blocks); 1 (every ray) when no such f above 1 exists.
+     */
+    public static int reflectionBlock(int side, int reflectionRays) {
+        int want = gridSide(reflectionRays);
+        for (int f = side; f > 1; f--) if (side % f == 0 && side / f >= want) return f;
+        return 1;
+    }
+
+    /** Rays in the reflection subset of {@link #sampleForReflection} for these requests: (k / f)^2. */
+    public static int reflectionRayCount(int requestedRays, int reflectionRays) {
+        int k = gridSide(requestedRays), f = reflectionBlock(k, reflectionRays);
+        return (k / f) * (k / f);
+    }
+
+    /** Salt of the reflection rays' choice, so that it is independent of the jitter stream (our constant). */
+    static final long SUBSET_SALT = 0x5eed_0f_4ef1ec7L;
+
+    /**
+     * Full view-factor sampling of one patch, with closest hits only where reflection needs them. All
+     * {@link #rayCount()} rays are made and classified as {@link #sample} does (the same directions and
+     * the same classes); the hit triangle and distance are found for a stratified subset only: the k x k
+     * grid is cut into (k/f)^2 blocks of f x f cells ({@link #reflectionBlock}) and each block gives the
+     * ray of one of its cells, chosen uniformly from the patch's seed. The chosen ray is uniform over its
+     * block, and every block carries the same share of the cosine-weighted hemisphere, so the subset is
+     * itself a stratified cosine-weighted sample of (k/f)^2 rays (Cochran, Sampling Techniques, 3rd ed.,
+     * 1977, ch. 5 and 7: one unit drawn per stratum; Pharr, Jakob and Humphreys, Physically Based
+     * Rendering, 3rd ed., 2016, 13.8.1 for stratified estimators), and a reflected-light sum over it is
+     * unbiased.
+     *
+     * <p>The other rays need only any-hit queries up to the ground plane (as {@link #classify}); the
+     * subset's rays need the first hit (what they reflect). With {@code allHits} (or ground-flagged
+     * triangles, whose class needs the first hit) every ray is traced to its first hit as in {@link #sample};
+     * the subset is the same either way.
+     *
+     * @param block side f of the blocks ({@link #reflectionBlock}); 1: every ray is in the subset
+     * @param subset out: the subset's ray indices, ascending ((k/f)^2 of them)
+     * @return the number of rays in the subset; {@code tri}, {@code dist} are set for those (and for
+     *         every ray when all were traced to their first hit)
+     */
+    public int sampleForReflection(double ox, double oy, double oz, double nx, double ny, double nz, long streamSeed,
+                                   boolean[] triangleIsGround, boolean allHits, int block, double[] dir, int[] cls,
+                                   int[] tri, double[] dist, int[] subset) {
+        if (block <= 1) {
+            sample(ox, oy, oz, nx, ny, nz, streamSeed, triangleIsGround, dir, cls, tri, dist);
+            for (int s = 0; s < count; s++) subset[s] = s;
+            return count;
+        }
+        int m = chooseSubset(side, block, streamSeed, inSubset, subset);
+        if (allHits || triangleIsGround != null) {
+            sample(ox, oy, oz, nx, ny, nz, streamSeed, triangleIsGround, dir, cls, tri, dist);
+            return m;
+        }
+        directions(nx, ny, nz, streamSeed, dir);
+        for (int q = 0; q < m; q++) System.arraycopy(dir, 3 * subset[q], partDir, 3 * q, 3);
+        bundle.closestHit(ox, oy, oz, partDir, m, hitTri, hitDist);
+        for (int q = 0; q < m; q++) {
+            int s = subset[q];
+            tri[s] = hitTri[q];
+            dist[s] = hitDist[q];
+            cls[s] = classOf(hitTri[q], dir[3 * s + 2], null);
+        }
+        int r = 0;
+        for (int s = 0; s < count; s++) {
+            if (inSubset[s]) continue;
+            double dz = dir[3 * s + 2], tg = Double.POSITIVE_INFINITY;
+            if (scene.hasGroundPlane() && dz != 0) { // as classify: a triangle before the plane blocks
+                double t = (scene.groundZ() - oz) / dz;
+                if (t > 0) tg = t;
+            }
+            System.arraycopy(dir, 3 * s, partDir, 3 * r, 3);
+            groundT[r] = tg;
+            restRay[r++] = s;
+        }
+        bundle.occluded(ox, oy, oz, partDir, groundT, r, blocked);
+        for (int q = 0; q < r; q++) {
+            int s = restRay[q];
+            tri[s] = Tracer.MISS;
+            dist[s] = Double.NaN; // not traced to a first hit
+            if (blocked[q]) cls[s] = BLOCK;
+            else if (groundT[q] < Double.POSITIVE_INFINITY) cls[s] = GROUND;
+            else cls[s] = dir[3 * s + 2] < 0 ? GROUND : SKY;
+        }
+        return m;
+    }
+
+    /**
+     * The reflection subset of a k x k grid ({@link #sampleForReflection}): per f x f block (row-major
+     * over the blocks), cell {@code q} of the block from a SplitMix64 draw of the seed and the block
+     * number; marks them in {@code mark} and lists them ascending in {@code subset}. Returns their number.
+     */
+    static int chooseSubset(int side, int block, long streamSeed, boolean[] mark, int[] subset) {
+        int blocks = side / block, cells = block * block;
+        java.util.Arrays.fill(mark, 0, side * side, false);
+        long base = mix(streamSeed ^ SUBSET_SALT);
+        for (int bi = 0; bi < blocks; bi++) {
+            for (int bj = 0; bj < blocks; bj++) {
+                long h = mix(base + (long) (bi * blocks + bj + 1) * GOLDEN);
+                int q = (int) ((h >>> 33) % cells);
+                mark[(bi * block + q / block) * side + bj * block + q % block] = true;
+            }
+        }
+        int m = 0;
+        for (int s = 0; s < side * side; s++) if (mark[s]) subset[m++] = s;
+        return m;
     }
 
     /** Class of a ray from its {@link Tracer#closestHit} result and vertical direction component. */

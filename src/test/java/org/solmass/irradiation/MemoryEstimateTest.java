@@ -22,10 +22,12 @@ class MemoryEstimateTest {
         assertEquals(b.bytes() - a.bytes(), c.bytes() - b.bytes());
         // the month-hour table and bounce 1's month sums, which spread the later bounces over it
         assertEquals(800L * (288 * 4 + 12 * 8), MemoryEstimate.of(1000, 800, 256, 288, true, 4).bytes() - a.bytes());
-        // reflector lists: one int, one float and one float of squared albedo per ray and analysed patch
-        // (reflector-only receivers keep at most 256 rays either way)
-        assertEquals(800L * 12 * 256, MemoryEstimate.of(1000, 800, 512, 288, false, 0).bytes()
+        // reflector lists: one int, one float and one float of squared albedo per reflection ray and
+        // analysed patch (reflector-only receivers keep at most 256 rays either way); 900 rays (a 30 x 30
+        // grid, no 2 x 2 blocks) keep every ray for reflection, 1024 rays a subset of 256
+        assertEquals(800L * 12 * (900 - 256), MemoryEstimate.of(1000, 800, 900, 288, false, 0).bytes()
                 - MemoryEstimate.of(1000, 800, 256, 288, false, 0).bytes());
+        assertEquals(MemoryEstimate.of(1000, 800, 256, 288, false, 0).bytes(), MemoryEstimate.of(1000, 800, 1024, 288, false, 0).bytes());
     }
 
     @Test

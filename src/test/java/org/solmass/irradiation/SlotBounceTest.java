@@ -38,7 +38,7 @@ class SlotBounceTest {
             w[r] = new float[idx[r].length];
             for (int i = 0; i < w[r].length; i++) w[r][i] = (float) (rnd.nextDouble() * 0.05);
         }
-        Reflection.Lists l = new Reflection.Lists(idx, w, null, new float[receivers], null, 0);
+        Reflection.Lists l = new Reflection.Lists(idx, w, null, new float[receivers], null, 0, 0);
         return new Object[] {fp, l};
     }
 
