@@ -38,6 +38,29 @@ public final class BenchAnalysisCommand implements Callable<Integer> {
     @Option(names = "--threads", defaultValue = "0", paramLabel = "N", description = "worker threads (default: all cores)") int threads;
     @Option(names = "--seed", defaultValue = "1", paramLabel = "N", description = "district seed (default ${DEFAULT-VALUE})") long seed;
 
+    /**
+     * The process's CPU time (all threads, JIT and GC included) spent in each phase the run announces
+     * ({@link PhaseProgress#begin}): on a shared machine a steadier measure than wall time, since
+     * other processes' load stretches the wall time but not the CPU time of the work.
+     */
+    static final class PhaseCpu implements PhaseProgress {
+        final java.util.Map<String, String> seconds = new java.util.LinkedHashMap<>();
+        private final com.sun.management.OperatingSystemMXBean os =
+                (com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory.getOperatingSystemMXBean();
+        private String phase;
+        private long since;
+
+        @Override public synchronized void begin(String next, long total) {
+            long now = os.getProcessCpuTime();
+            if (phase != null) seconds.merge(phase, String.format(Locale.ROOT, "%.1f", (now - since) / 1e9),
+                    (a, b) -> String.format(Locale.ROOT, "%.1f", Double.parseDouble(a) + Double.parseDouble(b)));
+            phase = next;
+            since = now;
+        }
+
+        @Override public void advance(long done) {}
+    }
+
     @Override
     public Integer call() throws IOException {
         Path dir = Files.createTempDirectory("solmass-bench");
@@ -53,13 +76,16 @@ public final class BenchAnalysisCommand implements Callable<Integer> {
             System.gc();
             resetPeaks();
             long t0 = System.nanoTime();
-            AnalysisRun.Outcome o = AnalysisRun.run(study, PhaseProgress.NONE);
+            PhaseCpu cpu = new PhaseCpu();
+            AnalysisRun.Outcome o = AnalysisRun.run(study, cpu);
             double total = (System.nanoTime() - t0) / 1e9;
+            cpu.begin("end", 0);
             var t = o.timingsS();
             long n = o.counts().get("patches");
             System.out.printf(Locale.ROOT, "%-9d %7d %9d %8.2f %8.2f %8.2f %10.2f %11.2f %8.1f %9.0f%n", n, blocks,
                     o.counts().get("triangles"), t.get("load"), t.get("patches"), t.get("scene"), t.get("irradiation"),
                     total, total / n * 1e6, peakHeapMb());
+            System.out.printf(Locale.ROOT, "  process CPU by phase (s): %s%n", cpu.seconds);
         }
         return Main.EXIT_OK;
     }
