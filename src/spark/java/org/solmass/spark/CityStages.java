@@ -97,6 +97,17 @@ final class CityStages {
         CITIES.remove(studyFile);
     }
 
+    /**
+     * The cores Spark gave the running task ({@code spark.task.cpus}, 1 by default): a tile's first
+     * pass and finish run their parallel loops on that many threads of their own
+     * ({@link CityModel#firstPass(Tile, int)}), not in the JVM's common pool that every task of an
+     * executor would share. 0 (the caller's pool) outside a task.
+     */
+    static int taskCores() {
+        TaskContext tc = TaskContext.get();
+        return tc == null ? 0 : tc.cpus();
+    }
+
     /** The key of a (tile, tile-local PV zone) pair. */
     static long zoneKey(int tile, int localZone) {
         return ((long) tile << 32) | (localZone & 0xffffffffL);
@@ -191,7 +202,7 @@ final class CityStages {
         JavaPairRDD<Integer, FirstPasses> firsts = sc.parallelize(tiles, nTiles).mapToPair(t -> new Tuple2<>(t, t))
                 .partitionBy(tp).mapValues(t -> {
                     failOnce(s, "first-pass", t);
-                    return city(s.studyFile(), bTables).firstPass(bPlan.value().tile(t));
+                    return city(s.studyFile(), bTables).firstPass(bPlan.value().tile(t), taskCores());
                 }).persist(StorageLevel.MEMORY_AND_DISK());
         cached.add(firsts);
         long[] bytes = new long[nTiles];
@@ -269,7 +280,7 @@ final class CityStages {
             StagedPasses.TileReflected r = StagedPasses.TileReflected.of(analysed, st.ids, st.reflMonth, st.totalAnnual,
                     gotIds, gotTotal, bounces, conv, tolerance, maxBounces);
             Tile t = bPlan.value().tile(tile);
-            CityModel.TileRows rows = city(s.studyFile(), bTables).finish(t, fp, r);
+            CityModel.TileRows rows = city(s.studyFile(), bTables).finish(t, fp, r, taskCores());
             return new TileOut(tile, rows.table(), rows.patchIndex(), rows.metrics());
         }).persist(StorageLevel.MEMORY_AND_DISK());
         cached.add(out);
