@@ -13,8 +13,15 @@ import java.util.Arrays;
  * whatever the receiver sees; only the sun's visibility differs between receivers. Neighbouring
  * receivers, computed one after the other, mostly lie on one face (and all ground probes face up),
  * so the terms and the unshaded slot sums are worked out once per face instead of once per receiver.
- * The shaded sums add the same terms in the same step order as the loop over all steps, so every
- * sum is the same to the last bit.
+ *
+ * <p>Steps that share a sun direction and a slot are shaded or lit together (the same occlusion
+ * ray stands for them), so their terms are added up once per face into one term per (direction,
+ * slot) pair, in step order: with binned sun directions a year's steps at one hour of one month
+ * fall into a few sky cells (the sun moves about 0.4 degrees a day at a given hour), so a face keeps
+ * about a third as many terms as steps, and each receiver's loop is that much shorter. The shaded
+ * sums then add the pairs' sums instead of the single terms: the same sums up to rounding (all
+ * terms are at or above zero, so the relative difference stays below the term count times the
+ * double precision unit; tested against the loop over every step).
  *
  * <p>Per thread; allocates nothing after construction.
  */
@@ -23,7 +30,7 @@ final class StepTerms {
     /** Normal of the terms held (float bits), or none yet. */
     private int nxBits, nyBits, nzBits;
     private boolean held;
-    /** Steps in front of the plane, in step order: their direction, slot, beam, circumsolar and sunshine terms. */
+    /** Terms of the steps in front of the plane, one per (direction, slot) pair: direction, slot, beam, circumsolar, sunshine hours. */
     private int live;
     private final int[] direction, slot;
     private final double[] beam, circ, sunshine;
@@ -31,8 +38,20 @@ final class StepTerms {
     final double[] beamU = new double[StepTable.SLOTS], circU = new double[StepTable.SLOTS];
     private boolean unshadedHeld;
 
+    /** Scratch: (direction x slots + slot) << 32 | term index, for grouping the terms of one normal. */
+    private final long[] keys;
+    /** Scratch: the terms in key order. */
+    private final int[] sDir, sSlot;
+    private final double[] sBeam, sCirc, sSun;
+
     StepTerms(StepTable st) {
         this.st = st;
+        keys = new long[st.count];
+        sDir = new int[st.count];
+        sSlot = new int[st.count];
+        sBeam = new double[st.count];
+        sCirc = new double[st.count];
+        sSun = new double[st.count];
         direction = new int[st.count];
         slot = new int[st.count];
         beam = new double[st.count];
@@ -58,9 +77,10 @@ final class StepTerms {
                 beam[m] = st.beamWh[s] * c;
                 circ[m] = st.circumsolarWh[s] * SkyModel.circumsolarRatio(c, st.cosZenith[s]);
                 sunshine[m] = st.sunshineHours[s];
+                keys[m] = ((long) direction[m] * StepTable.SLOTS + slot[m]) << 32 | m;
                 m++;
             }
-            live = m;
+            live = merge(m);
         }
         if (unshaded && !unshadedHeld) {
             Arrays.fill(beamU, 0);
@@ -71,6 +91,43 @@ final class StepTerms {
             }
             unshadedHeld = true;
         }
+    }
+
+    /**
+     * Adds up the first {@code m} terms (step order) per (direction, slot) pair, each pair's terms in
+     * step order, into one term per pair (ordered by direction, then slot); returns the pairs' count.
+     */
+    private int merge(int m) {
+        Arrays.sort(keys, 0, m);
+        // copy the terms out in key order first: a pair is written at its rank, which may lie past
+        // terms that are still to be read at their step-order positions
+        for (int q = 0; q < m; q++) {
+            int i = (int) keys[q];
+            sDir[q] = direction[i];
+            sSlot[q] = slot[i];
+            sBeam[q] = beam[i];
+            sCirc[q] = circ[i];
+            sSun[q] = sunshine[i];
+        }
+        int g = -1;
+        long prev = -1;
+        for (int q = 0; q < m; q++) {
+            long pair = keys[q] >>> 32;
+            if (pair != prev) {
+                prev = pair;
+                g++;
+                direction[g] = sDir[q];
+                slot[g] = sSlot[q];
+                beam[g] = sBeam[q];
+                circ[g] = sCirc[q];
+                sunshine[g] = sSun[q];
+            } else {
+                beam[g] += sBeam[q];
+                circ[g] += sCirc[q];
+                sunshine[g] += sSun[q];
+            }
+        }
+        return g + 1;
     }
 
     /**

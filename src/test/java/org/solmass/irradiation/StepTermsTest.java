@@ -18,13 +18,17 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class StepTermsTest {
 
     /**
-     * Property (common practice for a cache): keeping a normal's step terms for the next receiver
-     * changes nothing. For receivers that share normals in runs (as patches of one face do) and
-     * switch between them, with random sun visibilities, the shaded and unshaded slot sums and the
-     * sunshine hours equal those of the loop over every step, bit for bit.
+     * Property (common practice for a cache): keeping a normal's step terms for the next receiver,
+     * added up per (sun direction, slot) pair, changes nothing but rounding. For receivers that share
+     * normals in runs (as patches of one face do) and switch between them, with random sun
+     * visibilities, the shaded and unshaded slot sums and the sunshine hours equal those of the loop
+     * over every step within 1e-12 relative: the terms are at or above zero, so a reordered sum of
+     * n terms differs by at most about n x 2^-53 of itself (Higham, Accuracy and Stability of
+     * Numerical Algorithms, 2nd ed., 2002, section 4.2), about 4e-13 for the 4,000 terms of a slot's
+     * year at most.
      */
     @Test
-    void keptStepTermsGiveTheSumsOfTheFullStepLoopBitForBit() {
+    void keptStepTermsGiveTheSumsOfTheFullStepLoop() {
         WeatherSeries year = ClimateSource.load(new Site(51, 10, 0, ZoneId.of("Europe/Berlin")), ClimateSpec.clearSkyYear(2025));
         SunDirections sun = SunDirections.binned(year, new SkySubdivision(1000));
         StepTable st = new StepTable(year, sun, Perez.INSTANCE);
@@ -45,16 +49,20 @@ class StepTermsTest {
             terms.normal(fx, fy, fz, analysed);
             double sunHours = terms.shaded(vis, beam, circ);
             double wantSun = fullLoop(st, fx, fy, fz, vis, wantBeam, wantCirc, wantBeamU, wantCircU);
-            assertEquals(wantSun, sunHours, 0.0, "sunshine hours, receiver " + receiver);
-            assertArrayEquals(wantBeam, beam, 0.0, "beam, receiver " + receiver);
-            assertArrayEquals(wantCirc, circ, 0.0, "circumsolar, receiver " + receiver);
+            assertEquals(wantSun, sunHours, 1e-12 * wantSun, "sunshine hours, receiver " + receiver);
+            close(wantBeam, beam, "beam, receiver " + receiver);
+            close(wantCirc, circ, "circumsolar, receiver " + receiver);
             if (analysed) {
-                assertArrayEquals(wantBeamU, terms.beamU, 0.0, "unshaded beam, receiver " + receiver);
-                assertArrayEquals(wantCircU, terms.circU, 0.0, "unshaded circumsolar, receiver " + receiver);
+                close(wantBeamU, terms.beamU, "unshaded beam, receiver " + receiver);
+                close(wantCircU, terms.circU, "unshaded circumsolar, receiver " + receiver);
             }
             if (sunHours > 0) checked++;
         }
         assertTrue(checked > 40, "the receivers must see the sun: " + checked); // precondition, not a result
+    }
+
+    private static void close(double[] want, double[] got, String what) {
+        for (int k = 0; k < want.length; k++) assertEquals(want[k], got[k], 1e-12 * Math.abs(want[k]), what + ", slot " + k);
     }
 
     /** The step loop as it stood before the terms were kept: every step, every receiver. */
