@@ -47,6 +47,16 @@ final class TileShuffle {
             if (env == null) throw new IllegalStateException("no Spark environment in this JVM (a shuffle outside a Spark task)");
             return env.serializer().newInstance();
         }
+
+        /**
+         * As the executor's serializer answers (Kryo with auto-reset: yes), so Spark picks the same
+         * shuffle writer as for the configured serializer (above 200 partitions, the serialized sort).
+         */
+        @Override
+        public boolean supportsRelocationOfSerializedObjects() {
+            SparkEnv env = SparkEnv.get();
+            return env != null && env.serializer().supportsRelocationOfSerializedObjects();
+        }
     }
 
     @SuppressWarnings("unchecked")
