@@ -48,7 +48,7 @@ public final class CityBench implements Callable<Integer> {
     @Option(names = "--memory-tiles", split = ",", defaultValue = "125,250,500", paramLabel = "M", description = "tile sides for the memory table (default ${DEFAULT-VALUE})") double[] memoryTiles;
     @Option(names = "--skip-one-machine", description = "only the Spark run and the memory table") boolean skipOne;
     @Option(names = "--memory-only", description = "only the tables, the executor set-up and the memory table") boolean memoryOnly;
-    @Option(names = "--skip-memory", description = "no memory table (only the timed runs)") boolean skipMemory;
+    @Option(names = "--no-memory", description = "no memory table (the timed runs only)") boolean noMemory;
 
     public static void main(String[] args) {
         System.exit(new CommandLine(new CityBench()).execute(args));
@@ -76,7 +76,7 @@ public final class CityBench implements Callable<Integer> {
             int code = spark(dir, w, oneRate);
             if (code != 0) return code;
         }
-        if (!skipMemory) memory(w, CityModel.of(study));
+        if (!noMemory) memory(w, CityModel.of(study));
         CityJob.deleteTree(dir);
         return 0;
     }
@@ -84,20 +84,23 @@ public final class CityBench implements Callable<Integer> {
     /** The Spark run of the city, as {@code solmass city} does it: patches per second per core, and against one machine. */
     private int spark(Path dir, SyntheticCity.Written w, double oneRate) {
         CityJob job = new CityJob();
-        long t1 = System.nanoTime(), c1 = processCpuNanos();
+        long cpu0 = processCpuNanos();
+        long t1 = System.nanoTime();
         String[] args = haloCapM == null
                 ? new String[] {w.study().toString(), "--out", dir.resolve("out").toString(), "--master", master, "--tile-size", Double.toString(tileM), "-q"}
                 : new String[] {w.study().toString(), "--out", dir.resolve("out").toString(), "--master", master, "--tile-size", Double.toString(tileM),
                 "--halo-cap", Double.toString(haloCapM), "-q"};
         int code = CityJob.commandLine(job).execute(args);
-        double s = (System.nanoTime() - t1) / 1e9, cpuS = (processCpuNanos() - c1) / 1e9;
+        double s = (System.nanoTime() - t1) / 1e9;
+        double cpuS = (processCpuNanos() - cpu0) / 1e9;
         if (code != 0) return code;
         int sparkCores = Math.max(1, CitySpark.localCores(master));
         long n = job.last.stages().rows();
         double rate = n / s / sparkCores;
         CityPlan plan = job.last.plan();
-        System.out.printf(Locale.ROOT, "%s (%d cores): %d patches, %d tiles of %.0f m, halo %.0f m: %.1f s (Spark start included; process CPU %.1f s) = %.1f patches/s/core;"
-                        + " stages %s%n", master, sparkCores, n, plan.tiles().size(), tileM, plan.haloM(), s, cpuS, rate, job.last.stages().stageS());
+        System.out.printf(Locale.ROOT, "%s (%d cores): %d patches, %d tiles of %.0f m, halo %.0f m: %.1f s (Spark start included) = %.1f patches/s/core;"
+                        + " stages %s; process CPU %.1f s, per stage %s%n", master, sparkCores, n, plan.tiles().size(), tileM, plan.haloM(), s, rate,
+                job.last.stages().stageS(), cpuS, job.last.stages().stageCpuS());
         if (!skipOne) System.out.printf(Locale.ROOT, "ratio %s / one machine, patches per second per core: %.2f%n", master, rate / oneRate);
         return 0;
     }
@@ -206,7 +209,7 @@ public final class CityBench implements Callable<Integer> {
         return new StagedPasses.Reflected(refl, total, whole.bounceWh(), whole.converged(), whole.tolerance(), whole.maxBounces());
     }
 
-    /** CPU time of this process so far (every thread, the JVM's own included), nanoseconds; -1 where the JVM does not tell. */
+    /** The JVM's CPU time so far (all threads), ns; -1 where the platform does not tell. */
     private static long processCpuNanos() {
         return ManagementFactory.getOperatingSystemMXBean() instanceof com.sun.management.OperatingSystemMXBean os ? os.getProcessCpuTime() : -1;
     }

@@ -71,11 +71,12 @@ final class CityStages {
      * What the stages produced (the Parquet rows are in {@code parquet}); {@code zones}: the PV zones
      * with their city-wide numbers, in number order, or null when the run finds no PV zones ({@code zoneRows}:
      * their zones.csv rows, or null likewise);
-     * {@code buildings}: per block the means of the {@code summarised} columns ({@link BuildingSummaries}).
+     * {@code buildings}: per block the means of the {@code summarised} columns ({@link BuildingSummaries});
+     * {@code stageCpuS}: per stage the driver JVM's CPU seconds (all its threads; in local mode the tasks' too; NaN where the JVM does not tell).
      */
     record Outcome(List<Column> columns, double[] bounceWh, boolean converged, long rows, long[] firstPassBytes,
                    Map<String, Double> stageS, List<PvZones.Zone> zones, TileOut.ZoneRows zoneRows, List<Column> summarised,
-                   List<org.solmass.output.BuildingsWriter.Building> buildings) {}
+                   List<org.solmass.output.BuildingsWriter.Building> buildings, Map<String, Double> stageCpuS) {}
 
     private static final Map<String, CityModel> CITIES = new ConcurrentHashMap<>();
 
@@ -192,15 +193,15 @@ final class CityStages {
         Broadcast<CityPlan> bPlan = sc.broadcast(plan);
         Broadcast<byte[]> bTables = sc.broadcast(city.tables().encode());
         double[] ghiMonth = TileBounces.ghiMonthWh(city.sun());
-        Map<String, Double> stageS = new LinkedHashMap<>();
+        Map<String, Double> stageS = new LinkedHashMap<>(), stageCpuS = new LinkedHashMap<>();
         List<JavaPairRDD<?, ?>> cached = new ArrayList<>();
 
         // 1. first pass per tile
-        long t0 = System.nanoTime();
+        long t0 = System.nanoTime(), c0 = cpuNanos();
         StageProgress.label(sc, "first pass");
         List<Integer> tiles = IntStream.range(0, nTiles).boxed().toList();
-        JavaPairRDD<Integer, FirstPasses> firsts = sc.parallelize(tiles, nTiles).mapToPair(t -> new Tuple2<>(t, t))
-                .partitionBy(tp).mapValues(t -> {
+        JavaPairRDD<Integer, FirstPasses> firsts = TileShuffle.byKey(sc.parallelize(tiles, nTiles).mapToPair(t -> new Tuple2<>(t, t)), tp)
+                .mapValues(t -> {
                     failOnce(s, "first-pass", t);
                     return city(s.studyFile(), bTables).firstPass(bPlan.value().tile(t), taskCores());
                 }).persist(StorageLevel.MEMORY_AND_DISK());
@@ -208,9 +209,10 @@ final class CityStages {
         long[] bytes = new long[nTiles];
         for (Tuple2<Integer, Long> b : firsts.mapValues(FirstPasses::bytes).collect()) bytes[b._1()] = b._2();
         stageS.put("first_pass", (System.nanoTime() - t0) / 1e9);
+        stageCpuS.put("first_pass", cpuSince(c0));
 
         // 2. exchange and bounces
-        long t1 = System.nanoTime();
+        long t1 = System.nanoTime(), c1 = cpuNanos();
         StageProgress.label(sc, "exchange");
         // once, per tile from its own first pass and the plan: which receivers it needs from which tile
         // (TileExchange.Route); the requests go to the owners, which keep them as what they send
@@ -220,8 +222,8 @@ final class CityStages {
             it.forEachRemaining(e -> l.add(new Tuple2<>(e._1(), TileState.initial(e._1(), e._2(), bOwner.value()))));
             return l.iterator();
         }, true).persist(StorageLevel.MEMORY_AND_DISK());
-        JavaPairRDD<Integer, TileExchange.Sends> sends = state.flatMapToPair(e -> e._2().route.requests().iterator())
-                .groupByKey(tp).mapValues(TileExchange.Sends::of).persist(StorageLevel.MEMORY_AND_DISK());
+        JavaPairRDD<Integer, TileExchange.Sends> sends = TileShuffle.<TileExchange.Request>grouped(state.flatMapToPair(e -> e._2().route.requests().iterator()), tp)
+                .mapValues(TileExchange.Sends::of).persist(StorageLevel.MEMORY_AND_DISK());
         cached.add(sends);
         double tolerance = city.prepared().options().bounceTolerance();
         int maxBounces = city.prepared().options().maxBounces();
@@ -258,9 +260,10 @@ final class CityStages {
         double[] bounces = Arrays.copyOf(bounceWh, used);
         boolean conv = converged;
         stageS.put("reflection", (System.nanoTime() - t1) / 1e9);
+        stageCpuS.put("reflection", cpuSince(c1));
 
         // 3. finish per tile
-        long t2 = System.nanoTime();
+        long t2 = System.nanoTime(), c2 = cpuNanos();
         StageProgress.label(sc, "finish");
         JavaPairRDD<Integer, TileOut> out = firsts.join(state).leftOuterJoin(totals).mapValues(x -> {
             FirstPasses fp = x._1()._1();
@@ -286,6 +289,7 @@ final class CityStages {
         cached.add(out);
         List<Tuple2<Integer, TileOut.Head>> heads = out.mapValues(TileOut::head).collect();
         stageS.put("finish", (System.nanoTime() - t2) / 1e9);
+        stageCpuS.put("finish", cpuSince(c2));
 
         // columns in tile order (first seen), PV zones numbered city-wide
         List<String> names = new ArrayList<>();
@@ -299,12 +303,13 @@ final class CityStages {
         List<PvZones.Zone> zones = cityZones(byTile, zoneNumber);
         TileOut.ZoneRows zoneRows = TileOut.zoneRows(byTile, zoneNumber);
 
-        long t3 = System.nanoTime();
+        long t3 = System.nanoTime(), c3 = cpuNanos();
         StageProgress.label(sc, "write");
         TileParquet.write(sc, out, PatchRows.fileSchema(columns), names, bZones, s, parquet);
         long count = 0;
         for (TileOut.Head h : byTile) count += h.size();
         stageS.put("write", (System.nanoTime() - t3) / 1e9);
+        stageCpuS.put("write", cpuSince(c3));
         // per building (a block lies in one tile): area-weighted means of every column but categories
         StageProgress.label(sc, "buildings");
         List<Column> summarised = columns.stream().filter(c -> c.kind() != org.solmass.table.ColumnKind.CATEGORICAL).toList();
@@ -314,7 +319,19 @@ final class CityStages {
         bTables.destroy();
         bOwner.destroy();
         bZones.destroy();
-        return new Outcome(columns, bounces, conv, count, bytes, stageS, zones, zoneRows, summarised, buildings);
+        return new Outcome(columns, bounces, conv, count, bytes, stageS, zones, zoneRows, summarised, buildings, stageCpuS);
+    }
+
+    /** This JVM's CPU time so far, all threads, ns ({@code com.sun.management.OperatingSystemMXBean}); -1 where the JVM does not tell. */
+    static long cpuNanos() {
+        return java.lang.management.ManagementFactory.getOperatingSystemMXBean() instanceof com.sun.management.OperatingSystemMXBean os
+                ? os.getProcessCpuTime() : -1;
+    }
+
+    /** CPU seconds since {@code from} ({@link #cpuNanos}), NaN where not told. */
+    private static double cpuSince(long from) {
+        long now = cpuNanos();
+        return from < 0 || now < 0 ? Double.NaN : (now - from) / 1e9;
     }
 
     /**
@@ -324,11 +341,11 @@ final class CityStages {
      */
     private static JavaPairRDD<Integer, Iterable<TileExchange.Packet>> exchange(JavaPairRDD<Integer, TileState> state,
             JavaPairRDD<Integer, TileExchange.Sends> sends, TilePartitioner tp, boolean totals) {
-        return state.join(sends).flatMapToPair(e -> {
+        return TileShuffle.<TileExchange.Packet>grouped(state.join(sends).flatMapToPair(e -> {
             TileState st = e._2()._1();
             return totals ? e._2()._2().packets(st.tile, st.ids, st.totalAnnual, 1).iterator()
                     : e._2()._2().packets(st.tile, st.ids, st.term, 12).iterator();
-        }).groupByKey(tp);
+        }), tp);
     }
 
     /**

@@ -72,7 +72,10 @@ final class TileExchange {
         final int[] from, count;
         /** The ids it receives, by sending tile, then ascending: the slots after its own entries. */
         final int[] foreign;
-        /** Per reflector-list entry (entries in order, each list in order): its slot ({@link TileBounces#slots}). */
+        /**
+         * Per reflector-list entry (entries in order, each list in order): its slot, as
+         * {@link TileBounces#slots} gives it for the map own id -> its entry, received id -> own + its place in {@link #foreign}.
+         */
         final int[] slots;
 
         private Route(int tile, int own, int[] from, int[] count, int[] foreign, int[] slots) {
@@ -89,34 +92,45 @@ final class TileExchange {
          */
         static Route of(int tile, FirstPasses fp, int[] owner) {
             int[] ids = fp.ids();
-            SlotMap slot = new SlotMap(ids.length);
-            for (int i = 0; i < ids.length; i++) slot.put(ids[i], i);
-            long[][] key = {new long[64]}; // owner tile, id of each id not held, first seen
-            int[] k = {0};
+            int own = ids.length;
+            SlotMap slot = new SlotMap(own);
+            for (int i = 0; i < own; i++) slot.put(ids[i], i);
+            // one look-up per list entry: an id not held gets a provisional slot -2 - f (f: its number in
+            // order of first sight) and the entry keeps it; the slots after sorting are filled in below
+            int[] n = {0};
+            TileBounces.forEachReflector(fp, j -> n[0]++);
+            int[] slots = new int[n[0]];
+            long[][] key = {new long[64]}; // owner tile, id of each id not held, in order of first sight
+            int[] k = {0}, at = {0};
             TileBounces.forEachReflector(fp, j -> {
-                if (slot.get(j) >= 0) return;
-                if (owner[j] < 0 || owner[j] == tile) throw new IllegalStateException("receiver " + j + " named by tile " + tile + " has no other owner");
-                slot.put(j, Integer.MAX_VALUE); // placeholder until sorted below
-                if (k[0] == key[0].length) key[0] = Arrays.copyOf(key[0], 2 * k[0]);
-                key[0][k[0]++] = ((long) owner[j] << 32) | j;
+                int s = slot.get(j);
+                if (s == -1) {
+                    if (owner[j] < 0 || owner[j] == tile) throw new IllegalStateException("receiver " + j + " named by tile " + tile + " has no other owner");
+                    s = -2 - k[0];
+                    slot.put(j, s);
+                    if (k[0] == key[0].length) key[0] = Arrays.copyOf(key[0], 2 * k[0]);
+                    key[0][k[0]++] = ((long) owner[j] << 32) | j;
+                }
+                slots[at[0]++] = s;
             });
             long[] keys = Arrays.copyOf(key[0], k[0]);
             Arrays.sort(keys);
-            int[] foreign = new int[keys.length];
+            int[] foreign = new int[keys.length], sorted = new int[keys.length]; // sorted[f]: the final place of the f-th id first seen
             List<int[]> runs = new ArrayList<>(); // tile, count
             for (int i = 0; i < keys.length; i++) {
                 foreign[i] = (int) keys[i];
-                slot.put(foreign[i], ids.length + i);
+                sorted[-2 - slot.get(foreign[i])] = i;
                 int o = (int) (keys[i] >>> 32);
                 if (runs.isEmpty() || runs.get(runs.size() - 1)[0] != o) runs.add(new int[] {o, 0});
                 runs.get(runs.size() - 1)[1]++;
             }
+            for (int e = 0; e < slots.length; e++) if (slots[e] < 0) slots[e] = own + sorted[-2 - slots[e]];
             int[] from = new int[runs.size()], count = new int[runs.size()];
             for (int i = 0; i < from.length; i++) {
                 from[i] = runs.get(i)[0];
                 count[i] = runs.get(i)[1];
             }
-            return new Route(tile, ids.length, from, count, foreign, TileBounces.slots(fp, slot::get));
+            return new Route(tile, own, from, count, foreign, slots);
         }
 
         /** One request per tile it receives from, keyed by that tile. */

@@ -1,0 +1,69 @@
+package org.solmass.spark;
+
+import org.apache.spark.HashPartitioner;
+import org.apache.spark.api.java.JavaPairRDD;
+import org.apache.spark.api.java.JavaSparkContext;
+import org.apache.spark.sql.SparkSession;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import scala.Tuple2;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Random;
+import java.util.TreeMap;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * {@link TileShuffle} against Spark's own {@code groupByKey} (a general-purpose library): the same
+ * groups in the same partitions, below Spark's bypass-merge threshold (200 partitions) and above it,
+ * where the serialized sort is used when the serializer allows relocation, as Kryo does.
+ */
+class TileShuffleTest {
+    @TempDir static Path dir;
+
+    @Test
+    void groupsAsGroupByKeyDoesBelowAndAboveTheBypassThreshold() {
+        SparkSession spark = CitySpark.session("local[2]", dir.resolve("spark"), 4);
+        try {
+            JavaSparkContext sc = JavaSparkContext.fromSparkContext(spark.sparkContext());
+            Random rnd = new Random(20261202);
+            List<Tuple2<Integer, double[]>> records = new ArrayList<>();
+            for (int i = 0; i < 3000; i++) records.add(new Tuple2<>(rnd.nextInt(400), new double[] {i, rnd.nextDouble()}));
+            for (int parts : new int[] {7, 260}) {
+                HashPartitioner p = new HashPartitioner(parts);
+                JavaPairRDD<Integer, double[]> in = sc.parallelizePairs(records, 5);
+                List<List<Tuple2<Integer, Iterable<double[]>>>> ours = TileShuffle.grouped(in, p).glom().collect();
+                List<List<Tuple2<Integer, Iterable<double[]>>>> spark2 = in.groupByKey(p).glom().collect();
+                assertEquals(parts, ours.size(), "partitions");
+                int groups = 0;
+                for (int q = 0; q < parts; q++) {
+                    Map<Integer, List<Double>> a = sorted(ours.get(q)), b = sorted(spark2.get(q));
+                    assertEquals(b, a, "partition " + q + " of " + parts);
+                    groups += a.size();
+                }
+                assertTrue(groups > 300, "groups compared: " + groups);
+                assertEquals(spark.sparkContext().getConf().get("spark.serializer", "").contains("Kryo"),
+                        new TileShuffle.ExecutorSerializer().supportsRelocationOfSerializedObjects(), "relocation as the configured serializer");
+            }
+        } finally {
+            spark.stop();
+        }
+    }
+
+    /** Key -> the first value of each record in the group, sorted (groupByKey gives no order within a group). */
+    private static Map<Integer, List<Double>> sorted(List<Tuple2<Integer, Iterable<double[]>>> part) {
+        Map<Integer, List<Double>> m = new TreeMap<>();
+        for (Tuple2<Integer, Iterable<double[]>> g : part) {
+            List<Double> l = new ArrayList<>();
+            g._2().forEach(v -> l.add(v[0]));
+            l.sort(null);
+            assertEquals(null, m.put(g._1(), l), "key " + g._1() + " twice in a partition");
+        }
+        return m;
+    }
+}
