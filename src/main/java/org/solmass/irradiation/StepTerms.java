@@ -18,7 +18,8 @@ import java.util.Arrays;
  * ray stands for them), so their terms are added up once per face into one term per (direction,
  * slot) pair, in step order: with binned sun directions a year's steps at one hour of one month
  * fall into a few sky cells (the sun moves about 0.4 degrees a day at a given hour), so a face keeps
- * about a third as many terms as steps, and each receiver's loop is that much shorter. The shaded
+ * about a fifth as many terms as steps (a clear-sky year at 51 N in 4,096 cells: a roof 4,811 steps
+ * in front, 875 pairs; a south facade 3,795 and 715; an east facade 2,322 and 429), and each receiver's loop is that much shorter. The shaded
  * sums then add the pairs' sums instead of the single terms: the same sums up to rounding (all
  * terms are at or above zero, so the relative difference stays below the term count times the
  * double precision unit; tested against the loop over every step).
