@@ -133,9 +133,17 @@ public final class AnalysisRun {
     /** Runs the whole analysis on {@code threads} worker threads (0 = all cores). */
     public static Outcome run(Study study, PhaseProgress progress) {
         int threads = study.threads() > 0 ? study.threads() : Runtime.getRuntime().availableProcessors();
+        return onPool(threads, () -> compute(study, progress), "analysis");
+    }
+
+    /**
+     * Runs {@code work} inside a fork-join pool of {@code threads} workers of its own, so that its
+     * parallel loops use those workers (not the JVM's common pool); unwraps what it throws.
+     */
+    public static <T> T onPool(int threads, java.util.function.Supplier<T> work, String what) {
         ForkJoinPool pool = new ForkJoinPool(threads);
         try {
-            return pool.submit(() -> compute(study, progress)).get();
+            return pool.submit(work::get).get();
         } catch (ExecutionException e) {
             Throwable c = e.getCause();
             if (c instanceof RuntimeException re) throw re;
@@ -143,7 +151,7 @@ public final class AnalysisRun {
             throw new IllegalStateException(c);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-            throw new IllegalStateException("analysis interrupted", e);
+            throw new IllegalStateException(what + " interrupted", e);
         } finally {
             pool.shutdownNow();
         }

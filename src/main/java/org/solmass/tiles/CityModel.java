@@ -191,21 +191,7 @@ public final class CityModel {
      * in its own pool.
      */
     static <T> T onThreads(int threads, java.util.function.Supplier<T> work) {
-        if (threads <= 0) return work.get();
-        java.util.concurrent.ForkJoinPool pool = new java.util.concurrent.ForkJoinPool(threads);
-        try {
-            return pool.submit(work::get).get();
-        } catch (java.util.concurrent.ExecutionException e) {
-            Throwable c = e.getCause();
-            if (c instanceof RuntimeException re) throw re;
-            if (c instanceof Error err) throw err;
-            throw new IllegalStateException(c);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("tile work interrupted", e);
-        } finally {
-            pool.shutdownNow();
-        }
+        return threads <= 0 ? work.get() : AnalysisRun.onPool(threads, work, "tile work");
     }
 
     private ShadedIrradiation.Inputs inputs(Tile t) {
