@@ -378,9 +378,22 @@ public final class AnalysisRun {
                 study.source() == null ? "--patch" : study.source() + ": patch_m");
     }
 
-    /** What the metrics read: the finished stages and the study's metric settings. */
+    /**
+     * What the metrics read: the finished stages and the study's metric settings, for the whole
+     * model's scene (the model's triangles in its order, then any terrain's; ground flags from the
+     * patches' GROUND surfaces).
+     */
     public static MetricContext metricContext(Study study, Scene scene, PatchSet patches, IrradiationResult r, WeatherSeries weather) {
-        return new MetricContext(scene, patches, r, weather, study.sky(), study.site(), study.climate().year(),
+        return metricContext(study, scene, Surface.groundTriangles(patches.surfaces(), scene.triangleCount()), patches, r, weather);
+    }
+
+    /**
+     * The metrics' context for a scene that is not the whole model's in the model's order (a city
+     * tile's: org.solmass.tiles.CityModel), with that scene's ground flags in its own numbering.
+     */
+    public static MetricContext metricContext(Study study, Scene scene, boolean[] sceneIsGround, PatchSet patches,
+                                              IrradiationResult r, WeatherSeries weather) {
+        return new MetricContext(scene, sceneIsGround, patches, r, weather, study.sky(), study.site(), study.climate().year(),
                 study.albedo().ground(), study.patchM(), study.rays(), RUN_SEED, study.metricSettings());
     }
 

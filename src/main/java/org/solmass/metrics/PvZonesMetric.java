@@ -111,8 +111,7 @@ public final class PvZonesMetric implements Metric {
         }
         SunDirections sun = ctx.weather().timeBase() == TimeBase.AVERAGE_DAYS ? SunDirections.exact(ctx.weather())
                 : SunDirections.binned(ctx.weather(), new SkySubdivision(s.sunBins()));
-        boolean[] ground = Surface.groundTriangles(surfaces, ctx.scene().triangleCount());
-        PvArrays.Result arrays = PvArrays.run(ctx.scene(), ground, modules, ids, lo, ctx.weather(), ctx.sky(), sun,
+        PvArrays.Result arrays = PvArrays.run(ctx.scene(), ctx.sceneIsGround(), modules, ids, lo, ctx.weather(), ctx.sky(), sun,
                 ctx.groundAlbedo(), ctx.site().zone(), new PvArrays.Settings(ctx.rays(), ctx.raySeed(),
                         ModuleSight.DEFAULT_ALONG, ModuleSight.DEFAULT_ACROSS));
         return new Found(zones, s, zoneOrient, rackAz, arrays);

@@ -61,6 +61,12 @@ public final class ModuleSight {
     /** Obstructed sky view factor of substring {@code k} of module {@code m}. */
     public double skyViewFactor(int m, int k) { return skyVf[m * substrings + k]; }
 
+    /** View factor of the ground (the ground plane and ground-flagged triangles) from substring {@code k} of module {@code m}. */
+    public double groundViewFactor(int m, int k) { return groundVf[m * substrings + k]; }
+
+    /** View factor of the obstructions (triangles not flagged ground, far horizon) from substring {@code k} of module {@code m}. */
+    public double obstructionViewFactor(int m, int k) { return obstructionVf[m * substrings + k]; }
+
     /**
      * @param scene the scene with the racks in it
      * @param triangleIsGround per scene triangle: ground or not (modules: not)

@@ -44,7 +44,7 @@ public final class PvArrays {
 
     /**
      * @param scene the model's scene
-     * @param modelIsGround per model triangle: ground or not
+     * @param modelIsGround per triangle of {@code scene}, in the scene's numbering: ground or not
      * @param zones per zone (in order of {@code zoneIds}): its modules
      * @param zoneIds zone ids
      * @param zoneId the site's time zone (its standard offset gives the series' local standard time)

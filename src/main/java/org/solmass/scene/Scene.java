@@ -197,10 +197,13 @@ public final class Scene {
 
     /**
      * A new scene of this scene's triangles followed by {@code extraSoup} (9 floats per triangle,
-     * world coordinates), with the same ground plane and far horizon: for objects added to a model, e.g. PV module
-     * racks. Triangle {@code i < triangleCount()} keeps its index; the extra ones follow. The corners of
-     * this scene's triangles are read back from storage (float, relative to the storage origin), so
-     * they may differ from the model's by one float step.
+     * world coordinates), with the same ground plane and far horizon, the same storage origin and the
+     * same ray-origin offset {@link #epsilon()}: for objects added to a model, e.g. PV module racks.
+     * Triangle {@code i < triangleCount()} keeps its index; the extra ones follow. The corners of
+     * this scene's triangles are read back from storage (float, relative to the storage origin) and
+     * stored again relative to the same origin, so they are stored bit for bit as before; a part of
+     * a model built in the whole model's frame (a city tile) and the whole model, each with the same
+     * extra triangles, cast the same rays from the same points (TiledGroundFacesTest).
      */
     public Scene withTriangles(float[] extraSoup) {
         if (extraSoup.length % 9 != 0) throw new IllegalArgumentException("triangle soup length not a multiple of 9");
@@ -215,7 +218,7 @@ public final class Scene {
             }
         }
         System.arraycopy(extraSoup, 0, soup, 9 * triangleCount, extraSoup.length);
-        Scene extended = build(soup, groundPlane, groundZ);
+        Scene extended = build(soup, groundPlane, groundZ, new double[] {shiftX, shiftY, shiftZ, epsilon});
         return horizon.isNone() ? extended : extended.withHorizon(horizon); // the far horizon stays
     }
 

@@ -56,6 +56,8 @@ public final class CityModel {
     /** Per block: min x, min y, max x, max y, max z (plan bounds and top), NaN for a block without triangles. */
     private final double[][] blockBounds;
     private final Map<Double, HeightRaster> rasters = new HashMap<>();
+    /** Per triangle of the whole scene (the model's, then any terrain's): whether it belongs to a GROUND surface. */
+    private final boolean[] groundTriangles;
 
     private CityModel(Study study, AnalysisRun.Prepared prepared, IrradiationSetup.Sun sun) {
         this.study = study;
@@ -67,6 +69,7 @@ public final class CityModel {
                 prepared.options());
         this.sun = sun != null ? sun : IrradiationSetup.Sun.of(prepared.weather(), study.sky(), prepared.options());
         this.blockBounds = blockBounds(prepared.model());
+        this.groundTriangles = org.solmass.surface.Surface.groundTriangles(prepared.patches().surfaces(), soup.length / 9);
     }
 
     /** The study file read and prepared (model, patches, weather) as {@code solmass analyse} does. */
@@ -254,7 +257,13 @@ public final class CityModel {
                 all.hasGroundFaces(), all.groundLevelZ());
         ResultTable table = new ResultTable(patches);
         IrradiationColumns.addTo(table, r, prepared.weather().timeBase() == TimeBase.HOURLY_YEAR);
-        Metrics.Outcome metrics = Metrics.run(AnalysisRun.metricContext(study, tileScene(t), tilePatches, r, prepared.weather()), table);
+        // the tile's scene numbers its triangles in its own order (sceneTriangles): the metrics get
+        // the ground flags in that order, not the whole model's (TiledGroundFacesTest)
+        int[] tris = sceneTriangles(t);
+        boolean[] ground = new boolean[tris.length];
+        for (int i = 0; i < tris.length; i++) ground[i] = groundTriangles[tris[i]];
+        Metrics.Outcome metrics = Metrics.run(AnalysisRun.metricContext(study, tileScene(t), ground, tilePatches, r, prepared.weather()),
+                table);
         return new TileRows(t, table, index, r, metrics);
     }
 

@@ -101,7 +101,7 @@ class VerticalSkyComponentMetricTest {
         MassingModel m = ObjReader.load(f, ModelOptions.defaults()).model();
         PatchSet ps = Patcher.build(m, new PatchOptions(1.0, analysed, false));
         Scene scene = Scene.build(m, !ps.hasGroundFaces(), ps.groundLevelZ());
-        MetricContext ctx = new MetricContext(scene, ps, null, null, null, null, 2026, 0.2, 1.0, 1024, 0x5A15_3A55L,
+        MetricContext ctx = new MetricContext(scene, org.solmass.surface.Surface.groundTriangles(ps.surfaces(), scene.triangleCount()), ps, null, null, null, null, 2026, 0.2, 1.0, 1024, 0x5A15_3A55L,
                 new MetricContext.Settings(List.of(MonthDay.of(3, 21)), 5, 5, null));
         ResultTable t = new ResultTable(ps.patches());
         new VerticalSkyComponentMetric().compute(ctx, t);
