@@ -389,7 +389,7 @@ public final class AnalysisRun {
 
     /**
      * The metrics' context for a scene that is not the whole model's in the model's order (a city
-     * tile's: org.solmass.tiles.CityModel), with that scene's ground flags in its own numbering.
+     * tile's, in the city runner), with that scene's ground flags in its own numbering.
      */
     public static MetricContext metricContext(Study study, Scene scene, boolean[] sceneIsGround, PatchSet patches,
                                               IrradiationResult r, WeatherSeries weather) {
