@@ -25,9 +25,14 @@ public final class IrradiationSetup {
      */
     public static final int REFLECTOR_RAYS = 256;
 
+    /** Reflection rays requested for a run of {@code raysPerPatch} rays: the hemisphere rays of a reflector-only receiver. */
+    static int reflectorRays(int raysPerPatch) {
+        return Math.min(raysPerPatch, REFLECTOR_RAYS);
+    }
+
     /** Rays of an analysed patch traced with {@code raysPerPatch} requested rays that sample reflected light. */
     public static int reflectionRays(int raysPerPatch) {
-        return org.solmass.scene.HemisphereSampler.reflectionRayCount(raysPerPatch, Math.min(raysPerPatch, REFLECTOR_RAYS));
+        return org.solmass.scene.HemisphereSampler.reflectionRayCount(raysPerPatch, reflectorRays(raysPerPatch));
     }
 
     private IrradiationSetup() {}
@@ -102,7 +107,7 @@ public final class IrradiationSetup {
         }
         return new ShadedIrradiation.Inputs(layout.receivers, layout.index(triangles, o.patchSizeM()),
                 layout.groundFlags(triangles), albedo, o.groundAlbedo(), o.shadedGround(), sun.steps, sun.directions,
-                o.raysPerPatch(), Math.min(o.raysPerPatch(), REFLECTOR_RAYS), o.keepMonthHour(), o.bounceTolerance(),
+                o.raysPerPatch(), reflectorRays(o.raysPerPatch()), o.keepMonthHour(), o.bounceTolerance(),
                 o.maxBounces());
     }
 

@@ -66,7 +66,7 @@ public record MemoryEstimate(long bytes, long countBytes) {
                              boolean keepMonthHour, int threads, int keptSlots) {
         int firstPassSlots = FirstPass.rowLength(keptSlots);
         long counts = receivers * (firstPassSlots * 8L + PER_RECEIVER_BESIDES_SLOTS)
-                + (receivers - analysed) * PER_REFLECTOR_ONLY_PER_RAY * Math.min(raysPerPatch, IrradiationSetup.REFLECTOR_RAYS)
+                + (receivers - analysed) * PER_REFLECTOR_ONLY_PER_RAY * IrradiationSetup.reflectorRays(raysPerPatch)
                 + analysed * (PER_PATCH_FIXED + PER_PATCH_PER_RAY * IrradiationSetup.reflectionRays(raysPerPatch) + (keepMonthHour ? StepTable.SLOTS * 4L + 12 * 8 : 0));
         long fixed = (long) threads * (raysPerPatch * PER_THREAD_PER_RAY + 16 + SlotBounce.BLOCK * firstPassSlots * 8L)
                 + (long) steps * PER_STEP;

@@ -57,10 +57,10 @@ final class Reflection {
      *                       {@code ghiW}: the subset of {@link org.solmass.scene.HemisphereSampler#sampleForReflection})
      */
     record Lists(int[][] idx, float[][] w, float[][] w2, float[] ghiW, float[] ghiW2, int rays, int reflectionRays) {
-        /** Lists of analysed patches traced with {@code raysPerPatch} requested rays (subset as {@link IrradiationSetup#reflectionRays}). */
-        static Lists of(int[][] idx, float[][] w, float[][] w2, float[] ghiW, float[] ghiW2, int raysPerPatch) {
+        /** Lists of analysed patches traced with {@code raysPerPatch} requested rays, reflection sampled by {@code reflectorRays} of them. */
+        static Lists of(int[][] idx, float[][] w, float[][] w2, float[] ghiW, float[] ghiW2, int raysPerPatch, int reflectorRays) {
             return new Lists(idx, w, w2, ghiW, ghiW2, org.solmass.scene.HemisphereSampler.roundedRayCount(raysPerPatch),
-                    IrradiationSetup.reflectionRays(raysPerPatch));
+                    org.solmass.scene.HemisphereSampler.reflectionRayCount(raysPerPatch, reflectorRays));
         }
     }
 

@@ -119,7 +119,7 @@ public final class ShadedIrradiation {
         });
 
         StepTable st = in.steps();
-        Reflection.Lists lists = Reflection.Lists.of(refIdx, refW, refW2, ghiAlbedo, ghiAlbedo2, in.raysPerPatch());
+        Reflection.Lists lists = Reflection.Lists.of(refIdx, refW, refW2, ghiAlbedo, ghiAlbedo2, in.raysPerPatch(), in.reflectorRays());
         Reflection.Outcome ro = Reflection.solve(firstPass, lists, n, st, in.bounceTolerance(), in.maxBounces(),
                 in.keepMonthHour(), progress);
 

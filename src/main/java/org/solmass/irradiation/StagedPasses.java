@@ -217,7 +217,8 @@ public final class StagedPasses {
         int[][] idxRow = new int[1][];
         float[][] wRow = new float[1][], w2Row = new float[1][];
         float[] gRow = new float[1], g2Row = new float[1];
-        Reflection.Lists row = Reflection.Lists.of(idxRow, wRow, w2Row, gRow, g2Row, raysPerPatch);
+        Reflection.Lists row = Reflection.Lists.of(idxRow, wRow, w2Row, gRow, g2Row, raysPerPatch,
+                IrradiationSetup.reflectorRays(raysPerPatch));
         int[][] byLength = new int[1][];
         double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
         double[] annual = new double[n], beam = new double[n], diffuse = new double[n], reflected = new double[n];
