@@ -59,6 +59,15 @@ public final class ShadedIrradiation {
                          float[] triangleAlbedo, double groundAlbedo, boolean shadedGround,
                          StepTable steps, SunDirections sun, int raysPerPatch, int reflectorRays,
                          boolean keepMonthHour, double bounceTolerance, int maxBounces, CanopyShading canopy) {
+        /**
+         * Ground flags with no triangle flagged are dropped (null): they classify every ray as no flags
+         * do, and without them the rays outside the reflection subset need any-hit queries only
+         * ({@link HemisphereSampler#sampleForReflection}).
+         */
+        public Inputs {
+            triangleIsGround = HemisphereSampler.anyFlagged(triangleIsGround) ? triangleIsGround : null;
+        }
+
         /** Inputs without trees. */
         public Inputs(Receivers receivers, ReflectorIndex reflectors, boolean[] triangleIsGround,
                       float[] triangleAlbedo, double groundAlbedo, boolean shadedGround,
@@ -87,6 +96,7 @@ public final class ShadedIrradiation {
         float[] ghiAlbedo = new float[total], ghiAlbedo2 = new float[n];
         float[][] canopyReflection = in.canopy() == null ? null : new float[n][12]; // per month, docs/method.md "Vegetation"
 
+        org.solmass.scene.KernelWarmup.awaitFor(total); // compiled ray kernels before the first receiver
         progress.begin("visibility", total);
         AtomicLong done = new AtomicLong();
         long every = Math.max(1, total / 200);

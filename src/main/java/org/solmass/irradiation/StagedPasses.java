@@ -36,6 +36,7 @@ public final class StagedPasses {
     public static FirstPasses firstPass(Scene scene, ShadedIrradiation.Inputs in, int[] receivers) {
         int n = in.receivers().analysed;
         FirstPasses out = new FirstPasses(receivers.length, in.canopy() != null);
+        org.solmass.scene.KernelWarmup.awaitFor(receivers.length); // compiled ray kernels before the first receiver
         ThreadLocal<ShadedIrradiation.Worker> workers = ThreadLocal.withInitial(() -> new ShadedIrradiation.Worker(scene, in));
         IntStream.range(0, receivers.length).parallel().forEach(i -> {
             int r = receivers[i];

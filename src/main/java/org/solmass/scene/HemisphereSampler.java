@@ -343,6 +343,13 @@ public final class HemisphereSampler {
         return m;
     }
 
+    /** Whether {@code triangleIsGround} flags any triangle (false for null or all false). */
+    public static boolean anyFlagged(boolean[] triangleIsGround) {
+        if (triangleIsGround == null) return false;
+        for (boolean g : triangleIsGround) if (g) return true;
+        return false;
+    }
+
     /** Class of a ray from its {@link Tracer#closestHit} result and vertical direction component. */
     public static int classOf(int hit, double dz, boolean[] triangleIsGround) {
         if (hit >= 0) return triangleIsGround != null && triangleIsGround[hit] ? GROUND : BLOCK;

@@ -117,9 +117,18 @@ final class VectorDirections {
     private static DoubleVector uniform(LongVector state) {
         LongVector z = state.lanewise(VectorOperators.XOR, state.lanewise(VectorOperators.LSHR, 30)).mul(0xbf58476d1ce4e5b9L);
         z = z.lanewise(VectorOperators.XOR, z.lanewise(VectorOperators.LSHR, 27)).mul(0x94d049bb133111ebL);
-        z = z.lanewise(VectorOperators.XOR, z.lanewise(VectorOperators.LSHR, 31)).lanewise(VectorOperators.LSHR, 11);
-        return ((DoubleVector) z.convert(VectorOperators.L2D, 0)).mul(0x1.0p-53);
+        z = z.lanewise(VectorOperators.XOR, z.lanewise(VectorOperators.LSHR, 31));
+        // (z >>> 11) 2^-53 without a long-to-double conversion (no AVX2 instruction for it: the API's
+        // slow Java fallback ran instead): the upper 52 bits as the mantissa of a double in [1, 2),
+        // minus 1 (exact, Sterbenz), plus the 53rd bit's 2^-53; the sum is a multiple of 2^-53 below 1,
+        // so it is exact and equals the scalar (mix >>> 11) * 0x1.0p-53 bit for bit
+        DoubleVector high = z.lanewise(VectorOperators.LSHR, 12).or(ONE_BITS).reinterpretAsDoubles().sub(1.0);
+        VectorMask<Double> lowBit = z.lanewise(VectorOperators.LSHR, 11).and(1L).compare(VectorOperators.NE, 0L).cast(D);
+        return high.add(DoubleVector.zero(D).blend(0x1.0p-53, lowBit));
     }
+
+    /** The bits of 1.0: sign 0, exponent 1023, mantissa 0. */
+    private static final long ONE_BITS = Double.doubleToRawLongBits(1.0);
 
     /** {@link HemisphereSampler#sinKernel} lane-wise, phi into sinPhi. */
     private void sin(int q) {
