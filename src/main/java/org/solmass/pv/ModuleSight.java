@@ -90,8 +90,10 @@ public final class ModuleSight {
                                       Vec3[] sun, int rays, long runSeed, int along, int across) {
         ModuleSight s = new ModuleSight(List.copyOf(modules), substrings, sun.length);
         ThreadLocal<Worker> workers = ThreadLocal.withInitial(() -> new Worker(scene, sun, rays, along * across));
+        // flags that flag nothing classify as none do, and without flags the classes need any-hit queries only
+        boolean[] ground = HemisphereSampler.anyFlagged(triangleIsGround) ? triangleIsGround : null;
         IntStream.range(0, modules.size()).parallel().forEach(m ->
-                workers.get().module(s, m, triangleIsGround, runSeed, along, across));
+                workers.get().module(s, m, ground, runSeed, along, across));
         return s;
     }
 
@@ -101,8 +103,8 @@ public final class ModuleSight {
         final HemisphereSampler sampler;
         final BundleTracer bundle;
         final HorizonBand band = new HorizonBand();
-        final double[] dir, dist, bundleDir;
-        final int[] cls, tri, index;
+        final double[] dir, bundleDir;
+        final int[] cls, index;
         final boolean[] blocked;
         final int[] seen;
 
@@ -113,9 +115,7 @@ public final class ModuleSight {
             bundle = scene.bundleTracer();
             int r = sampler.rayCount();
             dir = new double[3 * r];
-            dist = new double[r];
             cls = new int[r];
-            tri = new int[r];
             int n = sun.length;
             bundleDir = new double[3 * Math.max(1, n)];
             index = new int[Math.max(1, n)];
@@ -151,7 +151,7 @@ public final class ModuleSight {
                 Vec3 p = mod.at(0.5, (k + 0.5) / s.substrings);
                 double ox = p.x() + eps * nx, oy = p.y() + eps * ny, oz = p.z() + eps * nz;
                 long seed = HemisphereSampler.patchSeed("pv-" + mod.zone() + "-" + m + "-" + k, runSeed);
-                sampler.sample(ox, oy, oz, nx, ny, nz, seed, isGround, dir, cls, tri, dist);
+                sampler.classify(ox, oy, oz, nx, ny, nz, seed, isGround, dir, cls); // the view factors need classes only
                 ViewFactors vf = SkyViewCalculator.fromClasses(cls, sampler.gridSide());
                 s.skyVf[q] = vf.sky();
                 s.groundVf[q] = vf.ground();

@@ -367,8 +367,18 @@ public final class HemisphereSampler {
      */
     public void classify(Patch patch, long runSeed, boolean[] triangleIsGround, double[] dir, int[] cls) {
         scene.rayOrigin(patch, origin);
-        double ox = origin[0], oy = origin[1], oz = origin[2];
-        directions(patch.normal().x(), patch.normal().y(), patch.normal().z(), patchSeed(patch.id(), runSeed), dir);
+        classify(origin[0], origin[1], origin[2], patch.normal().x(), patch.normal().y(), patch.normal().z(),
+                patchSeed(patch.id(), runSeed), triangleIsGround, dir, cls);
+    }
+
+    /**
+     * As {@link #classify(Patch, long, boolean[], double[], int[])} from any point and unit normal: the
+     * classes {@link #sample(double, double, double, double, double, double, long, boolean[], double[], int[], int[], double[])}
+     * gives for the same arguments, without first hits.
+     */
+    public void classify(double ox, double oy, double oz, double nx, double ny, double nz, long streamSeed,
+                         boolean[] triangleIsGround, double[] dir, int[] cls) {
+        directions(nx, ny, nz, streamSeed, dir);
         if (triangleIsGround != null) { // ground-flagged triangles: the first hit decides
             bundle.closestHit(ox, oy, oz, dir, count, hitTri, hitDist);
             for (int s = 0; s < count; s++) cls[s] = classOf(hitTri[s], dir[3 * s + 2], triangleIsGround);

@@ -26,11 +26,14 @@ import java.util.SplittableRandom;
  * of {@link #BUNDLES_PER_ROUND} small bundles until {@link #FAST_ROUNDS} rounds in a row take less
  * than 1/{@link #COMPILED_SPEEDUP} of the first (interpreted) round's time, or for {@link #MAX_SECONDS}
  * at most. Measured here (this VM, 2 cores, nothing else running): the first round 1.4 s, rounds of
- * partly compiled code 9-40 ms, fully compiled 3.5-4.6 ms, reached after about 3.4 s; the ratio
+ * partly compiled code 9-40 ms, then 3.5-4.6 ms, reached after about 3.4 s; the ratio
  * between the first and a compiled round belongs to the code, not to the machine's speed. A pause
- * between rounds leaves a core to the JIT's compiler threads. Started on a thread of its own while
- * the model was cut into patches (both cores busy), it had not reached compiled code after 8 s, so
- * it runs when the pass is about to start.
+ * between rounds leaves a core to the JIT's compiler threads. It also stops when the rounds have not
+ * become twice as fast for {@link #STALL_SECONDS} (kernels already compiled). The JIT goes on
+ * compiling for some seconds after it (a second warm-up in the same JVM ran its rounds in 0.9-2 ms),
+ * now on the pass's own calls. Started on a thread of its own while the model was cut into patches
+ * (both cores busy), it had not reached compiled code after 8 s, so it runs when the pass is about
+ * to start.
  */
 public final class KernelWarmup {
     static final int BUNDLES_PER_ROUND = 100;
@@ -38,6 +41,12 @@ public final class KernelWarmup {
     static final int COMPILED_SPEEDUP = 250;
     static final int FAST_ROUNDS = 3;
     static final double MAX_SECONDS = 8;
+    /**
+     * Or it stops when the rounds have not become twice as fast for this long: when the kernels were
+     * already compiled (an earlier pass in the same JVM) the first round is no slower than the
+     * others and the speed-up above never comes.
+     */
+    static final double STALL_SECONDS = 1.0;
     /**
      * Receivers of a pass from which the warm-up pays: the first receivers in slow code cost about
      * 1.2-3 ms each (measured, see above) and the warm-up about 3.4 s of one thread, so below some
@@ -82,7 +91,7 @@ public final class KernelWarmup {
         float[] fdir = new float[3 * n];
         int[] cls = new int[n], tri = new int[n], subset = new int[n];
         boolean[] out = new boolean[n];
-        long begin = System.nanoTime(), first = -1;
+        long begin = System.nanoTime(), first = -1, mark = Long.MAX_VALUE, markedAt = begin;
         int fast = 0, rounds = 0;
         while (fast < FAST_ROUNDS && System.nanoTime() - begin < MAX_SECONDS * 1e9) {
             long t0 = System.nanoTime();
@@ -106,10 +115,16 @@ public final class KernelWarmup {
                 bt.occluded(ox, oy, oz, fdir, null, n, out);
                 bt.occluded(ox, oy, oz, dir, limit, n, out);
             }
-            long t = System.nanoTime() - t0;
+            long now = System.nanoTime(), t = now - t0;
             if (first < 0) first = t;
             else fast = t * COMPILED_SPEEDUP < first ? fast + 1 : 0;
             rounds++;
+            if (t * 2 <= mark) { // the rounds still get twice as fast now and then: compiling goes on
+                mark = t;
+                markedAt = now;
+            } else if (now - markedAt > STALL_SECONDS * 1e9) {
+                break; // kernels compiled before (an earlier pass in this JVM), or compiling has stalled
+            }
             try {
                 Thread.sleep(2);
             } catch (InterruptedException e) {
