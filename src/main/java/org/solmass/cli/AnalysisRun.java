@@ -264,7 +264,8 @@ public final class AnalysisRun {
                 weather.timeBase() == TimeBase.AVERAGE_DAYS ? IrradiationSetup.SunSampling.EXACT
                         : IrradiationSetup.SunSampling.BINNED,
                 study.sunBins(), RUN_SEED, true)
-                .withBounces(study.reflection().toleranceFraction(), study.reflection().maxBounces());
+                .withBounces(study.reflection().toleranceFraction(), study.reflection().maxBounces())
+                .withReflectionRays(study.reflection().rays());
         return new Prepared(study, read, model, canopy, patches, contextPatches, terrain, albedo, weather, o, warnings);
     }
 

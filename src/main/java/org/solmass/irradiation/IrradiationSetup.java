@@ -25,14 +25,28 @@ public final class IrradiationSetup {
      */
     public static final int REFLECTOR_RAYS = 256;
 
-    /** Reflection rays requested for a run of {@code raysPerPatch} rays: the hemisphere rays of a reflector-only receiver. */
+    /** Reflection rays of a run of {@code raysPerPatch} rays at the default request ({@link #REFLECTOR_RAYS}). */
     static int reflectorRays(int raysPerPatch) {
-        return Math.min(raysPerPatch, REFLECTOR_RAYS);
+        return reflectorRays(raysPerPatch, REFLECTOR_RAYS);
     }
 
-    /** Rays of an analysed patch traced with {@code raysPerPatch} requested rays that sample reflected light. */
+    /**
+     * Reflection rays of a run of {@code raysPerPatch} rays with {@code requested} asked for (study key
+     * {@code reflection.rays}): the hemisphere rays of a reflector-only receiver, never more than an
+     * analysed patch's rays.
+     */
+    public static int reflectorRays(int raysPerPatch, int requested) {
+        return Math.min(raysPerPatch, requested);
+    }
+
+    /** Rays of an analysed patch traced with {@code raysPerPatch} requested rays that sample reflected light (default request). */
     public static int reflectionRays(int raysPerPatch) {
-        return org.solmass.scene.HemisphereSampler.reflectionRayCount(raysPerPatch, reflectorRays(raysPerPatch));
+        return reflectionRays(raysPerPatch, REFLECTOR_RAYS);
+    }
+
+    /** As {@link #reflectionRays(int)} with {@code requested} reflection rays asked for. */
+    public static int reflectionRays(int raysPerPatch, int requested) {
+        return org.solmass.scene.HemisphereSampler.reflectionRayCount(raysPerPatch, reflectorRays(raysPerPatch, requested));
     }
 
     private IrradiationSetup() {}
@@ -54,9 +68,18 @@ public final class IrradiationSetup {
      * @param bounceTolerance reflection stops after the bounce that adds at most this share of the
      *                        reflected total ({@link Reflection})
      * @param maxBounces reflection stops after this many bounces at the latest (1: one bounce)
+     * @param reflectionRays requested rays that sample reflected light ({@link #reflectorRays(int, int)})
      */
     public record Options(double patchSizeM, int raysPerPatch, double groundAlbedo, boolean shadedGround, SunSampling sunSampling,
-                          int sunBins, long runSeed, boolean keepMonthHour, double bounceTolerance, int maxBounces) {
+                          int sunBins, long runSeed, boolean keepMonthHour, double bounceTolerance, int maxBounces,
+                          int reflectionRays) {
+
+        /** With the default reflection rays ({@link #REFLECTOR_RAYS}). */
+        public Options(double patchSizeM, int raysPerPatch, double groundAlbedo, boolean shadedGround, SunSampling sunSampling,
+                       int sunBins, long runSeed, boolean keepMonthHour, double bounceTolerance, int maxBounces) {
+            this(patchSizeM, raysPerPatch, groundAlbedo, shadedGround, sunSampling, sunBins, runSeed, keepMonthHour,
+                    bounceTolerance, maxBounces, REFLECTOR_RAYS);
+        }
 
         /** With the default bounce tolerance (0.5 %) and maximum (20). */
         public Options(double patchSizeM, int raysPerPatch, double groundAlbedo, boolean shadedGround, SunSampling sunSampling,
@@ -68,7 +91,13 @@ public final class IrradiationSetup {
         /** The same options with another bounce limit. */
         public Options withBounces(double tolerance, int max) {
             return new Options(patchSizeM, raysPerPatch, groundAlbedo, shadedGround, sunSampling, sunBins, runSeed,
-                    keepMonthHour, tolerance, max);
+                    keepMonthHour, tolerance, max, reflectionRays);
+        }
+
+        /** The same options with {@code rays} requested rays for reflected light. */
+        public Options withReflectionRays(int rays) {
+            return new Options(patchSizeM, raysPerPatch, groundAlbedo, shadedGround, sunSampling, sunBins, runSeed,
+                    keepMonthHour, bounceTolerance, maxBounces, rays);
         }
     }
 
@@ -107,7 +136,7 @@ public final class IrradiationSetup {
         }
         return new ShadedIrradiation.Inputs(layout.receivers, layout.index(triangles, o.patchSizeM()),
                 layout.groundFlags(triangles), albedo, o.groundAlbedo(), o.shadedGround(), sun.steps, sun.directions,
-                o.raysPerPatch(), reflectorRays(o.raysPerPatch()), o.keepMonthHour(), o.bounceTolerance(),
+                o.raysPerPatch(), reflectorRays(o.raysPerPatch(), o.reflectionRays()), o.keepMonthHour(), o.bounceTolerance(),
                 o.maxBounces());
     }
 

@@ -64,10 +64,17 @@ public record MemoryEstimate(long bytes, long countBytes) {
      */
     static MemoryEstimate of(long receivers, long analysed, int raysPerPatch, int steps,
                              boolean keepMonthHour, int threads, int keptSlots) {
+        return of(receivers, analysed, raysPerPatch, IrradiationSetup.reflectorRays(raysPerPatch), steps, keepMonthHour, threads, keptSlots);
+    }
+
+    /** As above with the run's reflection rays ({@link IrradiationSetup#reflectorRays(int, int)}). */
+    static MemoryEstimate of(long receivers, long analysed, int raysPerPatch, int reflectorRays, int steps,
+                             boolean keepMonthHour, int threads, int keptSlots) {
         int firstPassSlots = FirstPass.rowLength(keptSlots);
         long counts = receivers * (firstPassSlots * 8L + PER_RECEIVER_BESIDES_SLOTS)
-                + (receivers - analysed) * PER_REFLECTOR_ONLY_PER_RAY * IrradiationSetup.reflectorRays(raysPerPatch)
-                + analysed * (PER_PATCH_FIXED + PER_PATCH_PER_RAY * IrradiationSetup.reflectionRays(raysPerPatch) + (keepMonthHour ? StepTable.SLOTS * 4L + 12 * 8 : 0));
+                + (receivers - analysed) * PER_REFLECTOR_ONLY_PER_RAY * reflectorRays
+                + analysed * (PER_PATCH_FIXED + PER_PATCH_PER_RAY * org.solmass.scene.HemisphereSampler.reflectionRayCount(raysPerPatch, reflectorRays)
+                + (keepMonthHour ? StepTable.SLOTS * 4L + 12 * 8 : 0));
         long fixed = (long) threads * (raysPerPatch * PER_THREAD_PER_RAY + 16 + SlotBounce.BLOCK * firstPassSlots * 8L)
                 + (long) steps * PER_STEP;
         return new MemoryEstimate(counts + fixed, counts);
@@ -95,7 +102,7 @@ public record MemoryEstimate(long bytes, long countBytes) {
 
     /** The estimate for inputs already built. */
     public static MemoryEstimate of(ShadedIrradiation.Inputs in, int threads) {
-        return of(in.receivers().count, in.receivers().analysed, in.raysPerPatch(), in.steps().count,
+        return of(in.receivers().count, in.receivers().analysed, in.raysPerPatch(), in.reflectorRays(), in.steps().count,
                 in.keepMonthHour(), threads, FirstPass.liveSlots(in.steps()));
     }
 

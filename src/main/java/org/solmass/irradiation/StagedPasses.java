@@ -194,16 +194,19 @@ public final class StagedPasses {
      * table).
      *
      * @param raysPerPatch hemisphere rays of an analysed patch (for the standard error)
+     * @param reflectorRays the run's reflection rays ({@link ShadedIrradiation.Inputs#reflectorRays()})
      */
-    public static IrradiationResult finish(FirstPasses part, Reflected refl, IrradiationSetup.Sun sun, int raysPerPatch) {
-        return finish(part, TileReflected.of(part, refl), sun, raysPerPatch);
+    public static IrradiationResult finish(FirstPasses part, Reflected refl, IrradiationSetup.Sun sun, int raysPerPatch,
+                                           int reflectorRays) {
+        return finish(part, TileReflected.of(part, refl), sun, raysPerPatch, reflectorRays);
     }
 
     /**
      * Stage 3 with the tile's own part of the reflection ({@link TileReflected}): the same results as
      * with the whole layout's, from arrays the size of the tile.
      */
-    public static IrradiationResult finish(FirstPasses part, TileReflected refl, IrradiationSetup.Sun sun, int raysPerPatch) {
+    public static IrradiationResult finish(FirstPasses part, TileReflected refl, IrradiationSetup.Sun sun, int raysPerPatch,
+                                           int reflectorRays) {
         int analysedTotal = refl.analysedTotal();
         int[] rows = IntStream.range(0, part.size()).filter(i -> part.ids[i] < analysedTotal).toArray();
         int n = rows.length;
@@ -218,8 +221,7 @@ public final class StagedPasses {
         int[][] idxRow = new int[1][];
         float[][] wRow = new float[1][], w2Row = new float[1][];
         float[] gRow = new float[1], g2Row = new float[1];
-        Reflection.Lists row = Reflection.Lists.of(idxRow, wRow, w2Row, gRow, g2Row, raysPerPatch,
-                IrradiationSetup.reflectorRays(raysPerPatch));
+        Reflection.Lists row = Reflection.Lists.of(idxRow, wRow, w2Row, gRow, g2Row, raysPerPatch, reflectorRays);
         int[][] byLength = new int[1][];
         double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
         double[] annual = new double[n], beam = new double[n], diffuse = new double[n], reflected = new double[n];

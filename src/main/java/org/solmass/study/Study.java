@@ -101,17 +101,30 @@ public record Study(String name, String description, Path source, Model model, S
      *
      * @param tolerancePct stopping share, percent, in (0, 100]; default 0.5 (our choice)
      * @param maxBounces the most bounces, 1 (one bounce, as before multi-bounce) to {@value #MAX_BOUNCES}; default 20
+     * @param rays hemisphere rays that sample reflected light (key {@code rays}): all rays of a
+     *             reflector-only receiver and the stratified subset of an analysed patch's rays, at most
+     *             the study's {@code rays}; default {@value org.solmass.irradiation.IrradiationSetup#REFLECTOR_RAYS}
+     *             (docs/method.md, "Reflection rays": more rays, less noise in reflected light, more time)
      */
-    public record Reflection(double tolerancePct, int maxBounces) {
+    public record Reflection(double tolerancePct, int maxBounces, int rays) {
         /** The largest {@code max_bounces} the study accepts. */
         public static final int MAX_BOUNCES = 100;
+        /** The largest {@code rays} the study accepts (as the study's own {@code rays}). */
+        public static final int MAX_RAYS = 1 << 20;
         public static final Reflection DEFAULTS = new Reflection(
                 100 * org.solmass.irradiation.IrradiationSetup.DEFAULT_BOUNCE_TOLERANCE,
-                org.solmass.irradiation.IrradiationSetup.DEFAULT_MAX_BOUNCES);
+                org.solmass.irradiation.IrradiationSetup.DEFAULT_MAX_BOUNCES,
+                org.solmass.irradiation.IrradiationSetup.REFLECTOR_RAYS);
 
         public Reflection {
             if (!(tolerancePct > 0 && tolerancePct <= 100)) throw new IllegalArgumentException("tolerance must lie in (0, 100] %: " + tolerancePct);
             if (maxBounces < 1 || maxBounces > MAX_BOUNCES) throw new IllegalArgumentException("max bounces must be 1.." + MAX_BOUNCES + ": " + maxBounces);
+            if (rays < 1 || rays > MAX_RAYS) throw new IllegalArgumentException("reflection rays must be 1.." + MAX_RAYS + ": " + rays);
+        }
+
+        /** With the default reflection rays. */
+        public Reflection(double tolerancePct, int maxBounces) {
+            this(tolerancePct, maxBounces, org.solmass.irradiation.IrradiationSetup.REFLECTOR_RAYS);
         }
 
         /** The stopping share as a fraction (the irradiation stage's unit); the default's exact constant when default. */

@@ -194,7 +194,8 @@ public final class StudyReader {
         JsonCursor rf = c.object("reflection");
         Study.Reflection reflection = new Study.Reflection(
                 rf.positive("tolerance_pct", Study.Reflection.DEFAULTS.tolerancePct(), 0, 100),
-                rf.integer("max_bounces", Study.Reflection.DEFAULTS.maxBounces(), 1, Study.Reflection.MAX_BOUNCES));
+                rf.integer("max_bounces", Study.Reflection.DEFAULTS.maxBounces(), 1, Study.Reflection.MAX_BOUNCES),
+                rf.integer("rays", Study.Reflection.DEFAULTS.rays(), 1, Study.Reflection.MAX_RAYS));
         rf.finish();
         c.finish();
 

@@ -118,6 +118,7 @@ public final class StudyWriter {
             ObjectNode rf = root.putObject("reflection");
             rf.put("tolerance_pct", s.reflection().tolerancePct());
             rf.put("max_bounces", s.reflection().maxBounces());
+            rf.put("rays", s.reflection().rays());
         }
         ObjectNode pv = root.putObject("pv");
         pv.put("suitable_pct", s.pv().suitablePct());

@@ -240,7 +240,8 @@ public final class CityModel {
      * receives; its arrays follow the tile, not the city): the same rows as {@link #finish(Tile, FirstPasses, StagedPasses.Reflected)}.
      */
     public TileRows finish(Tile t, FirstPasses ofTile, StagedPasses.TileReflected refl) {
-        IrradiationResult r = StagedPasses.finish(ofTile, refl, sun, study.rays());
+        IrradiationResult r = StagedPasses.finish(ofTile, refl, sun, study.rays(),
+                IrradiationSetup.reflectorRays(study.rays(), study.reflection().rays()));
         PatchSet all = prepared.patches();
         int n = t.analysedCount(layout.analysed());
         int[] index = new int[n];

@@ -183,11 +183,13 @@ public final class CityBench implements Callable<Integer> {
                 resetPeaks();
                 if (form == 0) {
                     StagedPasses.Reflected r = wholeInput(p, fp, whole);
-                    if (part == 0) StagedPasses.finish(fp, r, city.sun(), city.study().rays());
+                    if (part == 0) StagedPasses.finish(fp, r, city.sun(), city.study().rays(),
+                            IrradiationSetup.reflectorRays(city.study().rays(), city.study().reflection().rays()));
                     else city.finish(big, fp, r);
                 } else {
                     StagedPasses.TileReflected r = StagedPasses.TileReflected.of(fp, whole);
-                    if (part == 0) StagedPasses.finish(fp, r, city.sun(), city.study().rays());
+                    if (part == 0) StagedPasses.finish(fp, r, city.sun(), city.study().rays(),
+                            IrradiationSetup.reflectorRays(city.study().rays(), city.study().reflection().rays()));
                     else city.finish(big, fp, r);
                 }
                 out[2 * part + form] = (peakHeap() - before) / 1048576.0;

@@ -164,6 +164,7 @@ final class BadInputCases {
         study("study-pv-module-wider-than-long", studyJson(GOOD_SITE, ",\n  \"pv\": {\"module\": {\"length_m\": 1.0, \"width_m\": 1.7}}"));
         study("study-reflection-tolerance-zero", studyJson(GOOD_SITE, ",\n  \"reflection\": {\"tolerance_pct\": 0}"));
         study("study-reflection-max-bounces-zero", studyJson(GOOD_SITE, ",\n  \"reflection\": {\"max_bounces\": 0}"));
+        study("study-reflection-rays-zero", studyJson(GOOD_SITE, ",\n  \"reflection\": {\"rays\": 0}"));
         study("study-pv-dc-ac-ratio-above-3", studyJson(GOOD_SITE, ",\n  \"pv\": {\"dc_ac_ratio\": 4}"));
         study("study-pv-other-dc-losses-100", studyJson(GOOD_SITE, ",\n  \"pv\": {\"other_dc_losses_pct\": 100}"));
         study("study-vegetation-transmittance-above-1", studyJson(GOOD_SITE, ",\n  \"vegetation\": {\"blocks\": [\"tree*\"], \"transmittance\": 1.2}"));

@@ -368,6 +368,14 @@ class StudyReaderTest {
         assertEquals(s.pv().layout(), t.pv().layout());
         assertTrue(fails(base + ", \"reflection\": { \"max_bounces\": 101 } }").getMessage()
                 .endsWith("reflection.max_bounces: expected a whole number from 1 to 100, got 101"));
+        // reflection rays: default, a value that reaches the run's options, a bad one
+        assertEquals(org.solmass.irradiation.IrradiationSetup.REFLECTOR_RAYS, d.reflection().rays());
+        Study more = StudyReader.read(write("rr.json", base + ", \"reflection\": { \"rays\": 1024 } }"));
+        assertEquals(1024, more.reflection().rays());
+        assertTrue(StudyWriter.toJson(more).contains("\"rays\" : 1024"), StudyWriter.toJson(more));
+        assertEquals(more.reflection(), StudyReader.fromTree(StudyWriter.toTree(more), null, dir, "run.json").reflection());
+        assertTrue(fails(base + ", \"reflection\": { \"rays\": 0 } }").getMessage()
+                .endsWith("reflection.rays: expected a whole number from 1 to 1048576, got 0"));
         assertTrue(fails(base + ", \"pv\": { \"dc_ac_ratio\": 0.4 } }").getMessage()
                 .endsWith("pv.dc_ac_ratio: expected a number from 0.5 to 3, got 0.4"));
     }
