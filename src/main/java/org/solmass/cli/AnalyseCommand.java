@@ -36,6 +36,9 @@ public final class AnalyseCommand implements Callable<Integer> {
     @Mixin TerrainFlags terrain = new TerrainFlags();
     @Option(names = "--patch", paramLabel = "M", description = "patch size, metres (default 1)") Double patch;
     @Option(names = "--rays", paramLabel = "N", description = "hemisphere rays per patch (default 1024)") Integer rays;
+    @Option(names = "--reflection-rays", paramLabel = "N", description = "of those, rays that sample reflected light (default 256)") Integer reflectionRays;
+    @Option(names = "--max-bounces", paramLabel = "N", description = "most reflection bounces (default 20)") Integer maxBounces;
+    @Option(names = "--bounce-tolerance", paramLabel = "PCT", description = "stop reflection after a bounce adding at most PCT % (default 0.5)") Double bounceTolerance;
     @Mixin SkyFlag sky = new SkyFlag();
     @Option(names = "--albedo", paramLabel = "A", description = "ground albedo (default 0.2)") Double albedo;
     @Option(names = "--month-hour", description = "also write month-hour.csv (large)") Boolean monthHour;
@@ -64,7 +67,7 @@ public final class AnalyseCommand implements Callable<Integer> {
     Study resolve() {
         StudyOverrides ov = new StudyOverrides().model(model).analyse(analyse).context(context).patchM(patch).rays(rays)
                 .sky(sky.name).albedo(albedo).monthHourCsv(monthHour).threads(threads).out(out).sunHoursDates(sunHoursDates)
-                .gltf(gltf);
+                .gltf(gltf).reflectionRays(reflectionRays).maxBounces(maxBounces).bounceTolerancePct(bounceTolerance);
         modelFlags.applyTo(ov);
         site.applyTo(ov);
         climate.applyTo(ov);

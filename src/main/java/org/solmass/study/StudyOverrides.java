@@ -115,6 +115,12 @@ public final class StudyOverrides {
 
     public StudyOverrides patchM(Double m) { return set("--patch", "patch_m", m); }
     public StudyOverrides rays(Integer n) { return set("--rays", "rays", n); }
+    /** Hemisphere rays that sample reflected light (key {@code reflection.rays}). */
+    public StudyOverrides reflectionRays(Integer n) { return set("--reflection-rays", "reflection.rays", n); }
+    /** The most reflection bounces (key {@code reflection.max_bounces}). */
+    public StudyOverrides maxBounces(Integer n) { return set("--max-bounces", "reflection.max_bounces", n); }
+    /** Reflection stops after a bounce adding at most this percentage (key {@code reflection.tolerance_pct}). */
+    public StudyOverrides bounceTolerancePct(Double pct) { return set("--bounce-tolerance", "reflection.tolerance_pct", pct); }
     public StudyOverrides sky(String model) { return set("--sky", "sky", model); }
     public StudyOverrides timeBase(String base) { return set("--time-base", "time_base", base); }
     /** Ground albedo. */

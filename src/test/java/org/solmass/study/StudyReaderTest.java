@@ -271,6 +271,10 @@ class StudyReaderTest {
         assertEquals(Path.of("flag-out").toAbsolutePath().normalize(), s.outputs().folder()); // working directory, not the study folder
         InputException e = assertThrows(InputException.class, () -> StudyReader.read(p, new StudyOverrides().latitude(95.0)));
         assertEquals("--lat: expected a number from -90 to 90, got 95.0", e.getMessage());
+        Study r = StudyReader.read(p, new StudyOverrides().reflectionRays(1024).maxBounces(3).bounceTolerancePct(0.1));
+        assertEquals(new Study.Reflection(0.1, 3, 1024), r.reflection());
+        InputException b = assertThrows(InputException.class, () -> StudyReader.read(p, new StudyOverrides().maxBounces(0)));
+        assertEquals("--max-bounces: expected a whole number from 1 to 100, got 0", b.getMessage());
     }
 
     @Test
