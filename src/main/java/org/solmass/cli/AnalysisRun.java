@@ -371,8 +371,9 @@ public final class AnalysisRun {
             if (analysed.contains(model.blockNames().get(model.triangleBlock()[t]))) inA += area; else ctxA += area;
         }
         int threads = study.threads() > 0 ? study.threads() : Runtime.getRuntime().availableProcessors();
+        int rays = org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays());
         MemoryEstimate m = MemoryEstimate.beforePatching(inA, study.patchM(), ctxA, study.patchM() * CONTEXT_PATCH_FACTOR,
-                org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays()), true, threads);
+                rays, IrradiationSetup.reflectorRays(rays, study.reflection().rays()), true, threads);
         if (m.fits(MemoryEstimate.freeHeapBytes())) return;
         System.gc();
         m.requireFits(MemoryEstimate.freeHeapBytes(), study.patchM(), study.rays(), (long) Math.ceil(inA / (study.patchM() * study.patchM())),

@@ -90,12 +90,13 @@ public record MemoryEstimate(long bytes, long countBytes) {
      *
      * @param analysedAreaM2 area of the analysed blocks' faces, m2
      * @param contextAreaM2  area of the context blocks' faces, m2, patched at {@code contextPatchM}
+     * @param reflectorRays  the run's reflection rays ({@link IrradiationSetup#reflectorRays(int, int)})
      */
     public static MemoryEstimate beforePatching(double analysedAreaM2, double patchM, double contextAreaM2, double contextPatchM,
-                                                int raysPerPatch, boolean keepMonthHour, int threads) {
+                                                int raysPerPatch, int reflectorRays, boolean keepMonthHour, int threads) {
         long analysed = (long) Math.ceil(analysedAreaM2 / (patchM * patchM));
         long context = (long) Math.ceil(contextAreaM2 / (contextPatchM * contextPatchM));
-        MemoryEstimate m = of(analysed + context, analysed, raysPerPatch, 0, keepMonthHour, threads);
+        MemoryEstimate m = of(analysed + context, analysed, raysPerPatch, reflectorRays, 0, keepMonthHour, threads, StepTable.SLOTS);
         long objects = (analysed + context) * PATCH_OBJECT_BYTES;
         return new MemoryEstimate(m.bytes() + objects, m.countBytes() + objects);
     }

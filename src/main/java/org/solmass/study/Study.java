@@ -53,6 +53,8 @@ public record Study(String name, String description, Path source, Model model, S
 
     public static final double DEFAULT_PATCH_M = 1.0;
     public static final int DEFAULT_RAYS = 1024;
+    /** The most rays a study accepts, for {@code rays} and {@code reflection.rays}. */
+    public static final int MAX_RAYS = 1 << 20;
     public static final int DEFAULT_SUN_BINS = 4096;
     public static final int DEFAULT_STEP_MINUTES = 60;
 
@@ -109,8 +111,6 @@ public record Study(String name, String description, Path source, Model model, S
     public record Reflection(double tolerancePct, int maxBounces, int rays) {
         /** The largest {@code max_bounces} the study accepts. */
         public static final int MAX_BOUNCES = 100;
-        /** The largest {@code rays} the study accepts (as the study's own {@code rays}). */
-        public static final int MAX_RAYS = 1 << 20;
         public static final Reflection DEFAULTS = new Reflection(
                 100 * org.solmass.irradiation.IrradiationSetup.DEFAULT_BOUNCE_TOLERANCE,
                 org.solmass.irradiation.IrradiationSetup.DEFAULT_MAX_BOUNCES,

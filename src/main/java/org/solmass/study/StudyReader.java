@@ -164,7 +164,7 @@ public final class StudyReader {
         boolean groundGiven = c.has("ground_irradiance");
         GroundIrradiance ground = c.choice("ground_irradiance", GroundIrradiance.class, GroundIrradiance.SHADED);
         double patchM = c.positive("patch_m", Study.DEFAULT_PATCH_M, 0, 100);
-        int rays = c.integer("rays", Study.DEFAULT_RAYS, 1, 1 << 20);
+        int rays = c.integer("rays", Study.DEFAULT_RAYS, 1, Study.MAX_RAYS);
         SkyModel sky = SkyModels.byName(c.oneOf("sky", SkyModels.names(), SkyModels.standard().name()), "sky");
         TimeBaseChoice timeBase = c.choice("time_base", TimeBaseChoice.values(), TimeBaseChoice::label, TimeBaseChoice.AUTO);
         int sunBins = c.integer("sun_bins", Study.DEFAULT_SUN_BINS, 16, 1 << 20);
@@ -195,7 +195,7 @@ public final class StudyReader {
         Study.Reflection reflection = new Study.Reflection(
                 rf.positive("tolerance_pct", Study.Reflection.DEFAULTS.tolerancePct(), 0, 100),
                 rf.integer("max_bounces", Study.Reflection.DEFAULTS.maxBounces(), 1, Study.Reflection.MAX_BOUNCES),
-                rf.integer("rays", Study.Reflection.DEFAULTS.rays(), 1, Study.Reflection.MAX_RAYS));
+                rf.integer("rays", Study.Reflection.DEFAULTS.rays(), 1, Study.MAX_RAYS));
         rf.finish();
         c.finish();
 

@@ -160,7 +160,9 @@ record ModelCheck(MassingModel model, LengthUnit unit, List<String> notes, List<
         int threads = Runtime.getRuntime().availableProcessors();
         int raysRounded = HemisphereSampler.roundedRayCount(rays);
         double inA = areaM2(analysed, true), ctxA = areaM2(analysed, false);
-        MemoryEstimate m = MemoryEstimate.beforePatching(inA, patchM, ctxA, patchM * CONTEXT_PATCH_FACTOR, raysRounded, keepMonthHour, threads);
+        MemoryEstimate m = MemoryEstimate.beforePatching(inA, patchM, ctxA, patchM * CONTEXT_PATCH_FACTOR, raysRounded,
+                org.solmass.irradiation.IrradiationSetup.reflectorRays(raysRounded, org.solmass.irradiation.IrradiationSetup.REFLECTOR_RAYS),
+                keepMonthHour, threads); // the set-up panel's studies keep the default reflection rays
         long free = MemoryEstimate.freeHeapBytes();
         long patches = (long) Math.ceil(inA / (patchM * patchM));
         long ctx = (long) Math.ceil(ctxA / (patchM * CONTEXT_PATCH_FACTOR * patchM * CONTEXT_PATCH_FACTOR));

@@ -57,13 +57,21 @@ class MemoryEstimateTest {
     @Test
     void estimateBeforePatchingCountsAreaOverPatchSizeSquared() {
         // 9 km2 of roof at 1 m patches: 9 million patches, each at least its double[288] slot sums and its object
-        MemoryEstimate m = MemoryEstimate.beforePatching(9e6, 1.0, 0, 4.0, 16, false, 2);
+        MemoryEstimate m = MemoryEstimate.beforePatching(9e6, 1.0, 0, 4.0, 16, 16, false, 2);
         assertTrue(m.bytes() >= 9_000_000L * (288 * 8 + MemoryEstimate.PATCH_OBJECT_BYTES));
-        MemoryEstimate coarse = MemoryEstimate.beforePatching(9e6, 2.0, 0, 8.0, 16, false, 2);
+        MemoryEstimate coarse = MemoryEstimate.beforePatching(9e6, 2.0, 0, 8.0, 16, 16, false, 2);
         assertEquals(m.countBytes() / 4.0, coarse.countBytes(), m.countBytes() * 1e-6); // 2x the size, 1/4 the patches
         assertFalse(m.fits(512L << 20));
         double p = m.fittingPatchM(1.0, 512L << 20);
-        assertTrue(MemoryEstimate.beforePatching(9e6, p, 0, 4 * p, 16, false, 2).fits(512L << 20), "suggested " + p + " m");
+        assertTrue(MemoryEstimate.beforePatching(9e6, p, 0, 4 * p, 16, 16, false, 2).fits(512L << 20), "suggested " + p + " m");
+    }
+
+    @Test
+    void estimateBeforePatchingCountsTheStudysReflectionRays() {
+        // 1e6 m2 at 1 m: a million analysed patches, each keeping one reflector entry per reflection ray
+        long all = MemoryEstimate.beforePatching(1e6, 1.0, 0, 4.0, 1024, 1024, false, 2).countBytes();
+        long subset = MemoryEstimate.beforePatching(1e6, 1.0, 0, 4.0, 1024, 256, false, 2).countBytes();
+        assertEquals(1_000_000L * MemoryEstimate.PER_PATCH_PER_RAY * (1024 - 256), all - subset);
     }
 
     @Test
