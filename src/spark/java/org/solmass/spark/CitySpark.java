@@ -24,6 +24,9 @@ public final class CitySpark {
 
     private CitySpark() {}
 
+    /** Spark's setting for the number of partitions under which a shuffle writes one file per partition. */
+    static final String BYPASS_THRESHOLD = "spark.shuffle.sort.bypassMergeThreshold";
+
     /**
      * A session for a run.
      *
@@ -45,6 +48,11 @@ public final class CitySpark {
                     .config("spark.kryo.registrator", CityKryo.class.getName())
                     .config("spark.kryoserializer.buffer.max", "1g");
         }
+        // Spark's bypass-merge shuffle writer (used below 200 partitions) opens one file per receiving
+        // partition in every map task and then concatenates them: tiles x tiles files per exchange
+        // (6,561 at 81 tiles, each bounce). The sort-based writers write one file per map task; they
+        // are what Spark uses anyway from 200 tiles on (docs/city.md, "Serializer").
+        if (!given.contains(BYPASS_THRESHOLD)) b.config(BYPASS_THRESHOLD, "0");
         if (m.startsWith("local")) {
             try {
                 Files.createDirectories(work);

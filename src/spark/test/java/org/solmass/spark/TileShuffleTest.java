@@ -20,38 +20,63 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * {@link TileShuffle} against Spark's own {@code groupByKey} (a general-purpose library): the same
- * groups in the same partitions, below Spark's bypass-merge threshold (200 partitions) and above it,
- * where the serialized sort is used when the serializer allows relocation, as Kryo does.
+ * groups in the same partitions, with the run's bypass-merge threshold (0: the sort-based writers at
+ * every partition count) and with one the user gives (200: the bypass-merge writer below it, above it
+ * the serialized sort, used when the serializer allows relocation, as Kryo does).
  */
 class TileShuffleTest {
     @TempDir static Path dir;
 
+    /** The run's session: the sort-based shuffle writers at every partition count (bypass threshold 0, see {@link CitySpark}). */
     @Test
-    void groupsAsGroupByKeyDoesBelowAndAboveTheBypassThreshold() {
+    void groupsAsGroupByKeyDoesWithTheRunsShuffleWriters() {
         SparkSession spark = CitySpark.session("local[2]", dir.resolve("spark"), 4);
         try {
-            JavaSparkContext sc = JavaSparkContext.fromSparkContext(spark.sparkContext());
-            Random rnd = new Random(20261202);
-            List<Tuple2<Integer, double[]>> records = new ArrayList<>();
-            for (int i = 0; i < 3000; i++) records.add(new Tuple2<>(rnd.nextInt(400), new double[] {i, rnd.nextDouble()}));
-            for (int parts : new int[] {7, 260}) {
-                HashPartitioner p = new HashPartitioner(parts);
-                JavaPairRDD<Integer, double[]> in = sc.parallelizePairs(records, 5);
-                List<List<Tuple2<Integer, Iterable<double[]>>>> ours = TileShuffle.grouped(in, p).glom().collect();
-                List<List<Tuple2<Integer, Iterable<double[]>>>> spark2 = in.groupByKey(p).glom().collect();
-                assertEquals(parts, ours.size(), "partitions");
-                int groups = 0;
-                for (int q = 0; q < parts; q++) {
-                    Map<Integer, List<Double>> a = sorted(ours.get(q)), b = sorted(spark2.get(q));
-                    assertEquals(b, a, "partition " + q + " of " + parts);
-                    groups += a.size();
-                }
-                assertTrue(groups > 300, "groups compared: " + groups);
-                assertEquals(spark.sparkContext().getConf().get("spark.serializer", "").contains("Kryo"),
-                        new TileShuffle.ExecutorSerializer().supportsRelocationOfSerializedObjects(), "relocation as the configured serializer");
-            }
+            assertEquals("0", spark.sparkContext().getConf().get(CitySpark.BYPASS_THRESHOLD), "the run's bypass threshold");
+            compareWithGroupByKey(spark);
         } finally {
             spark.stop();
+        }
+    }
+
+    /** A threshold the user gives is kept: Spark's bypass-merge writer below it (7 partitions), the sort-based ones above (260). */
+    @Test
+    void groupsAsGroupByKeyDoesBelowAndAboveAGivenBypassThreshold() {
+        System.setProperty(CitySpark.BYPASS_THRESHOLD, "200");
+        SparkSession spark;
+        try {
+            spark = CitySpark.session("local[2]", dir.resolve("spark-given"), 4);
+        } finally {
+            System.clearProperty(CitySpark.BYPASS_THRESHOLD);
+        }
+        try {
+            assertEquals("200", spark.sparkContext().getConf().get(CitySpark.BYPASS_THRESHOLD), "the given bypass threshold");
+            compareWithGroupByKey(spark);
+        } finally {
+            spark.stop();
+        }
+    }
+
+    private static void compareWithGroupByKey(SparkSession spark) {
+        JavaSparkContext sc = JavaSparkContext.fromSparkContext(spark.sparkContext());
+        Random rnd = new Random(20261202);
+        List<Tuple2<Integer, double[]>> records = new ArrayList<>();
+        for (int i = 0; i < 3000; i++) records.add(new Tuple2<>(rnd.nextInt(400), new double[] {i, rnd.nextDouble()}));
+        for (int parts : new int[] {7, 260}) {
+            HashPartitioner p = new HashPartitioner(parts);
+            JavaPairRDD<Integer, double[]> in = sc.parallelizePairs(records, 5);
+            List<List<Tuple2<Integer, Iterable<double[]>>>> ours = TileShuffle.grouped(in, p).glom().collect();
+            List<List<Tuple2<Integer, Iterable<double[]>>>> spark2 = in.groupByKey(p).glom().collect();
+            assertEquals(parts, ours.size(), "partitions");
+            int groups = 0;
+            for (int q = 0; q < parts; q++) {
+                Map<Integer, List<Double>> a = sorted(ours.get(q)), b = sorted(spark2.get(q));
+                assertEquals(b, a, "partition " + q + " of " + parts);
+                groups += a.size();
+            }
+            assertTrue(groups > 300, "groups compared: " + groups);
+            assertEquals(spark.sparkContext().getConf().get("spark.serializer", "").contains("Kryo"),
+                    new TileShuffle.ExecutorSerializer().supportsRelocationOfSerializedObjects(), "relocation as the configured serializer");
         }
     }
 
