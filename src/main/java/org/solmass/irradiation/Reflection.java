@@ -1,5 +1,6 @@
 package org.solmass.irradiation;
 
+import org.solmass.model.Parallel;
 import java.util.stream.IntStream;
 
 /**
@@ -100,7 +101,7 @@ final class Reflection {
         int slotted = keepMonthHour ? n : 0;
         double[] fpMonth = cur; // bounce 1 reads no earlier bounce: cur holds the first pass's month sums meanwhile
         int stride = fp.stride();
-        IntStream.range(0, total).parallel().forEach(r -> {
+        Parallel.forEach(total, r -> {
             int base = r * stride, m0 = r * 12;
             for (int i = 0; i < ns; i++) fpMonth[m0 + liveMonth[i]] += firstPass[base + i];
         });
@@ -113,7 +114,7 @@ final class Reflection {
             if (b == 0) { // bounce 1: slot by slot where the month-hour table needs its profile
                 ThreadLocal<SlotBounce> scratch = ThreadLocal.withInitial(() -> new SlotBounce(fp));
                 int blocks = (slotted + SlotBounce.BLOCK - 1) / SlotBounce.BLOCK;
-                IntStream.range(0, blocks).parallel().forEach(bk -> {
+                Parallel.forEach(blocks, bk -> {
                     int r0 = bk * SlotBounce.BLOCK, r1 = Math.min(slotted, r0 + SlotBounce.BLOCK);
                     SlotBounce sb = scratch.get();
                     sb.sum(r0, r1, l, fp);
@@ -136,7 +137,7 @@ final class Reflection {
                     finish(r, n, dst, reflMonth, added, totalAnnual);
                 });
             } else { // later bounces month by month: W acts on every slot alike, so month sums are exact
-                IntStream.range(0, total).parallel().forEach(r -> {
+                Parallel.forEach(total, r -> {
                     monthBounce(r, l, src, dst);
                     finish(r, n, dst, reflMonth, added, totalAnnual);
                 });
@@ -177,7 +178,7 @@ final class Reflection {
         for (int b = 0; b < maxBounces; b++) {
             final double[] src = cur, dst = next;
             final boolean first = b == 0;
-            IntStream.range(0, total).parallel().forEach(r -> {
+            Parallel.forEach(total, r -> {
                 monthBounce(r, l, src, dst);
                 if (first) {
                     double g = l.ghiW()[r];
@@ -282,7 +283,7 @@ final class Reflection {
      */
     private static void laterBouncesIntoSlots(FirstPass fp, int n, double[][] reflMonth, double[] firstBounceMonth,
                                               float[] monthHour, int[] slotMonth, StepTable st) {
-        IntStream.range(0, n).parallel().forEach(p -> {
+        Parallel.forEach(n, p -> {
             double[] later = new double[12], fpMonth = new double[12], hoursMonth = new double[12];
             for (int m = 0; m < 12; m++) later[m] = reflMonth[m][p] - firstBounceMonth[p * 12 + m];
             int base = p * SLOTS;

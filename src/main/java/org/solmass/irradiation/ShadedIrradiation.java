@@ -1,5 +1,6 @@
 package org.solmass.irradiation;
 
+import org.solmass.model.Parallel;
 import org.solmass.climate.MonthHour;
 import org.solmass.scene.HemisphereSampler;
 import org.solmass.scene.SkyViewCalculator;
@@ -10,7 +11,6 @@ import org.solmass.sky.SkyModel;
 
 import java.util.Arrays;
 import java.util.concurrent.atomic.AtomicLong;
-import java.util.stream.IntStream;
 
 /**
  * The shading-aware irradiance of every receiver, step by step, summed into month-hour slots.
@@ -101,7 +101,7 @@ public final class ShadedIrradiation {
         AtomicLong done = new AtomicLong();
         long every = Math.max(1, total / 200);
         ThreadLocal<Worker> workers = ThreadLocal.withInitial(() -> new Worker(scene, in));
-        IntStream.range(0, total).parallel().forEach(r -> {
+        Parallel.forEach(total, r -> {
             Worker w = workers.get();
             w.firstPass(r, r < n);
             firstPass.put(r, w.slotTotal);
@@ -146,7 +146,7 @@ public final class ShadedIrradiation {
         float[] monthHour = ro.monthHourWh();
         double bgAnnual = background, ghiAnnual = ghi;
         long everyB = Math.max(1, n / 200);
-        IntStream.range(0, n).parallel().forEach(p -> {
+        Parallel.forEach(n, p -> {
             int base = p * SLOTS;
             float[] crown = canopyReflection == null ? null : canopyReflection[p]; // reflected light through the crowns
             if (monthHour != null) {

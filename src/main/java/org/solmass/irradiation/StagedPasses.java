@@ -1,5 +1,6 @@
 package org.solmass.irradiation;
 
+import org.solmass.model.Parallel;
 import org.solmass.scene.HemisphereSampler;
 import org.solmass.scene.Scene;
 
@@ -38,7 +39,7 @@ public final class StagedPasses {
         FirstPasses out = new FirstPasses(receivers.length, in.canopy() != null);
         org.solmass.scene.KernelWarmup.awaitFor(receivers.length); // compiled ray kernels before the first receiver
         ThreadLocal<ShadedIrradiation.Worker> workers = ThreadLocal.withInitial(() -> new ShadedIrradiation.Worker(scene, in));
-        IntStream.range(0, receivers.length).parallel().forEach(i -> {
+        Parallel.forEach(receivers.length, i -> {
             int r = receivers[i];
             ShadedIrradiation.Worker w = workers.get();
             w.firstPass(r, r < n);

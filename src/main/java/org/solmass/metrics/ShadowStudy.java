@@ -1,5 +1,6 @@
 package org.solmass.metrics;
 
+import org.solmass.model.Parallel;
 import org.solmass.model.MassingModel;
 import org.solmass.model.TriangleGeometry;
 import org.solmass.model.Vec3;
@@ -18,7 +19,6 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.stream.IntStream;
 
 /**
  * Shadow study: which patches are in direct sun at chosen dates and times, computed with the ray
@@ -113,7 +113,7 @@ public final class ShadowStudy {
         Vec3 s = sun.direction();
         double[] dir = {s.x(), s.y(), s.z()};
         ThreadLocal<BundleTracer> tracers = ThreadLocal.withInitial(scene::bundleTracer);
-        IntStream.range(0, patches.size()).parallel().forEach(p -> {
+        Parallel.forEach(patches.size(), p -> {
             Patch q = patches.get(p);
             if (q.normal().dot(s) <= 0) return;
             double[] o = new double[3];

@@ -1,5 +1,6 @@
 package org.solmass.metrics;
 
+import org.solmass.model.Parallel;
 import org.solmass.scene.Scene;
 import org.solmass.scene.BundleTracer;
 import org.solmass.sun.SolarCalculator;
@@ -80,7 +81,7 @@ public final class SunHoursOnDate {
         double[] out = new double[patches.size()];
         int m = sunDirs.length / 3;
         ThreadLocal<BundleTracer> tracers = ThreadLocal.withInitial(scene::bundleTracer);
-        IntStream.range(0, patches.size()).parallel().forEach(p -> {
+        Parallel.forEach(patches.size(), p -> {
             BundleTracer tr = tracers.get();
             Patch q = patches.get(p);
             double[] o = new double[3];

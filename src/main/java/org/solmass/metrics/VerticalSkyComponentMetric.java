@@ -1,5 +1,6 @@
 package org.solmass.metrics;
 
+import org.solmass.model.Parallel;
 import org.solmass.scene.HemisphereSampler;
 import org.solmass.sky.CieSky;
 import org.solmass.surface.Patch;
@@ -13,7 +14,6 @@ import org.solmass.table.Unit;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
-import java.util.stream.IntStream;
 
 /**
  * Vertical sky component of every facade patch: the illuminance the patch receives directly from the
@@ -56,7 +56,7 @@ public final class VerticalSkyComponentMetric implements Metric {
         Arrays.fill(vsc, Double.NaN);
         int rays = ctx.rays() > 0 ? ctx.rays() : HemisphereSampler.DEFAULT_RAYS;
         ThreadLocal<HemisphereSampler> samplers = ThreadLocal.withInitial(() -> new HemisphereSampler(ctx.scene(), rays));
-        IntStream.range(0, patches.size()).parallel().forEach(p -> {
+        Parallel.forEach(patches.size(), p -> {
             Patch q = patches.get(p);
             if (q.kind() != SurfaceKind.FACADE) return;
             HemisphereSampler s = samplers.get();

@@ -1,5 +1,6 @@
 package org.solmass.pv;
 
+import org.solmass.model.Parallel;
 import org.solmass.irradiation.HorizonBand;
 import org.solmass.irradiation.SunDirections;
 import org.solmass.model.Vec3;
@@ -10,7 +11,6 @@ import org.solmass.scene.SkyViewCalculator;
 import org.solmass.scene.ViewFactors;
 
 import java.util.List;
-import java.util.stream.IntStream;
 
 /**
  * What each substring of each placed module sees, measured with the ray engine on the scene that
@@ -92,7 +92,7 @@ public final class ModuleSight {
         ThreadLocal<Worker> workers = ThreadLocal.withInitial(() -> new Worker(scene, sun, rays, along * across));
         // flags that flag nothing classify as none do, and without flags the classes need any-hit queries only
         boolean[] ground = HemisphereSampler.anyFlagged(triangleIsGround) ? triangleIsGround : null;
-        IntStream.range(0, modules.size()).parallel().forEach(m ->
+        Parallel.forEach(modules.size(), m ->
                 workers.get().module(s, m, ground, runSeed, along, across));
         return s;
     }

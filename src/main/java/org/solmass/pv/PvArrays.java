@@ -1,5 +1,6 @@
 package org.solmass.pv;
 
+import org.solmass.model.Parallel;
 import org.solmass.climate.Step;
 import org.solmass.climate.WeatherSeries;
 import org.solmass.irradiation.SunDirections;
@@ -10,7 +11,6 @@ import java.time.LocalDateTime;
 import java.time.ZoneId;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.stream.IntStream;
 
 /**
  * The PV stage of a run: the racks become geometry, every module substring's plane-of-array
@@ -115,7 +115,7 @@ public final class PvArrays {
         EnergyBalance[] energy = new EnergyBalance[n];
         double[] cell = new double[n];
         // steps in parallel, each into its own slots; summed below in step order (thread-count independent)
-        IntStream.range(0, n).parallel().forEach(st -> {
+        Parallel.forEach(n, st -> {
             Step step = w.step(st);
             energy[st] = EnergyBalance.ZERO;
             cell[st] = Double.NaN;

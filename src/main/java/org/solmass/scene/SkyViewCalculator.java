@@ -1,11 +1,11 @@
 package org.solmass.scene;
 
+import org.solmass.model.Parallel;
 import org.solmass.surface.Patch;
 
 import java.util.List;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.IntConsumer;
-import java.util.stream.IntStream;
 
 /**
  * Sky, ground and obstruction view factors of many patches by cosine-weighted stratified Monte Carlo
@@ -58,7 +58,7 @@ public final class SkyViewCalculator {
         ThreadLocal<Worker> workers = ThreadLocal.withInitial(() -> new Worker(scene, k * k));
         AtomicInteger done = new AtomicInteger();
         int step = Math.max(1, n / 100);
-        IntStream.range(0, n).parallel().forEach(i -> {
+        Parallel.forEach(n, i -> {
             out[i] = workers.get().compute(patches.get(i), seed, triangleIsGround);
             int d = done.incrementAndGet();
             if (progress != null && (d % step == 0 || d == n)) progress.accept(d);
