@@ -1,5 +1,6 @@
 package org.solmass.irradiation;
 
+import org.solmass.model.Parallel;
 import org.solmass.surface.SurfaceFrame;
 
 import java.util.Arrays;
@@ -182,13 +183,34 @@ final class ReflectorIndex {
         int[] fill = Arrays.copyOf(counts, total);
         for (int r = 0; r < nr; r++) if (bucketOf[r] >= 0) items[fill[bucketOf[r]]++] = r;
         cells = new int[Math.multiplyExact(total, BUCKET)];
-        Lists out = new Lists();
-        for (int s = 0; s < ns; s++) {
+        // surfaces in parallel, each into its own buckets' records and its own lists; the lists are then
+        // laid end to end in surface order. A list holds receivers of one surface only, so no list is
+        // shared between surfaces and this is the layout one pass over the surfaces in order gives
+        // (ReflectorIndexTest compares them).
+        Lists[] per = new Lists[ns];
+        Parallel.forEach(ns, s -> {
+            if (gnx[s] == 0) return;
+            Lists out = new Lists();
             for (int j = 0; j < gny[s]; j++) {
                 for (int i = 0; i < gnx[s]; i++) split(s, i, j, candidates(s, i, j), out);
             }
+            per[s] = out;
+        });
+        long listed = 0;
+        for (Lists l : per) if (l != null) listed += l.n;
+        lists = new int[Math.toIntExact(listed)];
+        int off = 0;
+        for (int s = 0; s < ns; s++) {
+            Lists l = per[s];
+            if (l == null) continue;
+            System.arraycopy(l.v, 0, lists, off, l.n);
+            if (off > 0) { // a cell naming list ~k of its surface now names ~(k + off)
+                for (int b = gStart[s], end = b + gnx[s] * gny[s]; b < end; b++) {
+                    for (int k = b * BUCKET + 4, last = b * BUCKET + 12; k <= last; k++) if (cells[k] < 0) cells[k] -= off;
+                }
+            }
+            off += l.n;
         }
-        lists = Arrays.copyOf(out.v, out.n);
         if (probeGrid != null) {
             px0 = probeGrid[0];
             py0 = probeGrid[1];
@@ -205,7 +227,7 @@ final class ReflectorIndex {
 
     /** The cells' lists as they are built: length, then receivers, list after list; each list once. */
     private static final class Lists {
-        int[] v = new int[1024];
+        int[] v = new int[16];
         int n;
         private final java.util.HashMap<java.util.List<Integer>, Integer> at = new java.util.HashMap<>();
 
@@ -349,6 +371,11 @@ final class ReflectorIndex {
                 cells[base + 4 + 3 * sj + si] = p.length == 1 ? p[0] : ~out.add(p);
             }
         }
+    }
+
+    /** Whether both indexes hold the same records and lists, int for int (built on different thread counts, for the test). */
+    boolean sameLayout(ReflectorIndex o) {
+        return Arrays.equals(cells, o.cells) && Arrays.equals(lists, o.lists);
     }
 
     /** Receiver nearest to world point p on the surface of triangle {@code tri}, or -1 if that surface has none. */

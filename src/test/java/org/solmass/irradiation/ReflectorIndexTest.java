@@ -93,6 +93,50 @@ class ReflectorIndexTest {
         }
     }
 
+    /**
+     * Surfaces are indexed in parallel and their lists laid end to end: the records and lists are
+     * those of one thread going through the surfaces in order, and the answers stay the nearest centre.
+     */
+    @Test
+    void parallelIndexEqualsTheOneThreadIndex() throws Exception {
+        int ns = 40, per = 9 * 7;
+        SplittableRandom rnd = new SplittableRandom(23);
+        SurfaceFrame[] frames = new SurfaceFrame[ns];
+        int[] triSurf = new int[ns];
+        int nr = ns * per;
+        int[] surf = new int[nr];
+        double[] centres = new double[3 * nr], lx = new double[nr], ly = new double[nr];
+        for (int s = 0, r = 0; s < ns; s++) {
+            frames[s] = SurfaceFrame.of(new Vec3(rnd.nextDouble(-1, 1), rnd.nextDouble(-1, 1), rnd.nextDouble(0.1, 1)),
+                    new Vec3(rnd.nextDouble(-100, 100), rnd.nextDouble(-100, 100), rnd.nextDouble(0, 30)));
+            triSurf[s] = s;
+            for (int j = 0; j < 7; j++) {
+                for (int i = 0; i < 9; i++, r++) {
+                    put(frames[s], s, 1.5 * (i + 0.5 + 0.2 * (rnd.nextDouble() - 0.5)), 1.5 * (j + 0.5 + 0.2 * (rnd.nextDouble() - 0.5)),
+                            r, surf, centres, lx, ly);
+                }
+            }
+        }
+        ReflectorIndex one = build(1, triSurf, frames, surf, centres), four = build(4, triSurf, frames, surf, centres);
+        org.junit.jupiter.api.Assertions.assertTrue(one.sameLayout(four), "records and lists built on 1 and on 4 threads");
+        for (int k = 0; k < 20000; k++) {
+            int s = k % ns;
+            double x = -1 + rnd.nextDouble() * 15.5, y = -1 + rnd.nextDouble() * 12.5;
+            Vec3 p = frames[s].toWorld(x, y);
+            assertEquals(nearest(lx, ly, surf, s, frames[s].localX(p.x(), p.y(), p.z()), frames[s].localY(p.x(), p.y(), p.z())),
+                    four.onTriangle(s, p.x(), p.y(), p.z()), "point " + x + ", " + y + " on surface " + s);
+        }
+    }
+
+    private static ReflectorIndex build(int threads, int[] triSurf, SurfaceFrame[] frames, int[] surf, double[] centres) throws Exception {
+        java.util.concurrent.ForkJoinPool pool = new java.util.concurrent.ForkJoinPool(threads);
+        try {
+            return pool.submit(() -> new ReflectorIndex(triSurf, frames, surf, centres, 1.5, null)).get();
+        } finally {
+            pool.shutdown();
+        }
+    }
+
     private static void put(SurfaceFrame f, int s, double x, double y, int r, int[] surf, double[] centres, double[] lx, double[] ly) {
         Vec3 c = f.toWorld(x, y);
         surf[r] = s;
