@@ -1,9 +1,13 @@
 package org.solmass.model;
 
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.List;
 import java.util.concurrent.ForkJoinPool;
 import java.util.concurrent.ForkJoinTask;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.IntConsumer;
+import java.util.function.IntFunction;
 import java.util.stream.IntStream;
 
 /**
@@ -34,6 +38,14 @@ public final class Parallel {
     public static void forEach(int n, IntConsumer body) {
         int workers = workers();
         forEach(n, Math.max(1, Math.min(MAX_CHUNK, n / (workers * CHUNKS_PER_WORKER))), workers, body);
+    }
+
+    /** {@code f} of every index in [0, n), computed as {@link #forEach(int, IntConsumer)} does, as a list in index order. */
+    public static <T> List<T> map(int n, IntFunction<T> f) {
+        Object[] out = new Object[Math.max(0, n)];
+        forEach(n, i -> out[i] = f.apply(i));
+        @SuppressWarnings("unchecked") List<T> l = (List<T>) Arrays.asList(out);
+        return Collections.unmodifiableList(l);
     }
 
     /** As {@link #forEach(int, IntConsumer)} with chunks of {@code chunk} indices and at most {@code workers} tasks. */

@@ -9,6 +9,7 @@ import org.locationtech.jts.operation.overlayng.OverlayNG;
 import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
 import org.solmass.InputException;
 import org.solmass.model.MassingModel;
+import org.solmass.model.Parallel;
 import org.solmass.model.Vec3;
 
 import java.util.ArrayList;
@@ -17,7 +18,6 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.stream.IntStream;
 
 /**
  * Splits analysed surfaces into square grid patches.
@@ -58,7 +58,7 @@ public final class Patcher {
         // Faces hidden against a touching block are not patched (HiddenFaces).
         Geometry[] exposed = HiddenFaces.exposed(surfaces);
         // Per surface in parallel: cut, merge slivers, build patches with surface-local indices.
-        List<List<Patch>> perSurface = IntStream.range(0, surfaces.size()).parallel().mapToObj(i -> {
+        List<List<Patch>> perSurface = Parallel.map(surfaces.size(), i -> {
             Surface sf = surfaces.get(i);
             if (!analysed[sf.block()]) return List.<Patch>of();
             if (sf.kind() == SurfaceKind.UNDERSIDE && !options.includeUndersides()) return List.<Patch>of();
@@ -70,7 +70,7 @@ public final class Patcher {
                 for (Piece p : pieces) if (p.alive && hasArea(p.geom)) ps.add(toPatch(ps.size(), model, sf, p, s));
             }
             return ps;
-        }).toList();
+        });
         List<Patch> patches = new ArrayList<>();
         boolean ground = false;
         for (Surface sf : surfaces) ground |= sf.kind() == SurfaceKind.GROUND;

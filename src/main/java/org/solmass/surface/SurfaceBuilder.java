@@ -14,6 +14,7 @@ import org.locationtech.jts.geom.util.AffineTransformation;
 import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
 import org.solmass.model.IntList;
 import org.solmass.model.MassingModel;
+import org.solmass.model.Parallel;
 import org.solmass.model.SemanticKind;
 import org.solmass.model.TriangleGeometry;
 import org.solmass.model.VertexWelder;
@@ -23,7 +24,6 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.stream.IntStream;
 
 /**
  * Merges the coplanar, edge-connected triangles of each block into planar surfaces.
@@ -84,8 +84,7 @@ public final class SurfaceBuilder {
         List<IntList> groups = groupCoplanar(m);
         double ground = m.minZ(), weld = weldTolerance(m);
         int[] rep = VertexWelder.weld(m.vertices(), weld);
-        List<List<Draft>> perGroup = IntStream.range(0, groups.size()).parallel()
-                .mapToObj(g -> unite(m, groups.get(g), rep, weld, ground)).toList();
+        List<List<Draft>> perGroup = Parallel.map(groups.size(), g -> unite(m, groups.get(g), rep, weld, ground));
         List<Surface> out = new ArrayList<>();
         int[] perBlock = new int[m.blockNames().size()];
         for (List<Draft> ds : perGroup) {

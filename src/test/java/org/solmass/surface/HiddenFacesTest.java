@@ -38,4 +38,32 @@ class HiddenFacesTest {
         PatchSet ps = Patcher.build(m, new PatchOptions(1.0, Set.of(), false));
         assertEquals(0, ps.hiddenAreaM2(), 1e-9);
     }
+
+    /**
+     * A terrace of 30 boxes of random widths and heights, touching, 100 km from the origin (plane offsets
+     * of 10^5 m, where the search window by plane offset must not lose a pair to rounding), one box
+     * written twice under two names. Analytic: each shared wall hides 8 m x the lower height on both
+     * sides; the copied box's faces are duplicates of the original's (its walls against its neighbours
+     * hidden as well).
+     */
+    @Test
+    void aTerraceFarFromTheOriginHidesEverySharedWall() {
+        java.util.SplittableRandom rnd = new java.util.SplittableRandom(30);
+        StringBuilder obj = new StringBuilder();
+        double x = 100_000, expectedHidden = 0, prevH = 0;
+        int copied = 17;
+        for (int i = 0; i < 30; i++) {
+            double w = 4 + Math.floor(rnd.nextDouble() * 8), h = 3 * (1 + rnd.nextInt(6));
+            obj.append(Boxes.onGround(x, 50_000, x + w, 50_008, h).obj("b" + i));
+            if (i == copied) obj.append(Boxes.onGround(x, 50_000, x + w, 50_008, h).obj("copy"));
+            if (i > 0) expectedHidden += 2 * 8 * Math.min(h, prevH) * (i == copied || i == copied + 1 ? 1.5 : 1);
+            prevH = h;
+            x += w;
+        }
+        var m = ObjReader.parse(obj.toString(), "terrace.obj", ModelOptions.defaults()).model();
+        PatchSet ps = Patcher.build(m, new PatchOptions(1.0, Set.of(), false));
+        assertEquals(expectedHidden, ps.hiddenAreaM2(), 1e-6 * expectedHidden, "hidden wall area");
+        var dups = HiddenFaces.duplicates(SurfaceBuilder.build(m));
+        org.junit.jupiter.api.Assertions.assertTrue(dups.size() >= 5, "the copy's roof and walls are duplicates: " + dups);
+    }
 }
