@@ -22,7 +22,8 @@ public final class HorizonProfile {
     private final double tanMax;
     /**
      * The squares of the tangents of the highest and lowest elevation, widened by {@link #SQUARE_MARGIN}
-     * (0 where too small to compare safely): see {@link #obstructs}.
+     * (-1 and 0 where too small to compare safely or the profile too steep: no quick answer from them):
+     * see {@link #obstructs}.
      */
     private final double tan2MaxUp, tan2MinDown;
     /**
