@@ -32,6 +32,12 @@ public final class HorizonProfile {
      * not used (one sample, or sectors narrower than {@link #SECTOR_MIN_DEG}).
      */
     private final double[] sectorHi, sectorLo;
+    /**
+     * Per sector i, the tangents at its two samples and the slopes of tan(elevation) in the sector's
+     * fraction f at either end: {t0, t1, t0', t1'} at {@code 4 i} (see {@link #obstructs}); null where
+     * the sector test is not used.
+     */
+    private final double[] sectorTan;
 
     /**
      * Relative margin of the square test in {@link #obstructs}: far above the rounding of the few
@@ -48,6 +54,8 @@ public final class HorizonProfile {
      * a neighbour, both covered by the sector's bracket.
      */
     static final double SECTOR_MIN_DEG = 0.03;
+    /** Bound on the error of {@link #sectorPosition}'s azimuth used by {@link #obstructs}, degrees: 1e-5 rad (5.73e-4 degrees) rounded up. */
+    static final double AZIMUTH_ERROR_DEG = 1e-3;
 
     /**
      * @param elevationDeg elevation angle at azimuths {@code i 360/n}, degrees, each in [0, 90)
@@ -74,6 +82,15 @@ public final class HorizonProfile {
         if (squares && n > 1 && stepDeg >= SECTOR_MIN_DEG && tan2MaxUp > 0) {
             sectorHi = new double[n];
             sectorLo = new double[n];
+            sectorTan = new double[4 * n];
+            for (int i = 0; i < n; i++) {
+                double e0 = elevationDeg[i], e1 = elevationDeg[(i + 1) % n], d = Math.toRadians(e1 - e0);
+                double t0 = Math.tan(Math.toRadians(e0)), t1 = Math.tan(Math.toRadians(e1));
+                sectorTan[4 * i] = t0;
+                sectorTan[4 * i + 1] = t1;
+                sectorTan[4 * i + 2] = d * (1 + t0 * t0); // d tan(e(f)) / df = (e1 - e0) sec^2(e), in radians
+                sectorTan[4 * i + 3] = d * (1 + t1 * t1);
+            }
             for (int i = 0; i < n; i++) {
                 double hi = 0, lo = 90;
                 for (int k = -1; k <= 2; k++) {
@@ -89,25 +106,23 @@ public final class HorizonProfile {
             }
         } else {
             sectorHi = sectorLo = null;
+            sectorTan = null;
         }
     }
 
     /**
-     * The sector (0 to n - 1) of the azimuth of (dx, dy) from north, clockwise, from an arc tangent
-     * within 1e-5 rad (Abramowitz and Stegun, Handbook of Mathematical Functions, 4.4.49: a degree-9
-     * odd polynomial on [0, 1]); (dx, dy) not both zero. It may name a neighbour of the exact sector
-     * next to a sample azimuth.
+     * The azimuth of (dx, dy) from north, clockwise, in sample steps (sector and fraction, 0 to n),
+     * from an arc tangent within 1e-5 rad (Abramowitz and Stegun, Handbook of Mathematical Functions,
+     * 4.4.49: a degree-9 odd polynomial on [0, 1]); (dx, dy) not both zero.
      */
-    private int sector(double dx, double dy) {
+    private double sectorPosition(double dx, double dy) {
         double ax = Math.abs(dx), ay = Math.abs(dy);
         boolean steep = ax > ay;
         double t = steep ? ay / ax : ax / ay, t2 = t * t;
         double at = t * (0.9998660 + t2 * (-0.3302995 + t2 * (0.1801410 + t2 * (-0.0851330 + t2 * 0.0208351))));
         double fromY = steep ? Math.PI / 2 - at : at; // angle from the +y or -y axis towards x, radians
         double az = dy >= 0 ? (dx >= 0 ? fromY : 2 * Math.PI - fromY) : (dx >= 0 ? Math.PI - fromY : Math.PI + fromY);
-        int i = (int) (Math.toDegrees(az) / stepDeg);
-        int n = sectorHi.length;
-        return i >= n ? i - n : Math.max(0, i);
+        return Math.toDegrees(az) / stepDeg;
     }
 
     /** The same elevation in every direction. */
@@ -152,10 +167,32 @@ public final class HorizonProfile {
         if (tan2MaxUp > 0 && z2 > SQUARE_LOW && z2 < SQUARE_HIGH && s > SQUARE_LOW && s < SQUARE_HIGH) {
             if (z2 > s * tan2MaxUp) return false;
             if (z2 < s * tan2MinDown) return true;
-            if (sectorHi != null) { // the same on the sector's bracket
-                int i = sector(dx, dy);
-                if (z2 > s * sectorHi[i]) return false;
-                if (z2 < s * sectorLo[i]) return true;
+            if (sectorHi != null) {
+                int n = sectorHi.length;
+                double pos = sectorPosition(dx, dy);
+                int i = (int) pos;
+                double f = pos - i, df = AZIMUTH_ERROR_DEG / stepDeg;
+                if (i >= n) i -= n;
+                if (f > df && f < 1 - df) {
+                    // inside one sector for sure, at fraction f within df: tan of the profile there lies
+                    // under the chord between the samples' tangents and over the tangent lines at both
+                    // ends (tan(e(f)) is convex in f: e is linear in f, tan convex on [0, 90) degrees)
+                    int o = 4 * i;
+                    double t0 = sectorTan[o], t1 = sectorTan[o + 1];
+                    double p0 = sectorTan[o + 2], p1 = sectorTan[o + 3];
+                    // each bound where f's uncertainty puts it lowest (lower bounds) or highest (the chord)
+                    double hi = t0 + (t1 - t0) * (t1 >= t0 ? f + df : f - df);
+                    double lo = Math.max(t0 + p0 * (p0 >= 0 ? f - df : f + df), t1 - p1 * (1 - (p1 >= 0 ? f - df : f + df)));
+                    // a bound far smaller than its terms may have lost its relative precision: not used
+                    if (t0 == 0 && t1 == 0) return false; // a flat 0 sector: every rising direction is open
+                    if (hi > 1e-4 * (t0 + t1) && z2 > s * hi * hi * (1 + SQUARE_MARGIN)) return false;
+                    if (lo > 1e-4 * (t0 + t1 + Math.abs(p0) + Math.abs(p1)) && lo * lo >= TAN2_LOW
+                            && z2 < s * lo * lo * (1 - SQUARE_MARGIN)) return true;
+                } else { // next to a sample azimuth: the bracket of the samples around it
+                    if (f >= 0.5) i = i + 1 == n ? 0 : i + 1; // the sample nearest: its sector's bracket covers both sides
+                    if (z2 > s * sectorHi[i]) return false;
+                    if (z2 < s * sectorLo[i]) return true;
+                }
             }
         }
         return obstructsByLookup(dx, dy, dz);

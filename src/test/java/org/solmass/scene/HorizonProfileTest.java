@@ -106,6 +106,44 @@ class HorizonProfileTest {
         }
     }
 
+    /**
+     * Directions at the profile itself (its interpolated elevation at random azimuths inside the
+     * sectors and within 1e-3 degrees of a sample), moved by a few ulps and by small relative steps:
+     * where the chord and tangent-line bounds inside a sector must leave the answer to the lookup.
+     */
+    @Test
+    void quickDecisionEqualsTheLookupAtTheInterpolatedProfile() {
+        SplittableRandom r = new SplittableRandom(11);
+        for (int n : new int[]{360, 36, 7200}) {
+            double[] e = new double[n];
+            for (int i = 0; i < n; i++) e[i] = i % 11 < 2 ? 0 : r.nextDouble() < 0.1 ? r.nextDouble(60, 89) : r.nextDouble(0, 25);
+            HorizonProfile h = new HorizonProfile(e);
+            double step = 360.0 / n;
+            double[] rel = {0, 1e-15, -1e-15, 1e-12, -1e-12, 1e-10, -1e-10, 1e-9, -1e-9, 1e-8, -1e-8, 1e-6, -1e-6, 1e-4, -1e-4};
+            int checked = 0, obstructed = 0;
+            for (int k = 0; k < 25_000; k++) {
+                int i = r.nextInt(n);
+                double at = k % 4 == 0 ? r.nextDouble(-1e-3, 1e-3) / step : r.nextDouble(); // next to sample i, or inside its sector
+                double azDeg = (i + at) * step, a = Math.toRadians(azDeg);
+                double dx = Math.sin(a), dy = Math.cos(a), len = k % 2 == 0 ? 1 : 0.37 + r.nextDouble();
+                double t = Math.tan(Math.toRadians(h.elevationDegAt(Math.toDegrees(Math.atan2(dx, dy)))));
+                for (double q : rel) {
+                    double z = t * (1 + q);
+                    if (!(z > 0)) z = 1e-9 * (1 + q);
+                    for (int u = -2; u <= 2; u++) {
+                        double zz = z;
+                        for (int m = 0; m < Math.abs(u); m++) zz = u > 0 ? Math.nextUp(zz) : Math.nextDown(zz);
+                        boolean want = h.obstructsByLookup(dx * len, dy * len, zz * len);
+                        assertEquals(want, h.obstructs(dx * len, dy * len, zz * len), n + " samples, azimuth " + azDeg + ", dz " + zz);
+                        checked++;
+                        if (want) obstructed++;
+                    }
+                }
+            }
+            assertTrue(obstructed > checked / 5 && obstructed < checked * 4 / 5, obstructed + " of " + checked);
+        }
+    }
+
     /** The rule itself (analytic): straight up is open, straight down and the horizontal are obstructed, 10 degrees over a 5 degree horizon is open. */
     @Test
     void plainDirections() {
