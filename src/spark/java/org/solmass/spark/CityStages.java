@@ -127,7 +127,7 @@ final class CityStages {
             int n = plan.tiles().size();
             Integer[] order = new Integer[n];
             for (int i = 0; i < n; i++) order[i] = i;
-            java.util.Arrays.sort(order, (a, b) -> {
+            Arrays.sort(order, (a, b) -> {
                 int c = Integer.compare(plan.tile(b).receivers().length, plan.tile(a).receivers().length);
                 return c != 0 ? c : Integer.compare(a, b);
             });

@@ -56,8 +56,7 @@ class HorizonProfileTest {
                 for (double s : steps) {
                     double dz = t * (1 + s);
                     for (int u = -3; u <= 3; u++) {
-                        double z = dz;
-                        for (int k = 0; k < Math.abs(u); k++) z = u > 0 ? Math.nextUp(z) : Math.nextDown(z);
+                        double z = ulps(dz, u);
                         assertEquals(h.obstructsByLookup(dx, dy, z), h.obstructs(dx, dy, z), "azimuth " + az / 10.0 + ", dz " + z);
                         checked++;
                     }
@@ -91,8 +90,7 @@ class HorizonProfileTest {
                             double z = t * (1 + q);
                             if (!(z > 0)) z = 1e-12 * (1 + q);
                             for (int u = -2; u <= 2; u++) {
-                                double zz = z;
-                                for (int m = 0; m < Math.abs(u); m++) zz = u > 0 ? Math.nextUp(zz) : Math.nextDown(zz);
+                                double zz = ulps(z, u);
                                 boolean want = h.obstructsByLookup(dx, dy, zz);
                                 assertEquals(want, h.obstructs(dx, dy, zz), n + " samples, azimuth " + (i + at) * step + ", dz " + zz);
                                 checked++;
@@ -131,8 +129,7 @@ class HorizonProfileTest {
                     double z = t * (1 + q);
                     if (!(z > 0)) z = 1e-9 * (1 + q);
                     for (int u = -2; u <= 2; u++) {
-                        double zz = z;
-                        for (int m = 0; m < Math.abs(u); m++) zz = u > 0 ? Math.nextUp(zz) : Math.nextDown(zz);
+                        double zz = ulps(z, u);
                         boolean want = h.obstructsByLookup(dx * len, dy * len, zz * len);
                         assertEquals(want, h.obstructs(dx * len, dy * len, zz * len), n + " samples, azimuth " + azDeg + ", dz " + zz);
                         checked++;
@@ -142,6 +139,12 @@ class HorizonProfileTest {
             }
             assertTrue(obstructed > checked / 5 && obstructed < checked * 4 / 5, obstructed + " of " + checked);
         }
+    }
+
+    /** {@code z} moved by {@code u} ulps (up for u > 0, down for u < 0). */
+    private static double ulps(double z, int u) {
+        for (int k = 0; k < Math.abs(u); k++) z = u > 0 ? Math.nextUp(z) : Math.nextDown(z);
+        return z;
     }
 
     /** The rule itself (analytic): straight up is open, straight down and the horizontal are obstructed, 10 degrees over a 5 degree horizon is open. */
