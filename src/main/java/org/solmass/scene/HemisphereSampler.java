@@ -290,7 +290,7 @@ public final class HemisphereSampler {
             return m;
         }
         directions(nx, ny, nz, streamSeed, dir);
-        for (int q = 0; q < m; q++) System.arraycopy(dir, 3 * subset[q], partDir, 3 * q, 3);
+        for (int q = 0; q < m; q++) copyDirection(dir, subset[q], partDir, q);
         bundle.closestHit(ox, oy, oz, partDir, m, hitTri, hitDist);
         for (int q = 0; q < m; q++) {
             int s = subset[q];
@@ -306,7 +306,7 @@ public final class HemisphereSampler {
                 double t = (scene.groundZ() - oz) / dz;
                 if (t > 0) tg = t;
             }
-            System.arraycopy(dir, 3 * s, partDir, 3 * r, 3);
+            copyDirection(dir, s, partDir, r);
             groundT[r] = tg;
             restRay[r++] = s;
         }
@@ -320,6 +320,13 @@ public final class HemisphereSampler {
             else cls[s] = dir[3 * s + 2] < 0 ? GROUND : SKY;
         }
         return m;
+    }
+
+    /** {@code to[3r..3r+2] = from[3s..3s+2]}: three stores, cheaper than a call to arraycopy per ray. */
+    private static void copyDirection(double[] from, int s, double[] to, int r) {
+        to[3 * r] = from[3 * s];
+        to[3 * r + 1] = from[3 * s + 1];
+        to[3 * r + 2] = from[3 * s + 2];
     }
 
     /**
