@@ -1,6 +1,7 @@
 package org.solmass.irradiation;
 
 import org.solmass.scene.BundleTracer;
+import org.solmass.scene.Scene;
 
 /**
  * The rays that measure how much of the Perez horizon band a point sees: 3 elevations x 72 azimuths
@@ -19,6 +20,10 @@ public final class HorizonBand {
     private final double[] bundleDir = new double[3 * RAYS];
     private final double[] bundleW = new double[RAYS];
     private final boolean[] blocked = new boolean[RAYS];
+    /** The far horizon's answer per band ray for {@link #farScene} (the same from every origin), and per bundle ray. */
+    private boolean[] far;
+    private final boolean[] bundleFar = new boolean[RAYS];
+    private Scene farScene;
 
     public HorizonBand() {
         int h = 0;
@@ -45,6 +50,10 @@ public final class HorizonBand {
     /** As {@link #visibility(BundleTracer, double, double, double, double, double, double)}, the band also seen through tree crowns when {@code canopy} is not null. */
     double visibility(BundleTracer bundle, double ox, double oy, double oz, double nx, double ny, double nz,
                       CanopyShading.Probe canopy) {
+        if (bundle.scene() != farScene) {
+            farScene = bundle.scene();
+            far = farScene.escapeBlocked(dir, RAYS);
+        }
         double all = 0;
         int m = 0;
         for (int h = 0; h < RAYS; h++) {
@@ -56,9 +65,10 @@ public final class HorizonBand {
             bundleDir[3 * m] = dx;
             bundleDir[3 * m + 1] = dy;
             bundleDir[3 * m + 2] = dz;
+            bundleFar[m] = far[h];
             bundleW[m++] = w;
         }
-        bundle.occluded(ox, oy, oz, bundleDir, null, m, blocked);
+        bundle.occludedKnownFar(ox, oy, oz, bundleDir, bundleFar, m, blocked);
         double seen = 0;
         for (int i = 0; i < m; i++) if (!blocked[i]) seen += bundleW[i];
         if (canopy != null) canopy.horizon(ox, oy, oz, bundleDir, bundleW, m, blocked, all);

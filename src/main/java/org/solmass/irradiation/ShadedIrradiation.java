@@ -211,6 +211,8 @@ public final class ShadedIrradiation {
         /** Directions, weights and sun indices of the rays traced as one bundle (horizon band or sun). */
         final double[] bundleDir, bundleW;
         final int[] sunIndex;
+        /** Per sun direction, whether the scene's far horizon blocks it (the same from every origin); per bundle ray, the same. */
+        final boolean[] sunFar, bundleFar;
         final boolean[] blocked;
         final double[] dir;
         final int[] cls, tri;
@@ -250,6 +252,8 @@ public final class ShadedIrradiation {
             bundleW = new double[bundleMax];
             sunIndex = new int[bundleMax];
             blocked = new boolean[bundleMax];
+            sunFar = scene.escapeBlocked(in.sun().directions, in.sun().count());
+            bundleFar = new boolean[bundleMax];
             int maxRays = Math.max(sampler.rayCount(), reflectorSampler.rayCount());
             reflectionBlock = HemisphereSampler.reflectionBlock(sampler.gridSide(), in.reflectorRays());
             subset = new int[maxRays];
@@ -348,9 +352,10 @@ public final class ShadedIrradiation {
                 bundleDir[3 * m] = dx;
                 bundleDir[3 * m + 1] = dy;
                 bundleDir[3 * m + 2] = dz;
+                bundleFar[m] = sunFar[i];
                 sunIndex[m++] = i;
             }
-            bundle.occluded(ox, oy, oz, bundleDir, null, m, blocked);
+            bundle.occludedKnownFar(ox, oy, oz, bundleDir, bundleFar, m, blocked);
             for (int k = 0; k < m; k++) if (!blocked[k]) vis[sunIndex[k]] = 1;
             if (canopy != null) canopy.sun(ox, oy, oz, bundleDir, sunIndex, m, blocked);
         }

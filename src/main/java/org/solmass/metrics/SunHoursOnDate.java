@@ -81,6 +81,7 @@ public final class SunHoursOnDate {
         double[] out = new double[patches.size()];
         int m = sunDirs.length / 3;
         ThreadLocal<BundleTracer> tracers = ThreadLocal.withInitial(scene::bundleTracer);
+        boolean[] far = scene.escapeBlocked(sunDirs, m); // the far horizon's answers, the same from every patch
         Parallel.forEach(patches.size(), p -> {
             BundleTracer tr = tracers.get();
             Patch q = patches.get(p);
@@ -88,6 +89,7 @@ public final class SunHoursOnDate {
             scene.rayOrigin(q, o);
             double nx = q.normal().x(), ny = q.normal().y(), nz = q.normal().z();
             double[] front = new double[3 * m];
+            boolean[] frontFar = new boolean[m];
             int k = 0;
             for (int i = 0; i < m; i++) { // the sun directions in front of the patch, traced together
                 double dx = sunDirs[3 * i], dy = sunDirs[3 * i + 1], dz = sunDirs[3 * i + 2];
@@ -95,10 +97,10 @@ public final class SunHoursOnDate {
                 front[3 * k] = dx;
                 front[3 * k + 1] = dy;
                 front[3 * k + 2] = dz;
-                k++;
+                frontFar[k++] = far[i];
             }
             boolean[] blocked = new boolean[k];
-            tr.occluded(o[0], o[1], o[2], front, null, k, blocked);
+            tr.occludedKnownFar(o[0], o[1], o[2], front, frontFar, k, blocked);
             int lit = 0;
             for (int i = 0; i < k; i++) if (!blocked[i]) lit++;
             out[p] = lit * stepHours;

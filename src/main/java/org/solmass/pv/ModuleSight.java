@@ -107,6 +107,8 @@ public final class ModuleSight {
         final int[] cls, index;
         final boolean[] blocked;
         final int[] seen;
+        /** Per sun direction, whether the scene's far horizon blocks it; per bundle ray, the same. */
+        final boolean[] sunFar, bundleFar;
 
         Worker(Scene scene, Vec3[] sun, int rays, int points) {
             this.scene = scene;
@@ -121,6 +123,14 @@ public final class ModuleSight {
             index = new int[Math.max(1, n)];
             blocked = new boolean[Math.max(1, n)];
             seen = new int[Math.max(1, n)];
+            double[] all = new double[3 * n];
+            for (int d = 0; d < n; d++) {
+                all[3 * d] = sun[d].x();
+                all[3 * d + 1] = sun[d].y();
+                all[3 * d + 2] = sun[d].z();
+            }
+            sunFar = scene.escapeBlocked(all, n); // the far horizon's answers, the same from every point
+            bundleFar = new boolean[Math.max(1, n)];
         }
 
         void module(ModuleSight s, int m, boolean[] isGround, long runSeed, int along, int across) {
@@ -134,6 +144,7 @@ public final class ModuleSight {
                 bundleDir[3 * count] = v.x();
                 bundleDir[3 * count + 1] = v.y();
                 bundleDir[3 * count + 2] = v.z();
+                bundleFar[count] = sunFar[d];
                 index[count++] = d;
             }
             int points = along * across;
@@ -143,7 +154,7 @@ public final class ModuleSight {
                 for (int i = 0; i < along; i++) {
                     for (int j = 0; j < across; j++) {
                         Vec3 p = mod.at((i + 0.5) / along, (k + (j + 0.5) / across) / s.substrings);
-                        bundle.occluded(p.x() + eps * nx, p.y() + eps * ny, p.z() + eps * nz, bundleDir, null, count, blocked);
+                        bundle.occludedKnownFar(p.x() + eps * nx, p.y() + eps * ny, p.z() + eps * nz, bundleDir, bundleFar, count, blocked);
                         for (int c = 0; c < count; c++) if (!blocked[c]) seen[c]++;
                     }
                 }

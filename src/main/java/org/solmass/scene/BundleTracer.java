@@ -104,8 +104,38 @@ public final class BundleTracer {
         trace(ox, oy, oz, count, queued, out);
     }
 
-    /** Stores ray s; returns 1 if it needs the tree, 0 if the ground plane (or nothing) decided it. */
+    /**
+     * As {@link #occluded(double, double, double, double[], double[], int, boolean[])} with no limit,
+     * for directions whose far-horizon answers the caller has already: {@code far[s]} must be
+     * {@link Scene#escapeBlocked(double[], int)} of direction s (computed once for a set of directions
+     * traced from many origins). A ray with {@code far[s]} is blocked without being traced; for the
+     * others the far horizon is not asked again. The answers are those of {@code occluded}: the far
+     * horizon, the ground plane and the tree each block a ray on their own, whatever the order.
+     */
+    public void occludedKnownFar(double ox, double oy, double oz, double[] dir, boolean[] far, int count, boolean[] out) {
+        ensure(count);
+        int queued = 0;
+        for (int s = 0; s < count; s++) {
+            if (far[s]) {
+                out[s] = true;
+                lim[s] = RETIRED;
+                continue;
+            }
+            queued += load(s, ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2], Double.POSITIVE_INFINITY, false, out);
+        }
+        trace(ox, oy, oz, count, queued, out);
+    }
+
     private int load(int s, double ox, double oy, double oz, double ddx, double ddy, double ddz, double tMax, boolean[] out) {
+        return load(s, ox, oy, oz, ddx, ddy, ddz, tMax, true, out);
+    }
+
+    /**
+     * Stores ray s; returns 1 if it needs the tree, 0 if the ground plane (or nothing) decided it.
+     * {@code askFar}: whether the far horizon is asked for a ray with no limit.
+     */
+    private int load(int s, double ox, double oy, double oz, double ddx, double ddy, double ddz, double tMax,
+                     boolean askFar, boolean[] out) {
         double rise = scene.groundZ - oz; // as Tracer.groundT; t > 0 needs rise and ddz of one sign
         if (scene.groundPlane && (rise > 0 ? ddz > 0 : rise < 0 && ddz < 0)) {
             double t = rise / ddz;
@@ -115,7 +145,7 @@ public final class BundleTracer {
                 return 0;
             }
         }
-        if (tMax == Double.POSITIVE_INFINITY && scene.escapeBlocked(ddx, ddy, ddz)) { // far horizon: as Tracer
+        if (askFar && tMax == Double.POSITIVE_INFINITY && scene.escapeBlocked(ddx, ddy, ddz)) { // far horizon: as Tracer
             out[s] = true;
             lim[s] = RETIRED;
             return 0;

@@ -117,6 +117,25 @@ public final class Scene {
         return farHorizon && dz > 0 && horizon.obstructs(dx, dy, dz);
     }
 
+    /**
+     * {@link #escapeBlocked} of each of {@code count} directions {@code dir[3s..3s+2]} (as float
+     * directions are widened to double), for a fixed set of directions traced from many origins
+     * (sun cells, horizon band): the answers depend on the direction only, so a caller computes them
+     * once per scene and hands them to {@link BundleTracer#occludedKnownFar}.
+     */
+    public boolean[] escapeBlocked(float[] dir, int count) {
+        boolean[] far = new boolean[count];
+        for (int s = 0; s < count; s++) far[s] = escapeBlocked(dir[3 * s], dir[3 * s + 1], dir[3 * s + 2]);
+        return far;
+    }
+
+    /** As {@link #escapeBlocked(float[], int)} for double directions. */
+    public boolean[] escapeBlocked(double[] dir, int count) {
+        boolean[] far = new boolean[count];
+        for (int s = 0; s < count; s++) far[s] = escapeBlocked(dir[3 * s], dir[3 * s + 1], dir[3 * s + 2]);
+        return far;
+    }
+
     /** Relative ray-origin offset: {@value} x the scene's bounding-box diagonal. */
     public static final double EPSILON_PER_DIAGONAL = 1e-5;
     /** Smallest ray-origin offset, metres (1 mm). */

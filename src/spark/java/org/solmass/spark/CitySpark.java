@@ -27,6 +27,9 @@ public final class CitySpark {
     /** Spark's setting for the number of partitions under which a shuffle writes one file per partition. */
     static final String BYPASS_THRESHOLD = "spark.shuffle.sort.bypassMergeThreshold";
 
+    /** Spark's setting for whether shuffle blocks are compressed. */
+    static final String SHUFFLE_COMPRESS = "spark.shuffle.compress";
+
     /**
      * A session for a run.
      *
@@ -53,6 +56,11 @@ public final class CitySpark {
         // (6,561 at 81 tiles, each bounce). The sort-based writers write one file per map task; they
         // are what Spark uses anyway from 200 tiles on (docs/city.md, "Serializer").
         if (!given.contains(BYPASS_THRESHOLD)) b.config(BYPASS_THRESHOLD, "0");
+        // The exchanges carry full-precision doubles (12 per receiver and bounce), in which LZ4 finds
+        // few repeats: compressing and decompressing them cost more than the bytes they save on a
+        // local disk (docs/city.md, "Shuffle compression"). A cluster short of network bandwidth can
+        // give spark.shuffle.compress=true.
+        if (!given.contains(SHUFFLE_COMPRESS)) b.config(SHUFFLE_COMPRESS, "false");
         if (m.startsWith("local")) {
             try {
                 Files.createDirectories(work);

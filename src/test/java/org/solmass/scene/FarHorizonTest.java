@@ -142,4 +142,51 @@ class FarHorizonTest {
         assertEquals(Tracer.HORIZON, tr.closestHit(0, 0, 0.5, c, 0, s, Double.POSITIVE_INFINITY));
         assertEquals(Tracer.HORIZON, tr.closestHitBruteForce(0, 0, 0.5, c, 0, s, Double.POSITIVE_INFINITY));
     }
+    /**
+     * A fixed set of directions traced from many origins with the far horizon's answers computed once
+     * ({@link Scene#escapeBlocked(double[], int)}, {@link BundleTracer#occludedKnownFar}) gets exactly
+     * the answers of {@link Tracer#occluded} ray by ray (single-ray reference, which the far-horizon
+     * checks above tie to closed forms), for the SIMD kernel and the scalar stream: a ray is blocked
+     * by the far horizon, the ground plane or a triangle, each on its own. Random scenes with the
+     * plane, a profile of 36 azimuths between 0 and 40 degrees, directions over the whole sphere.
+     */
+    @Test
+    void precomputedFarHorizonAnswersGiveTheSingleRayAnswers() {
+        java.util.SplittableRandom r = new java.util.SplittableRandom(77);
+        double[] elev = new double[36];
+        for (int i = 0; i < elev.length; i++) elev[i] = r.nextDouble(0, 40);
+        HorizonProfile h = new HorizonProfile(elev);
+        int n = 700, farOnly = 0, tree = 0;
+        double[] dir = new double[3 * n];
+        for (int s = 0; s < n; s++) {
+            double dx = r.nextGaussian(), dy = r.nextGaussian(), dz = r.nextGaussian();
+            double l = Math.sqrt(dx * dx + dy * dy + dz * dz);
+            dir[3 * s] = dx / l; dir[3 * s + 1] = dy / l; dir[3 * s + 2] = dz / l;
+        }
+        for (int sc = 0; sc < 3; sc++) {
+            Scene scene = Scene.build(TracerTest.randomSoup(900 + sc, 300), true, 0.0).withHorizon(h);
+            Scene open = Scene.build(TracerTest.randomSoup(900 + sc, 300), true, 0.0);
+            boolean[] far = scene.escapeBlocked(dir, n);
+            Tracer single = scene.tracer(), near = open.tracer();
+            BundleTracer scalar = new BundleTracer(scene, false);
+            BundleTracer simd = BundleTracer.SIMD_AVAILABLE ? new BundleTracer(scene, true) : null;
+            for (int o = 0; o < 40; o++) {
+                double ox = r.nextDouble(-20, 120), oy = r.nextDouble(-20, 120), oz = r.nextDouble(0.5, 120);
+                boolean[] a = new boolean[n], b = new boolean[n];
+                scalar.occludedKnownFar(ox, oy, oz, dir, far, n, a);
+                if (simd != null) simd.occludedKnownFar(ox, oy, oz, dir, far, n, b);
+                for (int s = 0; s < n; s++) {
+                    boolean want = single.occluded(ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2], Double.POSITIVE_INFINITY);
+                    assertEquals(want, a[s], "scalar stream, scene " + sc + " origin " + o + " ray " + s);
+                    if (simd != null) assertEquals(want, b[s], "SIMD packets, scene " + sc + " origin " + o + " ray " + s);
+                    boolean byTree = near.occluded(ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2], Double.POSITIVE_INFINITY);
+                    if (want && !byTree) farOnly++;
+                    if (byTree && dir[3 * s + 2] > 0 && !far[s]) tree++;
+                }
+            }
+        }
+        // preconditions, not results: rays only the far horizon blocks, and rising rays only the tree blocks
+        assertTrue(farOnly > 1000, "rays blocked by the far horizon alone: " + farOnly);
+        assertTrue(tree > 1000, "rising rays under the open profile blocked by a triangle: " + tree);
+    }
 }

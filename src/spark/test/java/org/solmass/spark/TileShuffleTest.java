@@ -22,7 +22,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * {@link TileShuffle} against Spark's own {@code groupByKey} (a general-purpose library): the same
  * groups in the same partitions, with the run's bypass-merge threshold (0: the sort-based writers at
  * every partition count) and with one the user gives (200: the bypass-merge writer below it, above it
- * the serialized sort, used when the serializer allows relocation, as Kryo does).
+ * the serialized sort, used when the serializer allows relocation, as Kryo does); uncompressed blocks
+ * (the run's setting) and compressed ones (given).
  */
 class TileShuffleTest {
     @TempDir static Path dir;
@@ -33,24 +34,28 @@ class TileShuffleTest {
         SparkSession spark = CitySpark.session("local[2]", dir.resolve("spark"), 4);
         try {
             assertEquals("0", spark.sparkContext().getConf().get(CitySpark.BYPASS_THRESHOLD), "the run's bypass threshold");
+            assertEquals("false", spark.sparkContext().getConf().get(CitySpark.SHUFFLE_COMPRESS), "the run's shuffle compression");
             compareWithGroupByKey(spark);
         } finally {
             spark.stop();
         }
     }
 
-    /** A threshold the user gives is kept: Spark's bypass-merge writer below it (7 partitions), the sort-based ones above (260). */
+    /** A threshold (and compression) the user gives is kept: Spark's bypass-merge writer below it (7 partitions), the sort-based ones above (260). */
     @Test
     void groupsAsGroupByKeyDoesBelowAndAboveAGivenBypassThreshold() {
         System.setProperty(CitySpark.BYPASS_THRESHOLD, "200");
+        System.setProperty(CitySpark.SHUFFLE_COMPRESS, "true");
         SparkSession spark;
         try {
             spark = CitySpark.session("local[2]", dir.resolve("spark-given"), 4);
         } finally {
             System.clearProperty(CitySpark.BYPASS_THRESHOLD);
+            System.clearProperty(CitySpark.SHUFFLE_COMPRESS);
         }
         try {
             assertEquals("200", spark.sparkContext().getConf().get(CitySpark.BYPASS_THRESHOLD), "the given bypass threshold");
+            assertEquals("true", spark.sparkContext().getConf().get(CitySpark.SHUFFLE_COMPRESS), "the given shuffle compression");
             compareWithGroupByKey(spark);
         } finally {
             spark.stop();
