@@ -40,6 +40,40 @@ public final class HorizonBand {
     }
 
     /**
+     * Puts the band rays in front of a plane of unit normal n into a caller's bundle from index
+     * {@code at} (directions, the scene's far-horizon answers, weights), to be traced with other rays
+     * of the same origin; {@link #share} then reads their answers. Returns the bundle's new end.
+     */
+    int queue(Scene scene, double nx, double ny, double nz, double[] dirOut, boolean[] farOut, double[] wOut, int at) {
+        if (scene != farScene) {
+            farScene = scene;
+            far = scene.escapeBlocked(dir, RAYS);
+        }
+        int m = at;
+        for (int h = 0; h < RAYS; h++) {
+            double dx = dir[3 * h], dy = dir[3 * h + 1], dz = dir[3 * h + 2];
+            double c = nx * dx + ny * dy + nz * dz;
+            if (c <= 0) continue;
+            dirOut[3 * m] = dx;
+            dirOut[3 * m + 1] = dy;
+            dirOut[3 * m + 2] = dz;
+            farOut[m] = far[h];
+            wOut[m++] = c * cosElev[h];
+        }
+        return m;
+    }
+
+    /** Visible share of the band rays queued at [from, to) ({@link #queue}) from their answers, [0, 1]. */
+    static double share(double[] w, boolean[] blocked, int from, int to) {
+        double all = 0, seen = 0;
+        for (int i = from; i < to; i++) {
+            all += w[i];
+            if (!blocked[i]) seen += w[i];
+        }
+        return all > 0 ? seen / all : 0;
+    }
+
+    /**
      * Visible share of the band seen from origin {@code o} by a plane of unit normal {@code n}, [0, 1]:
      * the band rays in front of the plane are traced together as one bundle.
      */

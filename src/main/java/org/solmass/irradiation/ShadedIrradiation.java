@@ -247,7 +247,7 @@ public final class ShadedIrradiation {
             sampler = new HemisphereSampler(scene, in.raysPerPatch());
             reflectorSampler = new HemisphereSampler(scene, in.reflectorRays());
             bundle = scene.bundleTracer();
-            int bundleMax = in.sun().count();
+            int bundleMax = in.sun().count() + HorizonBand.RAYS;
             bundleDir = new double[3 * bundleMax];
             bundleW = new double[bundleMax];
             sunIndex = new int[bundleMax];
@@ -288,8 +288,12 @@ public final class ShadedIrradiation {
             if (canopy != null && skyView != null) skyView.throughCrowns(canopy, ox, oy, oz, cls, hs.rayCount());
             collectReflectors(ox, oy, oz); // every receiver: reflectors reflect what they receive
             // a horizontal reflector-only receiver (ground probe) weights the horizon band by sin(tilt) = 0
-            horizonVis = analysed || rc.sinTilt(r) > 0 ? horizon.visibility(bundle, ox, oy, oz, nx, ny, nz, canopy) : 0;
-            sunVisibility(ox, oy, oz, nx, ny, nz);
+            boolean band = analysed || rc.sinTilt(r) > 0;
+            if (canopy == null) bandAndSun(band, ox, oy, oz, nx, ny, nz); // one bundle
+            else {
+                horizonVis = band ? horizon.visibility(bundle, ox, oy, oz, nx, ny, nz, canopy) : 0;
+                sunVisibility(ox, oy, oz, nx, ny, nz);
+            }
             accumulate(nx, ny, nz, rc.cosTilt(r), rc.sinTilt(r), analysed);
         }
 
@@ -340,6 +344,30 @@ public final class ShadedIrradiation {
             refCount = reflectors.finish(rays, refIdx, refW, refW2);
             ghiAlbedo = ghi * inv;
             ghiAlbedo2 = ghi2 * inv;
+        }
+
+        /**
+         * The horizon band's rays (when {@code band}) and the sun directions in front of the patch, traced
+         * as one bundle: the same answers as {@link HorizonBand#visibility} and {@link #sunVisibility}
+         * (each ray's answer does not depend on the bundle it is traced in).
+         */
+        private void bandAndSun(boolean band, double ox, double oy, double oz, double nx, double ny, double nz) {
+            int b = band ? horizon.queue(scene, nx, ny, nz, bundleDir, bundleFar, bundleW, 0) : 0;
+            float[] d = in.sun().directions;
+            int m = b;
+            for (int i = 0; i < vis.length; i++) {
+                double dx = d[3 * i], dy = d[3 * i + 1], dz = d[3 * i + 2];
+                vis[i] = 0;
+                if (nx * dx + ny * dy + nz * dz <= 0) continue;
+                bundleDir[3 * m] = dx;
+                bundleDir[3 * m + 1] = dy;
+                bundleDir[3 * m + 2] = dz;
+                bundleFar[m] = sunFar[i];
+                sunIndex[m++] = i;
+            }
+            bundle.occludedKnownFar(ox, oy, oz, bundleDir, bundleFar, m, blocked);
+            horizonVis = band ? HorizonBand.share(bundleW, blocked, 0, b) : 0;
+            for (int k = b; k < m; k++) if (!blocked[k]) vis[sunIndex[k]] = 1;
         }
 
         private void sunVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {

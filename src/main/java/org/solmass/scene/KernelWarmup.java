@@ -18,7 +18,7 @@ import java.util.SplittableRandom;
  *
  * <p>The warm-up exercises every path the passes use (any hit with and without limits, closest hit,
  * double and float directions, the hemisphere direction maker, several direction octants, leaves
- * with several triangles, rays that hit and rays that escape), so that the compiled code is not
+ * with several triangles, rays that hit and rays that escape, rays whose far-horizon answers are known), so that the compiled code is not
  * thrown away at the first real call. It changes no result: it runs the kernels on data of its own,
  * and the passes use the same kernels whether it has finished or not.
  *
@@ -90,7 +90,8 @@ public final class KernelWarmup {
         double[] dir = new double[3 * n], dist = new double[n], limit = new double[n];
         float[] fdir = new float[3 * n];
         int[] cls = new int[n], tri = new int[n], subset = new int[n];
-        boolean[] out = new boolean[n];
+        boolean[] out = new boolean[n], subsetMark = new boolean[n];
+        for (int s = 0; s < n; s += 3) subsetMark[s] = true; // rays a far horizon would block
         long begin = System.nanoTime(), first = -1, mark = Long.MAX_VALUE, markedAt = begin;
         int fast = 0, rounds = 0;
         while (fast < FAST_ROUNDS && System.nanoTime() - begin < MAX_SECONDS * 1e9) {
@@ -114,6 +115,7 @@ public final class KernelWarmup {
                 }
                 bt.occluded(ox, oy, oz, fdir, null, n, out);
                 bt.occluded(ox, oy, oz, dir, limit, n, out);
+                bt.occludedKnownFar(ox, oy, oz, dir, subsetMark, n, out);
             }
             long now = System.nanoTime(), t = now - t0;
             if (first < 0) first = t;
