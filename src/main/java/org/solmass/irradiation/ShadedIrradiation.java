@@ -209,7 +209,7 @@ public final class ShadedIrradiation {
         int subsetCount;
         final org.solmass.scene.BundleTracer bundle;
         /** Directions, weights and sun indices of the rays traced as one bundle (horizon band or sun). */
-        final double[] bundleDir, bundleW;
+        final double[] bundleDir, bundleW, bundleT;
         final int[] sunIndex;
         /** Per sun direction, whether the scene's far horizon blocks it (the same from every origin); per bundle ray, the same. */
         final boolean[] sunFar, bundleFar;
@@ -247,9 +247,10 @@ public final class ShadedIrradiation {
             sampler = new HemisphereSampler(scene, in.raysPerPatch());
             reflectorSampler = new HemisphereSampler(scene, in.reflectorRays());
             bundle = scene.bundleTracer();
-            int bundleMax = in.sun().count() + HorizonBand.RAYS;
+            int bundleMax = in.sun().count() + HorizonBand.RAYS + HemisphereSampler.roundedRayCount(in.raysPerPatch());
             bundleDir = new double[3 * bundleMax];
             bundleW = new double[bundleMax];
+            bundleT = new double[bundleMax];
             sunIndex = new int[bundleMax];
             blocked = new boolean[bundleMax];
             sunFar = scene.escapeBlocked(in.sun().directions, in.sun().count());
@@ -278,22 +279,36 @@ public final class ShadedIrradiation {
             double ox = rc.origin[3 * r], oy = rc.origin[3 * r + 1], oz = rc.origin[3 * r + 2];
             double nx = rc.normal[3 * r], ny = rc.normal[3 * r + 1], nz = rc.normal[3 * r + 2];
             HemisphereSampler hs = analysed ? sampler : reflectorSampler;
-            // every ray for the view factors; the first hits where reflection needs them (with crowns: all, for their legs)
-            subsetCount = hs.sampleForReflection(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), canopy != null,
-                    analysed ? reflectionBlock : 1, dir, cls, tri, dist, subset);
+            // a horizontal reflector-only receiver (ground probe) weights the horizon band by sin(tilt) = 0
+            boolean band = analysed || rc.sinTilt(r) > 0;
+            int block = analysed ? reflectionBlock : 1;
+            if (canopy == null && block > 1 && in.triangleIsGround() == null) {
+                // the first hits of the reflection subset, then every other ray of the receiver (the rest of
+                // the hemisphere, the horizon band, the sun in front) through the tree as one bundle
+                int end = hs.queueForReflection(ox, oy, oz, nx, ny, nz, rc.seed[r], block, dir, cls, tri, dist, subset,
+                        bundleDir, bundleT, bundleFar, 0);
+                subsetCount = hs.reflectionSubsetSize();
+                int bandFrom = end;
+                end = queueBandAndSun(band, nx, ny, nz, end);
+                bundle.occludedKnownFar(ox, oy, oz, bundleDir, bundleT, bundleFar, end, blocked);
+                hs.classifyRest(blocked, dir, cls, tri, dist);
+                readBandAndSun(band, bandFrom, end);
+            } else {
+                // every ray for the view factors; the first hits where reflection needs them (with crowns: all, for their legs)
+                subsetCount = hs.sampleForReflection(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), canopy != null,
+                        block, dir, cls, tri, dist, subset);
+                if (canopy == null) bandAndSun(band, ox, oy, oz, nx, ny, nz); // one bundle
+                else {
+                    horizonVis = band ? horizon.visibility(bundle, ox, oy, oz, nx, ny, nz, canopy) : 0;
+                    sunVisibility(ox, oy, oz, nx, ny, nz);
+                }
+            }
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
             if (skyView != null) skyView.measure(ox, oy, oz, nx, ny, nz, dir, cls, hs.rayCount());
             if (canopy != null) canopy.sky(ox, oy, oz, dir, cls, hs.rayCount());
             if (canopy != null) canopy.hits(ox, oy, oz, dir, cls, dist, hs.rayCount()); // crowns on each reflection leg
             if (canopy != null && skyView != null) skyView.throughCrowns(canopy, ox, oy, oz, cls, hs.rayCount());
             collectReflectors(ox, oy, oz); // every receiver: reflectors reflect what they receive
-            // a horizontal reflector-only receiver (ground probe) weights the horizon band by sin(tilt) = 0
-            boolean band = analysed || rc.sinTilt(r) > 0;
-            if (canopy == null) bandAndSun(band, ox, oy, oz, nx, ny, nz); // one bundle
-            else {
-                horizonVis = band ? horizon.visibility(bundle, ox, oy, oz, nx, ny, nz, canopy) : 0;
-                sunVisibility(ox, oy, oz, nx, ny, nz);
-            }
             accumulate(nx, ny, nz, rc.cosTilt(r), rc.sinTilt(r), analysed);
         }
 
@@ -352,9 +367,16 @@ public final class ShadedIrradiation {
          * (each ray's answer does not depend on the bundle it is traced in).
          */
         private void bandAndSun(boolean band, double ox, double oy, double oz, double nx, double ny, double nz) {
-            int b = band ? horizon.queue(scene, nx, ny, nz, bundleDir, bundleFar, bundleW, 0) : 0;
+            int m = queueBandAndSun(band, nx, ny, nz, 0);
+            bundle.occludedKnownFar(ox, oy, oz, bundleDir, bundleT, bundleFar, m, blocked);
+            readBandAndSun(band, 0, m);
+        }
+
+        /** The band's rays (when {@code band}) and the sun directions in front into the bundle from {@code at}; returns its end. */
+        private int queueBandAndSun(boolean band, double nx, double ny, double nz, int at) {
+            int m = band ? horizon.queue(scene, nx, ny, nz, bundleDir, bundleFar, bundleW, at) : at;
+            bandEnd = m;
             float[] d = in.sun().directions;
-            int m = b;
             for (int i = 0; i < vis.length; i++) {
                 double dx = d[3 * i], dy = d[3 * i + 1], dz = d[3 * i + 2];
                 vis[i] = 0;
@@ -365,10 +387,18 @@ public final class ShadedIrradiation {
                 bundleFar[m] = sunFar[i];
                 sunIndex[m++] = i;
             }
-            bundle.occludedKnownFar(ox, oy, oz, bundleDir, bundleFar, m, blocked);
-            horizonVis = band ? HorizonBand.share(bundleW, blocked, 0, b) : 0;
-            for (int k = b; k < m; k++) if (!blocked[k]) vis[sunIndex[k]] = 1;
+            for (int k = at; k < m; k++) bundleT[k] = Double.POSITIVE_INFINITY;
+            return m;
         }
+
+        /** horizonVis and vis from the answers of the rays {@link #queueBandAndSun} put at [from, end). */
+        private void readBandAndSun(boolean band, int from, int end) {
+            horizonVis = band ? HorizonBand.share(bundleW, blocked, from, bandEnd) : 0;
+            for (int k = bandEnd; k < end; k++) if (!blocked[k]) vis[sunIndex[k]] = 1;
+        }
+
+        /** End of the band's rays in the bundle of the current receiver. */
+        private int bandEnd;
 
         private void sunVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {
             float[] d = in.sun().directions;

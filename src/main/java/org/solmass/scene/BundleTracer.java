@@ -113,6 +113,17 @@ public final class BundleTracer {
      * horizon, the ground plane and the tree each block a ray on their own, whatever the order.
      */
     public void occludedKnownFar(double ox, double oy, double oz, double[] dir, boolean[] far, int count, boolean[] out) {
+        occludedKnownFar(ox, oy, oz, dir, null, far, count, out);
+    }
+
+    /**
+     * As {@link #occludedKnownFar(double, double, double, double[], boolean[], int, boolean[])} with a
+     * limit per ray ({@code tMax == null}: none): {@code far[s]} must be the far horizon's answer
+     * ({@link Scene#escapeBlocked(double, double, double)}) for a ray without a limit, and false for a
+     * ray with one (the far horizon lies beyond every limit). Rays of several kinds from one origin
+     * (hemisphere, horizon band, sun) can so go through the tree as one bundle.
+     */
+    public void occludedKnownFar(double ox, double oy, double oz, double[] dir, double[] tMax, boolean[] far, int count, boolean[] out) {
         ensure(count);
         int queued = 0;
         for (int s = 0; s < count; s++) {
@@ -121,7 +132,8 @@ public final class BundleTracer {
                 lim[s] = RETIRED;
                 continue;
             }
-            queued += load(s, ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2], Double.POSITIVE_INFINITY, false, out);
+            queued += load(s, ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2],
+                    tMax == null ? Double.POSITIVE_INFINITY : tMax[s], false, out);
         }
         trace(ox, oy, oz, count, queued, out);
     }

@@ -47,9 +47,9 @@ public final class HemisphereSampler {
     private final boolean[] blocked;
     private final int[] hitTri;
     /** Scratch of {@link #sampleForReflection}: directions of a part of the rays, their ray numbers, subset marks. */
-    private final double[] partDir;
+    private final double[] partDir, hitDir;
     private final int[] restRay;
-    private final boolean[] inSubset;
+    private final boolean[] inSubset, partFar, restGround;
     /** The vector direction maker, or null without the vector module. */
     private final VectorDirections lanes;
 
@@ -64,6 +64,9 @@ public final class HemisphereSampler {
         this.hitTri = new int[count];
         this.hitDist = new double[count];
         this.partDir = new double[3 * count];
+        this.hitDir = new double[3 * count];
+        this.partFar = new boolean[count];
+        this.restGround = new boolean[count];
         this.restRay = new int[count];
         this.inSubset = new boolean[count];
         this.lanes = BundleTracer.SIMD_AVAILABLE ? new VectorDirections(side) : null;
@@ -289,16 +292,52 @@ public final class HemisphereSampler {
             sample(ox, oy, oz, nx, ny, nz, streamSeed, triangleIsGround, dir, cls, tri, dist);
             return m;
         }
+        int r = queueRest(ox, oy, oz, nx, ny, nz, streamSeed, m, dir, cls, tri, dist, subset, partDir, groundT, partFar, 0);
+        bundle.occludedKnownFar(ox, oy, oz, partDir, groundT, partFar, r, blocked);
+        classifyRest(blocked, dir, cls, tri, dist);
+        return m;
+    }
+
+    /**
+     * The first half of {@link #sampleForReflection} for a reflection block above 1, without
+     * ground-flagged triangles and without {@code allHits}, for a caller that traces the other rays
+     * in a bundle of its own with other rays of the same origin (horizon band, sun): makes the
+     * directions, picks the subset (returned through {@code subset}; {@link #reflectionSubsetSize()}
+     * gives its size), traces the subset to its first hits and sets its classes, then puts the other
+     * rays into the caller's bundle from index {@code at}: direction, limit (the ground plane's
+     * distance, or +infinity) and the far horizon's answer ({@link BundleTracer#occludedKnownFar}).
+     * {@link #classifyRest} reads their answers. Returns the bundle's new end. The answers are those
+     * of {@link #sampleForReflection} (which runs the same two halves around a bundle of its own).
+     */
+    public int queueForReflection(double ox, double oy, double oz, double nx, double ny, double nz, long streamSeed,
+                                  int block, double[] dir, int[] cls, int[] tri, double[] dist, int[] subset,
+                                  double[] qDir, double[] qT, boolean[] qFar, int at) {
+        if (block <= 1) throw new IllegalArgumentException("a reflection block above 1 is needed, got " + block);
+        int m = chooseSubset(side, block, streamSeed, inSubset, subset);
+        return queueRest(ox, oy, oz, nx, ny, nz, streamSeed, m, dir, cls, tri, dist, subset, qDir, qT, qFar, at);
+    }
+
+    /** Rays in the subset of the last {@link #queueForReflection} or {@link #sampleForReflection}. */
+    public int reflectionSubsetSize() { return subsetSize; }
+
+    private int subsetSize, restFrom;
+
+    /** Directions, the subset's first hits and classes, and the other rays into the bundle at {@code at}. */
+    private int queueRest(double ox, double oy, double oz, double nx, double ny, double nz, long streamSeed, int m,
+                          double[] dir, int[] cls, int[] tri, double[] dist, int[] subset,
+                          double[] qDir, double[] qT, boolean[] qFar, int at) {
+        subsetSize = m;
         directions(nx, ny, nz, streamSeed, dir);
-        for (int q = 0; q < m; q++) copyDirection(dir, subset[q], partDir, q);
-        bundle.closestHit(ox, oy, oz, partDir, m, hitTri, hitDist);
+        for (int q = 0; q < m; q++) copyDirection(dir, subset[q], hitDir, q);
+        bundle.closestHit(ox, oy, oz, hitDir, m, hitTri, hitDist);
         for (int q = 0; q < m; q++) {
             int s = subset[q];
             tri[s] = hitTri[q];
             dist[s] = hitDist[q];
             cls[s] = classOf(hitTri[q], dir[3 * s + 2], null);
         }
-        int r = 0;
+        restFrom = at;
+        int r = at, k = 0;
         for (int s = 0; s < count; s++) {
             if (inSubset[s]) continue;
             double dz = dir[3 * s + 2], tg = Double.POSITIVE_INFINITY;
@@ -306,20 +345,31 @@ public final class HemisphereSampler {
                 double t = (scene.groundZ() - oz) / dz;
                 if (t > 0) tg = t;
             }
-            copyDirection(dir, s, partDir, r);
-            groundT[r] = tg;
-            restRay[r++] = s;
+            copyDirection(dir, s, qDir, r);
+            qT[r] = tg;
+            qFar[r] = tg == Double.POSITIVE_INFINITY && scene.escapeBlocked(dir[3 * s], dir[3 * s + 1], dz);
+            restGround[k] = tg < Double.POSITIVE_INFINITY;
+            restRay[k++] = s;
+            r++;
         }
-        bundle.occluded(ox, oy, oz, partDir, groundT, r, blocked);
-        for (int q = 0; q < r; q++) {
-            int s = restRay[q];
+        return r;
+    }
+
+    /**
+     * The second half of {@link #queueForReflection}: the classes of the rays it queued, from their
+     * answers ({@code blocked} from the index it was given), as {@link #classify} sets them; their
+     * {@code tri} is {@link Tracer#MISS} and {@code dist} NaN (not traced to a first hit).
+     */
+    public void classifyRest(boolean[] blocked, double[] dir, int[] cls, int[] tri, double[] dist) {
+        int rest = count - subsetSize;
+        for (int k = 0; k < rest; k++) {
+            int s = restRay[k];
             tri[s] = Tracer.MISS;
             dist[s] = Double.NaN; // not traced to a first hit
-            if (blocked[q]) cls[s] = BLOCK;
-            else if (groundT[q] < Double.POSITIVE_INFINITY) cls[s] = GROUND;
+            if (blocked[restFrom + k]) cls[s] = BLOCK;
+            else if (restGround[k]) cls[s] = GROUND;
             else cls[s] = dir[3 * s + 2] < 0 ? GROUND : SKY;
         }
-        return m;
     }
 
     /** {@code to[3r..3r+2] = from[3s..3s+2]}: three stores, cheaper than a call to arraycopy per ray. */

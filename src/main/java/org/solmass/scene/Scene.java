@@ -113,7 +113,7 @@ public final class Scene {
      * Whether a ray from anywhere along unit (or any-length) direction d that leaves the scene is
      * obstructed by the far horizon: false without one and for rays that do not go up.
      */
-    boolean escapeBlocked(double dx, double dy, double dz) {
+    public boolean escapeBlocked(double dx, double dy, double dz) {
         return farHorizon && dz > 0 && horizon.obstructs(dx, dy, dz);
     }
 
