@@ -58,7 +58,7 @@ public final class CitySpark {
         if (!given.contains(BYPASS_THRESHOLD)) b.config(BYPASS_THRESHOLD, "0");
         // The exchanges carry full-precision doubles (12 per receiver and bounce), in which LZ4 finds
         // few repeats: compressing and decompressing them cost more than the bytes they save on a
-        // local disk (docs/city.md, "Shuffle compression"). A cluster short of network bandwidth can
+        // local disk (docs/city.md, "Fixed direction sets and shuffle compression"). A cluster short of network bandwidth can
         // give spark.shuffle.compress=true.
         if (!given.contains(SHUFFLE_COMPRESS)) b.config(SHUFFLE_COMPRESS, "false");
         if (m.startsWith("local")) {
