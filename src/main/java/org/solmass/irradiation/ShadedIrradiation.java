@@ -374,9 +374,19 @@ public final class ShadedIrradiation {
 
         /** The band's rays (when {@code band}) and the sun directions in front into the bundle from {@code at}; returns its end. */
         private int queueBandAndSun(boolean band, double nx, double ny, double nz, int at) {
-            int m = band ? horizon.queue(scene, nx, ny, nz, bundleDir, bundleFar, bundleW, at) : at;
-            bandEnd = m;
+            bandEnd = band ? horizon.queue(scene, nx, ny, nz, bundleDir, bundleFar, bundleW, at) : at;
+            int m = queueSun(nx, ny, nz, bandEnd);
+            for (int k = at; k < m; k++) bundleT[k] = Double.POSITIVE_INFINITY;
+            return m;
+        }
+
+        /**
+         * The sun directions in front of the patch into the bundle from {@code at} (direction, far-horizon
+         * answer, sun index; {@code vis} cleared); returns the bundle's end.
+         */
+        private int queueSun(double nx, double ny, double nz, int at) {
             float[] d = in.sun().directions;
+            int m = at;
             for (int i = 0; i < vis.length; i++) {
                 double dx = d[3 * i], dy = d[3 * i + 1], dz = d[3 * i + 2];
                 vis[i] = 0;
@@ -387,7 +397,6 @@ public final class ShadedIrradiation {
                 bundleFar[m] = sunFar[i];
                 sunIndex[m++] = i;
             }
-            for (int k = at; k < m; k++) bundleT[k] = Double.POSITIVE_INFINITY;
             return m;
         }
 
@@ -401,18 +410,7 @@ public final class ShadedIrradiation {
         private int bandEnd;
 
         private void sunVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {
-            float[] d = in.sun().directions;
-            int m = 0;
-            for (int i = 0; i < vis.length; i++) { // the sun directions in front of the patch, together
-                double dx = d[3 * i], dy = d[3 * i + 1], dz = d[3 * i + 2];
-                vis[i] = 0;
-                if (nx * dx + ny * dy + nz * dz <= 0) continue;
-                bundleDir[3 * m] = dx;
-                bundleDir[3 * m + 1] = dy;
-                bundleDir[3 * m + 2] = dz;
-                bundleFar[m] = sunFar[i];
-                sunIndex[m++] = i;
-            }
+            int m = queueSun(nx, ny, nz, 0); // the sun directions in front of the patch, together
             bundle.occludedKnownFar(ox, oy, oz, bundleDir, bundleFar, m, blocked);
             for (int k = 0; k < m; k++) if (!blocked[k]) vis[sunIndex[k]] = 1;
             if (canopy != null) canopy.sun(ox, oy, oz, bundleDir, sunIndex, m, blocked);
