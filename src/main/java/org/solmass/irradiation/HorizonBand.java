@@ -45,10 +45,7 @@ public final class HorizonBand {
      * of the same origin; {@link #share} then reads their answers. Returns the bundle's new end.
      */
     int queue(Scene scene, double nx, double ny, double nz, double[] dirOut, boolean[] farOut, double[] wOut, int at) {
-        if (scene != farScene) {
-            farScene = scene;
-            far = scene.escapeBlocked(dir, RAYS);
-        }
+        farFor(scene);
         int m = at;
         for (int h = 0; h < RAYS; h++) {
             double dx = dir[3 * h], dy = dir[3 * h + 1], dz = dir[3 * h + 2];
@@ -61,6 +58,13 @@ public final class HorizonBand {
             wOut[m++] = c * cosElev[h];
         }
         return m;
+    }
+
+    /** The far horizon's answers for the band's rays in {@code scene} (kept while the scene stays the same). */
+    private void farFor(Scene scene) {
+        if (scene == farScene) return;
+        farScene = scene;
+        far = scene.escapeBlocked(dir, RAYS);
     }
 
     /** Visible share of the band rays queued at [from, to) ({@link #queue}) from their answers, [0, 1]. */
@@ -84,10 +88,7 @@ public final class HorizonBand {
     /** As {@link #visibility(BundleTracer, double, double, double, double, double, double)}, the band also seen through tree crowns when {@code canopy} is not null. */
     double visibility(BundleTracer bundle, double ox, double oy, double oz, double nx, double ny, double nz,
                       CanopyShading.Probe canopy) {
-        if (bundle.scene() != farScene) {
-            farScene = bundle.scene();
-            far = farScene.escapeBlocked(dir, RAYS);
-        }
+        farFor(bundle.scene());
         double all = 0;
         int m = 0;
         for (int h = 0; h < RAYS; h++) {

@@ -48,6 +48,13 @@ import java.util.concurrent.atomic.AtomicLong;
  */
 public final class ShadedIrradiation {
     static final int SLOTS = StepTable.SLOTS;
+    /**
+     * Whether the first pass traces a receiver's hemisphere rays that need no first hit, its horizon
+     * band and its sun directions as one bundle (true: the run's way); false traces them as separate
+     * bundles, for the test that shows both give the same results (OneBundleTest).
+     */
+    static volatile boolean ONE_BUNDLE = true;
+
     /** Perez horizon band: 0 to 6.5 degrees elevation (Perez et al. 1987, Solar Energy 39(3)). */
     static final double HORIZON_BAND_DEG = 6.5;
     static final int HORIZON_ELEVATIONS = 3, HORIZON_AZIMUTHS = 72;
@@ -208,7 +215,7 @@ public final class ShadedIrradiation {
         final int[] subset;
         int subsetCount;
         final org.solmass.scene.BundleTracer bundle;
-        /** Directions, weights and sun indices of the rays traced as one bundle (horizon band or sun). */
+        /** Directions, weights, limits and sun indices of the rays traced as one bundle (hemisphere rays without a first hit, horizon band, sun). */
         final double[] bundleDir, bundleW, bundleT;
         final int[] sunIndex;
         /** Per sun direction, whether the scene's far horizon blocks it (the same from every origin); per bundle ray, the same. */
@@ -282,7 +289,7 @@ public final class ShadedIrradiation {
             // a horizontal reflector-only receiver (ground probe) weights the horizon band by sin(tilt) = 0
             boolean band = analysed || rc.sinTilt(r) > 0;
             int block = analysed ? reflectionBlock : 1;
-            if (canopy == null && block > 1 && in.triangleIsGround() == null) {
+            if (ONE_BUNDLE && canopy == null && block > 1 && in.triangleIsGround() == null) {
                 // the first hits of the reflection subset, then every other ray of the receiver (the rest of
                 // the hemisphere, the horizon band, the sun in front) through the tree as one bundle
                 int end = hs.queueForReflection(ox, oy, oz, nx, ny, nz, rc.seed[r], block, dir, cls, tri, dist, subset,

@@ -46,7 +46,11 @@ public final class HemisphereSampler {
     private final double[] groundT, hitDist;
     private final boolean[] blocked;
     private final int[] hitTri;
-    /** Scratch of {@link #sampleForReflection}: directions of a part of the rays, their ray numbers, subset marks. */
+    /**
+     * Scratch of {@link #sampleForReflection} and {@link #queueForReflection}: directions of the subset
+     * (hitDir) and of the other rays (partDir), the other rays' far-horizon answers, ray numbers and
+     * whether the ground plane limits them, subset marks.
+     */
     private final double[] partDir, hitDir;
     private final int[] restRay;
     private final boolean[] inSubset, partFar, restGround;
@@ -317,7 +321,7 @@ public final class HemisphereSampler {
         return queueRest(ox, oy, oz, nx, ny, nz, streamSeed, m, dir, cls, tri, dist, subset, qDir, qT, qFar, at);
     }
 
-    /** Rays in the subset of the last {@link #queueForReflection} or {@link #sampleForReflection}. */
+    /** Rays in the subset of the last {@link #queueForReflection} (the one {@link #classifyRest} completes). */
     public int reflectionSubsetSize() { return subsetSize; }
 
     private int subsetSize, restFrom;

@@ -90,8 +90,8 @@ public final class KernelWarmup {
         double[] dir = new double[3 * n], dist = new double[n], limit = new double[n];
         float[] fdir = new float[3 * n];
         int[] cls = new int[n], tri = new int[n], subset = new int[n];
-        boolean[] out = new boolean[n], subsetMark = new boolean[n];
-        for (int s = 0; s < n; s += 3) subsetMark[s] = true; // rays a far horizon would block
+        boolean[] out = new boolean[n], farBlocked = new boolean[n];
+        for (int s = 0; s < n; s += 3) farBlocked[s] = true; // rays a far horizon would block
         long begin = System.nanoTime(), first = -1, mark = Long.MAX_VALUE, markedAt = begin;
         int fast = 0, rounds = 0;
         while (fast < FAST_ROUNDS && System.nanoTime() - begin < MAX_SECONDS * 1e9) {
@@ -115,7 +115,7 @@ public final class KernelWarmup {
                 }
                 bt.occluded(ox, oy, oz, fdir, null, n, out);
                 bt.occluded(ox, oy, oz, dir, limit, n, out);
-                bt.occludedKnownFar(ox, oy, oz, dir, subsetMark, n, out);
+                bt.occludedKnownFar(ox, oy, oz, dir, farBlocked, n, out);
             }
             long now = System.nanoTime(), t = now - t0;
             if (first < 0) first = t;
