@@ -36,6 +36,7 @@ public final class BenchAnalysisCommand implements Callable<Integer> {
     @Option(names = "--time-base", defaultValue = "hourly-year", paramLabel = "BASE", description = "hourly-year (default) or average-days") String timeBase;
     @Mixin SkyFlag sky = new SkyFlag();
     @Option(names = "--threads", defaultValue = "0", paramLabel = "N", description = "worker threads (default: all cores)") int threads;
+    @Option(names = "--sun-bins", defaultValue = "0", paramLabel = "N", description = "sky cells the sun is binned into (default: the study default)") int sunBins;
     @Option(names = "--seed", defaultValue = "1", paramLabel = "N", description = "district seed (default ${DEFAULT-VALUE})") long seed;
 
     /**
@@ -72,6 +73,7 @@ public final class BenchAnalysisCommand implements Callable<Integer> {
             writeObj(SyntheticDistrict.generate(blocks, seed), obj);
             StudyOverrides ov = new StudyOverrides().model(obj).latitude(51.0).longitude(10.0).zone("Europe/Berlin")
                     .timeBase(timeBase).patchM(patch).rays(rays).sky(sky.name).threads(threads).out(dir.resolve("out"));
+            if (sunBins > 0) ov.set("--sun-bins", "sun_bins", sunBins);
             Study study = StudyReader.read(null, ov);
             System.gc();
             resetPeaks();

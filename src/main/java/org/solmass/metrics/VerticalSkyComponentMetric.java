@@ -29,7 +29,8 @@ import java.util.Locale;
  * L sin gamma over the upper hemisphere). The patch's illuminance E_v = integral of L cos(theta) over
  * the sky it sees is estimated with the run's cosine-weighted stratified hemisphere rays
  * ({@link HemisphereSampler}, pdf cos(theta)/pi): E_v ~ (pi / N) sum over rays that reach the sky of
- * L(gamma_i), so VSC = E_v / E_h = 3 / (7 N) x sum (1 + 2 sin gamma_i), in percent. Light reflected by the ground and
+ * L(gamma_i), so VSC = E_v / E_h = 3 / (7 N) x sum (1 + 2 sin gamma_i), in percent. Only the rays that can reach the sky are
+ * traced ({@link HemisphereSampler#skyRays}: a ray going down never does), the same answers as tracing all. Light reflected by the ground and
  * the blocks is not part of the vertical sky component (by its definition). Sampling error at 1024
  * rays: see docs/metrics.md (measured over many seeds in {@code VerticalSkyComponentMetricTest}).
  *
@@ -62,9 +63,9 @@ public final class VerticalSkyComponentMetric implements Metric {
             HemisphereSampler s = samplers.get();
             int n = s.rayCount();
             double[] dir = new double[3 * n];
-            int[] cls = new int[n];
-            s.classify(q, ctx.raySeed() ^ SEED_SALT, null, dir, cls);
-            vsc[p] = percentOfSky(dir, cls, n);
+            boolean[] sky = new boolean[n];
+            s.skyRays(q, ctx.raySeed() ^ SEED_SALT, dir, sky);
+            vsc[p] = percentOfSky(dir, sky, n);
         });
         table.put(VSC, vsc);
         AreaStats st = AreaStats.of(patches, vsc);
@@ -81,9 +82,9 @@ public final class VerticalSkyComponentMetric implements Metric {
      * The vertical sky component in percent from cosine-weighted rays: 3 / (7 N) sum over the rays that
      * reach the sky of (1 + 2 dz) x 100 (dz = sin of the ray's elevation; see the class doc).
      */
-    static double percentOfSky(double[] dir, int[] cls, int n) {
+    static double percentOfSky(double[] dir, boolean[] sky, int n) {
         double sum = 0;
-        for (int i = 0; i < n; i++) if (cls[i] == HemisphereSampler.SKY) sum += CieSky.overcastRelative(dir[3 * i + 2]);
+        for (int i = 0; i < n; i++) if (sky[i]) sum += CieSky.overcastRelative(dir[3 * i + 2]);
         return 100 * Math.PI * sum / (n * CieSky.OVERCAST_HORIZONTAL_PER_LZ);
     }
 

@@ -44,8 +44,13 @@ public record ModuleIrradiance(double[] beamWm2, double[] skyWm2, double[] refle
 
     /** Mean total irradiance over the substrings after obstruction (beam + sky + reflected), W/m2. */
     public double obstructedMeanWm2() {
+        return obstructedMeanWm2(beamWm2, skyWm2, reflectedWm2);
+    }
+
+    /** {@link #obstructedMeanWm2()} of per-substring arrays of equal length. */
+    static double obstructedMeanWm2(double[] beam, double[] sky, double[] reflected) {
         double s = 0;
-        for (int i = 0; i < beamWm2.length; i++) s += beamWm2[i] + skyWm2[i] + reflectedWm2[i];
-        return s / beamWm2.length;
+        for (int i = 0; i < beam.length; i++) s += beam[i] + sky[i] + reflected[i];
+        return s / beam.length;
     }
 }

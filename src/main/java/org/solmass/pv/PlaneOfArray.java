@@ -82,16 +82,46 @@ public final class PlaneOfArray {
      * @return the beam incidence angle, degrees (90 when the sun is behind the module or down)
      */
     public double module(int m, int s, double[] beam, double[] sky, double[] reflected, double[] unobstructed) {
+        return module(m, s, beam, sky, reflected, unobstructed, new PlaneStep());
+    }
+
+    /**
+     * What a module plane gets at one step before its substrings' sight is applied: the sun's
+     * cosine on it, beam and circumsolar irradiance with the sun visible, the unobstructed total, the
+     * incidence angle. Modules of one zone mostly share their normal; {@link #module(int, int,
+     * double[], double[], double[], double[], PlaneStep)} reuses these values while the normal and
+     * step stay the same, computed by the same expressions, so the results are the same bit for bit.
+     * One per thread.
+     */
+    public static final class PlaneStep {
+        private Vec3 normal;
+        private int step = -1;
+        private double sinT, b, circ, unobstructed, incidenceDeg;
+    }
+
+    /** As {@link #module(int, int, double[], double[], double[], double[])}, reusing {@code plane} (see {@link PlaneStep}). */
+    public double module(int m, int s, double[] beam, double[] sky, double[] reflected, double[] unobstructed, PlaneStep plane) {
         PvModule mod = sight.modules.get(m);
         Vec3 n = mod.normal();
-        double cosT = n.z(), sinT = Math.sqrt(Math.max(0, 1 - cosT * cosT));
         int d = dirOfStep[s];
-        double c = d < 0 ? 0 : n.x() * sx[s] + n.y() * sy[s] + n.z() * sz[s];
-        double b = 0, circ = 0;
-        if (c > 0) {
-            b = dni[s] * c;
-            circ = circumsolar[s] * SkyModel.circumsolarRatio(c, sz[s]);
+        if (plane.step != s || !n.equals(plane.normal)) {
+            double cosT = n.z(), sinT = Math.sqrt(Math.max(0, 1 - cosT * cosT));
+            double c = d < 0 ? 0 : n.x() * sx[s] + n.y() * sy[s] + n.z() * sz[s];
+            double b = 0, circ = 0;
+            if (c > 0) {
+                b = dni[s] * c;
+                circ = circumsolar[s] * SkyModel.circumsolarRatio(c, sz[s]);
+            }
+            plane.normal = n;
+            plane.step = s;
+            plane.sinT = sinT;
+            plane.b = b;
+            plane.circ = circ;
+            plane.unobstructed = b + DiffuseParts.sum(background[s], (1 + cosT) / 2, circ, horizon[s], sinT)
+                    + albedo * ghi[s] * (1 - cosT) / 2;
+            plane.incidenceDeg = c > 0 ? Math.toDegrees(Math.acos(Math.min(1, c))) : 90;
         }
+        double b = plane.b, circ = plane.circ, sinT = plane.sinT;
         int S = sight.substrings;
         for (int k = 0; k < S; k++) {
             int q = m * S + k;
@@ -101,11 +131,8 @@ public final class PlaneOfArray {
             beam[k] = b * v + cs;
             sky[k] = diff - cs;
             reflected[k] = albedo * ghi[s] * (sight.groundVf[q] + sight.obstructionVf[q]);
-            if (unobstructed != null) {
-                unobstructed[k] = b + DiffuseParts.sum(background[s], (1 + cosT) / 2, circ, horizon[s], sinT)
-                        + albedo * ghi[s] * (1 - cosT) / 2;
-            }
+            if (unobstructed != null) unobstructed[k] = plane.unobstructed;
         }
-        return c > 0 ? Math.toDegrees(Math.acos(Math.min(1, c))) : 90;
+        return plane.incidenceDeg;
     }
 }

@@ -114,28 +114,37 @@ public final class PvArrays {
         double[] air = CellTemperature.airPerStep(w.steps());
         EnergyBalance[] energy = new EnergyBalance[n];
         double[] cell = new double[n];
+        double modTilt = Math.min(180, tilt);
+        IncidenceAngleModifier iam = chain.iam();
+        double id = iam.skyDiffuse(modTilt), ig = iam.groundReflected(modTilt); // the zone's modules share the tilt
         // steps in parallel, each into its own slots; summed below in step order (thread-count independent)
         Parallel.forEach(n, st -> {
             Step step = w.step(st);
             energy[st] = EnergyBalance.ZERO;
             cell[st] = Double.NaN;
             if (count == 0 || !(step.ghiWm2() > 0 || step.dhiWm2() > 0 || step.dniWm2() > 0)) return; // dark: nothing
-            double[] beam = new double[S], sky = new double[S], refl = new double[S], unob = new double[S];
-            List<ModuleIrradiance> group = new ArrayList<>(count);
-            double poaSum = 0, unobSum = 0;
+            double[] beam = new double[S], sky = new double[S], refl = new double[S], unob = new double[S], eff = new double[S];
+            double[] one = new double[YieldChain.FIELDS], sum = new double[YieldChain.FIELDS];
+            PlaneOfArray.PlaneStep plane = new PlaneOfArray.PlaneStep();
+            double poaSum = 0, unobSum = 0, ib = 0, ibOf = Double.NaN;
             for (int m = first; m < first + count; m++) {
-                double aoi = poa.module(m, st, beam, sky, refl, unob);
+                double aoi = poa.module(m, st, beam, sky, refl, unob, plane);
                 double u = 0;
                 for (int k = 0; k < S; k++) {
                     poaSum += beam[k] + sky[k] + refl[k];
                     u += unob[k];
                 }
                 unobSum += u;
-                group.add(new ModuleIrradiance(beam.clone(), sky.clone(), refl.clone(), u / S, aoi, Math.min(180, tilt)));
+                if (Double.compare(aoi, ibOf) != 0) { // the modules of a plane share the incidence angle
+                    ib = iam.beam(aoi);
+                    ibOf = aoi;
+                }
+                chain.moduleDc(beam, sky, refl, u / S, ib, id, ig, air[st], step.windMs(), eff, one);
+                for (int f = 0; f < YieldChain.FIELDS; f++) sum[f] += one[f]; // ModuleDc.plus, module by module
             }
             sPoa[st] = (float) (poaSum / (count * S));
             sUnob[st] = (float) (unobSum / (count * S));
-            ModuleDc dc = chain.dcSum(group, air[st], step.windMs());
+            ModuleDc dc = new ModuleDc(sum[0], sum[1], sum[2], sum[3], sum[4], sum[5], sum[6], sum[7]);
             energy[st] = chain.acStep(dc, count, step.durationH());
             cell[st] = dc.meanCellC();
         });

@@ -68,13 +68,38 @@ public record YieldChain(ModuleSpec module, IncidenceAngleModifier iam, CellTemp
      * @param windMs wind speed, m/s (NaN: {@link CellTemperature#DEFAULT_WIND_MS})
      */
     public ModuleDc moduleDc(ModuleIrradiance in, double airC, double windMs) {
+        double[] q = new double[FIELDS];
+        moduleDc(in.beamWm2(), in.skyWm2(), in.reflectedWm2(), in.unobstructedWm2(), iam.beam(in.incidenceDeg()),
+                iam.skyDiffuse(in.tiltDeg()), iam.groundReflected(in.tiltDeg()), airC, windMs, new double[in.substrings()], q);
+        return new ModuleDc(q[0], q[1], q[2], q[3], q[4], q[5], q[6], q[7]);
+    }
+
+    /** Quantities of {@link ModuleDc}, in its field order. */
+    static final int FIELDS = 8;
+
+    /**
+     * {@link #moduleDc(ModuleIrradiance, double, double)} on flat arrays, without allocating: for the
+     * yield of a zone, which calls it for every module and step with the incidence-angle modifiers
+     * worked out once per plane ({@code ib}) and per zone ({@code id}, {@code ig}). The one formula
+     * of the chain; {@code out} gets the module's {@link ModuleDc} fields in their order.
+     *
+     * @param beam     beam and circumsolar per substring, W/m2 (as {@link ModuleIrradiance#beamWm2})
+     * @param sky      sky diffuse per substring, W/m2
+     * @param refl     reflected per substring, W/m2
+     * @param unobstructedWm2 the unobstructed plane's irradiance, W/m2
+     * @param ib       {@link IncidenceAngleModifier#beam} of the incidence angle
+     * @param id       {@link IncidenceAngleModifier#skyDiffuse} of the tilt
+     * @param ig       {@link IncidenceAngleModifier#groundReflected} of the tilt
+     * @param eff      scratch, one per substring
+     * @param out      the {@link #FIELDS} quantities
+     */
+    void moduleDc(double[] beam, double[] sky, double[] refl, double unobstructedWm2, double ib, double id, double ig,
+                  double airC, double windMs, double[] eff, double[] out) {
         double pPerWm2 = module.stcPowerW() / 1000;
-        int n = in.substrings();
-        double unobstructed = Math.max(0, in.unobstructedWm2());
-        double obstructed = in.obstructedMeanWm2();
-        double ib = iam.beam(in.incidenceDeg()), id = iam.skyDiffuse(in.tiltDeg()), ig = iam.groundReflected(in.tiltDeg());
-        double[] eff = new double[n];
-        for (int i = 0; i < n; i++) eff[i] = in.beamWm2()[i] * ib + in.skyWm2()[i] * id + in.reflectedWm2()[i] * ig;
+        int n = eff.length;
+        double unobstructed = Math.max(0, unobstructedWm2);
+        double obstructed = ModuleIrradiance.obstructedMeanWm2(beam, sky, refl);
+        for (int i = 0; i < n; i++) eff[i] = beam[i] * ib + sky[i] * id + refl[i] * ig;
         double effMean = SubstringMismatch.meanWm2(eff);
         double equivalent = SubstringMismatch.equivalentWm2(eff);
         double cell = thermal.cellC(obstructed, airC, windMs);
@@ -82,8 +107,14 @@ public record YieldChain(ModuleSpec module, IncidenceAngleModifier iam, CellTemp
         double pTemp = Math.max(0, pMismatch * (1 + module.tempCoeffPerK() * (cell - 25)));
         double pDc = pTemp * dcOtherFactor;
         double ref = pPerWm2 * unobstructed;
-        return new ModuleDc(ref, ref - pPerWm2 * obstructed, pPerWm2 * (obstructed - effMean), pPerWm2 * effMean - pMismatch,
-                pMismatch - pTemp, pTemp - pDc, pDc, cell * ref);
+        out[0] = ref;
+        out[1] = ref - pPerWm2 * obstructed;
+        out[2] = pPerWm2 * (obstructed - effMean);
+        out[3] = pPerWm2 * effMean - pMismatch;
+        out[4] = pMismatch - pTemp;
+        out[5] = pTemp - pDc;
+        out[6] = pDc;
+        out[7] = cell * ref;
     }
 
     /**

@@ -460,4 +460,35 @@ public final class HemisphereSampler {
             else cls[s] = dir[3 * s + 2] < 0 ? GROUND : SKY;
         }
     }
+
+    /**
+     * Which rays of {@link #classify(Patch, long, boolean[], double[], int[])} (no ground-flagged
+     * triangles) reach the sky: {@code sky[s]} is true exactly where that method gives
+     * {@link #SKY}. Only the rays that can reach it are traced: a ray going down ({@code dz < 0})
+     * ends on the ground plane, on a triangle or, with neither, counts as ground, so it is never sky.
+     * For metrics that weigh the visible sky alone (the vertical sky component): a vertical patch's
+     * downward half is not traced. The rays traced are those of {@code classify} with their own
+     * limits, so the answers are the same.
+     */
+    public void skyRays(Patch patch, long runSeed, double[] dir, boolean[] sky) {
+        scene.rayOrigin(patch, origin);
+        double ox = origin[0], oy = origin[1], oz = origin[2];
+        directions(patch.normal().x(), patch.normal().y(), patch.normal().z(), patchSeed(patch.id(), runSeed), dir);
+        int up = 0;
+        for (int s = 0; s < count; s++) {
+            sky[s] = false;
+            double dz = dir[3 * s + 2];
+            if (dz < 0) continue;
+            double tg = Double.POSITIVE_INFINITY; // as classify: the plane from below, for an origin under it
+            if (scene.hasGroundPlane() && dz != 0) {
+                double t = (scene.groundZ() - oz) / dz;
+                if (t > 0) tg = t;
+            }
+            copyDirection(dir, s, partDir, up);
+            groundT[up] = tg;
+            restRay[up++] = s;
+        }
+        bundle.occluded(ox, oy, oz, partDir, groundT, up, blocked);
+        for (int k = 0; k < up; k++) sky[restRay[k]] = !blocked[k] && groundT[k] == Double.POSITIVE_INFINITY;
+    }
 }
