@@ -7,6 +7,7 @@ import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.Polygon;
 import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
+import org.solmass.model.Parallel;
 import org.solmass.model.Vec3;
 import org.solmass.surface.Patch;
 import org.solmass.surface.Surface;
@@ -131,53 +132,80 @@ public final class PvZones {
         }
         int[] zoneOf = new int[n];
         List<Zone> zones = new ArrayList<>();
-        GeometryFactory gf = new GeometryFactory();
         List<Integer> surfaceIds = new ArrayList<>(bySurface.keySet());
         surfaceIds.sort(null);
-        for (int sid : surfaceIds) {
-            List<Integer> members = bySurface.get(sid);
+        // surfaces in parallel, each into its own slot; zones numbered below in surface order
+        List<List<Component>> comps = Parallel.map(surfaceIds.size(), i -> components(patches, surfaces.get(surfaceIds.get(i)),
+                bySurface.get(surfaceIds.get(i)), annualKwhM2, shadingLossPct, patchM, s.minZoneM2()));
+        for (int i = 0; i < surfaceIds.size(); i++) {
+            int sid = surfaceIds.get(i);
             Surface sf = surfaces.get(sid);
-            Polygon[] poly = new Polygon[members.size()];
-            for (int i = 0; i < poly.length; i++) poly[i] = localPolygon(gf, sf.frame(), patches.get(members.get(i)));
-            int[] parent = new int[poly.length];
-            for (int i = 0; i < parent.length; i++) parent[i] = i;
-            double minShared = SHARED_EDGE_FRACTION * patchM;
+            for (Component c : comps.get(i)) {
+                int id = zones.size() + 1;
+                for (int p : c.idx) zoneOf[p] = id;
+                zones.add(new Zone(id, sf.block(), patches.get(c.idx[0]).blockName(), sid, sf.label(), c.idx, c.area,
+                        c.irr / c.area, c.irr, c.loss / c.area, c.irr * s.moduleEfficiency() * s.performanceRatio(),
+                        sf.tiltDeg(), sf.azimuthDeg(), rings(c.union, sf.frame()), c.union));
+            }
+        }
+        return new Result(best, suit, zoneOf, List.copyOf(zones));
+    }
+
+    /** A zone before numbering: its patches (ascending), area, area-weighted sums and outline union. */
+    private record Component(int[] idx, double area, double irr, double loss, Geometry union) {}
+
+    /**
+     * The zones of one roof surface, in order of their first member: the suitable patches
+     * {@code members} joined where their outlines share an edge (connected components), those of at
+     * least {@code minZoneM2} kept. Pairs whose boxes overlap along more than the shared-edge length
+     * are tested first, the corner pairs after them, when most are joined already and need no test:
+     * the components are the same whatever the order, since a pair's test does not depend on it.
+     */
+    private static List<Component> components(List<Patch> patches, Surface sf, List<Integer> members, double[] annualKwhM2,
+                                              double[] shadingLossPct, double patchM, double minZoneM2) {
+        GeometryFactory gf = new GeometryFactory();
+        Polygon[] poly = new Polygon[members.size()];
+        for (int i = 0; i < poly.length; i++) poly[i] = localPolygon(gf, sf.frame(), patches.get(members.get(i)));
+        int[] parent = new int[poly.length];
+        for (int i = 0; i < parent.length; i++) parent[i] = i;
+        double minShared = SHARED_EDGE_FRACTION * patchM;
+        for (int pass = 0; pass < 2; pass++) {
             for (int i = 0; i < poly.length; i++) {
                 Envelope ei = new Envelope(poly[i].getEnvelopeInternal());
                 ei.expandBy(10 * SNAP_M);
                 for (int j = i + 1; j < poly.length; j++) {
-                    if (!ei.intersects(poly[j].getEnvelopeInternal())) continue;
+                    Envelope ej = poly[j].getEnvelopeInternal();
+                    if (!ei.intersects(ej)) continue;
+                    Envelope both = ei.intersection(ej);
+                    boolean edgeLike = Math.max(both.getWidth(), both.getHeight()) > minShared;
+                    if (edgeLike != (pass == 0)) continue;
                     if (find(parent, i) == find(parent, j)) continue;
                     Geometry shared = poly[i].getExteriorRing().intersection(poly[j].getExteriorRing());
                     if (shared.getLength() > minShared) parent[find(parent, i)] = find(parent, j);
                 }
             }
-            Map<Integer, List<Integer>> comps = new LinkedHashMap<>();
-            for (int i = 0; i < poly.length; i++) comps.computeIfAbsent(find(parent, i), k -> new ArrayList<>()).add(i);
-            for (List<Integer> comp : comps.values()) {
-                double area = 0, irr = 0, loss = 0;
-                int[] idx = new int[comp.size()];
-                List<Geometry> parts = new ArrayList<>();
-                for (int k = 0; k < idx.length; k++) {
-                    int p = members.get(comp.get(k));
-                    idx[k] = p;
-                    double a = patches.get(p).areaM2();
-                    area += a;
-                    irr += a * annualKwhM2[p];
-                    loss += a * shadingLossPct[p];
-                    parts.add(poly[comp.get(k)]);
-                }
-                if (area < s.minZoneM2() || area <= 0) continue;
-                Arrays.sort(idx);
-                int id = zones.size() + 1;
-                for (int p : idx) zoneOf[p] = id;
-                Geometry union = OverlayNGRobust.union(gf.buildGeometry(parts));
-                zones.add(new Zone(id, sf.block(), patches.get(idx[0]).blockName(), sid, sf.label(), idx, area,
-                        irr / area, irr, loss / area, irr * s.moduleEfficiency() * s.performanceRatio(),
-                        sf.tiltDeg(), sf.azimuthDeg(), rings(union, sf.frame()), union));
-            }
         }
-        return new Result(best, suit, zoneOf, List.copyOf(zones));
+        Map<Integer, List<Integer>> byRoot = new LinkedHashMap<>();
+        for (int i = 0; i < poly.length; i++) byRoot.computeIfAbsent(find(parent, i), k -> new ArrayList<>()).add(i);
+        List<Component> out = new ArrayList<>();
+        for (List<Integer> comp : byRoot.values()) {
+            double area = 0, irr = 0, loss = 0;
+            int[] idx = new int[comp.size()];
+            List<Geometry> parts = new ArrayList<>();
+            for (int k = 0; k < idx.length; k++) {
+                int p = members.get(comp.get(k));
+                idx[k] = p;
+                double a = patches.get(p).areaM2();
+                area += a;
+                irr += a * annualKwhM2[p];
+                loss += a * shadingLossPct[p];
+                parts.add(poly[comp.get(k)]);
+            }
+            if (area < minZoneM2 || area <= 0) continue;
+            Arrays.sort(idx);
+            out.add(new Component(idx, area, irr, loss, OverlayNGRobust.union(gf.buildGeometry(parts))));
+        }
+        return out;
     }
 
     private static int find(int[] parent, int i) {
