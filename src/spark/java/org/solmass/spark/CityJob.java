@@ -80,6 +80,7 @@ public final class CityJob implements Callable<Integer> {
         if (!(tileM > 0)) throw new CommandLine.ParameterException(new CommandLine(this), "--tile-size must be positive, got " + tileM);
         if (haloCapM != null && !(haloCapM >= 0)) throw new CommandLine.ParameterException(new CommandLine(this), "--halo-cap must be 0 or more, got " + haloCapM);
         Study s = StudyReader.read(study);
+        CityStages.partitionsPerCore(new org.apache.spark.SparkConf()); // spark.* settings as spark-submit gives them: checked before the long work
         CityOptions o = CityOptions.defaults().withTileM(tileM).withFarHorizon(!noFarHorizon);
         if (haloCapM != null) o = o.withHaloCapM(haloCapM);
         try (FolderClaim claim = FolderClaim.claim(out, "--out", study, s.name())) {

@@ -33,7 +33,7 @@ import java.util.stream.IntStream;
 /**
  * The stages of a city run as Spark jobs over the tiles of a {@link CityPlan} (docs/city.md):
  * <ol>
- * <li>first pass, one task per tile ({@link CityModel#firstPass}); each tile's {@link FirstPasses}
+ * <li>first pass, one task per partition of tiles ({@link TilePartitioner}), tile by tile ({@link CityModel#firstPass}); each tile's {@link FirstPasses}
  * stay where they were computed (persisted, partitioned by tile);</li>
  * <li>exchange and bounces, month space: once, each tile works out from its reflector lists and the
  * plan which receivers it needs from which other tile ({@link TileExchange.Route}) and sends each
@@ -42,7 +42,7 @@ import java.util.stream.IntStream;
  * tile computes its receivers' next term from its own values and the packets
  * ({@link TileBounces}); the driver adds the tiles' energies in tile order for the stopping rule;
  * then, once, the receivers' annual totals for the standard error;</li>
- * <li>finish, one task per tile ({@link CityModel#finish}): the rows of patches.csv, written as
+ * <li>finish, tile by tile in the same partitions ({@link CityModel#finish}): the rows of patches.csv, written as
  * Parquet partitioned by tile, with the PV zones numbered as the whole model numbers them.</li>
  * </ol>
  * Each task rebuilds the prepared study from its file once per JVM ({@link #city}) with the weather,
@@ -115,31 +115,76 @@ final class CityStages {
     }
 
     /**
-     * One partition per tile, the largest tiles (most receivers) first: Spark starts a stage's tasks in
-     * partition order, so the largest tiles run first and the last tasks of the first pass and the
-     * finish are short ones (largest processing time first: Graham, "Bounds on multiprocessing timing
-     * anomalies", SIAM J. Appl. Math. 17, 1969, from memory). Nothing else depends on the order.
+     * Partitions of tiles per core of the cluster ({@code spark.default.parallelism}; local mode: the
+     * cores given): enough tasks per stage for Spark to even out unequal tiles, few enough that a
+     * stage is not mostly task launches and a shuffle not mostly empty blocks (a shuffle grouped by
+     * tile has partitions x partitions blocks). Measured, docs/city.md "Tiles grouped into partitions".
+     */
+    static final int PARTITIONS_PER_CORE = 4;
+    /** The Spark setting that overrides {@link #PARTITIONS_PER_CORE} ({@code --conf} of spark-submit, or a {@code spark.*} system property). */
+    static final String PARTITIONS_PER_CORE_KEY = "spark.solmass.city.partitionsPerCore";
+
+    /** {@link #PARTITIONS_PER_CORE}, or what {@code conf} sets under {@link #PARTITIONS_PER_CORE_KEY} (a whole number from 1). */
+    static int partitionsPerCore(org.apache.spark.SparkConf conf) {
+        String v = conf.get(PARTITIONS_PER_CORE_KEY, Integer.toString(PARTITIONS_PER_CORE)).trim();
+        int n;
+        try {
+            n = Integer.parseInt(v);
+        } catch (NumberFormatException e) {
+            n = 0;
+        }
+        if (n < 1) throw new org.solmass.InputException(PARTITIONS_PER_CORE_KEY, "expected a whole number from 1, got '" + v + "'");
+        return n;
+    }
+
+    /**
+     * The tiles grouped into {@code partitions} partitions (at most one per tile), balanced by
+     * receivers: tiles largest first (most receivers), each to the partition with the fewest receivers
+     * so far (longest processing time first: Graham, "Bounds on multiprocessing timing anomalies", SIAM
+     * J. Appl. Math. 17, 1969, from memory); the partitions are numbered by their receivers, most
+     * first, since Spark starts a stage's tasks in partition order, so the last tasks of the first
+     * pass and the finish are short ones. Every stage uses this partitioner, so the joins between
+     * stages stay within a partition. Nothing else depends on the grouping: a task works its tiles
+     * one after the other, each as it would alone.
      */
     static final class TilePartitioner extends Partitioner {
         private final int[] partitionOf;
+        private final int partitions;
 
-        TilePartitioner(CityPlan plan) {
+        TilePartitioner(CityPlan plan, int partitions) {
             int n = plan.tiles().size();
+            this.partitions = Math.max(1, Math.min(n, partitions));
             Integer[] order = new Integer[n];
             for (int i = 0; i < n; i++) order[i] = i;
             Arrays.sort(order, (a, b) -> {
                 int c = Integer.compare(plan.tile(b).receivers().length, plan.tile(a).receivers().length);
                 return c != 0 ? c : Integer.compare(a, b);
             });
+            long[] load = new long[this.partitions];
+            int[] group = new int[n];
+            for (int t : order) {
+                int best = 0;
+                for (int g = 1; g < load.length; g++) if (load[g] < load[best]) best = g;
+                group[t] = best;
+                load[best] += plan.tile(t).receivers().length;
+            }
+            Integer[] rank = new Integer[this.partitions];
+            for (int g = 0; g < rank.length; g++) rank[g] = g;
+            Arrays.sort(rank, (a, b) -> {
+                int c = Long.compare(load[b], load[a]);
+                return c != 0 ? c : Integer.compare(a, b);
+            });
+            int[] numberOf = new int[this.partitions];
+            for (int k = 0; k < rank.length; k++) numberOf[rank[k]] = k;
             partitionOf = new int[n];
-            for (int k = 0; k < n; k++) partitionOf[order[k]] = k;
+            for (int t = 0; t < n; t++) partitionOf[t] = numberOf[group[t]];
         }
 
-        @Override public int numPartitions() { return partitionOf.length; }
+        @Override public int numPartitions() { return partitions; }
 
         @Override public int getPartition(Object key) { return partitionOf[(Integer) key]; }
 
-        @Override public boolean equals(Object o) { return o instanceof TilePartitioner t && Arrays.equals(t.partitionOf, partitionOf); }
+        @Override public boolean equals(Object o) { return o instanceof TilePartitioner t && t.partitions == partitions && Arrays.equals(t.partitionOf, partitionOf); }
 
         @Override public int hashCode() { return Arrays.hashCode(partitionOf); }
     }
@@ -204,7 +249,7 @@ final class CityStages {
         JavaSparkContext sc = JavaSparkContext.fromSparkContext(spark.sparkContext());
         int nTiles = plan.tiles().size();
         int analysed = plan.analysedCount();
-        TilePartitioner tp = new TilePartitioner(plan);
+        TilePartitioner tp = new TilePartitioner(plan, partitionsPerCore(sc.getConf()) * Math.max(1, sc.defaultParallelism()));
         Broadcast<CityPlan> bPlan = sc.broadcast(plan);
         Broadcast<byte[]> bTables = sc.broadcast(city.tables().encode());
         double[] ghiMonth = TileBounces.ghiMonthWh(city.sun());
@@ -215,7 +260,7 @@ final class CityStages {
         long t0 = System.nanoTime(), c0 = cpuNanos();
         StageProgress.label(sc, "first pass");
         List<Integer> tiles = IntStream.range(0, nTiles).boxed().toList();
-        JavaPairRDD<Integer, FirstPasses> firsts = TileShuffle.byKey(sc.parallelize(tiles, nTiles).mapToPair(t -> new Tuple2<>(t, t)), tp)
+        JavaPairRDD<Integer, FirstPasses> firsts = TileShuffle.byKey(sc.parallelize(tiles, tp.numPartitions()).mapToPair(t -> new Tuple2<>(t, t)), tp)
                 .mapValues(t -> {
                     failOnce(s, "first-pass", t);
                     return city(s.studyFile(), bTables).firstPass(bPlan.value().tile(t), taskCores());

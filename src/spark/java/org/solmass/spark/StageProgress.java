@@ -12,9 +12,10 @@ import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
 /**
- * Progress of a city run per stage on stderr: {@code city: first pass: 3/8 tiles}. The last stage of
+ * Progress of a city run per stage on stderr: {@code city: first pass: 3/8 tasks}. The last stage of
  * each job whose description was set by {@link #label} is counted (the runner names each of its jobs;
- * their last stage runs one task per tile; the shuffles before it are not shown); tasks are counted
+ * their last stage runs one task per partition of tiles, {@code CityStages.TilePartitioner}; the
+ * shuffles before it are not shown); tasks are counted
  * as they succeed (a retried task counts once, when it succeeds). Lines are
  * printed at most every {@code everyMs} milliseconds per stage, and always at a stage's end.
  */
@@ -66,7 +67,7 @@ public final class StageProgress extends SparkListener {
             long now = System.currentTimeMillis();
             if (c.done == c.tasks || now - c.lastPrint >= everyMs) {
                 c.lastPrint = now;
-                out.printf(Locale.ROOT, "city: %s: %d/%d tiles%n", c.label, c.done, c.tasks);
+                out.printf(Locale.ROOT, "city: %s: %d/%d tasks%n", c.label, c.done, c.tasks);
                 out.flush();
             }
         }

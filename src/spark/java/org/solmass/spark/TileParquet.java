@@ -104,7 +104,7 @@ public final class TileParquet {
 
     /**
      * The output format of the write: each tile's rows into {@code tile=K/part-NNNNN.snappy.parquet}
-     * under the task attempt's work folder (NNNNN: the Spark partition, one per tile).
+     * under the task attempt's work folder (NNNNN: the Spark partition, which holds one or more tiles).
      */
     public static final class Format extends FileOutputFormat<Void, Rows> {
         @Override

@@ -65,12 +65,59 @@ class CityJobTest {
         oneMachineFound = one.metrics().find(org.solmass.metrics.PvZonesMetric.Found.class).orElseThrow();
         oneMachineZones = oneMachineFound.zones().zones();
         tiledLocally = LocalCityRunner.run(CityModel.of(study), CityOptions.defaults().withTileM(50), PhaseProgress.NONE).table();
+        // one partition per core: the 4 or more tiles share 2 partitions, so every run below works
+        // several tiles per task (their joins, the retried task's tiles, the write)
+        System.setProperty(CityStages.PARTITIONS_PER_CORE_KEY, "1");
         spark = CitySpark.session(MASTER, dir.resolve("spark"), 4);
+        assertEquals(1, CityStages.partitionsPerCore(spark.sparkContext().getConf()));
     }
 
     @AfterAll
     static void stopSpark() {
+        System.clearProperty(CityStages.PARTITIONS_PER_CORE_KEY);
         if (spark != null) spark.stop();
+    }
+
+    /**
+     * The tiles grouped into partitions: every tile in one partition, no partition empty, the
+     * receivers spread as a greedy assignment spreads them (no partition more than the largest tile
+     * above the mean: before its last tile a partition was the least loaded, so at most the mean;
+     * derived here), the partitions numbered most receivers first; and a bad setting refused with
+     * its key.
+     */
+    @Test
+    void tilesAreGroupedIntoBalancedPartitionsLargestFirst() {
+        CityPlan plan = CityModel.of(StudyReader.read(studyFile)).plan(CityOptions.defaults().withTileM(50));
+        int n = plan.tiles().size();
+        assertTrue(n >= 4, "tiles: " + n);
+        for (int parts : new int[] {1, 2, 3, n, n + 5}) {
+            CityStages.TilePartitioner tp = new CityStages.TilePartitioner(plan, parts);
+            int p = Math.min(n, parts);
+            assertEquals(p, tp.numPartitions());
+            long[] load = new long[p];
+            int[] tiles = new int[p];
+            long total = 0, largest = 0;
+            for (int t = 0; t < n; t++) {
+                int g = tp.getPartition(t);
+                assertTrue(g >= 0 && g < p, "partition of tile " + t + ": " + g);
+                int r = plan.tile(t).receivers().length;
+                load[g] += r;
+                tiles[g]++;
+                total += r;
+                largest = Math.max(largest, r);
+            }
+            for (int g = 0; g < p; g++) {
+                assertTrue(tiles[g] > 0, "partition " + g + " of " + p + " is empty");
+                assertTrue(load[g] <= (double) total / p + largest, "partition " + g + ": " + load[g] + " receivers, mean " + (double) total / p);
+                if (g > 0) assertTrue(load[g] <= load[g - 1], "partitions numbered most receivers first");
+            }
+        }
+        for (String bad : new String[] {"0", "-2", "four"}) {
+            org.solmass.InputException e = org.junit.jupiter.api.Assertions.assertThrows(org.solmass.InputException.class,
+                    () -> CityStages.partitionsPerCore(new org.apache.spark.SparkConf(false).set(CityStages.PARTITIONS_PER_CORE_KEY, bad)));
+            assertTrue(e.getMessage().contains(CityStages.PARTITIONS_PER_CORE_KEY) && e.getMessage().contains(bad), e.getMessage());
+        }
+        assertEquals(CityStages.PARTITIONS_PER_CORE, CityStages.partitionsPerCore(new org.apache.spark.SparkConf(false)));
     }
 
     private Path run(String name, int failTile, String failStage) {
