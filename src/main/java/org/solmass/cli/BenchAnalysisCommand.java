@@ -73,7 +73,7 @@ public final class BenchAnalysisCommand implements Callable<Integer> {
             writeObj(SyntheticDistrict.generate(blocks, seed), obj);
             StudyOverrides ov = new StudyOverrides().model(obj).latitude(51.0).longitude(10.0).zone("Europe/Berlin")
                     .timeBase(timeBase).patchM(patch).rays(rays).sky(sky.name).threads(threads).out(dir.resolve("out"));
-            if (sunBins > 0) ov.set("--sun-bins", "sun_bins", sunBins);
+            if (sunBins != 0) ov.set("--sun-bins", "sun_bins", sunBins); // range-checked by the study reader
             Study study = StudyReader.read(null, ov);
             System.gc();
             resetPeaks();

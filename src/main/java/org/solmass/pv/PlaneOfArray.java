@@ -90,10 +90,11 @@ public final class PlaneOfArray {
      * cosine on it, beam and circumsolar irradiance with the sun visible, the unobstructed total, the
      * incidence angle. Modules of one zone mostly share their normal; {@link #module(int, int,
      * double[], double[], double[], double[], PlaneStep)} reuses these values while the normal and
-     * step stay the same, computed by the same expressions, so the results are the same bit for bit.
-     * One per thread.
+     * step stay the same (and the same {@code PlaneOfArray} asks), computed by the same expressions,
+     * so the results are the same bit for bit. One per thread.
      */
     public static final class PlaneStep {
+        private PlaneOfArray owner;
         private Vec3 normal;
         private int step = -1;
         private double sinT, b, circ, unobstructed, incidenceDeg;
@@ -104,7 +105,7 @@ public final class PlaneOfArray {
         PvModule mod = sight.modules.get(m);
         Vec3 n = mod.normal();
         int d = dirOfStep[s];
-        if (plane.step != s || !n.equals(plane.normal)) {
+        if (plane.owner != this || plane.step != s || !n.equals(plane.normal)) {
             double cosT = n.z(), sinT = Math.sqrt(Math.max(0, 1 - cosT * cosT));
             double c = d < 0 ? 0 : n.x() * sx[s] + n.y() * sy[s] + n.z() * sz[s];
             double b = 0, circ = 0;
@@ -112,6 +113,7 @@ public final class PlaneOfArray {
                 b = dni[s] * c;
                 circ = circumsolar[s] * SkyModel.circumsolarRatio(c, sz[s]);
             }
+            plane.owner = this;
             plane.normal = n;
             plane.step = s;
             plane.sinT = sinT;

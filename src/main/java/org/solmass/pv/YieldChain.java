@@ -95,6 +95,8 @@ public record YieldChain(ModuleSpec module, IncidenceAngleModifier iam, CellTemp
      */
     void moduleDc(double[] beam, double[] sky, double[] refl, double unobstructedWm2, double ib, double id, double ig,
                   double airC, double windMs, double[] eff, double[] out) {
+        if (Double.isNaN(unobstructedWm2)) // as ModuleIrradiance refuses it (the incidence comes from acos of a finite cosine)
+            throw new IllegalArgumentException("unobstructed irradiance must be a number");
         double pPerWm2 = module.stcPowerW() / 1000;
         int n = eff.length;
         double unobstructed = Math.max(0, unobstructedWm2);

@@ -468,7 +468,8 @@ public final class HemisphereSampler {
      * ends on the ground plane, on a triangle or, with neither, counts as ground, so it is never sky.
      * For metrics that weigh the visible sky alone (the vertical sky component): a vertical patch's
      * downward half is not traced. The rays traced are those of {@code classify} with their own
-     * limits, so the answers are the same.
+     * limits, so the answers are the same. Uses the sampler's scratch arrays: not between a
+     * {@link #queueForReflection} and its {@link #classifyRest} on the same sampler.
      */
     public void skyRays(Patch patch, long runSeed, double[] dir, boolean[] sky) {
         scene.rayOrigin(patch, origin);

@@ -16,7 +16,7 @@ import java.util.Map;
  * Parquet files hold): per block the patch count, the area (all, roof, facade) and, per result
  * column, the area-weighted mean {@code sum(v a) / sum(a)} over the patches with a value, as
  * {@link org.solmass.table.AreaStats} defines it (patches without a value, NaN, are left out of both
- * sums). A block lies in one tile (docs/city.md), so each tile task sums its blocks in patch order and
+ * sums). A block lies in one tile (docs/city.md), so each tile's blocks are summed in its task in patch order and
  * the driver only collects one row per building (blocks met in several tiles would be added).
  */
 public final class BuildingSummaries {

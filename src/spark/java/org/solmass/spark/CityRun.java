@@ -127,6 +127,7 @@ final class CityRun {
         timings.forEach((k, v) -> t.put(k, Math.round(v * 1000) / 1000.0));
         ObjectNode p = n.putObject("tiles");
         p.put("count", plan.tiles().size());
+        p.put("partitions", o.partitions());
         p.put("tile_m", plan.options().tileM());
         p.put("halo_m", plan.haloM());
         p.put("uncapped_halo_m", plan.uncappedHaloM());

@@ -72,11 +72,12 @@ final class CityStages {
      * with their city-wide numbers, in number order, or null when the run finds no PV zones ({@code zoneRows}:
      * their zones.csv rows, or null likewise);
      * {@code buildings}: per block the means of the {@code summarised} columns ({@link BuildingSummaries});
-     * {@code stageCpuS}: per stage the driver JVM's CPU seconds (all its threads; in local mode the tasks' too; NaN where the JVM does not tell).
+     * {@code stageCpuS}: per stage the driver JVM's CPU seconds (all its threads; in local mode the tasks' too; NaN where the JVM does not tell);
+     * {@code partitions}: the partitions the tiles were grouped into ({@link #partitionCount}).
      */
     record Outcome(List<Column> columns, double[] bounceWh, boolean converged, long rows, long[] firstPassBytes,
                    Map<String, Double> stageS, List<PvZones.Zone> zones, TileOut.ZoneRows zoneRows, List<Column> summarised,
-                   List<org.solmass.output.BuildingsWriter.Building> buildings, Map<String, Double> stageCpuS) {}
+                   List<org.solmass.output.BuildingsWriter.Building> buildings, Map<String, Double> stageCpuS, int partitions) {}
 
     private static final Map<String, CityModel> CITIES = new ConcurrentHashMap<>();
 
@@ -118,11 +119,35 @@ final class CityStages {
      * Partitions of tiles per core of the cluster ({@code spark.default.parallelism}; local mode: the
      * cores given): enough tasks per stage for Spark to even out unequal tiles, few enough that a
      * stage is not mostly task launches and a shuffle not mostly empty blocks (a shuffle grouped by
-     * tile has partitions x partitions blocks). Measured, docs/city.md "Tiles grouped into partitions".
+     * tile has partitions x partitions blocks). Measured: docs/city.md, "Faster metrics on both sides, tiles grouped into partitions".
      */
     static final int PARTITIONS_PER_CORE = 4;
     /** The Spark setting that overrides {@link #PARTITIONS_PER_CORE} ({@code --conf} of spark-submit, or a {@code spark.*} system property). */
     static final String PARTITIONS_PER_CORE_KEY = "spark.solmass.city.partitionsPerCore";
+
+    /**
+     * Receivers a partition holds at most, about (the greedy grouping may pass it by one tile): a task
+     * keeps its partition's first-pass sums together (the joins between stages, the persisted blocks),
+     * about 1.5 kB per receiver ("Task memory" in docs/city.md), so about 300 MB; a tile's scene is
+     * built and dropped tile by tile and does not add up.
+     */
+    static final long MAX_RECEIVERS_PER_PARTITION = 200_000;
+
+    /**
+     * The partitions of a run: {@link #partitionsPerCore} x the cores Spark reports, at least as many
+     * as keep each under {@link #MAX_RECEIVERS_PER_PARTITION}, at most one per tile. The cores are
+     * known in local mode and where {@code spark.default.parallelism} is set; on a cluster without it
+     * the executors may not have registered when the run starts (Spark then reports too few cores), so
+     * each tile gets a partition of its own.
+     */
+    static int partitionCount(org.apache.spark.SparkContext sc, CityPlan plan) {
+        int tiles = plan.tiles().size();
+        boolean coresKnown = sc.master().startsWith("local") || sc.conf().contains("spark.default.parallelism");
+        if (!coresKnown) return Math.max(1, tiles);
+        long byCores = (long) partitionsPerCore(sc.conf()) * Math.max(1, sc.defaultParallelism());
+        long byMemory = (plan.receiverCount() + MAX_RECEIVERS_PER_PARTITION - 1) / MAX_RECEIVERS_PER_PARTITION;
+        return (int) Math.max(1, Math.min(tiles, Math.max(byCores, byMemory)));
+    }
 
     /** {@link #PARTITIONS_PER_CORE}, or what {@code conf} sets under {@link #PARTITIONS_PER_CORE_KEY} (a whole number from 1). */
     static int partitionsPerCore(org.apache.spark.SparkConf conf) {
@@ -249,7 +274,7 @@ final class CityStages {
         JavaSparkContext sc = JavaSparkContext.fromSparkContext(spark.sparkContext());
         int nTiles = plan.tiles().size();
         int analysed = plan.analysedCount();
-        TilePartitioner tp = new TilePartitioner(plan, partitionsPerCore(sc.getConf()) * Math.max(1, sc.defaultParallelism()));
+        TilePartitioner tp = new TilePartitioner(plan, partitionCount(sc.sc(), plan));
         Broadcast<CityPlan> bPlan = sc.broadcast(plan);
         Broadcast<byte[]> bTables = sc.broadcast(city.tables().encode());
         double[] ghiMonth = TileBounces.ghiMonthWh(city.sun());
@@ -278,7 +303,7 @@ final class CityStages {
         // (TileExchange.Route); the requests go to the owners, which keep them as what they send
         Broadcast<int[]> bOwner = sc.broadcast(TileExchange.owners(plan));
         JavaPairRDD<Integer, TileState> state = firsts.mapPartitionsToPair(it -> {
-            List<Tuple2<Integer, TileState>> l = new ArrayList<>(1);
+            List<Tuple2<Integer, TileState>> l = new ArrayList<>();
             it.forEachRemaining(e -> l.add(new Tuple2<>(e._1(), TileState.initial(e._1(), e._2(), bOwner.value()))));
             return l.iterator();
         }, true).persist(StorageLevel.MEMORY_AND_DISK());
@@ -379,7 +404,8 @@ final class CityStages {
         bTables.destroy();
         bOwner.destroy();
         bZones.destroy();
-        return new Outcome(columns, bounces, conv, count, bytes, stageS, zones, zoneRows, summarised, buildings, stageCpuS);
+        return new Outcome(columns, bounces, conv, count, bytes, stageS, zones, zoneRows, summarised, buildings, stageCpuS,
+                tp.numPartitions());
     }
 
     /** This JVM's CPU time so far, all threads, ns ({@code com.sun.management.OperatingSystemMXBean}); -1 where the JVM does not tell. */

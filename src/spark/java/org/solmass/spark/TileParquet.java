@@ -37,7 +37,7 @@ import java.util.Map;
 /**
  * Writes a city run's per-patch rows ({@link PatchRows}) as Parquet, one file per tile in
  * {@code tile=K/}, straight from each tile's arrays ({@link TileOut}): no Spark SQL rows, no sort
- * (a tile is one partition already), no conversion to Spark's internal rows. The files are those
+ * (a tile lies in one partition), no conversion to Spark's internal rows. The files are those
  * Spark SQL writes for {@code partitionBy("tile")}: the same Parquet schema (message
  * {@code spark_schema}, required patch columns, optional result columns), the same key-value
  * metadata (Spark's version and the row schema with each column's unit, label and decimals, which
@@ -45,7 +45,7 @@ import java.util.Map;
  * dictionary (they hardly repeat), block, kind and surface with one.
  *
  * <p>The write goes through Spark's Hadoop commit protocol ({@code saveAsNewAPIHadoopFile}: each
- * task writes into its attempt's folder, the output commit coordinator lets one attempt per tile
+ * task writes into its attempt's folder, the output commit coordinator lets one attempt per task
  * commit, the job commit moves the committed files into place and writes {@code _SUCCESS}), so a
  * retried write task leaves every patch exactly once.
  */
@@ -103,8 +103,9 @@ public final class TileParquet {
     }
 
     /**
-     * The output format of the write: each tile's rows into {@code tile=K/part-NNNNN.snappy.parquet}
-     * under the task attempt's work folder (NNNNN: the Spark partition, which holds one or more tiles).
+     * The output format of the write: each tile's rows into {@code tile=K/part-KKKKK.snappy.parquet}
+     * under the task attempt's work folder (KKKKK: the tile again, so the names depend on the plan only,
+     * not on how the tiles were grouped into partitions; a tile lies in one task, so the name is unique).
      */
     public static final class Format extends FileOutputFormat<Void, Rows> {
         @Override
@@ -113,12 +114,11 @@ public final class TileParquet {
             Configuration conf = ctx.getConfiguration();
             StructType schema = (StructType) DataType.fromJson(conf.get(SCHEMA_KEY));
             String version = conf.get(VERSION_KEY);
-            int part = ctx.getTaskAttemptID().getTaskID().getId();
             return new RecordWriter<>() {
                 @Override
                 public void write(Void key, Rows r) throws IOException {
                     if (r.size() == 0) return; // a tile of ground probes only: no folder, as Spark SQL writes none
-                    Path file = new Path(work, String.format(Locale.ROOT, "%s=%d/part-%05d.snappy.parquet", PatchRows.TILE, r.tile, part));
+                    Path file = new Path(work, String.format(Locale.ROOT, "%s=%d/part-%05d.snappy.parquet", PatchRows.TILE, r.tile, r.tile));
                     writeFile(file, conf, schema, version, r);
                 }
 

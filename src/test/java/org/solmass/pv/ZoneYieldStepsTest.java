@@ -23,8 +23,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * The yield of a zone, which works out per step what modules of one plane share once and sums the
  * chain on flat arrays, against the chain's own record path step by step: {@link PlaneOfArray#module}
  * for each module, {@link ModuleIrradiance}, {@link YieldChain#step}. Equal bit for bit. The zone
- * mixes racked rows of two azimuths, module by module, so the shared values change between
- * neighbours, and the rows shade each other, so the substrings differ.
+ * mixes racked rows of two azimuths on two fields side by side, module by module, so the shared
+ * values change between neighbours, and the rows shade each other, so the substrings differ. What
+ * it checks is the sharing and the flat arrays; the chain's formula itself (one method on both
+ * paths) is checked against worked values in {@code YieldChainTest}.
  */
 class ZoneYieldStepsTest {
     @Test
@@ -33,14 +35,16 @@ class ZoneYieldStepsTest {
         LayoutOptions lo = new LayoutOptions(spec, 0, 5, 20, Double.NaN, 0.7, 0, 0.2, false);
         Polygon field = InterRowShadingTest.GF.createPolygon(new Coordinate[] {new Coordinate(0, 0), new Coordinate(12, 0),
                 new Coordinate(12, 9), new Coordinate(0, 9), new Coordinate(0, 0)});
+        Polygon beside = InterRowShadingTest.GF.createPolygon(new Coordinate[] {new Coordinate(20, 0), new Coordinate(32, 0),
+                new Coordinate(32, 9), new Coordinate(20, 9), new Coordinate(20, 0)});
         List<PvModule> south = ModuleLayout.place(1, field, InterRowShadingTest.GROUND, true, 180, lo);
-        List<PvModule> west = ModuleLayout.place(1, field, InterRowShadingTest.GROUND, true, 230, lo);
+        List<PvModule> west = ModuleLayout.place(1, beside, InterRowShadingTest.GROUND, true, 230, lo);
         List<PvModule> zone = new ArrayList<>();
         for (int i = 0; i < Math.max(south.size(), west.size()); i++) { // planes alternate module by module
             if (i < south.size()) zone.add(south.get(i));
             if (i < west.size()) zone.add(west.get(i));
         }
-        Scene scene = InterRowShadingTest.sceneWith(south);
+        Scene scene = Scene.build(new float[0], true, 0); // open ground; PvArrays adds every module's rack
         WeatherSeries w = ClimateSource.load(new Site(51, 10, 0, ZoneOffset.ofHours(1)), ClimateSpec.clearSkyYear(2025));
         PvArrays.Result r = PvArrays.run(scene, new boolean[scene.triangleCount()], List.of(zone), new int[] {1}, lo, w,
                 Perez.INSTANCE, SunDirections.exact(w), 0.2, ZoneOffset.ofHours(1), new PvArrays.Settings(64, 9L, 4, 2));
