@@ -23,8 +23,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * since a shadow edge crossing a sky cell moves a whole cell's steps into or out of sun for one patch.
  */
 class BinnedSunErrorTest {
-    @Test
-    void binnedSunRaysStayWithinOnePercentOfExactRaysOnAShadedFacade() {
+    /** The shaded facade's scene, its south facade patches, the year and its exact-ray run. */
+    private record Shaded(PipelineFixture f, List<Patch> facade, WeatherSeries year, IrradiationResult exact) {
+        /** The facade with the sun binned into {@code cells} sky cells. */
+        IrradiationResult binned(int cells) {
+            return f.run(facade, year, Perez.INSTANCE, new IrradiationSetup.Options(1.0, 64, 0.2, false,
+                    IrradiationSetup.SunSampling.BINNED, cells, 7L, true));
+        }
+    }
+
+    private static Shaded shadedFacade() {
         TestModels m = new TestModels()
                 .box("target", 0, 0, 40, 12, 21)
                 .box("across", -10, -34, 50, -14, 24)
@@ -33,8 +41,15 @@ class BinnedSunErrorTest {
         List<Patch> facade = f.patches.patches().stream()
                 .filter(p -> p.kind() == SurfaceKind.FACADE && Math.abs(p.azimuthDeg() - 180) < 1).toList();
         WeatherSeries year = ClimateSource.load(new Site(51, 10, 0, ZoneId.of("Europe/Berlin")), ClimateSpec.clearSkyYear(2025));
-        IrradiationResult exact = f.run(facade, year, Perez.INSTANCE, PipelineFixture.options(64, IrradiationSetup.SunSampling.EXACT));
-        IrradiationResult binned = f.run(facade, year, Perez.INSTANCE, PipelineFixture.options(64, IrradiationSetup.SunSampling.BINNED));
+        return new Shaded(f, facade, year, f.run(facade, year, Perez.INSTANCE, PipelineFixture.options(64, IrradiationSetup.SunSampling.EXACT)));
+    }
+
+    @Test
+    void binnedSunRaysStayWithinOnePercentOfExactRaysOnAShadedFacade() {
+        Shaded c = shadedFacade();
+        List<Patch> facade = c.facade();
+        IrradiationResult exact = c.exact();
+        IrradiationResult binned = c.f().run(facade, c.year(), Perez.INSTANCE, PipelineFixture.options(64, IrradiationSetup.SunSampling.BINNED));
         double worst = 0, sumE = 0, sumB = 0, shadedShare = 0;
         for (int p = 0; p < facade.size(); p++) {
             double e = exact.annual()[p], b = binned.annual()[p];
@@ -57,23 +72,15 @@ class BinnedSunErrorTest {
      */
     @Test
     void aPatchsErrorFallsAsTheSkyCellsGetFiner() {
-        TestModels m = new TestModels()
-                .box("target", 0, 0, 40, 12, 21)
-                .box("across", -10, -34, 50, -14, 24)
-                .box("tower", 45, -70, 60, -55, 70);
-        PipelineFixture f = new PipelineFixture(m.build(), Set.of("target"), 3.0);
-        List<Patch> facade = f.patches.patches().stream()
-                .filter(p -> p.kind() == SurfaceKind.FACADE && Math.abs(p.azimuthDeg() - 180) < 1).toList();
-        WeatherSeries year = ClimateSource.load(new Site(51, 10, 0, ZoneId.of("Europe/Berlin")), ClimateSpec.clearSkyYear(2025));
-        IrradiationResult exact = f.run(facade, year, Perez.INSTANCE, PipelineFixture.options(64, IrradiationSetup.SunSampling.EXACT));
+        Shaded c = shadedFacade();
+        int n = c.facade().size();
         double previous = Double.POSITIVE_INFINITY;
         for (int cells : new int[] {1024, 4096, 8192}) {
-            IrradiationResult binned = f.run(facade, year, Perez.INSTANCE, new IrradiationSetup.Options(1.0, 64, 0.2, false,
-                    IrradiationSetup.SunSampling.BINNED, cells, 7L, true));
+            IrradiationResult binned = c.binned(cells);
             double mean = 0, worst = 0;
-            for (int p = 0; p < facade.size(); p++) {
-                double e = exact.annual()[p], d = Math.abs(binned.annual()[p] - e) / e;
-                mean += d / facade.size();
+            for (int p = 0; p < n; p++) {
+                double e = c.exact().annual()[p], d = Math.abs(binned.annual()[p] - e) / e;
+                mean += d / n;
                 worst = Math.max(worst, d);
             }
             System.out.printf("%d cells, %d sun directions: mean patch error %.3f %%, worst patch %.3f %%%n",
