@@ -344,11 +344,7 @@ public final class HemisphereSampler {
         int r = at, k = 0;
         for (int s = 0; s < count; s++) {
             if (inSubset[s]) continue;
-            double dz = dir[3 * s + 2], tg = Double.POSITIVE_INFINITY;
-            if (scene.hasGroundPlane() && dz != 0) { // as classify: a triangle before the plane blocks
-                double t = (scene.groundZ() - oz) / dz;
-                if (t > 0) tg = t;
-            }
+            double dz = dir[3 * s + 2], tg = groundPlaneT(oz, dz); // as classify: a triangle before the plane blocks
             copyDirection(dir, s, qDir, r);
             qT[r] = tg;
             qFar[r] = tg == Double.POSITIVE_INFINITY && scene.escapeBlocked(dir[3 * s], dir[3 * s + 1], dz);
@@ -374,6 +370,13 @@ public final class HemisphereSampler {
             else if (restGround[k]) cls[s] = GROUND;
             else cls[s] = dir[3 * s + 2] < 0 ? GROUND : SKY;
         }
+    }
+
+    /** Ray parameter at which a ray from height {@code oz} with vertical component {@code dz} meets the ground plane, from either side; +infinity when it does not (or there is none). */
+    private double groundPlaneT(double oz, double dz) {
+        if (!scene.hasGroundPlane() || dz == 0) return Double.POSITIVE_INFINITY;
+        double t = (scene.groundZ() - oz) / dz;
+        return t > 0 ? t : Double.POSITIVE_INFINITY;
     }
 
     /** {@code to[3r..3r+2] = from[3s..3s+2]}: three stores, cheaper than a call to arraycopy per ray. */
@@ -445,14 +448,7 @@ public final class HemisphereSampler {
             for (int s = 0; s < count; s++) cls[s] = classOf(hitTri[s], dir[3 * s + 2], triangleIsGround);
             return;
         }
-        for (int s = 0; s < count; s++) { // ray parameter of the ground plane, from either side
-            double dz = dir[3 * s + 2], tg = Double.POSITIVE_INFINITY;
-            if (scene.hasGroundPlane() && dz != 0) {
-                double t = (scene.groundZ() - oz) / dz;
-                if (t > 0) tg = t;
-            }
-            groundT[s] = tg;
-        }
+        for (int s = 0; s < count; s++) groundT[s] = groundPlaneT(oz, dir[3 * s + 2]);
         bundle.occluded(ox, oy, oz, dir, groundT, count, blocked); // a triangle before the plane?
         for (int s = 0; s < count; s++) {
             if (blocked[s]) cls[s] = BLOCK;
@@ -465,10 +461,11 @@ public final class HemisphereSampler {
      * Which rays of {@link #classify(Patch, long, boolean[], double[], int[])} (no ground-flagged
      * triangles) reach the sky: {@code sky[s]} is true exactly where that method gives
      * {@link #SKY}. Only the rays that can reach it are traced: a ray going down ({@code dz < 0})
-     * ends on the ground plane, on a triangle or, with neither, counts as ground, so it is never sky.
+     * ends on the ground plane, on a triangle or, with neither, counts as ground, so it is never sky;
+     * nor is a ray that meets the ground plane from below (an origin under it).
      * For metrics that weigh the visible sky alone (the vertical sky component): a vertical patch's
-     * downward half is not traced. The rays traced are those of {@code classify} with their own
-     * limits, so the answers are the same. Uses the sampler's scratch arrays: not between a
+     * downward half is not traced. The rays traced are those of {@code classify}, with no limit as
+     * there, so the answers are the same. Uses the sampler's scratch arrays: not between a
      * {@link #queueForReflection} and its {@link #classifyRest} on the same sampler.
      */
     public void skyRays(Patch patch, long runSeed, double[] dir, boolean[] sky) {
@@ -479,17 +476,12 @@ public final class HemisphereSampler {
         for (int s = 0; s < count; s++) {
             sky[s] = false;
             double dz = dir[3 * s + 2];
-            if (dz < 0) continue;
-            double tg = Double.POSITIVE_INFINITY; // as classify: the plane from below, for an origin under it
-            if (scene.hasGroundPlane() && dz != 0) {
-                double t = (scene.groundZ() - oz) / dz;
-                if (t > 0) tg = t;
-            }
+            // down, or up into the ground plane from an origin under it: ground or blocked in classify
+            if (dz < 0 || groundPlaneT(oz, dz) < Double.POSITIVE_INFINITY) continue;
             copyDirection(dir, s, partDir, up);
-            groundT[up] = tg;
             restRay[up++] = s;
         }
-        bundle.occluded(ox, oy, oz, partDir, groundT, up, blocked);
-        for (int k = 0; k < up; k++) sky[restRay[k]] = !blocked[k] && groundT[k] == Double.POSITIVE_INFINITY;
+        bundle.occluded(ox, oy, oz, partDir, null, up, blocked); // no limit, as classify gives these rays
+        for (int k = 0; k < up; k++) sky[restRay[k]] = !blocked[k];
     }
 }
