@@ -215,8 +215,12 @@ public final class ShadedIrradiation {
         final int[] subset;
         int subsetCount;
         final org.solmass.scene.BundleTracer bundle;
-        /** Directions, weights, limits and sun indices of the rays traced as one bundle (hemisphere rays without a first hit, horizon band, sun). */
-        final double[] bundleDir, bundleW, bundleT;
+        /**
+         * Directions and limits of the receiver's own rays traced as one bundle with the shared band and
+         * sun rays ({@link #shareBandAndSun}): the hemisphere rays without a first hit; with tree crowns,
+         * the sun directions (and their indices) as a bundle of their own.
+         */
+        final double[] bundleDir, bundleT;
         final int[] sunIndex;
         /** Per sun direction, whether the scene's far horizon blocks it (the same from every origin); per bundle ray, the same. */
         final boolean[] sunFar, bundleFar;
@@ -256,12 +260,17 @@ public final class ShadedIrradiation {
             bundle = scene.bundleTracer();
             int bundleMax = in.sun().count() + HorizonBand.RAYS + HemisphereSampler.roundedRayCount(in.raysPerPatch());
             bundleDir = new double[3 * bundleMax];
-            bundleW = new double[bundleMax];
             bundleT = new double[bundleMax];
             sunIndex = new int[bundleMax];
             blocked = new boolean[bundleMax];
             sunFar = scene.escapeBlocked(in.sun().directions, in.sun().count());
             bundleFar = new boolean[bundleMax];
+            int sharedMax = in.sun().count() + HorizonBand.RAYS;
+            sharedDir = new double[3 * sharedMax];
+            sharedW = new double[sharedMax];
+            sharedFar = new boolean[sharedMax];
+            sharedBlocked = new boolean[sharedMax];
+            sharedSun = new int[sharedMax];
             int maxRays = Math.max(sampler.rayCount(), reflectorSampler.rayCount());
             reflectionBlock = HemisphereSampler.reflectionBlock(sampler.gridSide(), in.reflectorRays());
             subset = new int[maxRays];
@@ -295,16 +304,15 @@ public final class ShadedIrradiation {
                 int end = hs.queueForReflection(ox, oy, oz, nx, ny, nz, rc.seed[r], block, dir, cls, tri, dist, subset,
                         bundleDir, bundleT, bundleFar, 0);
                 subsetCount = hs.reflectionSubsetSize();
-                int bandFrom = end;
-                end = queueBandAndSun(band, nx, ny, nz, end);
-                bundle.occludedKnownFar(ox, oy, oz, bundleDir, bundleT, bundleFar, end, blocked);
+                shareBandAndSun(band, nx, ny, nz);
+                bundle.occludedWithShared(ox, oy, oz, bundleDir, bundleT, bundleFar, end, blocked, sharedBlocked);
                 hs.classifyRest(blocked, dir, cls, tri, dist);
-                readBandAndSun(band, bandFrom, end);
+                readBandAndSun(band);
             } else {
                 // every ray for the view factors; the first hits where reflection needs them (with crowns: all, for their legs)
                 subsetCount = hs.sampleForReflection(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), canopy != null,
                         block, dir, cls, tri, dist, subset);
-                if (canopy == null) bandAndSun(band, ox, oy, oz, nx, ny, nz); // one bundle
+                if (canopy == null) bandAndSun(band, ox, oy, oz, nx, ny, nz); // one bundle of their own
                 else {
                     horizonVis = band ? horizon.visibility(bundle, ox, oy, oz, nx, ny, nz, canopy) : 0;
                     sunVisibility(ox, oy, oz, nx, ny, nz);
@@ -374,18 +382,54 @@ public final class ShadedIrradiation {
          * (each ray's answer does not depend on the bundle it is traced in).
          */
         private void bandAndSun(boolean band, double ox, double oy, double oz, double nx, double ny, double nz) {
-            int m = queueBandAndSun(band, nx, ny, nz, 0);
-            bundle.occludedKnownFar(ox, oy, oz, bundleDir, bundleT, bundleFar, m, blocked);
-            readBandAndSun(band, 0, m);
+            shareBandAndSun(band, nx, ny, nz);
+            bundle.occludedWithShared(ox, oy, oz, bundleDir, null, bundleFar, 0, blocked, sharedBlocked);
+            readBandAndSun(band);
         }
 
-        /** The band's rays (when {@code band}) and the sun directions in front into the bundle from {@code at}; returns its end. */
-        private int queueBandAndSun(boolean band, double nx, double ny, double nz, int at) {
-            bandEnd = band ? horizon.queue(scene, nx, ny, nz, bundleDir, bundleFar, bundleW, at) : at;
-            int m = queueSun(nx, ny, nz, bandEnd);
-            for (int k = at; k < m; k++) bundleT[k] = Double.POSITIVE_INFINITY;
-            return m;
+        /**
+         * Makes the band's rays (when {@code band}) and the sun directions in front of a plane of normal
+         * n the bundle tracer's shared rays ({@link org.solmass.scene.BundleTracer#share}), unless they
+         * are already (the previous receiver had the same normal and band: the patches of one plane
+         * follow each other). Order: the band's rays, then the sun directions by index.
+         */
+        private void shareBandAndSun(boolean band, double nx, double ny, double nz) {
+            if (sharedCount >= 0 && band == sharedBand && nx == sharedNx && ny == sharedNy && nz == sharedNz) return;
+            sharedBandEnd = band ? horizon.queue(scene, nx, ny, nz, sharedDir, sharedFar, sharedW, 0) : 0;
+            float[] d = in.sun().directions;
+            int m = sharedBandEnd;
+            for (int i = 0; i < vis.length; i++) {
+                double dx = d[3 * i], dy = d[3 * i + 1], dz = d[3 * i + 2];
+                if (nx * dx + ny * dy + nz * dz <= 0) continue;
+                sharedDir[3 * m] = dx;
+                sharedDir[3 * m + 1] = dy;
+                sharedDir[3 * m + 2] = dz;
+                sharedFar[m] = sunFar[i];
+                sharedSun[m++] = i;
+            }
+            bundle.share(sharedDir, sharedFar, m);
+            sharedCount = m;
+            sharedBand = band;
+            sharedNx = nx;
+            sharedNy = ny;
+            sharedNz = nz;
         }
+
+        /** horizonVis and vis from the shared rays' answers ({@link #shareBandAndSun}). */
+        private void readBandAndSun(boolean band) {
+            horizonVis = band ? HorizonBand.share(sharedW, sharedBlocked, 0, sharedBandEnd) : 0;
+            Arrays.fill(vis, (byte) 0);
+            for (int k = sharedBandEnd; k < sharedCount; k++) if (!sharedBlocked[k]) vis[sharedSun[k]] = 1;
+        }
+
+        /** The shared rays of the current normal: directions, far answers, band weights, sun indices, answers. */
+        private final double[] sharedDir, sharedW;
+        private final boolean[] sharedFar, sharedBlocked;
+        private final int[] sharedSun;
+        /** Shared rays (-1: none yet), the band's end among them, and the normal and band they are for. */
+        private int sharedCount = -1, sharedBandEnd;
+        private boolean sharedBand;
+        private double sharedNx, sharedNy, sharedNz;
 
         /**
          * The sun directions in front of the patch into the bundle from {@code at} (direction, far-horizon
@@ -406,15 +450,6 @@ public final class ShadedIrradiation {
             }
             return m;
         }
-
-        /** horizonVis and vis from the answers of the rays {@link #queueBandAndSun} put at [from, end). */
-        private void readBandAndSun(boolean band, int from, int end) {
-            horizonVis = band ? HorizonBand.share(bundleW, blocked, from, bandEnd) : 0;
-            for (int k = bandEnd; k < end; k++) if (!blocked[k]) vis[sunIndex[k]] = 1;
-        }
-
-        /** End of the band's rays in the bundle of the current receiver. */
-        private int bandEnd;
 
         private void sunVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {
             int m = queueSun(nx, ny, nz, 0); // the sun directions in front of the patch, together

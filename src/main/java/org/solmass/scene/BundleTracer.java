@@ -138,6 +138,85 @@ public final class BundleTracer {
         trace(ox, oy, oz, count, queued, out);
     }
 
+    /**
+     * Sets the shared rays: directions {@code dir[3s..3s+2]} (s &lt; count) with no limit that the
+     * caller traces from many origins with {@link #occludedWithShared}, and their far-horizon answers
+     * {@code far[s]} ({@link Scene#escapeBlocked(double[], int)}): the sun directions and horizon band
+     * in front of one plane, the same for every patch of that plane. With the SIMD kernel they are
+     * sorted into packets here, once, instead of with every bundle. Replaces the shared rays before.
+     */
+    public void share(double[] dir, boolean[] far, int count) {
+        if (sharedDir.length < 3 * count) {
+            sharedDir = new double[3 * count];
+            sharedFar = new boolean[count];
+        }
+        System.arraycopy(dir, 0, sharedDir, 0, 3 * count);
+        System.arraycopy(far, 0, sharedFar, 0, count);
+        sharedCount = count;
+        sharedUp = false;
+        sharedDown = false;
+        for (int s = 0; s < count; s++) {
+            sharedUp |= dir[3 * s + 2] > 0;
+            sharedDown |= dir[3 * s + 2] < 0;
+        }
+        sharedPacked = simd != null && scene.nodeCount > 0;
+        if (!sharedPacked) return;
+        ensure(count);
+        for (int s = 0; s < count; s++) { // as load() with no limit and no ground plane: the far horizon's rays never enter
+            dx[s] = (float) dir[3 * s];
+            dy[s] = (float) dir[3 * s + 1];
+            dz[s] = (float) dir[3 * s + 2];
+            lim[s] = far[s] ? RETIRED : Float.MAX_VALUE; // (float) min(+infinity, Float.MAX_VALUE), as load() sets it
+        }
+        keys(count);
+        simd.share(count, key, bucketCount, CELLS * CELLS, dx, dy, dz, lim);
+    }
+
+    /**
+     * {@link #occludedKnownFar(double, double, double, double[], double[], boolean[], int, boolean[])}
+     * of rays {@code s < count} and, in the same pass, of the shared rays ({@link #share}):
+     * {@code sharedOut[i]} = whether shared ray i is blocked from origin o. The answers are those of
+     * tracing the shared rays as a bundle of their own with {@code occludedKnownFar}: a ray's answer
+     * does not depend on the rays traced with it. The shared packets are used when the ground plane
+     * cannot decide a shared ray from this origin (below the plane an upward ray meets it; above it a
+     * downward one does); otherwise, and without the SIMD kernel, the shared rays are traced as a
+     * second bundle.
+     */
+    public void occludedWithShared(double ox, double oy, double oz, double[] dir, double[] tMax, boolean[] far, int count,
+                                   boolean[] out, boolean[] sharedOut) {
+        if (sharedCount < 0) throw new IllegalStateException("no shared rays: call share() first");
+        double rise = scene.groundZ - oz; // as load(): the plane meets a ray whose dz has the sign of rise
+        boolean planeDecides = scene.groundPlane && (rise > 0 ? sharedUp : rise < 0 && sharedDown);
+        if (!sharedPacked || planeDecides) {
+            occludedKnownFar(ox, oy, oz, dir, tMax, far, count, out);
+            occludedKnownFar(ox, oy, oz, sharedDir, null, sharedFar, sharedCount, sharedOut);
+            return;
+        }
+        ensure(count);
+        for (int s = 0; s < count; s++) {
+            if (far[s]) {
+                out[s] = true;
+                lim[s] = RETIRED;
+                continue;
+            }
+            load(s, ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2],
+                    tMax == null ? Double.POSITIVE_INFINITY : tMax[s], false, out);
+        }
+        System.arraycopy(sharedFar, 0, sharedOut, 0, sharedCount); // the packed ones are set by the kernel
+        keys(count);
+        float fox = (float) (ox - scene.shiftX), foy = (float) (oy - scene.shiftY), foz = (float) (oz - scene.shiftZ);
+        simd.trace(count, key, bucketCount, CELLS * CELLS, fox, foy, foz, dx, dy, dz, lim, out, sharedOut);
+    }
+
+    /** The shared rays ({@link #share}): directions, far-horizon answers, count (-1: none yet). */
+    private double[] sharedDir = new double[0];
+    private boolean[] sharedFar = new boolean[0];
+    private int sharedCount = -1;
+    /** Whether some shared direction points up (dz &gt; 0) or down (dz &lt; 0): the ground plane's cases. */
+    private boolean sharedUp, sharedDown;
+    /** Whether the SIMD kernel holds the shared rays' packets. */
+    private boolean sharedPacked;
+
     private int load(int s, double ox, double oy, double oz, double ddx, double ddy, double ddz, double tMax, boolean[] out) {
         return load(s, ox, oy, oz, ddx, ddy, ddz, tMax, true, out);
     }
@@ -221,7 +300,7 @@ public final class BundleTracer {
         keys(count);
         float ox = (float) (wox - scene.shiftX), oy = (float) (woy - scene.shiftY), oz = (float) (woz - scene.shiftZ);
         if (simd != null) {
-            simd.trace(count, key, bucketCount, CELLS * CELLS, ox, oy, oz, dx, dy, dz, lim, out);
+            simd.trace(count, key, bucketCount, CELLS * CELLS, ox, oy, oz, dx, dy, dz, lim, out, null);
             return;
         }
         sort(count);

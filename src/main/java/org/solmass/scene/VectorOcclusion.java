@@ -50,6 +50,13 @@ final class VectorOcclusion {
     private static final float NONE = Float.intBitsToFloat(-1);
     private int[] preach = new int[0];
     private int[] pOctant = new int[0], plist = new int[0];
+    /**
+     * Lanes at the start of the packet arrays that hold the shared rays ({@link #share}): packed once,
+     * traced from many origins; every bundle's own packets follow them.
+     */
+    private int sharedLanes;
+    /** The shared lanes' limits before a trace (a trace retires lanes in {@link #plim}). */
+    private float[] sharedLim = new float[0];
     /** Slab offsets box - origin of the node being visited: child A lo x,y,z, hi x,y,z, then child B. */
     private final float[] delta = new float[12];
 
@@ -66,29 +73,52 @@ final class VectorOcclusion {
     /**
      * Traces the rays of a bundle from the shifted origin o and sets {@code out[ray]} for every ray
      * that is blocked. The rays are laid out in packets by their sort keys ({@link #pack}), so that
-     * a packet's lanes share their direction signs.
+     * a packet's lanes share their direction signs. With {@code sharedOut} not null the shared rays
+     * ({@link #share}) go through the tree with them, and {@code sharedOut[ray]} is set (true or
+     * false) for each shared ray that was packed; a shared ray that was not (its limit was below zero)
+     * is left as it is.
      */
     void trace(int count, int[] key, int[] bucketCount, int bucketsPerOctant, float ox, float oy, float oz,
-               float[] dx, float[] dy, float[] dz, float[] lim, boolean[] out) {
+               float[] dx, float[] dy, float[] dz, float[] lim, boolean[] out, boolean[] sharedOut) {
         closestMode = false;
-        int k = pack(count, key, bucketCount, bucketsPerOctant, dx, dy, dz, lim);
-        stream(k / LANES, ox, oy, oz);
-        for (int j = 0; j < k; j++) if (pray[j] >= 0 && plim[j] < 0) out[pray[j]] = true;
+        int base = sharedLanes, k = pack(base, count, key, bucketCount, bucketsPerOctant, dx, dy, dz, lim);
+        int first = sharedOut != null ? 0 : base / LANES, packets = (base + k) / LANES - first;
+        for (int j = 0; j < packets; j++) plist[j] = first + j;
+        if (sharedOut != null) System.arraycopy(sharedLim, 0, plim, 0, base);
+        stream(packets, ox, oy, oz);
+        for (int j = base; j < base + k; j++) if (pray[j] >= 0 && plim[j] < 0) out[pray[j]] = true;
+        if (sharedOut != null) for (int j = 0; j < base; j++) if (pray[j] >= 0) sharedOut[pray[j]] = plim[j] < 0;
+    }
+
+    /**
+     * Packs rays that will be traced from many origins (the sun directions and horizon band in front of
+     * one plane) once, ahead of every bundle's own packets, for {@link #trace} with a {@code sharedOut};
+     * keyed as {@link #pack} wants them. Replaces the shared rays before.
+     */
+    void share(int count, int[] key, int[] bucketCount, int bucketsPerOctant, float[] dx, float[] dy, float[] dz, float[] lim) {
+        sharedLanes = 0;
+        int k = pack(0, count, key, bucketCount, bucketsPerOctant, dx, dy, dz, lim);
+        if (sharedLim.length < k) sharedLim = new float[k];
+        System.arraycopy(plim, 0, sharedLim, 0, k);
+        sharedLanes = k;
     }
 
     /**
      * Closest hit instead of any hit for the same bundle layout: {@code leafTri[ray]} = leaf-order
      * index of the nearest triangle with 0 &lt; t &lt; lim[ray], or -1; {@code hitT[ray]} its t (the
      * float of {@code Tracer}'s Moller-Trumbore). Lanes keep their best t as their limit, so boxes
-     * beyond it are culled, as in the single-ray closest-hit traversal.
+     * beyond it are culled, as in the single-ray closest-hit traversal. The shared rays are not traced
+     * (their packets stay as they are).
      */
     void closest(int count, int[] key, int[] bucketCount, int bucketsPerOctant, float ox, float oy, float oz,
                  float[] dx, float[] dy, float[] dz, float[] lim, int[] leafTri, float[] hitT) {
         closestMode = true;
-        int k = pack(count, key, bucketCount, bucketsPerOctant, dx, dy, dz, lim);
-        java.util.Arrays.fill(pbest, 0, k, NONE);
-        stream(k / LANES, ox, oy, oz);
-        for (int j = 0; j < k; j++) {
+        int base = sharedLanes, k = pack(base, count, key, bucketCount, bucketsPerOctant, dx, dy, dz, lim);
+        java.util.Arrays.fill(pbest, base, base + k, NONE);
+        int packets = k / LANES;
+        for (int j = 0; j < packets; j++) plist[j] = base / LANES + j;
+        stream(packets, ox, oy, oz);
+        for (int j = base; j < base + k; j++) {
             int ray = pray[j];
             if (ray < 0) continue;
             leafTri[ray] = Float.floatToRawIntBits(pbest[j]);
@@ -97,13 +127,15 @@ final class VectorOcclusion {
     }
 
     /**
-     * Counting sort of the rays straight into packets: ray s with {@code key[s] >= 0} (direction
-     * octant x bucketsPerOctant + direction cell; -1 for a ray already decided) goes after the rays of
-     * smaller keys and of its own key with smaller index; each octant's run is padded with retired
-     * lanes to whole packets. {@code bucketCount} holds the rays per key (it is overwritten). Fills
-     * the packet arrays, their inverse directions and the packet list; returns the lanes used.
+     * Counting sort of the rays straight into packets from lane {@code base} (a whole packet; the
+     * lanes before it are kept): ray s with {@code key[s] >= 0} (direction octant x bucketsPerOctant +
+     * direction cell; -1 for a ray already decided) goes after the rays of smaller keys and of its own
+     * key with smaller index; each octant's run is padded with retired lanes to whole packets.
+     * {@code bucketCount} holds the rays per key (it is overwritten). Fills the packet arrays and their
+     * inverse directions and octants; returns the lanes used from {@code base}. The caller fills the
+     * packet list.
      */
-    private int pack(int count, int[] key, int[] bucketCount, int bucketsPerOctant,
+    private int pack(int base, int count, int[] key, int[] bucketCount, int bucketsPerOctant,
                      float[] dx, float[] dy, float[] dz, float[] lim) {
         int packets = 0;
         for (int o = 0, b = 0; o < 8; o++) {
@@ -111,8 +143,8 @@ final class VectorOcclusion {
             for (int e = b + bucketsPerOctant; b < e; b++) c += bucketCount[b];
             packets += (c + LANES - 1) / LANES;
         }
-        ensure(packets);
-        int at = 0, pk = 0;
+        ensure(base / LANES + packets);
+        int at = base, pk = base / LANES;
         for (int o = 0, b = 0; o < 8; o++) {
             int first = at;
             for (int e = b + bucketsPerOctant; b < e; b++) { // bucket b's first lane
@@ -136,13 +168,12 @@ final class VectorOcclusion {
             plim[j] = lim[s];
             pray[j] = s;
         }
-        for (int q = 0; q < at; q += LANES) { // inverse directions, as the single-ray tracer takes them
+        for (int q = base; q < at; q += LANES) { // inverse directions, as the single-ray tracer takes them
             inverse(px, pix, q);
             inverse(py, piy, q);
             inverse(pz, piz, q);
         }
-        for (int j = 0; j < packets; j++) plist[j] = j;
-        return at;
+        return at - base;
     }
 
     private static final int SIGN = 0x80000000, TINY_BITS = Float.floatToRawIntBits(BundleTracer.TINY_DIR);
@@ -159,17 +190,18 @@ final class VectorOcclusion {
         FloatVector.broadcast(F, 1f).div(FloatVector.fromArray(F, inv, q)).intoArray(inv, q);
     }
 
+    /** Room for {@code packets} packets in all; the packets already there (the shared ones) are kept. */
     private void ensure(int packets) {
         int n = packets * LANES;
         if (pOctant.length < packets) {
-            pOctant = new int[packets];
+            pOctant = java.util.Arrays.copyOf(pOctant, packets);
             plist = new int[packets + 2 * packets * (stRef.length)];
         }
         if (px.length >= n) return;
-        px = new float[n]; py = new float[n]; pz = new float[n];
-        pix = new float[n]; piy = new float[n]; piz = new float[n];
-        plim = new float[n];
-        pray = new int[n];
+        px = java.util.Arrays.copyOf(px, n); py = java.util.Arrays.copyOf(py, n); pz = java.util.Arrays.copyOf(pz, n);
+        pix = java.util.Arrays.copyOf(pix, n); piy = java.util.Arrays.copyOf(piy, n); piz = java.util.Arrays.copyOf(piz, n);
+        plim = java.util.Arrays.copyOf(plim, n);
+        pray = java.util.Arrays.copyOf(pray, n);
         preach = new int[n];
         pbest = new float[n];
         phit = new float[n];
