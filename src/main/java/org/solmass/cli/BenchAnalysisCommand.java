@@ -46,17 +46,27 @@ public final class BenchAnalysisCommand implements Callable<Integer> {
      */
     static final class PhaseCpu implements PhaseProgress {
         final java.util.Map<String, String> seconds = new java.util.LinkedHashMap<>();
+        /** Wall time per phase, as {@link #seconds}. */
+        final java.util.Map<String, String> wall = new java.util.LinkedHashMap<>();
         private final com.sun.management.OperatingSystemMXBean os =
                 (com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory.getOperatingSystemMXBean();
         private String phase;
-        private long since;
+        private long since, sinceWall;
 
         @Override public synchronized void begin(String next, long total) {
-            long now = os.getProcessCpuTime();
-            if (phase != null) seconds.merge(phase, String.format(Locale.ROOT, "%.1f", (now - since) / 1e9),
-                    (a, b) -> String.format(Locale.ROOT, "%.1f", Double.parseDouble(a) + Double.parseDouble(b)));
+            long now = os.getProcessCpuTime(), nowWall = System.nanoTime();
+            if (phase != null) {
+                add(seconds, phase, now - since);
+                add(wall, phase, nowWall - sinceWall);
+            }
             phase = next;
             since = now;
+            sinceWall = nowWall;
+        }
+
+        private static void add(java.util.Map<String, String> m, String phase, long nanos) {
+            m.merge(phase, String.format(Locale.ROOT, "%.2f", nanos / 1e9),
+                    (a, b) -> String.format(Locale.ROOT, "%.2f", Double.parseDouble(a) + Double.parseDouble(b)));
         }
 
         @Override public void advance(long done) {}
@@ -88,6 +98,7 @@ public final class BenchAnalysisCommand implements Callable<Integer> {
                     o.counts().get("triangles"), t.get("load"), t.get("patches"), t.get("scene"), t.get("irradiation"),
                     total, total / n * 1e6, peakHeapMb());
             System.out.printf(Locale.ROOT, "  process CPU by phase (s): %s%n", cpu.seconds);
+            System.out.printf(Locale.ROOT, "  wall time by phase (s): %s%n", cpu.wall);
         }
         return Main.EXIT_OK;
     }

@@ -103,6 +103,7 @@ public final class ShadedIrradiation {
         float[] ghiAlbedo = new float[total], ghiAlbedo2 = new float[n];
         float[][] canopyReflection = in.canopy() == null ? null : new float[n][12]; // per month, docs/method.md "Vegetation"
 
+        if (org.solmass.scene.KernelWarmup.pendingFor(total)) progress.begin("kernel warm-up", 0);
         org.solmass.scene.KernelWarmup.awaitFor(total); // compiled ray kernels before the first receiver
         progress.begin("visibility", total);
         AtomicLong done = new AtomicLong();

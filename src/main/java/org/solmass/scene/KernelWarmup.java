@@ -16,18 +16,27 @@ import java.util.SplittableRandom;
  * input size, so running the kernels on bundles of a few rays against a few dozen triangles reaches
  * those counts for a small part of the cost of real patches in slow code.
  *
- * <p>The warm-up exercises every path the passes use (any hit with and without limits, closest hit,
- * double and float directions, the hemisphere direction maker, several direction octants, leaves
- * with several triangles, rays that hit and rays that escape, rays whose far-horizon answers are known), so that the compiled code is not
- * thrown away at the first real call. It changes no result: it runs the kernels on data of its own,
- * and the passes use the same kernels whether it has finished or not.
+ * <p>The warm-up calls the kernels as the first pass calls them ({@code ShadedIrradiation.Worker}):
+ * an analysed patch's reflection subset to its first hits and the rest of its hemisphere with shared
+ * sun-like rays ({@link HemisphereSampler#queueForReflection}, {@link BundleTracer#occludedWithShared},
+ * {@link HemisphereSampler#classifyRest}), then a reflector-only receiver (every ray to its first hit,
+ * {@link HemisphereSampler#sample}, and the shared rays alone); the shared rays change every tenth
+ * bundle, some are behind a far horizon; leaves hold several triangles; rays hit and escape. The JIT
+ * then compiles the methods the pass calls, with branch profiles like the pass's. Measured on the
+ * bench district ({@code bench-analysis --patches 100000}, 2 cores, one run each way, in turn): an
+ * earlier warm-up through other entry points (the whole-hemisphere {@code sample}, any-hit bundles with
+ * float directions and with limits) left the visibility pass about 0.9 s slower (8.9-9.0 s against
+ * 9.8-9.9 s), compiled code being replaced at the pass's first calls. It changes no result: it runs
+ * the kernels on data of its own, and the passes use the same kernels whether it has finished or not.
  *
  * <p>A pass with many receivers runs it first, on the calling thread ({@link #awaitFor}); it runs rounds
  * of {@link #BUNDLES_PER_ROUND} small bundles until {@link #FAST_ROUNDS} rounds in a row take less
  * than 1/{@link #COMPILED_SPEEDUP} of the first (interpreted) round's time, or for {@link #MAX_SECONDS}
- * at most. Measured here (this VM, 2 cores, nothing else running): the first round 1.4 s, rounds of
- * partly compiled code 9-40 ms, then 3.5-4.6 ms, reached after about 3.4 s; the ratio
- * between the first and a compiled round belongs to the code, not to the machine's speed. A pause
+ * at most. Measured here (this VM, 2 cores, at the start of the bench district's pass): the first
+ * round 0.55 s, rounds of partly compiled code 12-175 ms, then 3.5-8 ms, then under 2.2 ms after
+ * about 1.55 s; the ratio between the first and a compiled round belongs to the code, not to the
+ * machine's speed. Started when the scene was being built (0.6 s before the pass) it took the
+ * scene's cores and gained nothing. A pause
  * between rounds leaves a core to the JIT's compiler threads. It also stops when the rounds have not
  * become twice as fast for {@link #STALL_SECONDS} (kernels already compiled). The JIT goes on
  * compiling for some seconds after it (a second warm-up in the same JVM ran its rounds in 0.9-2 ms),
@@ -62,6 +71,13 @@ public final class KernelWarmup {
      * kernels are in use and the pass has at least {@link #WORTH_RECEIVERS}; returns at once otherwise.
      * Concurrent callers wait for the one that runs it.
      */
+    /** Whether {@link #awaitFor} would run the warm-up now for a pass of {@code receivers} receivers. */
+    public static boolean pendingFor(int receivers) {
+        synchronized (KernelWarmup.class) {
+            return receivers >= WORTH_RECEIVERS && BundleTracer.SIMD_AVAILABLE && !done;
+        }
+    }
+
     public static void awaitFor(int receivers) {
         if (receivers < WORTH_RECEIVERS || !BundleTracer.SIMD_AVAILABLE) return;
         synchronized (KernelWarmup.class) {
@@ -86,12 +102,11 @@ public final class KernelWarmup {
         Scene scene = Scene.build(soup, true, 0.0);
         HemisphereSampler hs = new HemisphereSampler(scene, 16);
         BundleTracer bt = scene.bundleTracer();
-        int n = hs.rayCount();
-        double[] dir = new double[3 * n], dist = new double[n], limit = new double[n];
-        float[] fdir = new float[3 * n];
+        int n = hs.rayCount(), shared = 24;
+        double[] dir = new double[3 * n], dist = new double[n], qDir = new double[3 * n], qT = new double[n];
+        double[] sunDir = new double[3 * shared];
         int[] cls = new int[n], tri = new int[n], subset = new int[n];
-        boolean[] out = new boolean[n], farBlocked = new boolean[n];
-        for (int s = 0; s < n; s += 3) farBlocked[s] = true; // rays a far horizon would block
+        boolean[] out = new boolean[n], qFar = new boolean[n], sunFar = new boolean[shared], sunOut = new boolean[shared];
         long begin = System.nanoTime(), first = -1, mark = Long.MAX_VALUE, markedAt = begin;
         int fast = 0, rounds = 0;
         while (fast < FAST_ROUNDS && System.nanoTime() - begin < MAX_SECONDS * 1e9) {
@@ -104,18 +119,25 @@ public final class KernelWarmup {
                 nx /= len;
                 ny /= len;
                 nz /= len;
-                long seed = rnd.nextLong();
-                hs.sampleForReflection(ox, oy, oz, nx, ny, nz, seed, null, false, 2, dir, cls, tri, dist, subset);
-                hs.sample(ox, oy, oz, nx, ny, nz, seed, null, dir, cls, tri, dist);
-                for (int s = 0; s < n; s++) {
-                    fdir[3 * s] = (float) dir[3 * s];
-                    fdir[3 * s + 1] = (float) dir[3 * s + 1];
-                    fdir[3 * s + 2] = (float) dir[3 * s + 2];
-                    limit[s] = 1 + 10 * rnd.nextDouble();
+                if (b % 10 == 0) { // a new plane: its sun-like directions (up, some behind a far horizon) shared
+                    for (int s = 0; s < shared; s++) {
+                        double x = rnd.nextDouble(-1, 1), y = rnd.nextDouble(-1, 1), z = rnd.nextDouble(0.05, 1);
+                        double l = Math.sqrt(x * x + y * y + z * z);
+                        sunDir[3 * s] = x / l;
+                        sunDir[3 * s + 1] = y / l;
+                        sunDir[3 * s + 2] = z / l;
+                        sunFar[s] = s % 7 == 0;
+                    }
+                    bt.share(sunDir, sunFar, shared);
                 }
-                bt.occluded(ox, oy, oz, fdir, null, n, out);
-                bt.occluded(ox, oy, oz, dir, limit, n, out);
-                bt.occludedKnownFar(ox, oy, oz, dir, farBlocked, n, out);
+                long seed = rnd.nextLong();
+                // as the first pass calls them: an analysed patch (reflection subset to first hits, the
+                // rest with the shared rays), then a reflector-only receiver (every ray to its first hit)
+                int end = hs.queueForReflection(ox, oy, oz, nx, ny, nz, seed, 2, dir, cls, tri, dist, subset, qDir, qT, qFar, 0);
+                bt.occludedWithShared(ox, oy, oz, qDir, qT, qFar, end, out, sunOut);
+                hs.classifyRest(out, dir, cls, tri, dist);
+                hs.sample(ox, oy, oz, nx, ny, nz, seed, null, dir, cls, tri, dist);
+                bt.occludedWithShared(ox, oy, oz, dir, null, qFar, 0, out, sunOut);
             }
             long now = System.nanoTime(), t = now - t0;
             if (first < 0) first = t;
