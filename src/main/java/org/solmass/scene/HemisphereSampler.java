@@ -341,18 +341,23 @@ public final class HemisphereSampler {
             cls[s] = classOf(hitTri[q], dir[3 * s + 2], null);
         }
         restFrom = at;
-        int r = at, k = 0;
-        for (int s = 0; s < count; s++) {
-            if (inSubset[s]) continue;
-            double dz = dir[3 * s + 2], tg = groundPlaneT(oz, dz); // as classify: a triangle before the plane blocks
-            copyDirection(dir, s, qDir, r);
+        int rest = 0;
+        for (int s = 0; s < count; s++) { // the rays outside the subset, ascending, without a branch per ray
+            restRay[rest] = s;
+            rest += inSubset[s] ? 0 : 1;
+        }
+        boolean plane = scene.hasGroundPlane();
+        double rise = scene.groundZ() - oz;
+        for (int k = 0; k < rest; k++) {
+            int s = restRay[k], r = at + k;
+            // groundPlaneT(oz, dz) without its branches: dz = 0 gives t = +-infinity or NaN, never a finite t > 0
+            double dz = dir[3 * s + 2], t = rise / dz, tg = plane && t > 0 ? t : Double.POSITIVE_INFINITY;
+            copyDirection(dir, s, qDir, r); // as classify: a triangle before the plane blocks
             qT[r] = tg;
             qFar[r] = tg == Double.POSITIVE_INFINITY && scene.escapeBlocked(dir[3 * s], dir[3 * s + 1], dz);
             restGround[k] = tg < Double.POSITIVE_INFINITY;
-            restRay[k++] = s;
-            r++;
         }
-        return r;
+        return at + rest;
     }
 
     /**
@@ -403,7 +408,10 @@ public final class HemisphereSampler {
             }
         }
         int m = 0;
-        for (int s = 0; s < side * side; s++) if (mark[s]) subset[m++] = s;
+        for (int s = 0; s < side * side; s++) { // without a branch per cell (a quarter are marked, at random)
+            subset[m] = s;
+            m += mark[s] ? 1 : 0;
+        }
         return m;
     }
 

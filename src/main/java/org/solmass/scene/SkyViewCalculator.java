@@ -86,17 +86,24 @@ public final class SkyViewCalculator {
 
     /** View factors and SVF standard error from ray classes in stratum order (k x k, row-major). */
     public static ViewFactors fromClasses(int[] cls, int k) {
-        int n = k * k, sky = 0, ground = 0, block = 0;
-        for (int s = 0; s < n; s++) {
-            switch (cls[s]) {
-                case HemisphereSampler.SKY -> sky++;
-                case HemisphereSampler.GROUND -> ground++;
-                default -> block++;
-            }
+        int n = k * k, sky = 0, ground = 0, block;
+        for (int s = 0; s < n; s++) { // counts without a branch per ray (the classes come in no order)
+            int c = cls[s];
+            sky += c == HemisphereSampler.SKY ? 1 : 0;
+            ground += c == HemisphereSampler.GROUND ? 1 : 0;
         }
+        block = n - sky - ground;
         double se;
         if (k == 1) se = 0.5;
-        else {
+        else if (k % 2 == 0) {
+            // rows of pairs only: a pair's term below is exactly 1 when its two rays differ (one sky),
+            // else 0 (mean 0.5 or 0 or 1, squares and sums of halves: exact), so count those pairs
+            int differ = 0;
+            for (int s = 0; s < n; s += 2) {
+                differ += (cls[s] == HemisphereSampler.SKY) != (cls[s + 1] == HemisphereSampler.SKY) ? 1 : 0;
+            }
+            se = Math.sqrt(differ) / n;
+        } else {
             double varSum = 0;
             for (int row = 0; row < k; row++) {
                 int base = row * k;
