@@ -109,6 +109,9 @@ public final class ModuleSight {
         final int[] seen;
         /** Per sun direction, whether the scene's far horizon blocks it; per bundle ray, the same. */
         final boolean[] sunFar, bundleFar;
+        /** Sun directions shared with the bundle tracer (-1: none yet) and the normal they are in front of. */
+        int count = -1;
+        double sharedNx, sharedNy, sharedNz;
 
         Worker(Scene scene, Vec3[] sun, int rays, int points) {
             this.scene = scene;
@@ -137,15 +140,23 @@ public final class ModuleSight {
             PvModule mod = s.modules.get(m);
             Vec3 nrm = mod.normal();
             double nx = nrm.x(), ny = nrm.y(), nz = nrm.z(), eps = scene.epsilon();
-            int count = 0;
-            for (int d = 0; d < sun.length; d++) {
-                Vec3 v = sun[d];
-                if (nx * v.x() + ny * v.y() + nz * v.z() <= 0) continue;
-                bundleDir[3 * count] = v.x();
-                bundleDir[3 * count + 1] = v.y();
-                bundleDir[3 * count + 2] = v.z();
-                bundleFar[count] = sunFar[d];
-                index[count++] = d;
+            if (count < 0 || nx != sharedNx || ny != sharedNy || nz != sharedNz) {
+                // the sun directions in front of the module's plane, shared by every point of every
+                // module of that plane (the modules of a zone follow each other)
+                count = 0;
+                for (int d = 0; d < sun.length; d++) {
+                    Vec3 v = sun[d];
+                    if (nx * v.x() + ny * v.y() + nz * v.z() <= 0) continue;
+                    bundleDir[3 * count] = v.x();
+                    bundleDir[3 * count + 1] = v.y();
+                    bundleDir[3 * count + 2] = v.z();
+                    bundleFar[count] = sunFar[d];
+                    index[count++] = d;
+                }
+                bundle.share(bundleDir, bundleFar, count);
+                sharedNx = nx;
+                sharedNy = ny;
+                sharedNz = nz;
             }
             int points = along * across;
             for (int k = 0; k < s.substrings; k++) {
@@ -154,7 +165,8 @@ public final class ModuleSight {
                 for (int i = 0; i < along; i++) {
                     for (int j = 0; j < across; j++) {
                         Vec3 p = mod.at((i + 0.5) / along, (k + (j + 0.5) / across) / s.substrings);
-                        bundle.occludedKnownFar(p.x() + eps * nx, p.y() + eps * ny, p.z() + eps * nz, bundleDir, bundleFar, count, blocked);
+                        bundle.occludedWithShared(p.x() + eps * nx, p.y() + eps * ny, p.z() + eps * nz, bundleDir, null, bundleFar, 0,
+                                blocked, blocked); // no rays of its own: the shared ones' answers into blocked
                         for (int c = 0; c < count; c++) if (!blocked[c]) seen[c]++;
                     }
                 }
