@@ -40,9 +40,10 @@ public final class HorizonBand {
     }
 
     /**
-     * Puts the band rays in front of a plane of unit normal n into a caller's bundle from index
+     * Puts the band rays in front of a plane of unit normal n into a caller's arrays from index
      * {@code at} (directions, the scene's far-horizon answers, weights), to be traced with other rays
-     * of the same origin; {@link #share} then reads their answers. Returns the bundle's new end.
+     * (the first pass: as the plane's shared rays, with the sun's); {@link #share} then reads their
+     * answers. Returns the new end.
      */
     int queue(Scene scene, double nx, double ny, double nz, double[] dirOut, boolean[] farOut, double[] wOut, int at) {
         farFor(scene);

@@ -49,9 +49,11 @@ import java.util.concurrent.atomic.AtomicLong;
 public final class ShadedIrradiation {
     static final int SLOTS = StepTable.SLOTS;
     /**
-     * Whether the first pass traces a receiver's hemisphere rays that need no first hit, its horizon
-     * band and its sun directions as one bundle (true: the run's way); false traces them as separate
-     * bundles, for the test that shows both give the same results (OneBundleTest).
+     * Whether the first pass traces a receiver's hemisphere rays that need no first hit together with
+     * its horizon band and sun directions as shared rays ({@link org.solmass.scene.BundleTracer#share},
+     * true: the run's way); false traces the hemisphere, the band ({@link HorizonBand#visibility}) and
+     * the sun ({@code Worker.sunVisibility}) as separate plain bundles, for the test that shows both
+     * give the same results (OneBundleTest).
      */
     static volatile boolean ONE_BUNDLE = true;
 
@@ -259,7 +261,8 @@ public final class ShadedIrradiation {
             sampler = new HemisphereSampler(scene, in.raysPerPatch());
             reflectorSampler = new HemisphereSampler(scene, in.reflectorRays());
             bundle = scene.bundleTracer();
-            int bundleMax = in.sun().count() + HorizonBand.RAYS + HemisphereSampler.roundedRayCount(in.raysPerPatch());
+            // the rest of the hemisphere, or with crowns the sun directions (band and sun are shared rays otherwise)
+            int bundleMax = Math.max(in.sun().count(), HemisphereSampler.roundedRayCount(in.raysPerPatch()));
             bundleDir = new double[3 * bundleMax];
             bundleT = new double[bundleMax];
             sunIndex = new int[bundleMax];
@@ -301,7 +304,8 @@ public final class ShadedIrradiation {
             int block = analysed ? reflectionBlock : 1;
             if (ONE_BUNDLE && canopy == null && block > 1 && in.triangleIsGround() == null) {
                 // the first hits of the reflection subset, then every other ray of the receiver (the rest of
-                // the hemisphere, the horizon band, the sun in front) through the tree as one bundle
+                // the hemisphere, with the horizon band and the sun in front as the plane's shared rays)
+                // through the tree in one stream
                 int end = hs.queueForReflection(ox, oy, oz, nx, ny, nz, rc.seed[r], block, dir, cls, tri, dist, subset,
                         bundleDir, bundleT, bundleFar, 0);
                 subsetCount = hs.reflectionSubsetSize();
@@ -313,7 +317,7 @@ public final class ShadedIrradiation {
                 // every ray for the view factors; the first hits where reflection needs them (with crowns: all, for their legs)
                 subsetCount = hs.sampleForReflection(ox, oy, oz, nx, ny, nz, rc.seed[r], in.triangleIsGround(), canopy != null,
                         block, dir, cls, tri, dist, subset);
-                if (canopy == null) bandAndSun(band, ox, oy, oz, nx, ny, nz); // one bundle of their own
+                if (canopy == null && ONE_BUNDLE) bandAndSun(band, ox, oy, oz, nx, ny, nz); // the plane's shared rays
                 else {
                     horizonVis = band ? horizon.visibility(bundle, ox, oy, oz, nx, ny, nz, canopy) : 0;
                     sunVisibility(ox, oy, oz, nx, ny, nz);
@@ -379,8 +383,8 @@ public final class ShadedIrradiation {
 
         /**
          * The horizon band's rays (when {@code band}) and the sun directions in front of the patch, traced
-         * as one bundle: the same answers as {@link HorizonBand#visibility} and {@link #sunVisibility}
-         * (each ray's answer does not depend on the bundle it is traced in).
+         * as the plane's shared rays: the same answers as {@link HorizonBand#visibility} and
+         * {@link #sunVisibility} (each ray's answer does not depend on the bundle it is traced in).
          */
         private void bandAndSun(boolean band, double ox, double oy, double oz, double nx, double ny, double nz) {
             shareBandAndSun(band, nx, ny, nz);

@@ -110,7 +110,7 @@ public final class ModuleSight {
         /** Per sun direction, whether the scene's far horizon blocks it; per bundle ray, the same. */
         final boolean[] sunFar, bundleFar;
         /** Sun directions shared with the bundle tracer (-1: none yet) and the normal they are in front of. */
-        int count = -1;
+        int sharedCount = -1;
         double sharedNx, sharedNy, sharedNz;
 
         Worker(Scene scene, Vec3[] sun, int rays, int points) {
@@ -140,10 +140,10 @@ public final class ModuleSight {
             PvModule mod = s.modules.get(m);
             Vec3 nrm = mod.normal();
             double nx = nrm.x(), ny = nrm.y(), nz = nrm.z(), eps = scene.epsilon();
-            if (count < 0 || nx != sharedNx || ny != sharedNy || nz != sharedNz) {
+            if (sharedCount < 0 || nx != sharedNx || ny != sharedNy || nz != sharedNz) {
                 // the sun directions in front of the module's plane, shared by every point of every
                 // module of that plane (the modules of a zone follow each other)
-                count = 0;
+                int count = 0;
                 for (int d = 0; d < sun.length; d++) {
                     Vec3 v = sun[d];
                     if (nx * v.x() + ny * v.y() + nz * v.z() <= 0) continue;
@@ -154,6 +154,7 @@ public final class ModuleSight {
                     index[count++] = d;
                 }
                 bundle.share(bundleDir, bundleFar, count);
+                sharedCount = count;
                 sharedNx = nx;
                 sharedNy = ny;
                 sharedNz = nz;
@@ -161,16 +162,16 @@ public final class ModuleSight {
             int points = along * across;
             for (int k = 0; k < s.substrings; k++) {
                 int q = m * s.substrings + k;
-                java.util.Arrays.fill(seen, 0, count, 0);
+                java.util.Arrays.fill(seen, 0, sharedCount, 0);
                 for (int i = 0; i < along; i++) {
                     for (int j = 0; j < across; j++) {
                         Vec3 p = mod.at((i + 0.5) / along, (k + (j + 0.5) / across) / s.substrings);
                         bundle.occludedWithShared(p.x() + eps * nx, p.y() + eps * ny, p.z() + eps * nz, bundleDir, null, bundleFar, 0,
                                 blocked, blocked); // no rays of its own: the shared ones' answers into blocked
-                        for (int c = 0; c < count; c++) if (!blocked[c]) seen[c]++;
+                        for (int c = 0; c < sharedCount; c++) if (!blocked[c]) seen[c]++;
                     }
                 }
-                for (int c = 0; c < count; c++) s.sunVisible[q * s.directions + index[c]] = (float) seen[c] / points;
+                for (int c = 0; c < sharedCount; c++) s.sunVisible[q * s.directions + index[c]] = (float) seen[c] / points;
                 Vec3 p = mod.at(0.5, (k + 0.5) / s.substrings);
                 double ox = p.x() + eps * nx, oy = p.y() + eps * ny, oz = p.z() + eps * nz;
                 long seed = HemisphereSampler.patchSeed("pv-" + mod.zone() + "-" + m + "-" + k, runSeed);

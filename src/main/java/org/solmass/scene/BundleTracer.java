@@ -26,7 +26,8 @@ package org.solmass.scene;
  * depend on the origin only ({@code s = o - v0}, {@code q = s x e1}, {@code e2 . q}) are computed once
  * per node or triangle for the whole stream.
  *
- * <p>Per-thread and reusable; allocates only when a bundle is larger than any before it.
+ * <p>Per-thread and reusable; allocates only when a bundle (or a shared set) is larger than any before
+ * it. It holds one set of shared rays ({@link #share}): one owner per tracer sets and uses it.
  */
 public final class BundleTracer {
     static final float TINY_DIR = 1e-20f;
@@ -180,7 +181,7 @@ public final class BundleTracer {
      * does not depend on the rays traced with it. The shared packets are used when the ground plane
      * cannot decide a shared ray from this origin (below the plane an upward ray meets it; above it a
      * downward one does); otherwise, and without the SIMD kernel, the shared rays are traced as a
-     * second bundle.
+     * second bundle. With {@code count == 0}, {@code out} and {@code sharedOut} may be one array.
      */
     public void occludedWithShared(double ox, double oy, double oz, double[] dir, double[] tMax, boolean[] far, int count,
                                    boolean[] out, boolean[] sharedOut) {
@@ -202,6 +203,7 @@ public final class BundleTracer {
             load(s, ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2],
                     tMax == null ? Double.POSITIVE_INFINITY : tMax[s], false, out);
         }
+        packedTraces++;
         System.arraycopy(sharedFar, 0, sharedOut, 0, sharedCount); // the packed ones are set by the kernel
         keys(count);
         float fox = (float) (ox - scene.shiftX), foy = (float) (oy - scene.shiftY), foz = (float) (oz - scene.shiftZ);
@@ -216,6 +218,8 @@ public final class BundleTracer {
     private boolean sharedUp, sharedDown;
     /** Whether the SIMD kernel holds the shared rays' packets. */
     private boolean sharedPacked;
+    /** Calls of {@link #occludedWithShared} that used the shared packets (for the test that checks they are used). */
+    long packedTraces;
 
     private int load(int s, double ox, double oy, double oz, double ddx, double ddy, double ddz, double tMax, boolean[] out) {
         return load(s, ox, oy, oz, ddx, ddy, ddz, tMax, true, out);

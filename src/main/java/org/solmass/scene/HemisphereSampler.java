@@ -279,7 +279,7 @@ public final class HemisphereSampler {
      * the subset is the same either way.
      *
      * @param block side f of the blocks ({@link #reflectionBlock}); 1: every ray is in the subset
-     * @param subset out: the subset's ray indices, ascending ((k/f)^2 of them)
+     * @param subset out: the subset's ray indices, ascending ((k/f)^2 of them; room for {@link #rayCount()} needed)
      * @return the number of rays in the subset; {@code tri}, {@code dist} are set for those (and for
      *         every ray when all were traced to their first hit)
      */
@@ -352,8 +352,8 @@ public final class HemisphereSampler {
             int s = restRay[k], r = at + k;
             // groundPlaneT(oz, dz) without its branches: dz = 0 gives t = +-infinity or NaN, never a finite t > 0
             double dz = dir[3 * s + 2], t = rise / dz, tg = plane && t > 0 ? t : Double.POSITIVE_INFINITY;
-            copyDirection(dir, s, qDir, r); // as classify: a triangle before the plane blocks
-            qT[r] = tg;
+            copyDirection(dir, s, qDir, r);
+            qT[r] = tg; // as classify: a triangle before the plane blocks
             qFar[r] = tg == Double.POSITIVE_INFINITY && scene.escapeBlocked(dir[3 * s], dir[3 * s + 1], dz);
             restGround[k] = tg < Double.POSITIVE_INFINITY;
         }
@@ -394,7 +394,8 @@ public final class HemisphereSampler {
     /**
      * The reflection subset of a k x k grid ({@link #sampleForReflection}): per f x f block (row-major
      * over the blocks), cell {@code q} of the block from a SplitMix64 draw of the seed and the block
-     * number; marks them in {@code mark} and lists them ascending in {@code subset}. Returns their number.
+     * number; marks them in {@code mark} and lists them ascending in {@code subset} (which needs room for
+     * side^2 entries: the listing writes each cell's index before it knows whether to keep it). Returns their number.
      */
     static int chooseSubset(int side, int block, long streamSeed, boolean[] mark, int[] subset) {
         int blocks = side / block, cells = block * block;

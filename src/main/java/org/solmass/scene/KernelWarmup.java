@@ -34,10 +34,10 @@ import java.util.SplittableRandom;
  * than 1/{@link #COMPILED_SPEEDUP} of the first (interpreted) round's time, or for {@link #MAX_SECONDS}
  * at most. Measured here (this VM, 2 cores, at the start of the bench district's pass): the first
  * round 0.55 s, rounds of partly compiled code 12-175 ms, then 3.5-8 ms, then under 2.2 ms after
- * about 1.55 s; the ratio between the first and a compiled round belongs to the code, not to the
- * machine's speed. Started when the scene was being built (0.6 s before the pass) it took the
- * scene's cores and gained nothing. A pause
- * between rounds leaves a core to the JIT's compiler threads. It also stops when the rounds have not
+ * about 1.55 s (1.5-2.7 s over one session's runs, as the VM's speed varied); the ratio between
+ * the first and a compiled round belongs to the code, not to the machine's speed. Started when the
+ * scene was being built (0.6 s before the pass) it took the scene's cores and gained nothing. A
+ * pause between rounds leaves a core to the JIT's compiler threads. It also stops when the rounds have not
  * become twice as fast for {@link #STALL_SECONDS} (kernels already compiled). The JIT goes on
  * compiling for some seconds after it (a second warm-up in the same JVM ran its rounds in 0.9-2 ms),
  * now on the pass's own calls. Started on a thread of its own while the model was cut into patches
@@ -58,7 +58,7 @@ public final class KernelWarmup {
     static final double STALL_SECONDS = 1.0;
     /**
      * Receivers of a pass from which the warm-up pays: the first receivers in slow code cost about
-     * 1.2-3 ms each (measured, see above) and the warm-up about 3.4 s of one thread, so below some
+     * 1.2-3 ms each (measured, see above) and the warm-up 1.5-2.7 s of one thread, so below some
      * thousands of receivers it would cost more than it saves.
      */
     public static final int WORTH_RECEIVERS = 5_000;
@@ -66,11 +66,6 @@ public final class KernelWarmup {
 
     private KernelWarmup() {}
 
-    /**
-     * Runs the warm-up once per JVM, before a pass of {@code receivers} receivers, when the SIMD
-     * kernels are in use and the pass has at least {@link #WORTH_RECEIVERS}; returns at once otherwise.
-     * Concurrent callers wait for the one that runs it.
-     */
     /** Whether {@link #awaitFor} would run the warm-up now for a pass of {@code receivers} receivers. */
     public static boolean pendingFor(int receivers) {
         synchronized (KernelWarmup.class) {
@@ -78,10 +73,14 @@ public final class KernelWarmup {
         }
     }
 
+    /**
+     * Runs the warm-up once per JVM, before a pass of {@code receivers} receivers, when the SIMD
+     * kernels are in use and the pass has at least {@link #WORTH_RECEIVERS}; returns at once otherwise.
+     * Concurrent callers wait for the one that runs it.
+     */
     public static void awaitFor(int receivers) {
-        if (receivers < WORTH_RECEIVERS || !BundleTracer.SIMD_AVAILABLE) return;
         synchronized (KernelWarmup.class) {
-            if (done) return;
+            if (!pendingFor(receivers)) return;
             run();
             done = true;
         }
@@ -115,10 +114,6 @@ public final class KernelWarmup {
                 double ox = rnd.nextDouble(-12, 12), oy = rnd.nextDouble(-12, 12), oz = rnd.nextDouble(0.5, 22);
                 double nx = rnd.nextDouble(-1, 1), ny = rnd.nextDouble(-1, 1), nz = rnd.nextDouble(-1, 1);
                 double len = Math.sqrt(nx * nx + ny * ny + nz * nz);
-                if (len < 1e-3) continue;
-                nx /= len;
-                ny /= len;
-                nz /= len;
                 if (b % 10 == 0) { // a new plane: its sun-like directions (up, some behind a far horizon) shared
                     for (int s = 0; s < shared; s++) {
                         double x = rnd.nextDouble(-1, 1), y = rnd.nextDouble(-1, 1), z = rnd.nextDouble(0.05, 1);
@@ -130,6 +125,10 @@ public final class KernelWarmup {
                     }
                     bt.share(sunDir, sunFar, shared);
                 }
+                if (len < 1e-3) continue;
+                nx /= len;
+                ny /= len;
+                nz /= len;
                 long seed = rnd.nextLong();
                 // as the first pass calls them: an analysed patch (reflection subset to first hits, the
                 // rest with the shared rays), then a reflector-only receiver (every ray to its first hit)

@@ -234,7 +234,7 @@ final class VectorOcclusion {
                 float nax = 0, nay = 0, naz = 0, fax = 0, fay = 0, faz = 0, nbx = 0, nby = 0, nbz = 0, fbx = 0, fby = 0, fbz = 0;
                 for (int k = start, end = start + len; k < end; k++) {
                     int pk = l[k], o = oct[pk];
-                    if (o != curOct) { // lists keep octant order, so this changes at most 7 times
+                    if (o != curOct) { // lists keep octant order (shared packets, then the bundle's own): at most 15 changes
                         curOct = o;
                         int lx = (o & 1) != 0 ? 3 : 0, ly = (o & 2) != 0 ? 4 : 1, lz = (o & 4) != 0 ? 5 : 2;
                         nax = d[lx]; nay = d[ly]; naz = d[lz]; fax = d[3 - lx]; fay = d[5 - ly]; faz = d[7 - lz];

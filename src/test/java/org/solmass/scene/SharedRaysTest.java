@@ -5,6 +5,7 @@ import org.junit.jupiter.api.Test;
 import java.util.SplittableRandom;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
@@ -22,7 +23,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * lanes, and the next origin must start from the shared set as it was packed); the shared set
  * replaced by a smaller and a larger one; closest-hit bundles on the same tracer in between (they
  * sort their rays after the shared packets and must leave them alone) with their own answers
- * checked against {@link Tracer#closestHit}.
+ * checked against {@link Tracer#closestHit}, and plain any-hit bundles in between; an empty shared
+ * set; the refusal to trace shared rays before any were set; and that the SIMD kernel does use the
+ * shared packets (a test that passed on the fallback alone would check nothing of them).
  */
 class SharedRaysTest {
     @Test
@@ -43,8 +46,11 @@ class SharedRaysTest {
                     : new BundleTracer[] {new BundleTracer(scene, false)};
             for (BundleTracer bt : tracers) {
                 String kernel = bt.simd() ? "SIMD" : "scalar";
-                for (int set = 0; set < 4; set++) {
-                    int n = new int[] {300, 40, 1500, 216}[set];
+                assertThrows(IllegalStateException.class, () -> bt.occludedWithShared(0, 0, 20, new double[0], null,
+                        new boolean[0], 0, new boolean[0], new boolean[0]), "shared rays traced before any were set");
+                long packedBefore = bt.packedTraces;
+                for (int set = 0; set < 5; set++) {
+                    int n = new int[] {300, 40, 1500, 216, 0}[set];
                     boolean downToo = set % 2 == 1;
                     double[] shared = directions(r, n, downToo);
                     boolean[] far = scene.escapeBlocked(shared, n);
@@ -77,6 +83,16 @@ class SharedRaysTest {
                             if (want) blocked++;
                             checked++;
                         }
+                        if (o % 3 == 2) { // a plain any-hit bundle on the same tracer between two origins
+                            double[] pd = directions(r, 50, true);
+                            boolean[] pf = new boolean[50], po = new boolean[50];
+                            for (int s = 0; s < 50; s++) pf[s] = scene.escapeBlocked(pd[3 * s], pd[3 * s + 1], pd[3 * s + 2]);
+                            bt.occludedKnownFar(ox, oy, oz, pd, null, pf, 50, po);
+                            for (int s = 0; s < 50; s++) {
+                                assertEquals(single.occluded(ox, oy, oz, pd[3 * s], pd[3 * s + 1], pd[3 * s + 2], Double.POSITIVE_INFINITY),
+                                        po[s], kernel + " plain bundle ray " + s);
+                            }
+                        }
                         if (o % 3 == 1) { // a closest-hit bundle on the same tracer between two origins
                             double[] cd = directions(r, 64, true);
                             int[] tri = new int[64];
@@ -93,6 +109,10 @@ class SharedRaysTest {
                         }
                     }
                 }
+                // the packets are used where they may be (SIMD, origins the plane cannot decide for), not only the fallback
+                if (bt.simd()) assertTrue(bt.packedTraces - packedBefore > 40, kernel + " scene " + sc + ": packed traces "
+                        + (bt.packedTraces - packedBefore));
+                else assertEquals(packedBefore, bt.packedTraces, "the scalar kernel has no packets");
             }
         }
         // preconditions of the check, not results: blocked and free shared rays, origins below the plane
