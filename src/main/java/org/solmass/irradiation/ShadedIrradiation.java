@@ -227,6 +227,8 @@ public final class ShadedIrradiation {
         final int[] sunIndex;
         /** Per sun direction, whether the scene's far horizon blocks it (the same from every origin); per bundle ray, the same. */
         final boolean[] sunFar, bundleFar;
+        /** The sun directions as doubles (the float table widened). */
+        final double[] sunDir;
         final boolean[] blocked;
         final double[] dir;
         final int[] cls, tri;
@@ -268,6 +270,8 @@ public final class ShadedIrradiation {
             sunIndex = new int[bundleMax];
             blocked = new boolean[bundleMax];
             sunFar = scene.escapeBlocked(in.sun().directions, in.sun().count());
+            sunDir = new double[3 * in.sun().count()];
+            for (int i = 0; i < sunDir.length; i++) sunDir[i] = in.sun().directions[i]; // widened exactly, once
             bundleFar = new boolean[bundleMax];
             int sharedMax = in.sun().count() + HorizonBand.RAYS;
             sharedDir = new double[3 * sharedMax];
@@ -401,17 +405,7 @@ public final class ShadedIrradiation {
         private void shareBandAndSun(boolean band, double nx, double ny, double nz) {
             if (sharedCount >= 0 && band == sharedBand && nx == sharedNx && ny == sharedNy && nz == sharedNz) return;
             sharedBandEnd = band ? horizon.queue(scene, nx, ny, nz, sharedDir, sharedFar, sharedW, 0) : 0;
-            float[] d = in.sun().directions;
-            int m = sharedBandEnd;
-            for (int i = 0; i < vis.length; i++) {
-                double dx = d[3 * i], dy = d[3 * i + 1], dz = d[3 * i + 2];
-                if (nx * dx + ny * dy + nz * dz <= 0) continue;
-                sharedDir[3 * m] = dx;
-                sharedDir[3 * m + 1] = dy;
-                sharedDir[3 * m + 2] = dz;
-                sharedFar[m] = sunFar[i];
-                sharedSun[m++] = i;
-            }
+            int m = SunDirections.inFront(sunDir, sunFar, vis.length, nx, ny, nz, sharedDir, sharedFar, sharedSun, sharedBandEnd);
             bundle.share(sharedDir, sharedFar, m);
             sharedCount = m;
             sharedBand = band;
@@ -436,28 +430,9 @@ public final class ShadedIrradiation {
         private boolean sharedBand;
         private double sharedNx, sharedNy, sharedNz;
 
-        /**
-         * The sun directions in front of the patch into the bundle from {@code at} (direction, far-horizon
-         * answer, sun index; {@code vis} cleared); returns the bundle's end.
-         */
-        private int queueSun(double nx, double ny, double nz, int at) {
-            float[] d = in.sun().directions;
-            int m = at;
-            for (int i = 0; i < vis.length; i++) {
-                double dx = d[3 * i], dy = d[3 * i + 1], dz = d[3 * i + 2];
-                vis[i] = 0;
-                if (nx * dx + ny * dy + nz * dz <= 0) continue;
-                bundleDir[3 * m] = dx;
-                bundleDir[3 * m + 1] = dy;
-                bundleDir[3 * m + 2] = dz;
-                bundleFar[m] = sunFar[i];
-                sunIndex[m++] = i;
-            }
-            return m;
-        }
-
         private void sunVisibility(double ox, double oy, double oz, double nx, double ny, double nz) {
-            int m = queueSun(nx, ny, nz, 0); // the sun directions in front of the patch, together
+            Arrays.fill(vis, (byte) 0); // the sun directions in front of the patch, together
+            int m = SunDirections.inFront(sunDir, sunFar, vis.length, nx, ny, nz, bundleDir, bundleFar, sunIndex, 0);
             bundle.occludedKnownFar(ox, oy, oz, bundleDir, bundleFar, m, blocked);
             for (int k = 0; k < m; k++) if (!blocked[k]) vis[sunIndex[k]] = 1;
             if (canopy != null) canopy.sun(ox, oy, oz, bundleDir, sunIndex, m, blocked);

@@ -32,6 +32,27 @@ public final class SunDirections {
 
     public Vec3 direction(int d) { return new Vec3(directions[3 * d], directions[3 * d + 1], directions[3 * d + 2]); }
 
+    /**
+     * The directions {@code dirs[3i..3i+2]} (i &lt; count) in front of a plane of normal n (n . d &gt; 0),
+     * in index order, into {@code outDir} from index {@code at}, with their far-horizon answers
+     * {@code far[i]} and their indices i; returns the new end. The one "sun in front" of the first pass
+     * and of the PV modules' rays.
+     */
+    public static int inFront(double[] dirs, boolean[] far, int count, double nx, double ny, double nz,
+                              double[] outDir, boolean[] outFar, int[] outIndex, int at) {
+        int m = at;
+        for (int i = 0; i < count; i++) {
+            double dx = dirs[3 * i], dy = dirs[3 * i + 1], dz = dirs[3 * i + 2];
+            if (nx * dx + ny * dy + nz * dz <= 0) continue;
+            outDir[3 * m] = dx;
+            outDir[3 * m + 1] = dy;
+            outDir[3 * m + 2] = dz;
+            outFar[m] = far[i];
+            outIndex[m++] = i;
+        }
+        return m;
+    }
+
     /** One direction per sun-up step. */
     public static SunDirections exact(WeatherSeries series) {
         int n = series.size();

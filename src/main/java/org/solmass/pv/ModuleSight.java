@@ -109,6 +109,8 @@ public final class ModuleSight {
         final int[] seen;
         /** Per sun direction, whether the scene's far horizon blocks it; per bundle ray, the same. */
         final boolean[] sunFar, bundleFar;
+        /** The sun directions, 3 per direction. */
+        final double[] sunDir;
         /** Sun directions shared with the bundle tracer (-1: none yet) and the normal they are in front of. */
         int sharedCount = -1;
         double sharedNx, sharedNy, sharedNz;
@@ -126,13 +128,13 @@ public final class ModuleSight {
             index = new int[Math.max(1, n)];
             blocked = new boolean[Math.max(1, n)];
             seen = new int[Math.max(1, n)];
-            double[] all = new double[3 * n];
+            sunDir = new double[3 * n];
             for (int d = 0; d < n; d++) {
-                all[3 * d] = sun[d].x();
-                all[3 * d + 1] = sun[d].y();
-                all[3 * d + 2] = sun[d].z();
+                sunDir[3 * d] = sun[d].x();
+                sunDir[3 * d + 1] = sun[d].y();
+                sunDir[3 * d + 2] = sun[d].z();
             }
-            sunFar = scene.escapeBlocked(all, n); // the far horizon's answers, the same from every point
+            sunFar = scene.escapeBlocked(sunDir, n); // the far horizon's answers, the same from every point
             bundleFar = new boolean[Math.max(1, n)];
         }
 
@@ -143,16 +145,7 @@ public final class ModuleSight {
             if (sharedCount < 0 || nx != sharedNx || ny != sharedNy || nz != sharedNz) {
                 // the sun directions in front of the module's plane, shared by every point of every
                 // module of that plane (the modules of a zone follow each other)
-                int count = 0;
-                for (int d = 0; d < sun.length; d++) {
-                    Vec3 v = sun[d];
-                    if (nx * v.x() + ny * v.y() + nz * v.z() <= 0) continue;
-                    bundleDir[3 * count] = v.x();
-                    bundleDir[3 * count + 1] = v.y();
-                    bundleDir[3 * count + 2] = v.z();
-                    bundleFar[count] = sunFar[d];
-                    index[count++] = d;
-                }
+                int count = SunDirections.inFront(sunDir, sunFar, sun.length, nx, ny, nz, bundleDir, bundleFar, index, 0);
                 bundle.share(bundleDir, bundleFar, count);
                 sharedCount = count;
                 sharedNx = nx;

@@ -125,6 +125,11 @@ public final class BundleTracer {
      * (hemisphere, horizon band, sun) can so go through the tree as one bundle.
      */
     public void occludedKnownFar(double ox, double oy, double oz, double[] dir, double[] tMax, boolean[] far, int count, boolean[] out) {
+        trace(ox, oy, oz, count, loadKnownFar(ox, oy, oz, dir, tMax, far, count, out), out);
+    }
+
+    /** Stores rays s &lt; count of {@link #occludedKnownFar}; returns how many need the tree. */
+    private int loadKnownFar(double ox, double oy, double oz, double[] dir, double[] tMax, boolean[] far, int count, boolean[] out) {
         ensure(count);
         int queued = 0;
         for (int s = 0; s < count; s++) {
@@ -136,7 +141,7 @@ public final class BundleTracer {
             queued += load(s, ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2],
                     tMax == null ? Double.POSITIVE_INFINITY : tMax[s], false, out);
         }
-        trace(ox, oy, oz, count, queued, out);
+        return queued;
     }
 
     /**
@@ -193,16 +198,7 @@ public final class BundleTracer {
             occludedKnownFar(ox, oy, oz, sharedDir, null, sharedFar, sharedCount, sharedOut);
             return;
         }
-        ensure(count);
-        for (int s = 0; s < count; s++) {
-            if (far[s]) {
-                out[s] = true;
-                lim[s] = RETIRED;
-                continue;
-            }
-            load(s, ox, oy, oz, dir[3 * s], dir[3 * s + 1], dir[3 * s + 2],
-                    tMax == null ? Double.POSITIVE_INFINITY : tMax[s], false, out);
-        }
+        loadKnownFar(ox, oy, oz, dir, tMax, far, count, out);
         packedTraces++;
         System.arraycopy(sharedFar, 0, sharedOut, 0, sharedCount); // the packed ones are set by the kernel
         keys(count);
