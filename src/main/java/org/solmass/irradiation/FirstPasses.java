@@ -24,6 +24,8 @@ public final class FirstPasses implements Serializable {
     final float[] ghiW, ghiW2;
     /** Analysed patches' view factors, standard error, horizon-band visibility, unshaded (Wh/m2), sunshine hours. */
     final double[] svf, gvf, obs, svfSe, horizonVis, unshadedWh, sunshineH;
+    /** Analysed patches' sky component under the CIE overcast sky, percent. */
+    final double[] overcastPct;
     /** Analysed patches' beam and sky diffuse per month, Wh/m2. */
     final double[] beamMonthWh, diffuseMonthWh;
     /** Tree crowns' factor on reflected light per month, or null without trees. */
@@ -42,6 +44,7 @@ public final class FirstPasses implements Serializable {
         obs = new double[n];
         svfSe = new double[n];
         horizonVis = new double[n];
+        overcastPct = new double[n];
         unshadedWh = new double[n];
         sunshineH = new double[n];
         beamMonthWh = new double[12 * n];
@@ -69,7 +72,7 @@ public final class FirstPasses implements Serializable {
 
     /** Approximate bytes held (for memory reports of a task). */
     public long bytes() {
-        long b = 4L * ids.length + 8L * (monthWh.length + beamMonthWh.length + diffuseMonthWh.length) + 8L * 7 * ids.length;
+        long b = 4L * ids.length + 8L * (monthWh.length + beamMonthWh.length + diffuseMonthWh.length) + 8L * 8 * ids.length;
         for (int i = 0; i < ids.length; i++) b += 16 + 12L * refIdx[i].length;
         return b;
     }
@@ -122,6 +125,7 @@ public final class FirstPasses implements Serializable {
         obs[j] = p.obs[i];
         svfSe[j] = p.svfSe[i];
         horizonVis[j] = p.horizonVis[i];
+        overcastPct[j] = p.overcastPct[i];
         unshadedWh[j] = p.unshadedWh[i];
         sunshineH[j] = p.sunshineH[i];
     }

@@ -23,13 +23,16 @@ package org.solmass.irradiation;
  * @param annualStdError standard error of {@code annual} from the hemisphere ray sampling, kWh/m2
  *                       ({@link Reflection#stdErrorWh})
  * @param bounces how the reflection series ended
+ * @param overcastSkyPct the sky component under the traditional CIE overcast sky in percent
+ *                       ({@link org.solmass.sky.CieSky#skyComponentPct}), from the same hemisphere rays
+ *                       as the sky view factor (for a facade patch its vertical sky component)
  */
 public record IrradiationResult(double[] skyViewFactor, double[] groundViewFactor, double[] obstructionViewFactor,
                                 double[] skyViewStdError, double[] horizonVisibility,
                                 double[] annual, double[] beam, double[] diffuse, double[] reflected,
                                 double[] unshaded, double[][] monthly, float[] monthHourWm2, double[] sunshineHours,
                                 double siteSunshineHours, int sunDirections, double[] annualStdError,
-                                Bounces bounces) {
+                                Bounces bounces, double[] overcastSkyPct) {
 
     /**
      * The reflection bounces used ({@link Reflection}).

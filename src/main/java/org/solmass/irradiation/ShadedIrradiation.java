@@ -98,6 +98,7 @@ public final class ShadedIrradiation {
         int n = rc.analysed, total = rc.count;
         FirstPass firstPass = new FirstPass(total, in.steps());
         double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
+        double[] overcast = new double[n];
         double[][] beamM = new double[12][n], diffM = new double[12][n];
         double[] unshaded = new double[n], sunshine = new double[n];
         int[][] refIdx = new int[total][];
@@ -124,6 +125,7 @@ public final class ShadedIrradiation {
                 obs[r] = w.vf.obstruction();
                 se[r] = w.vf.skyStdError();
                 hv[r] = w.horizonVis;
+                overcast[r] = w.overcastSkyPct;
                 for (int m = 0; m < 12; m++) {
                     beamM[m][r] = w.beamMonth[m];
                     diffM[m][r] = w.diffMonth[m];
@@ -182,7 +184,7 @@ public final class ShadedIrradiation {
         for (int b = 0; b < bounceKwh.length; b++) bounceKwh[b] = ro.bounceWh()[b] / 1000;
         return new IrradiationResult(svf, gvf, obs, se, hv, annual, beam, diffuse, reflected, unshaded,
                 monthly, monthHour, sunshine, st.siteSunshineHours, in.sun().count(), annualSe,
-                new IrradiationResult.Bounces(bounceKwh, ro.converged(), in.bounceTolerance(), in.maxBounces()));
+                new IrradiationResult.Bounces(bounceKwh, ro.converged(), in.bounceTolerance(), in.maxBounces()), overcast);
     }
 
     /**
@@ -255,6 +257,8 @@ public final class ShadedIrradiation {
         final CanopyShading.Probe canopy;
         ViewFactors vf;
         double horizonVis, unshadedTotal, ghiAlbedo, ghiAlbedo2, sunshineHours;
+        /** An analysed receiver's sky component under the CIE overcast sky, percent, from its hemisphere rays ({@link #overcastSky}). */
+        double overcastSkyPct;
         int refCount;
 
         Worker(org.solmass.scene.Scene scene, Inputs in) {
@@ -328,12 +332,25 @@ public final class ShadedIrradiation {
                 }
             }
             vf = SkyViewCalculator.fromClasses(cls, hs.gridSide());
+            if (analysed) overcastSkyPct = overcastSky(hs.rayCount());
             if (skyView != null) skyView.measure(ox, oy, oz, nx, ny, nz, dir, cls, hs.rayCount());
             if (canopy != null) canopy.sky(ox, oy, oz, dir, cls, hs.rayCount());
             if (canopy != null) canopy.hits(ox, oy, oz, dir, cls, dist, hs.rayCount()); // crowns on each reflection leg
             if (canopy != null && skyView != null) skyView.throughCrowns(canopy, ox, oy, oz, cls, hs.rayCount());
             collectReflectors(ox, oy, oz); // every receiver: reflectors reflect what they receive
             accumulate(nx, ny, nz, rc.cosTilt(r), rc.sinTilt(r), analysed);
+        }
+
+        /**
+         * The sky component under the traditional CIE overcast sky ({@link org.solmass.sky.CieSky#skyComponentPct})
+         * from the receiver's hemisphere rays that reach the sky (class SKY), in ray order: the rays
+         * and answers of the sky view factor, so a metric that needs it traces nothing again
+         * (org.solmass.metrics.VerticalSkyComponentMetric).
+         */
+        private double overcastSky(int rays) {
+            double sum = 0;
+            for (int i = 0; i < rays; i++) if (cls[i] == HemisphereSampler.SKY) sum += org.solmass.sky.CieSky.overcastRelative(dir[3 * i + 2]);
+            return org.solmass.sky.CieSky.skyComponentPct(sum, rays);
         }
 
         /** Per month, the last-leg correction of analysed receiver r's reflected light from the crowns' year mean to the month (just after its first pass). */

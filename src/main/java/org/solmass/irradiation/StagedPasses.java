@@ -54,6 +54,7 @@ public final class StagedPasses {
                 out.obs[i] = w.vf.obstruction();
                 out.svfSe[i] = w.vf.skyStdError();
                 out.horizonVis[i] = w.horizonVis;
+                out.overcastPct[i] = w.overcastSkyPct;
                 System.arraycopy(w.beamMonth, 0, out.beamMonthWh, 12 * i, 12);
                 System.arraycopy(w.diffMonth, 0, out.diffuseMonthWh, 12 * i, 12);
                 out.unshadedWh[i] = w.unshadedTotal;
@@ -225,6 +226,7 @@ public final class StagedPasses {
         Reflection.Lists row = Reflection.Lists.of(idxRow, wRow, w2Row, gRow, g2Row, raysPerPatch, reflectorRays);
         int[][] byLength = new int[1][];
         double[] svf = new double[n], gvf = new double[n], obs = new double[n], se = new double[n], hv = new double[n];
+        double[] overcast = new double[n];
         double[] annual = new double[n], beam = new double[n], diffuse = new double[n], reflected = new double[n];
         double[] unshaded = new double[n], sunshine = new double[n], annualSe = new double[n];
         double[][] monthly = new double[12][n];
@@ -236,6 +238,7 @@ public final class StagedPasses {
             obs[p] = part.obs[i];
             se[p] = part.svfSe[i];
             hv[p] = part.horizonVis[i];
+            overcast[p] = part.overcastPct[i];
             double[] bm = new double[12], dm = new double[12], rm = new double[12];
             for (int m = 0; m < 12; m++) {
                 rm[m] = refl.reflMonthWh()[12 * r + m];
@@ -260,7 +263,7 @@ public final class StagedPasses {
         for (int b = 0; b < bounceKwh.length; b++) bounceKwh[b] = refl.bounceWh()[b] / 1000;
         return new IrradiationResult(svf, gvf, obs, se, hv, annual, beam, diffuse, reflected, unshaded, monthly, null,
                 sunshine, st.siteSunshineHours, sun.directions.count(), annualSe,
-                new IrradiationResult.Bounces(bounceKwh, refl.converged(), refl.tolerance(), refl.maxBounces()));
+                new IrradiationResult.Bounces(bounceKwh, refl.converged(), refl.tolerance(), refl.maxBounces()), overcast);
     }
 
     /** Global receiver ids as positions in {@code ids} (ascending), into {@code out} (the same length). */

@@ -29,10 +29,18 @@ import java.util.Locale;
  * L sin gamma over the upper hemisphere). The patch's illuminance E_v = integral of L cos(theta) over
  * the sky it sees is estimated with the run's cosine-weighted stratified hemisphere rays
  * ({@link HemisphereSampler}, pdf cos(theta)/pi): E_v ~ (pi / N) sum over rays that reach the sky of
- * L(gamma_i), so VSC = E_v / E_h = 3 / (7 N) x sum (1 + 2 sin gamma_i), in percent. Only the rays that can reach the sky are
- * traced ({@link HemisphereSampler#skyRays}: a ray going down never does), the same answers as tracing all. Light reflected by the ground and
- * the blocks is not part of the vertical sky component (by its definition). Sampling error at 1024
- * rays: see docs/metrics.md (measured over many seeds in {@code VerticalSkyComponentMetricTest}).
+ * L(gamma_i), so VSC = E_v / E_h = 3 / (7 N) x sum (1 + 2 sin gamma_i), in percent
+ * ({@link CieSky#skyComponentPct}). Light reflected by the ground and the blocks is not part of the
+ * vertical sky component (by its definition). Sampling error at 1024 rays: see docs/metrics.md
+ * (measured over many seeds in {@code VerticalSkyComponentMetricTest}).
+ *
+ * <p>The rays are the patch's sky-view rays of the irradiation pass (same seed, origin and answers),
+ * so a run traces them once: the pass keeps the sum for every analysed patch
+ * ({@link org.solmass.irradiation.IrradiationResult#overcastSkyPct}). Without a pass's result (a
+ * context of the metrics alone) the metric traces the same rays itself ({@link HemisphereSampler#skyRays},
+ * only the rays that can reach the sky: a ray going down never does), with the same answers;
+ * {@code VscFromPassTest} checks that both give the same value. The sky view factor and the vertical
+ * sky component of one patch so share their sampling error's rays (each is still unbiased).
  *
  * <p>Facade patches only (other kinds: no value): the component is defined for vertical windows.
  */
@@ -43,9 +51,6 @@ public final class VerticalSkyComponentMetric implements Metric {
     /** The columns of this metric. */
     public static final List<ColumnFamily> COLUMNS = List.of(ColumnFamily.of(VSC));
 
-    /** Seed offset so the metric's rays are independent of the sky-view rays of the same patch. */
-    static final long SEED_SALT = 0x0C1E_5EEDL;
-
     @Override public String name() { return "vertical sky component"; }
 
     @Override public List<ColumnFamily> columns() { return COLUMNS; }
@@ -55,6 +60,17 @@ public final class VerticalSkyComponentMetric implements Metric {
         List<Patch> patches = ctx.patches().patches();
         double[] vsc = new double[patches.size()];
         Arrays.fill(vsc, Double.NaN);
+        double[] fromPass = ctx.irradiation() == null ? null : ctx.irradiation().overcastSkyPct();
+        if (fromPass != null) {
+            for (int p = 0; p < vsc.length; p++) if (patches.get(p).kind() == SurfaceKind.FACADE) vsc[p] = fromPass[p];
+        } else {
+            traced(ctx, patches, vsc);
+        }
+        return findings(patches, vsc, table);
+    }
+
+    /** The metric's own rays for every facade patch: the pass's sky-view rays, traced again. */
+    static void traced(MetricContext ctx, List<Patch> patches, double[] vsc) {
         int rays = ctx.rays() > 0 ? ctx.rays() : HemisphereSampler.DEFAULT_RAYS;
         ThreadLocal<HemisphereSampler> samplers = ThreadLocal.withInitial(() -> new HemisphereSampler(ctx.scene(), rays));
         Parallel.forEach(patches.size(), p -> {
@@ -64,9 +80,12 @@ public final class VerticalSkyComponentMetric implements Metric {
             int n = s.rayCount();
             double[] dir = new double[3 * n];
             boolean[] sky = new boolean[n];
-            s.skyRays(q, ctx.raySeed() ^ SEED_SALT, dir, sky);
+            s.skyRays(q, ctx.raySeed(), dir, sky);
             vsc[p] = percentOfSky(dir, sky, n);
         });
+    }
+
+    private static Findings findings(List<Patch> patches, double[] vsc, ResultTable table) {
         table.put(VSC, vsc);
         AreaStats st = AreaStats.of(patches, vsc);
         double below27 = 0;
@@ -85,7 +104,7 @@ public final class VerticalSkyComponentMetric implements Metric {
     static double percentOfSky(double[] dir, boolean[] sky, int n) {
         double sum = 0;
         for (int i = 0; i < n; i++) if (sky[i]) sum += CieSky.overcastRelative(dir[3 * i + 2]);
-        return 100 * Math.PI * sum / (n * CieSky.OVERCAST_HORIZONTAL_PER_LZ);
+        return CieSky.skyComponentPct(sum, n);
     }
 
     /** Terminal lines of a run; the column is summarised in summary.json. */

@@ -80,6 +80,18 @@ public final class CieSky implements SkyDistribution {
 
     @Override public String name() { return type == 0 ? "cie-overcast" : "cie-" + type; }
 
+    /**
+     * The sky component under the traditional overcast sky, in percent, from N cosine-weighted
+     * hemisphere rays (pdf cos(theta)/pi) of a plane: {@code sumRelative} = the sum of
+     * {@link #overcastRelative} over the rays that reach the sky. The plane's illuminance from the sky
+     * it sees is E = integral of L cos(theta) ~ (pi / N) Lz sumRelative (Monte Carlo with that pdf);
+     * divided by the unobstructed horizontal plane's {@link #OVERCAST_HORIZONTAL_PER_LZ} Lz. For a
+     * vertical plane this is the vertical sky component (39.6 % for an open wall: common practice).
+     */
+    public static double skyComponentPct(double sumRelative, int rays) {
+        return 100 * Math.PI * sumRelative / (rays * OVERCAST_HORIZONTAL_PER_LZ);
+    }
+
     /** Traditional overcast sky relative to the zenith: (1 + 2 cos Z)/3, cos Z = sin of the elevation. */
     public static double overcastRelative(double cosZenith) {
         return (1 + 2 * cosZenith) / 3;
