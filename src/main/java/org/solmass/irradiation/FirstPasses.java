@@ -8,8 +8,8 @@ import java.util.List;
  * {@link StagedPasses#firstPass} computed for them and what the later stages need from it
  * (plain arrays, {@link Serializable}, so that a distributed runner can ship it between stages).
  * Entry i belongs to receiver {@code ids[i]}; per-month values are {@code [i * 12 + month0]}.
- * The extras of analysed patches (view factors, beam and diffuse per month, unshaded, sunshine
- * hours) are 0 for context patches and ground probes.
+ * The extras of analysed patches (view factors, the overcast-sky sum of the vertical sky component,
+ * beam and diffuse per month, unshaded, sunshine hours) are 0 for context patches and ground probes.
  */
 public final class FirstPasses implements Serializable {
     private static final long serialVersionUID = 1L;

@@ -344,8 +344,8 @@ public final class ShadedIrradiation {
         /**
          * The sky component under the traditional CIE overcast sky ({@link org.solmass.sky.CieSky#skyComponentPct})
          * from the receiver's hemisphere rays that reach the sky (class SKY), in ray order: the rays
-         * and answers of the sky view factor, so a metric that needs it traces nothing again
-         * (org.solmass.metrics.VerticalSkyComponentMetric).
+         * and answers of the sky view factor, so the vertical sky component of the metrics stage
+         * traces nothing again.
          */
         private double overcastSky(int rays) {
             double sum = 0;

@@ -62,6 +62,9 @@ public final class VerticalSkyComponentMetric implements Metric {
         Arrays.fill(vsc, Double.NaN);
         double[] fromPass = ctx.irradiation() == null ? null : ctx.irradiation().overcastSkyPct();
         if (fromPass != null) {
+            if (fromPass.length != vsc.length)
+                throw new IllegalArgumentException("the irradiation result holds " + fromPass.length + " patches, the metric "
+                        + vsc.length + ": the pass and the metrics must run on the same patch list");
             for (int p = 0; p < vsc.length; p++) if (patches.get(p).kind() == SurfaceKind.FACADE) vsc[p] = fromPass[p];
         } else {
             traced(ctx, patches, vsc);
