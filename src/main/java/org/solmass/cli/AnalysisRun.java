@@ -202,6 +202,16 @@ public final class AnalysisRun {
      * run's executors get it from the driver's tables), or null to load it.
      */
     public static Prepared prepare(Study study, PhaseProgress progress, Map<String, Double> t, WeatherSeries loaded) {
+        return prepare(study, progress, t, loaded, false);
+    }
+
+    /**
+     * As {@link #prepare(Study, PhaseProgress, Map, WeatherSeries)}; {@code forTiles}: the study is
+     * prepared for a city run, which cuts it into tiles ({@code tiles.CityModel}), so the memory check
+     * before patching counts what that JVM holds ({@link MemoryEstimate#forTilesBeforePatching}), not
+     * the one-machine run's arrays.
+     */
+    public static Prepared prepare(Study study, PhaseProgress progress, Map<String, Double> t, WeatherSeries loaded, boolean forTiles) {
         List<String> warnings = new ArrayList<>();
         long t0 = System.nanoTime();
 
@@ -229,7 +239,7 @@ public final class AnalysisRun {
         progress.begin("patches", 0);
         Set<String> analysed = patchedBlocks(study, split);
         try {
-            requireMemoryForPatches(study, model, analysed);
+            requireMemoryForPatches(study, model, analysed, forTiles);
         } catch (InputException e) {   // a model in millimetres read as metres ends here: say so first
             throw warnings.isEmpty() ? e : e.withHint(". The input already gave these warnings, which may be the cause: "
                     + String.join("; ", warnings));
@@ -359,7 +369,7 @@ public final class AnalysisRun {
      * The same check before patching, from the area of the blocks' faces that get patches (a huge
      * model at a small patch size would otherwise fill the heap inside the patcher).
      */
-    static void requireMemoryForPatches(Study study, MassingModel model, Set<String> analysed) {
+    static void requireMemoryForPatches(Study study, MassingModel model, Set<String> analysed, boolean forTiles) {
         double[] v = model.vertices();
         int[] tr = model.triangles();
         double inA = 0, ctxA = 0;
@@ -372,12 +382,16 @@ public final class AnalysisRun {
         }
         int threads = study.threads() > 0 ? study.threads() : Runtime.getRuntime().availableProcessors();
         int rays = org.solmass.scene.HemisphereSampler.roundedRayCount(study.rays());
-        MemoryEstimate m = MemoryEstimate.beforePatching(inA, study.patchM(), ctxA, study.patchM() * CONTEXT_PATCH_FACTOR,
+        MemoryEstimate m = forTiles
+                ? MemoryEstimate.forTilesBeforePatching(inA, study.patchM(), ctxA, study.patchM() * CONTEXT_PATCH_FACTOR)
+                : MemoryEstimate.beforePatching(inA, study.patchM(), ctxA, study.patchM() * CONTEXT_PATCH_FACTOR,
                 rays, IrradiationSetup.reflectorRays(rays, study.reflection().rays()), true, threads);
         if (m.fits(MemoryEstimate.freeHeapBytes())) return;
         System.gc();
-        m.requireFits(MemoryEstimate.freeHeapBytes(), study.patchM(), study.rays(), (long) Math.ceil(inA / (study.patchM() * study.patchM())),
-                study.source() == null ? "--patch" : study.source() + ": patch_m");
+        long patches = (long) Math.ceil(inA / (study.patchM() * study.patchM()));
+        String where = study.source() == null ? "--patch" : study.source() + ": patch_m";
+        if (forTiles) m.requireFitsForTiles(MemoryEstimate.freeHeapBytes(), study.patchM(), study.rays(), patches, where);
+        else m.requireFits(MemoryEstimate.freeHeapBytes(), study.patchM(), study.rays(), patches, where);
     }
 
     /**

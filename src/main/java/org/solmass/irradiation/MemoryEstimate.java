@@ -101,6 +101,32 @@ public record MemoryEstimate(long bytes, long countBytes) {
         return new MemoryEstimate(m.bytes() + objects, m.countBytes() + objects);
     }
 
+    /**
+     * Heap per receiver of a city run's prepared study besides its patch object ({@code
+     * tiles.CityModel}: the receiver layout's origin, normal, seed and surface, and the whole layout's
+     * reflector index, about 16 B of local coordinates and a share of the buckets). Measured with the
+     * JVM's count of the heap in use after a full collection, CityModel of invented synthetic cities
+     * (3 December 2026): 302-372 B per receiver in all, patch objects included, at 10^5 and 3 x 10^5
+     * patches (smaller cities measure too noisily); {@link #PATCH_OBJECT_BYTES} + this = 500 B.
+     */
+    static final long TILES_PER_RECEIVER_BYTES = 100;
+
+    /**
+     * The estimate before patching for a city run's JVM ({@code tiles.CityModel}: the driver and each
+     * Spark executor prepare the whole study, then work tile by tile): the patch objects and the
+     * layout of every receiver (ground probes are few and small: not counted), not the one-machine
+     * run's arrays of {@link #of}, which a tile's passes build for the tile's own receivers only
+     * (their peak bounded by the tile size, docs/city.md "What a task holds"). Without this the
+     * city runner refused a 10^6-patch city on executors of 6 GB with the one-machine run's 7.9 GB,
+     * where the prepared study holds about 0.4 GB.
+     */
+    public static MemoryEstimate forTilesBeforePatching(double analysedAreaM2, double patchM, double contextAreaM2, double contextPatchM) {
+        long analysed = (long) Math.ceil(analysedAreaM2 / (patchM * patchM));
+        long context = (long) Math.ceil(contextAreaM2 / (contextPatchM * contextPatchM));
+        long b = (analysed + context) * (PATCH_OBJECT_BYTES + TILES_PER_RECEIVER_BYTES);
+        return new MemoryEstimate(b, b);
+    }
+
     /** The estimate for inputs already built. */
     public static MemoryEstimate of(ShadedIrradiation.Inputs in, int threads) {
         return of(in.receivers().count, in.receivers().analysed, in.raysPerPatch(), in.reflectorRays(), in.steps().count,
@@ -130,15 +156,27 @@ public record MemoryEstimate(long bytes, long countBytes) {
      * @param where the key or flag of the patch size ("patch_m", "--patch")
      */
     public void requireFits(long budgetBytes, double patchM, int rays, long analysedPatches, String where) {
+        requireFits(budgetBytes, patchM, rays, analysedPatches, where, "the analysis", "SOLMASS_JAVA_OPTS=-Xmx..., the launcher's default is -Xmx8g");
+    }
+
+    /**
+     * As {@link #requireFits(long, double, int, long, String)} for the study a city run prepares
+     * ({@link #forTilesBeforePatching}), with the memory settings of a Spark run in the advice.
+     */
+    public void requireFitsForTiles(long budgetBytes, double patchM, int rays, long analysedPatches, String where) {
+        requireFits(budgetBytes, patchM, rays, analysedPatches, where, "preparing the model for its tiles",
+                "on a cluster spark.executor.memory and spark.driver.memory; ./solmass city: SOLMASS_JAVA_OPTS=-Xmx..., default -Xmx8g");
+    }
+
+    private void requireFits(long budgetBytes, double patchM, int rays, long analysedPatches, String where, String what, String settings) {
         if (fits(budgetBytes)) return;
         double fit = fittingPatchM(patchM, budgetBytes);
         String advice = Double.isNaN(fit) || fit > 100
                 ? "no patch size fits; give Java more memory"
                 : String.format(Locale.ROOT, "use a patch size of at least %.2f m (it would fit), fewer rays, or give Java more memory", fit);
         throw new InputException(where, String.format(Locale.ROOT,
-                "the analysis needs about %s of memory for %d patches at %.2f m with %d rays, but only %s of the Java heap is free; %s"
-                        + " (SOLMASS_JAVA_OPTS=-Xmx..., the launcher's default is -Xmx8g)",
-                size(bytes), analysedPatches, patchM, rays, size(budgetBytes), advice));
+                "%s needs about %s of memory for %d patches at %.2f m with %d rays, but only %s of the Java heap is free; %s (%s)",
+                what, size(bytes), analysedPatches, patchM, rays, size(budgetBytes), advice, settings));
     }
 
     /** Free heap now: the JVM's maximum minus what is in use. */

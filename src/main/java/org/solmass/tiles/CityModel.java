@@ -88,12 +88,12 @@ public final class CityModel {
 
     /** A study prepared as {@code solmass analyse} does. */
     public static CityModel of(Study study) {
-        return new CityModel(study, AnalysisRun.prepare(study, PhaseProgress.NONE, new java.util.LinkedHashMap<>()), null);
+        return new CityModel(study, AnalysisRun.prepare(study, PhaseProgress.NONE, new java.util.LinkedHashMap<>(), null, true), null);
     }
 
     /** A study prepared with tables computed from it before ({@link #tables}): weather, sun and step table as given. */
     public static CityModel of(Study study, CityTables tables) {
-        return new CityModel(study, AnalysisRun.prepare(study, PhaseProgress.NONE, new java.util.LinkedHashMap<>(), tables.weather()),
+        return new CityModel(study, AnalysisRun.prepare(study, PhaseProgress.NONE, new java.util.LinkedHashMap<>(), tables.weather(), true),
                 tables.sun());
     }
 

@@ -49,6 +49,9 @@ public final class CityBench implements Callable<Integer> {
     @Option(names = "--skip-one-machine", description = "only the Spark run and the memory table") boolean skipOne;
     @Option(names = "--memory-only", description = "only the tables, the executor set-up and the memory table") boolean memoryOnly;
     @Option(names = "--no-memory", description = "no memory table (the timed runs only)") boolean noMemory;
+    @Option(names = "--spark-cores", paramLabel = "N", description = "cores of the Spark run's executors (default: N of local[N]; give it for a cluster)") Integer sparkCoresGiven;
+    @Option(names = "--warm-up", defaultValue = "20000", paramLabel = "N",
+            description = "before the timed runs, a city of about N patches (another seed) through both paths, untimed; 0: none (default ${DEFAULT-VALUE})") long warmUp;
 
     public static void main(String[] args) {
         System.exit(new CommandLine(new CityBench()).execute(args));
@@ -61,6 +64,7 @@ public final class CityBench implements Callable<Integer> {
         Study study = StudyReader.read(w.study());
         System.out.printf(Locale.ROOT, "invented city: %d buildings, about %d patches, tallest %.1f m%n", w.buildings(), w.estimatedPatches(), w.tallestM());
         int cores = Runtime.getRuntime().availableProcessors();
+        if (warmUp > 0 && !memoryOnly) warmUp(dir);
         double oneRate = Double.NaN;
         if (!skipOne && !memoryOnly) {
             System.gc();
@@ -81,6 +85,26 @@ public final class CityBench implements Callable<Integer> {
         return 0;
     }
 
+    /**
+     * Both paths once on a small invented city of another seed, untimed, so that the timed runs start
+     * alike with compiled code (the JIT's, the kernel warm-up's): without it the one-machine run, first
+     * in the JVM, paid the JVM's warm-up and the Spark run after it did not, which flattered the ratio
+     * (docs/city.md, "Warm and cold JVMs"). On a cluster the executors run for the whole job, so at
+     * city scale their warm-up is a small share; a cold start is measured with {@code --warm-up 0
+     * --skip-one-machine} in a JVM of its own.
+     */
+    private void warmUp(Path dir) throws Exception {
+        long t0 = System.nanoTime();
+        SyntheticCity.Written w = SyntheticCity.write(dir.resolve("warm-up"), SyntheticCity.Spec.of(warmUp, seed + 1000));
+        if (!skipOne) AnalysisRun.run(StudyReader.read(w.study()), PhaseProgress.NONE);
+        {
+            int code = CityJob.commandLine(new CityJob()).execute(w.study().toString(), "--out", dir.resolve("warm-up-out").toString(),
+                    "--master", master, "--tile-size", Double.toString(tileM), "-q");
+            if (code != 0) throw new IllegalStateException("the warm-up's Spark run failed: exit code " + code);
+        }
+        System.out.printf(Locale.ROOT, "warm-up: a %d-patch invented city through both paths, untimed (%.1f s)%n", warmUp, (System.nanoTime() - t0) / 1e9);
+    }
+
     /** The Spark run of the city, as {@code solmass city} does it: patches per second per core, and against one machine. */
     private int spark(Path dir, SyntheticCity.Written w, double oneRate) {
         CityJob job = new CityJob();
@@ -94,7 +118,7 @@ public final class CityBench implements Callable<Integer> {
         double s = (System.nanoTime() - t1) / 1e9;
         double cpuS = (processCpuNanos() - cpu0) / 1e9;
         if (code != 0) return code;
-        int sparkCores = Math.max(1, CitySpark.localCores(master));
+        int sparkCores = sparkCoresGiven != null ? sparkCoresGiven : Math.max(1, CitySpark.localCores(master));
         long n = job.last.stages().rows();
         double rate = n / s / sparkCores;
         CityPlan plan = job.last.plan();
