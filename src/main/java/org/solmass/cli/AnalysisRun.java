@@ -390,7 +390,8 @@ public final class AnalysisRun {
         System.gc();
         long patches = (long) Math.ceil(inA / (study.patchM() * study.patchM()));
         String where = study.source() == null ? "--patch" : study.source() + ": patch_m";
-        if (forTiles) m.requireFitsForTiles(MemoryEstimate.freeHeapBytes(), study.patchM(), study.rays(), patches, where);
+        if (forTiles) m.requireFitsForTiles(MemoryEstimate.freeHeapBytes(), study.patchM(), patches, where,
+                "on a cluster --driver-memory, and spark.executor.memory for the executors; ./solmass city: SOLMASS_JAVA_OPTS=-Xmx..., default -Xmx8g");
         else m.requireFits(MemoryEstimate.freeHeapBytes(), study.patchM(), study.rays(), patches, where);
     }
 

@@ -43,7 +43,7 @@ public record MemoryEstimate(long bytes, long countBytes) {
     static final long PER_THREAD_PER_RAY = 24 + 4 + 4 + 8 + 4 + 4 + 8;
     static final long PER_STEP = 3 * 4 + 4 + 4 + 8 + 8 + 4 + 8;
     /** Share of the free heap the estimate may use: the rest is for what the estimate leaves out. */
-    static final double HEADROOM = 0.8;
+    public static final double HEADROOM = 0.8;
 
     /**
      * @param receivers      all receivers: analysed patches, context patches, ground probes
@@ -103,27 +103,34 @@ public record MemoryEstimate(long bytes, long countBytes) {
 
     /**
      * Heap per receiver of a city run's prepared study besides its patch object ({@code
-     * tiles.CityModel}: the receiver layout's origin, normal, seed and surface, and the whole layout's
-     * reflector index, about 16 B of local coordinates and a share of the buckets). Measured with the
-     * JVM's count of the heap in use after a full collection, CityModel of invented synthetic cities
-     * (3 December 2026): 302-372 B per receiver in all, patch objects included, at 10^5 and 3 x 10^5
-     * patches (smaller cities measure too noisily); {@link #PATCH_OBJECT_BYTES} + this = 500 B.
+     * tiles.CityModel}: the receiver layout's origin, normal, seed, surface and centre, and the whole
+     * layout's reflector index, built at the first tile). Measured with the JVM's count of the heap in
+     * use after a full collection, an invented synthetic city of 335,283 receivers (3 December 2026,
+     * twice the same): 273 B per receiver in all (patch objects included) once prepared, 400 B once a
+     * tile's first pass has built the whole reflector index. {@link #PATCH_OBJECT_BYTES} + this =
+     * 600 B per receiver, 1.5 times the measured, for what the collections leave out (the index's
+     * build, garbage between collections).
      */
-    static final long TILES_PER_RECEIVER_BYTES = 100;
+    static final long TILES_PER_RECEIVER_BYTES = 200;
+
+    /** {@link #forTilesBeforePatching}'s bytes for a known number of receivers. */
+    public static long forTilesBytes(long receivers) {
+        return receivers * (PATCH_OBJECT_BYTES + TILES_PER_RECEIVER_BYTES);
+    }
 
     /**
      * The estimate before patching for a city run's JVM ({@code tiles.CityModel}: the driver and each
-     * Spark executor prepare the whole study, then work tile by tile): the patch objects and the
-     * layout of every receiver (ground probes are few and small: not counted), not the one-machine
-     * run's arrays of {@link #of}, which a tile's passes build for the tile's own receivers only
-     * (their peak bounded by the tile size, docs/city.md "What a task holds"). Without this the
+     * executor prepare the whole study, then work tile by tile): the patch objects and the layout of
+     * every receiver with the whole reflector index (ground probes are few: not counted), not the
+     * one-machine run's arrays of {@link #of}, which a tile's passes build for the tile's own
+     * receivers only (bounded by the tile size, docs/city.md "What a task holds"). Without it the
      * city runner refused a 10^6-patch city on executors of 6 GB with the one-machine run's 7.9 GB,
      * where the prepared study holds about 0.4 GB.
      */
     public static MemoryEstimate forTilesBeforePatching(double analysedAreaM2, double patchM, double contextAreaM2, double contextPatchM) {
         long analysed = (long) Math.ceil(analysedAreaM2 / (patchM * patchM));
         long context = (long) Math.ceil(contextAreaM2 / (contextPatchM * contextPatchM));
-        long b = (analysed + context) * (PATCH_OBJECT_BYTES + TILES_PER_RECEIVER_BYTES);
+        long b = forTilesBytes(analysed + context);
         return new MemoryEstimate(b, b);
     }
 
@@ -161,11 +168,18 @@ public record MemoryEstimate(long bytes, long countBytes) {
 
     /**
      * As {@link #requireFits(long, double, int, long, String)} for the study a city run prepares
-     * ({@link #forTilesBeforePatching}), with the memory settings of a Spark run in the advice.
+     * ({@link #forTilesBeforePatching}, which does not depend on the rays); {@code settings} names
+     * where that JVM's memory is set.
      */
-    public void requireFitsForTiles(long budgetBytes, double patchM, int rays, long analysedPatches, String where) {
-        requireFits(budgetBytes, patchM, rays, analysedPatches, where, "preparing the model for its tiles",
-                "on a cluster spark.executor.memory and spark.driver.memory; ./solmass city: SOLMASS_JAVA_OPTS=-Xmx..., default -Xmx8g");
+    public void requireFitsForTiles(long budgetBytes, double patchM, long patches, String where, String settings) {
+        if (fits(budgetBytes)) return;
+        double fit = fittingPatchM(patchM, budgetBytes);
+        String advice = Double.isNaN(fit) || fit > 100
+                ? "no patch size fits; give Java more memory"
+                : String.format(Locale.ROOT, "use a patch size of at least %.2f m (it would fit) or give Java more memory", fit);
+        throw new InputException(where, String.format(Locale.ROOT,
+                "preparing the model for its tiles needs about %s of memory for %d patches at %.2f m, but only %s of the Java heap is free; %s (%s)",
+                size(bytes), patches, patchM, size(budgetBytes), advice, settings));
     }
 
     private void requireFits(long budgetBytes, double patchM, int rays, long analysedPatches, String where, String what, String settings) {

@@ -22,6 +22,8 @@ import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
@@ -59,6 +61,11 @@ public final class CityBench implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (sparkCoresGiven != null ? sparkCoresGiven < 1 : CitySpark.localCores(master) < 1) {
+            throw new CommandLine.ParameterException(new CommandLine(this), sparkCoresGiven != null
+                    ? "--spark-cores must be 1 or more, got " + sparkCoresGiven
+                    : "--spark-cores is needed with --master " + master + " (the executors' cores in all, for patches per second per core)");
+        }
         Path dir = Files.createTempDirectory("solmass-city-bench");
         SyntheticCity.Written w = SyntheticCity.write(dir.resolve("city"), SyntheticCity.Spec.of(patches, seed));
         Study study = StudyReader.read(w.study());
@@ -89,17 +96,19 @@ public final class CityBench implements Callable<Integer> {
      * Both paths once on a small invented city of another seed, untimed, so that the timed runs start
      * alike with compiled code (the JIT's, the kernel warm-up's): without it the one-machine run, first
      * in the JVM, paid the JVM's warm-up and the Spark run after it did not, which flattered the ratio
-     * (docs/city.md, "Warm and cold JVMs"). On a cluster the executors run for the whole job, so at
-     * city scale their warm-up is a small share; a cold start is measured with {@code --warm-up 0
-     * --skip-one-machine} in a JVM of its own.
+     * (docs/city.md, "Warm and cold JVMs"). This warms this JVM, so in local mode both sides; on a
+     * cluster master each run is an application with executors of its own, which start cold whatever
+     * ran before. A cold local start is measured with {@code --warm-up 0 --skip-one-machine}.
      */
     private void warmUp(Path dir) throws Exception {
         long t0 = System.nanoTime();
         SyntheticCity.Written w = SyntheticCity.write(dir.resolve("warm-up"), SyntheticCity.Spec.of(warmUp, seed + 1000));
         if (!skipOne) AnalysisRun.run(StudyReader.read(w.study()), PhaseProgress.NONE);
         {
-            int code = CityJob.commandLine(new CityJob()).execute(w.study().toString(), "--out", dir.resolve("warm-up-out").toString(),
-                    "--master", master, "--tile-size", Double.toString(tileM), "-q");
+            List<String> args = new ArrayList<>(List.of(w.study().toString(), "--out", dir.resolve("warm-up-out").toString(),
+                    "--master", master, "--tile-size", Double.toString(tileM), "-q"));
+            if (haloCapM != null) args.addAll(List.of("--halo-cap", Double.toString(haloCapM)));
+            int code = CityJob.commandLine(new CityJob()).execute(args.toArray(new String[0]));
             if (code != 0) throw new IllegalStateException("the warm-up's Spark run failed: exit code " + code);
         }
         System.out.printf(Locale.ROOT, "warm-up: a %d-patch invented city through both paths, untimed (%.1f s)%n", warmUp, (System.nanoTime() - t0) / 1e9);
@@ -118,7 +127,7 @@ public final class CityBench implements Callable<Integer> {
         double s = (System.nanoTime() - t1) / 1e9;
         double cpuS = (processCpuNanos() - cpu0) / 1e9;
         if (code != 0) return code;
-        int sparkCores = sparkCoresGiven != null ? sparkCoresGiven : Math.max(1, CitySpark.localCores(master));
+        int sparkCores = sparkCoresGiven != null ? sparkCoresGiven : CitySpark.localCores(master);
         long n = job.last.stages().rows();
         double rate = n / s / sparkCores;
         CityPlan plan = job.last.plan();

@@ -6,6 +6,7 @@ import org.solmass.cli.Main;
 import org.solmass.output.FolderClaim;
 import org.solmass.study.Study;
 import org.solmass.study.StudyReader;
+import org.solmass.irradiation.MemoryEstimate;
 import org.solmass.tiles.CityModel;
 import org.solmass.tiles.CityOptions;
 import org.solmass.tiles.CityPlan;
@@ -59,9 +60,12 @@ public final class CityJob implements Callable<Integer> {
     static CommandLine commandLine(CityJob job) {
         CommandLine cl = new CommandLine(job);
         cl.setExecutionExceptionHandler((ex, line, parse) -> {
-            if (ex instanceof org.solmass.InputException) {
-                line.getErr().println("solmass: " + ex.getMessage());
-                return Main.EXIT_INPUT;
+            // bad input found in a task (an executor's own check) reaches the driver wrapped in Spark's exceptions
+            for (Throwable c = ex; c != null; c = c.getCause()) {
+                if (c instanceof org.solmass.InputException) {
+                    line.getErr().println("solmass: " + c.getMessage());
+                    return Main.EXIT_INPUT;
+                }
             }
             line.getErr().println("solmass: city failed: " + ex);
             if (System.getenv("SOLMASS_DEBUG") != null) ex.printStackTrace(line.getErr());
@@ -90,6 +94,7 @@ public final class CityJob implements Callable<Integer> {
                 CityModel city = CityModel.of(s);
                 CityPlan plan = city.plan(o);
                 double prepareS = (System.nanoTime() - t0) / 1e9;
+                requireExecutorMemory(new org.apache.spark.SparkConf(), master, city, plan);
                 if (!quiet) System.err.printf(Locale.ROOT, "city: %d tiles of %.0f m, halo %.0f m (uncapped %.0f m, lowest sun %.1f deg, tallest %.1f m),"
                                 + " %,d patches, %,d receivers%n", plan.tiles().size(), o.tileM(), plan.haloM(), plan.uncappedHaloM(),
                         plan.minSunElevationDeg(), plan.tallestM(), plan.analysedCount(), plan.receiverCount());
@@ -97,7 +102,8 @@ public final class CityJob implements Callable<Integer> {
                 SparkSession spark = CitySpark.session(master, work, plan.tiles().size());
                 try {
                     if (!quiet) spark.sparkContext().addSparkListener(new StageProgress(System.err, 2000));
-                    CityStages.Settings settings = CityStages.Settings.of(study).failingOnce(failOnceTile, failOnceStage);
+                    CityStages.Settings settings = CityStages.Settings.of(study).failingOnce(failOnceTile, failOnceStage)
+                            .holding(spark.sparkContext().getConf().get(CityStages.HOLD_KEY, null));
                     last = CityRun.run(spark, city, plan, settings, claim, prepareS);
                 } finally {
                     if (!shared) spark.stop();
@@ -109,6 +115,51 @@ public final class CityJob implements Callable<Integer> {
                 deleteTree(work);
             }
         }
+    }
+
+    /** Spark's reserved heap per executor ({@code UnifiedMemoryManager}: 300 MB) and its default {@code spark.memory.fraction}. */
+    static final long SPARK_RESERVED_BYTES = 300L << 20;
+    static final double SPARK_MEMORY_FRACTION = 0.6;
+
+    /**
+     * On a cluster (a master that is not {@code local}), before any task: every executor prepares the
+     * whole study (about {@link MemoryEstimate#forTilesBytes} for its receivers) and runs its tasks'
+     * tiles beside it ({@link MemoryEstimate#of} for the largest tile's receivers, counted as analysed,
+     * per task running at once: {@code spark.executor.cores / spark.task.cpus}), in the part of the heap
+     * Spark leaves to user objects: (spark.executor.memory - 300 MB) x (1 - spark.memory.fraction)
+     * (Spark's unified memory manager; the rest holds cached and shuffled blocks). Refused with the
+     * executor memory that would do, instead of each executor failing in its first task. In local
+     * mode the driver's own check before patching covers it (one JVM).
+     */
+    static void requireExecutorMemory(org.apache.spark.SparkConf conf, String master, CityModel city, CityPlan plan) {
+        String m = master != null ? master : conf.get("spark.master", "local[*]");
+        if (m.startsWith("local")) return;
+        long heap;
+        try {
+            heap = conf.getSizeAsBytes("spark.executor.memory", "1g");
+        } catch (NumberFormatException e) {
+            throw new org.solmass.InputException("spark.executor.memory", "expected a size such as 4g or 512m, got '"
+                    + conf.get("spark.executor.memory") + "'");
+        }
+        double fraction = conf.getDouble("spark.memory.fraction", SPARK_MEMORY_FRACTION);
+        int taskCpus = Math.max(1, conf.getInt("spark.task.cpus", 1));
+        int tasks = Math.max(1, conf.getInt("spark.executor.cores", 1) / taskCpus);
+        int largest = 0;
+        for (org.solmass.tiles.Tile t : plan.tiles()) largest = Math.max(largest, t.receivers().length);
+        int rays = org.solmass.scene.HemisphereSampler.roundedRayCount(city.study().rays());
+        long tile = MemoryEstimate.of(largest, largest, rays, city.prepared().weather().size(), false, taskCpus).bytes();
+        long study = MemoryEstimate.forTilesBytes(plan.receiverCount());
+        long need = study + tasks * tile;
+        double budget = Math.max(0, heap - SPARK_RESERVED_BYTES) * (1 - fraction);
+        if (new MemoryEstimate(need, need).fits((long) budget)) return;
+        long wantMb = (long) Math.ceil((need / MemoryEstimate.HEADROOM / (1 - fraction) + SPARK_RESERVED_BYTES) / (256L << 20)) * 256;
+        throw new org.solmass.InputException("spark.executor.memory", String.format(Locale.ROOT,
+                "each executor prepares the whole study (about %.2f GB for %,d receivers) and runs %d tile(s) at a time beside it"
+                        + " (about %.2f GB each at the largest tile, %,d receivers), but spark.executor.memory=%s leaves about %.2f GB to them"
+                        + " ((memory - 300 MB) x (1 - spark.memory.fraction %.2f)); give the executors at least"
+                        + " --conf spark.executor.memory=%dm, smaller tiles (--tile-size) or a larger patch size",
+                study / 1073741824.0, plan.receiverCount(), tasks, tile / 1073741824.0, largest,
+                conf.get("spark.executor.memory", "1g"), budget / 1073741824.0, fraction, wantMb));
     }
 
     static void deleteTree(Path p) {

@@ -20,7 +20,9 @@ import org.solmass.tiles.CityTables;
 import org.solmass.tiles.Tile;
 import scala.Tuple2;
 
+import java.io.IOException;
 import java.io.Serializable;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -60,11 +62,36 @@ final class CityStages {
      * @param studyFile the study file (absolute), read once per JVM
      * @param failOnceTile test hook: this tile's task fails on its first attempt at {@code failOnceStage}; -1 for none
      * @param failOnceStage "first-pass", "bounce", "finish" or "write"
+     * @param holdFile test hook ({@link #HOLD_KEY}): the first bounce's tasks write {@code holdFile + ".waiting"} and
+     *                 wait until {@code holdFile} exists (at most {@link #HOLD_MAX_S} s); null for none
      */
-    record Settings(String studyFile, int failOnceTile, String failOnceStage) implements Serializable {
-        static Settings of(Path study) { return new Settings(study.toAbsolutePath().normalize().toString(), -1, ""); }
+    record Settings(String studyFile, int failOnceTile, String failOnceStage, String holdFile) implements Serializable {
+        static Settings of(Path study) { return new Settings(study.toAbsolutePath().normalize().toString(), -1, "", null); }
 
-        Settings failingOnce(int tile, String stage) { return new Settings(studyFile, tile, stage); }
+        Settings failingOnce(int tile, String stage) { return new Settings(studyFile, tile, stage, holdFile); }
+
+        Settings holding(String file) { return new Settings(studyFile, failOnceTile, failOnceStage, file); }
+    }
+
+    /**
+     * Spark setting of a test hook (CityClusterIT): a file path; the first bounce's tasks wait until it
+     * exists, so that a test can kill an executor while tasks run, once the first pass is cached.
+     */
+    static final String HOLD_KEY = "spark.solmass.test.holdBounceUntil";
+    static final int HOLD_MAX_S = 120;
+
+    static void holdIfAsked(Settings s) {
+        if (s.holdFile() == null) return;
+        Path release = Path.of(s.holdFile());
+        try {
+            Files.writeString(Path.of(s.holdFile() + ".waiting"), "waiting\n", java.nio.file.StandardOpenOption.CREATE,
+                    java.nio.file.StandardOpenOption.APPEND);
+            for (int i = 0; i < HOLD_MAX_S * 10 && !Files.exists(release); i++) Thread.sleep(100);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
     }
 
     /**
@@ -322,7 +349,10 @@ final class CityStages {
             JavaPairRDD<Integer, Iterable<TileExchange.Packet>> got = exchange(state, sends, tp, false);
             JavaPairRDD<Integer, TileState> next = firsts.join(state).leftOuterJoin(got).mapValues(x -> {
                 TileState st = x._1()._2();
-                if (first) failOnce(s, "bounce", st.tile);
+                if (first) {
+                    failOnce(s, "bounce", st.tile);
+                    holdIfAsked(s);
+                }
                 return st.next(x._1()._1(), x._2(), first, ghiMonth, analysed);
             }).persist(StorageLevel.MEMORY_AND_DISK());
             double[] perTile = new double[nTiles];

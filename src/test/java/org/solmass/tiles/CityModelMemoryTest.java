@@ -25,7 +25,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * heap (-Xmx) on an invented synthetic city of about 60,000 patches:
  * <ul>
  * <li>256 MB: the one-machine check refuses the study (its arrays would need about 0.5 GB), the city
- * preparation passes it and builds the model without running out of memory;</li>
+ * preparation passes it, builds the model and runs what a task runs with it (the whole reflector
+ * index, the largest tile's first pass) without running out of memory;</li>
  * <li>32 MB: the city preparation refuses it before patching with a clear message (the key, what it
  * needs, the Spark memory settings), not with OutOfMemoryError.</li>
  * </ul>
@@ -59,7 +60,10 @@ class CityModelMemoryTest {
                 "-cp", System.getProperty("java.class.path"), Child.class.getName(), mode, study.toString()));
         Path log = dir.resolve(mode + "-" + heap + ".log");
         Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(log.toFile()).start();
-        assertTrue(p.waitFor(120, TimeUnit.SECONDS), "child did not end");
+        if (!p.waitFor(120, TimeUnit.SECONDS)) {
+            p.destroyForcibly();
+            throw new AssertionError("child did not end in 120 s");
+        }
         return new Result(p.exitValue(), Files.readString(log));
     }
 
@@ -69,7 +73,12 @@ class CityModelMemoryTest {
             try {
                 if (a[0].equals("tiles")) {
                     CityModel m = CityModel.load(Path.of(a[1]));
-                    System.out.println("prepared " + m.layout().count() + " receivers");
+                    // then what a task does with it: the whole reflector index and the largest tile's first pass
+                    CityPlan plan = m.plan(CityOptions.defaults());
+                    Tile big = plan.tiles().get(0);
+                    for (Tile t : plan.tiles()) if (t.receivers().length > big.receivers().length) big = t;
+                    m.firstPass(big, 1);
+                    System.out.println("prepared " + m.layout().count() + " receivers, largest tile " + big.receivers().length);
                 } else {
                     AnalysisRun.prepare(StudyReader.read(Path.of(a[1])), PhaseProgress.NONE, new LinkedHashMap<>());
                     System.out.println("prepared");

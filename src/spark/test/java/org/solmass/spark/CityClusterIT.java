@@ -16,7 +16,6 @@ import org.solmass.tiles.SyntheticCity;
 
 import java.io.File;
 import java.io.IOException;
-import java.net.ServerSocket;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -46,9 +45,11 @@ import static org.junit.jupiter.api.Assertions.fail;
  *
  * <p>Checks, on a small invented city ({@code tiles.SyntheticCity}, seeded) cut into 50 m tiles:
  * <ul>
- * <li>the job ends with exit code 0 although one executor JVM is killed (SIGKILL) once the first
- * pass is done and the first bounce has begun: the driver logs the lost executor, Spark recomputes
- * its tiles' cached first-pass results and shuffle files from the lineage;</li>
+ * <li>the job ends with exit code 0 although one executor JVM is killed (SIGKILL) while the first
+ * bounce's tasks run: a test hook ({@code CityStages.HOLD_KEY}) holds them until the test has killed
+ * it, after the first pass is done and cached. The driver logs the lost executor and its lost
+ * running task (ExecutorLostFailure), which Spark runs again, with the cached first-pass results and
+ * shuffle files it needs recomputed from the lineage;</li>
  * <li>every patch is in the Parquet rows exactly once, each value equal to the sequential tiled run
  * ({@code tiles.LocalCityRunner}, no Spark) to the last bit: seeds come from patch ids and the
  * bounces add the same terms in the same order, whatever JVM runs a tile;</li>
@@ -66,43 +67,50 @@ class CityClusterIT {
         Path target = Path.of("target").toAbsolutePath();
         Path cityJar = target.resolve("solmass-city.jar");
         assertTrue(Files.isRegularFile(cityJar), "target/solmass-city.jar (mvn package) missing");
-        Path home = sparkHome(target, dir.resolve("spark-home"));
+        Path home = sparkHome(target, target.resolve("cluster-it").resolve("spark-home")); // under target/: JUnit would warn on every link in a @TempDir
         Path study = SyntheticCity.write(dir.resolve("city"), new SyntheticCity.Spec(1500, 2.0, 7, 32632, 500_000, 5_316_000, 64)).study();
         ResultTable tiled = LocalCityRunner.run(CityModel.of(StudyReader.read(study)), CityOptions.defaults().withTileM(50),
                 PhaseProgress.NONE).table();
 
-        int masterPort = freePort();
         List<Process> started = new ArrayList<>();
+        Thread reaper = new Thread(() -> destroy(started)); // should this JVM be stopped mid-test
+        Runtime.getRuntime().addShutdownHook(reaper);
         try {
             Path masterLog = dir.resolve("master.log"), workerLog = dir.resolve("worker.log");
-            started.add(spark(home, masterLog, List.of("-Dspark.master.rest.enabled=false"), "org.apache.spark.deploy.master.Master",
-                    "--host", "127.0.0.1", "--port", Integer.toString(masterPort), "--webui-port", Integer.toString(freePort())));
-            awaitLine(masterLog, "I have been elected leader", started.get(0), 90);
+            Process master = spark(home, masterLog, List.of("-Dspark.master.rest.enabled=false"), "org.apache.spark.deploy.master.Master",
+                    "--host", "127.0.0.1", "--port", "0", "--webui-port", "0");
+            started.add(master);
+            // the port the master bound (asked for any free one: no race with other programs for a chosen port)
+            String url = awaitLine(masterLog, "Starting Spark master at ", master, 90).replaceAll(".*Starting Spark master at (spark://\\S+).*", "$1");
+            awaitLine(masterLog, "I have been elected leader", master, 90);
             Process worker = spark(home, workerLog, List.of(), "org.apache.spark.deploy.worker.Worker",
-                    "--host", "127.0.0.1", "--webui-port", Integer.toString(freePort()), "--cores", "2", "--memory", "3g",
-                    "--work-dir", dir.resolve("work").toString(), "spark://127.0.0.1:" + masterPort);
+                    "--host", "127.0.0.1", "--webui-port", "0", "--cores", "2", "--memory", "3g",
+                    "--work-dir", dir.resolve("work").toString(), url);
             started.add(worker);
             awaitLine(masterLog, "Registering worker", worker, 90);
 
-            Path out = dir.resolve("cluster-out"), submitLog = dir.resolve("submit.log");
+            Path out = dir.resolve("cluster-out"), submitLog = dir.resolve("submit.log"), release = dir.resolve("release");
             Process submit = spark(home, submitLog, List.of("-Xmx1g"), "org.apache.spark.deploy.SparkSubmit",
-                    "--class", "org.solmass.spark.CityJob", "--master", "spark://127.0.0.1:" + masterPort,
+                    "--class", "org.solmass.spark.CityJob", "--master", url,
                     "--conf", "spark.executor.cores=1", "--conf", "spark.executor.memory=1g",
                     "--conf", "spark.default.parallelism=2",
-                    "--conf", "spark.executor.extraJavaOptions=--add-modules jdk.incubator.vector",
+                    "--conf", "spark.executor.extraJavaOptions=--add-modules jdk.incubator.vector -Djava.io.tmpdir=" + scratch(),
+                    "--conf", CityStages.HOLD_KEY + "=" + release, // the first bounce's tasks wait for the file
                     cityJar.toString(), study.toString(), "--out", out.toString(), "--tile-size", "50");
             started.add(submit);
-            // once the first bounce has begun, the first pass's results are cached on the executors: kill one
-            awaitLine(submitLog, "city: bounce 1: ", submit, 300);
+            // the first pass is done and cached, and the first bounce's tasks are running (held): kill an executor
+            awaitFile(Path.of(release + ".waiting"), submit, submitLog, 300);
             ProcessHandle executor = worker.descendants().filter(p -> p.info().commandLine().orElse("").contains("CoarseGrainedExecutorBackend"))
                     .findFirst().orElseThrow(() -> new AssertionError("no executor JVM under the worker"));
             executor.destroyForcibly();
+            executor.onExit().get(30, TimeUnit.SECONDS);
+            Files.writeString(release, "go\n");
             assertTrue(submit.waitFor(600, TimeUnit.SECONDS), "the job did not end in 10 minutes; " + tail(submitLog));
             String log = Files.readString(submitLog);
             assertEquals(0, submit.exitValue(), "exit code; " + tail(submitLog));
             assertTrue(log.contains("Lost executor"), "the driver saw the executor lost; " + tail(submitLog));
-            String after = log.substring(log.indexOf("Lost executor"));
-            assertTrue(after.contains("city: finish: "), "the executor was killed before the finish stage ended");
+            // its running task was lost with it and run again elsewhere (Spark's TaskSetManager)
+            assertTrue(log.contains("ExecutorLostFailure"), "a task lost with the executor; " + tail(submitLog));
 
             Path local = dir.resolve("local-out");
             SparkSession spark = CitySpark.session("local[2]", dir.resolve("local-spark"), 4);
@@ -120,13 +128,30 @@ class CityClusterIT {
                 assertEquals(-1L, Files.mismatch(local.resolve(f), out.resolve(f)), f + ": the cluster's and local[2]'s differ");
             }
         } finally {
-            for (int i = started.size() - 1; i >= 0; i--) {
-                Process p = started.get(i);
-                p.descendants().forEach(ProcessHandle::destroyForcibly);
-                p.destroyForcibly();
+            destroy(started);
+            Runtime.getRuntime().removeShutdownHook(reaper);
+        }
+    }
+
+    /** The processes started and their children (executors), killed, and waited for. */
+    private static void destroy(List<Process> started) {
+        for (int i = started.size() - 1; i >= 0; i--) {
+            Process p = started.get(i);
+            List<ProcessHandle> children = p.descendants().toList();
+            children.forEach(ProcessHandle::destroyForcibly);
+            p.destroyForcibly();
+            try {
                 p.waitFor(30, TimeUnit.SECONDS);
+                for (ProcessHandle c : children) c.onExit().get(30, TimeUnit.SECONDS);
+            } catch (Exception e) {
+                // gone or stuck: nothing more to do
             }
         }
+    }
+
+    /** Scratch space of the Spark JVMs (block manager, shuffle files), inside the test's folder. */
+    private Path scratch() throws IOException {
+        return Files.createDirectories(dir.resolve("scratch"));
     }
 
     private static void assertRowsEqualToTheLastBit(ResultTable tiled, SparkSession spark, Path out) {
@@ -160,7 +185,13 @@ class CityClusterIT {
             if ("org.apache.spark".equals(top.path("groupId").asText())) collect(top, spark);
         }
         assertTrue(spark.contains("org.apache.spark:spark-core_2.13"), "Spark in target/city-dependency-tree.json");
-        Path jars = Files.createDirectories(home.resolve("jars"));
+        Path jars = home.resolve("jars");
+        if (Files.isDirectory(jars)) { // an earlier run's links: the versions may have changed since
+            try (var old = Files.list(jars)) {
+                for (Path l : old.toList()) Files.delete(l);
+            }
+        }
+        Files.createDirectories(jars);
         int linked = 0;
         for (String entry : Files.readString(target.resolve("city-classpath.txt")).trim().split(File.pathSeparator)) {
             Path jar = Path.of(entry);
@@ -191,7 +222,7 @@ class CityClusterIT {
     }
 
     /** A Spark JVM as Spark's scripts start one: SPARK_HOME/jars on the class path, Java 17's opened modules. */
-    private static Process spark(Path home, Path log, List<String> jvm, String main, String... args) throws IOException {
+    private Process spark(Path home, Path log, List<String> jvm, String main, String... args) throws IOException {
         List<String> cmd = new ArrayList<>();
         cmd.add(Path.of(System.getProperty("java.home"), "bin", "java").toString());
         cmd.add("-Xmx512m");
@@ -203,6 +234,7 @@ class CityClusterIT {
             cmd.add("--add-opens=java.base/" + p + "=ALL-UNNAMED");
         }
         cmd.add("-Dio.netty.tryReflectionSetAccessible=true");
+        cmd.add("-Djava.io.tmpdir=" + scratch());
         cmd.add("-cp");
         cmd.add(home.resolve("jars") + File.separator + "*");
         cmd.add(main);
@@ -212,18 +244,33 @@ class CityClusterIT {
         env.put("SPARK_HOME", home.toString());
         env.put("SPARK_SCALA_VERSION", "2.13"); // what a distribution's scripts set; the worker's executor launch needs it
         env.put("SPARK_LOCAL_IP", "127.0.0.1");
-        env.remove("SPARK_DIST_CLASSPATH");
+        env.put("SPARK_LOCAL_DIRS", scratch().toString()); // block manager and shuffle files of the worker's executors
+        for (String v : new String[] {"SPARK_DIST_CLASSPATH", "SPARK_CONF_DIR", "HADOOP_CONF_DIR", "YARN_CONF_DIR"}) env.remove(v); // not a developer's own
         return pb.start();
     }
 
-    private static void awaitLine(Path log, String text, Process p, int seconds) throws Exception {
+    /** Waits for a line holding {@code text} in the log; returns the line. */
+    private static String awaitLine(Path log, String text, Process p, int seconds) throws Exception {
         long end = System.nanoTime() + seconds * 1_000_000_000L;
         while (System.nanoTime() < end) {
-            if (Files.exists(log) && Files.readString(log).contains(text)) return;
+            if (Files.exists(log)) {
+                for (String line : Files.readAllLines(log)) if (line.contains(text)) return line;
+            }
             if (!p.isAlive()) fail("ended before \"" + text + "\": " + tail(log));
             Thread.sleep(200);
         }
         fail("no \"" + text + "\" in " + seconds + " s: " + tail(log));
+        return null;
+    }
+
+    private static void awaitFile(Path file, Process p, Path log, int seconds) throws Exception {
+        long end = System.nanoTime() + seconds * 1_000_000_000L;
+        while (System.nanoTime() < end) {
+            if (Files.exists(file)) return;
+            if (!p.isAlive()) fail("ended before " + file.getFileName() + ": " + tail(log));
+            Thread.sleep(200);
+        }
+        fail("no " + file.getFileName() + " in " + seconds + " s: " + tail(log));
     }
 
     private static String tail(Path log) throws IOException {
@@ -232,9 +279,4 @@ class CityClusterIT {
         return log.getFileName() + ":\n" + s.substring(Math.max(0, s.length() - 4000));
     }
 
-    private static int freePort() throws IOException {
-        try (ServerSocket s = new ServerSocket(0)) {
-            return s.getLocalPort();
-        }
-    }
 }

@@ -120,6 +120,30 @@ class CityJobTest {
         assertEquals(CityStages.PARTITIONS_PER_CORE, CityStages.partitionsPerCore(new org.apache.spark.SparkConf(false)));
     }
 
+    /**
+     * On a cluster the driver refuses, before any task, executors whose heap cannot hold the prepared
+     * study beside their tiles (Spark leaves (memory - 300 MB) x (1 - spark.memory.fraction) to user
+     * objects: Spark's unified memory manager), naming spark.executor.memory and a size that would do;
+     * enough memory passes, and a local master is not checked here (one JVM: the check before patching).
+     */
+    @Test
+    void aClusterWhoseExecutorsCannotHoldTheStudyIsRefusedBeforeAnyTaskWithTheMemoryThatWouldDo() {
+        CityModel city = CityModel.of(StudyReader.read(studyFile));
+        CityPlan plan = city.plan(CityOptions.defaults().withTileM(50));
+        org.apache.spark.SparkConf small = new org.apache.spark.SparkConf(false).set("spark.executor.memory", "310m");
+        org.solmass.InputException e = org.junit.jupiter.api.Assertions.assertThrows(org.solmass.InputException.class,
+                () -> CityJob.requireExecutorMemory(small, "spark://somewhere:7077", city, plan));
+        assertTrue(e.getMessage().startsWith("spark.executor.memory: ") && e.getMessage().contains("310m")
+                && e.getMessage().contains("--conf spark.executor.memory="), e.getMessage());
+        String want = e.getMessage().replaceAll(".*--conf spark.executor.memory=([0-9]+m).*", "$1");
+        CityJob.requireExecutorMemory(new org.apache.spark.SparkConf(false).set("spark.executor.memory", want), "spark://somewhere:7077", city, plan);
+        org.solmass.InputException bad = org.junit.jupiter.api.Assertions.assertThrows(org.solmass.InputException.class, () -> CityJob.requireExecutorMemory(
+                new org.apache.spark.SparkConf(false).set("spark.executor.memory", "lots"), "spark://somewhere:7077", city, plan));
+        assertTrue(bad.getMessage().contains("spark.executor.memory") && bad.getMessage().contains("lots"), bad.getMessage());
+        CityJob.requireExecutorMemory(small, "local[2]", city, plan);
+        CityJob.requireExecutorMemory(new org.apache.spark.SparkConf(false), "spark://somewhere:7077", city, plan); // Spark's default 1g
+    }
+
     private Path run(String name, int failTile, String failStage) {
         Path out = dir.resolve(name);
         CityJob job = new CityJob();
