@@ -172,25 +172,20 @@ public record MemoryEstimate(long bytes, long countBytes) {
      * where that JVM's memory is set.
      */
     public void requireFitsForTiles(long budgetBytes, double patchM, long patches, String where, String settings) {
-        if (fits(budgetBytes)) return;
-        double fit = fittingPatchM(patchM, budgetBytes);
-        String advice = Double.isNaN(fit) || fit > 100
-                ? "no patch size fits; give Java more memory"
-                : String.format(Locale.ROOT, "use a patch size of at least %.2f m (it would fit) or give Java more memory", fit);
-        throw new InputException(where, String.format(Locale.ROOT,
-                "preparing the model for its tiles needs about %s of memory for %d patches at %.2f m, but only %s of the Java heap is free; %s (%s)",
-                size(bytes), patches, patchM, size(budgetBytes), advice, settings));
+        requireFits(budgetBytes, patchM, -1, patches, where, "preparing the model for its tiles", settings);
     }
 
-    private void requireFits(long budgetBytes, double patchM, int rays, long analysedPatches, String where, String what, String settings) {
+    /** {@code rays < 0}: an estimate that does not depend on them (neither named nor advised). */
+    private void requireFits(long budgetBytes, double patchM, int rays, long patches, String where, String what, String settings) {
         if (fits(budgetBytes)) return;
         double fit = fittingPatchM(patchM, budgetBytes);
         String advice = Double.isNaN(fit) || fit > 100
                 ? "no patch size fits; give Java more memory"
-                : String.format(Locale.ROOT, "use a patch size of at least %.2f m (it would fit), fewer rays, or give Java more memory", fit);
+                : String.format(Locale.ROOT, "use a patch size of at least %.2f m (it would fit), %sor give Java more memory", fit,
+                rays < 0 ? "" : "fewer rays, ");
         throw new InputException(where, String.format(Locale.ROOT,
-                "%s needs about %s of memory for %d patches at %.2f m with %d rays, but only %s of the Java heap is free; %s (%s)",
-                what, size(bytes), analysedPatches, patchM, rays, size(budgetBytes), advice, settings));
+                "%s needs about %s of memory for %d patches at %.2f m%s, but only %s of the Java heap is free; %s (%s)",
+                what, size(bytes), patches, patchM, rays < 0 ? "" : " with " + rays + " rays", size(budgetBytes), advice, settings));
     }
 
     /** Free heap now: the JVM's maximum minus what is in use. */
