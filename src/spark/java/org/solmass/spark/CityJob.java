@@ -59,24 +59,30 @@ public final class CityJob implements Callable<Integer> {
 
     static CommandLine commandLine(CityJob job) {
         CommandLine cl = new CommandLine(job);
-        cl.setExecutionExceptionHandler((ex, line, parse) -> {
-            // bad input found in a task (an executor's own check) reaches the driver wrapped in Spark's exceptions
-            for (Throwable c = ex; c != null; c = c.getCause()) {
-                if (c instanceof org.solmass.InputException) {
-                    line.getErr().println("solmass: " + c.getMessage());
-                    return Main.EXIT_INPUT;
-                }
-            }
-            line.getErr().println("solmass: city failed: " + ex);
-            if (System.getenv("SOLMASS_DEBUG") != null) ex.printStackTrace(line.getErr());
-            return Main.EXIT_FAILED;
-        });
+        cl.setExecutionExceptionHandler((ex, line, parse) -> failed(ex, line.getErr()));
         cl.setParameterExceptionHandler((ex, args) -> {
             ex.getCommandLine().getErr().println("solmass: " + ex.getMessage());
             ex.getCommandLine().getErr().println("Try 'solmass city --help'.");
             return Main.EXIT_INPUT;
         });
         return cl;
+    }
+
+    /**
+     * What a failed run prints and its exit code: bad input (also when a task found it, an executor's
+     * own check, and it reached the driver wrapped in Spark's exceptions) as one line with exit 2,
+     * anything else as "city failed" with exit 1.
+     */
+    static int failed(Exception ex, java.io.PrintWriter err) {
+        for (Throwable c = ex; c != null; c = c.getCause()) {
+            if (c instanceof org.solmass.InputException) {
+                err.println("solmass: " + c.getMessage());
+                return Main.EXIT_INPUT;
+            }
+        }
+        err.println("solmass: city failed: " + ex);
+        if (System.getenv("SOLMASS_DEBUG") != null) ex.printStackTrace(err);
+        return Main.EXIT_FAILED;
     }
 
     @Override

@@ -144,6 +144,23 @@ class CityJobTest {
         CityJob.requireExecutorMemory(new org.apache.spark.SparkConf(false), "spark://somewhere:7077", city, plan); // Spark's default 1g
     }
 
+    /**
+     * Bad input an executor found (its own check before patching) reaches the driver inside Spark's
+     * exceptions; it is printed as the one line it is, with exit 2 (bad input), not as a failed run.
+     */
+    @Test
+    void badInputFoundInATaskIsPrintedPlainlyWithTheBadInputExitCode() {
+        org.solmass.InputException cause = new org.solmass.InputException("study.json: patch_m", "too small for this heap");
+        Exception wrapped = new org.apache.spark.SparkException("Job aborted due to stage failure: Task 1 in stage 1.0 failed 4 times",
+                new RuntimeException("task", cause));
+        java.io.StringWriter text = new java.io.StringWriter();
+        assertEquals(org.solmass.cli.Main.EXIT_INPUT, CityJob.failed(wrapped, new java.io.PrintWriter(text, true)));
+        assertEquals("solmass: " + cause.getMessage(), text.toString().trim());
+        java.io.StringWriter other = new java.io.StringWriter();
+        assertEquals(org.solmass.cli.Main.EXIT_FAILED, CityJob.failed(new IllegalStateException("disk full"), new java.io.PrintWriter(other, true)));
+        assertTrue(other.toString().startsWith("solmass: city failed: "), other.toString());
+    }
+
     private Path run(String name, int failTile, String failStage) {
         Path out = dir.resolve(name);
         CityJob job = new CityJob();
