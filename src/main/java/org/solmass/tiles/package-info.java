@@ -27,7 +27,8 @@
  * </ul>
  *
  * <p>Limits: a {@link org.solmass.tiles.CityModel} holds the whole model and its patches (about
- * 0.3 kB per patch) and each tile's reflector index spans every receiver (16 bytes each), which
+ * 0.3 kB per patch) and the whole layout's reflector index (built once per JVM, about 130 B per
+ * receiver; 400 B per receiver in all, measured, docs/city.md), which
  * suits cities up to a few million patches per JVM; the metrics of stage 3 that trace rays (sun
  * hours on dates, the PV zones' yield) see the far horizon of the tile's lowest height band only
  * (the vertical sky component comes from the first pass, each band's own).

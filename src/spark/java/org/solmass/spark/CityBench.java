@@ -104,13 +104,11 @@ public final class CityBench implements Callable<Integer> {
         long t0 = System.nanoTime();
         SyntheticCity.Written w = SyntheticCity.write(dir.resolve("warm-up"), SyntheticCity.Spec.of(warmUp, seed + 1000));
         if (!skipOne) AnalysisRun.run(StudyReader.read(w.study()), PhaseProgress.NONE);
-        {
-            List<String> args = new ArrayList<>(List.of(w.study().toString(), "--out", dir.resolve("warm-up-out").toString(),
-                    "--master", master, "--tile-size", Double.toString(tileM), "-q"));
-            if (haloCapM != null) args.addAll(List.of("--halo-cap", Double.toString(haloCapM)));
-            int code = CityJob.commandLine(new CityJob()).execute(args.toArray(new String[0]));
-            if (code != 0) throw new IllegalStateException("the warm-up's Spark run failed: exit code " + code);
-        }
+        List<String> args = new ArrayList<>(List.of(w.study().toString(), "--out", dir.resolve("warm-up-out").toString(),
+                "--master", master, "--tile-size", Double.toString(tileM), "-q"));
+        if (haloCapM != null) args.addAll(List.of("--halo-cap", Double.toString(haloCapM)));
+        int code = CityJob.commandLine(new CityJob()).execute(args.toArray(new String[0]));
+        if (code != 0) throw new IllegalStateException("the warm-up's Spark run failed: exit code " + code);
         System.out.printf(Locale.ROOT, "warm-up: a %d-patch invented city through both paths, untimed (%.1f s)%n", warmUp, (System.nanoTime() - t0) / 1e9);
     }
 
